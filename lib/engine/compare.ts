@@ -1,0 +1,77 @@
+import { inspectableItems } from './checklist';
+import { isInspected, severityOf } from './conditions';
+import type { Checklist, Condition, FindingKind, InspectionEvent, ItemFinding, TimelineEvent } from './types';
+
+/**
+ * Classifies one item: `current` against the condition at the latest earlier inspection of it
+ * (`previous`, null when there was none). `not_checked` is never read as `ok`.
+ * `new` = was ok, now worse; `worse` = was already minor or damaged, now more severe;
+ * `repaired` = less severe than before.
+ */
+export function classifyChange(current: Condition, previous: Condition | null): FindingKind {
+  if (current === 'not_checked') return 'not_checked';
+  if (previous === null || previous === 'not_checked') return 'first_record';
+  const diff = (severityOf(current) as number) - (severityOf(previous) as number);
+  if (diff === 0) return 'unchanged';
+  if (diff < 0) return 'repaired';
+  return previous === 'ok' ? 'new' : 'worse';
+}
+
+function hasItems(e: TimelineEvent): e is InspectionEvent {
+  return e.type !== 'move';
+}
+
+export interface CompareInput {
+  checklist: Checklist;
+  /** Earlier events of this trailer, oldest first; `current` is not included. */
+  history: readonly TimelineEvent[];
+  current: InspectionEvent;
+}
+
+/**
+ * Compares an inspection with the trailer's history, item by item: for every checklist item
+ * (readings excepted) the latest earlier drop, hook or walk that inspected it, and a finding.
+ * Runs in one backward pass over the history, stopping once every item is placed.
+ */
+export function compareInspection({ checklist, history, current }: CompareInput): ItemFinding[] {
+  const items = inspectableItems(checklist);
+  const slot = new Map<string, number>();
+  items.forEach((item, i) => slot.set(item.key, i));
+  const prevIndex: Array<number | null> = new Array(items.length).fill(null);
+  let unplaced = items.length;
+
+  for (let h = history.length - 1; h >= 0 && unplaced > 0; h--) {
+    const event = history[h];
+    if (!hasItems(event)) continue;
+    for (const key in event.items) {
+      const i = slot.get(key);
+      if (i === undefined || prevIndex[i] !== null) continue;
+      if (!isInspected(event.items[key].condition)) continue;
+      prevIndex[i] = h;
+      unplaced--;
+    }
+  }
+
+  return items.map((item, i): ItemFinding => {
+    const cur = current.items[item.key]?.condition ?? 'not_checked';
+    const h = prevIndex[i];
+    const prevEvent = h === null ? null : (history[h] as InspectionEvent);
+    const prev = prevEvent ? prevEvent.items[item.key].condition : null;
+    return {
+      itemKey: item.key,
+      label: item.label,
+      zone: item.zone,
+      finding: classifyChange(cur, prev),
+      current: cur,
+      previous: prev,
+      previousEventId: prevEvent?.id ?? null,
+      previousAt: prevEvent?.at ?? null,
+      previousIndex: h,
+    };
+  });
+}
+
+/** Findings that may open a case: new or worse damage. */
+export function damageFindings(findings: readonly ItemFinding[]): ItemFinding[] {
+  return findings.filter((f) => f.finding === 'new' || f.finding === 'worse');
+}

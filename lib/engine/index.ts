@@ -1,0 +1,30 @@
+/**
+ * Hitchmark condition engine: pure functions over plain data. No clock, database, env or
+ * framework: callers pass `now`, the policy and a display time zone. Times are `Date`.
+ * Label tokens use node:crypto and live in `./identity/label-token` (server only).
+ */
+export { buildChecklist, inspectableItems, OBSERVATION_FIELDS } from './checklist';
+export {
+  CONDITION_LABELS, CONDITIONS, compareSeverity, isCondition, isInspected, severityOf, worstCondition,
+} from './conditions';
+export { classifyChange, compareInspection, damageFindings } from './compare';
+export type { CompareInput } from './compare';
+export {
+  buildCustodyLegs, currentCustodian, custodianAfter, custodianBefore, custodianKey, custodianName, legsBetweenEvents,
+} from './custody';
+export { attributeFindings } from './responsibility';
+export type { AttributeInput } from './responsibility';
+export { assessFuel, eighthsToGallons, eighthsToLitres, expectedBurnGallons } from './fuel';
+export type { FuelInput } from './fuel';
+export { blocksHook, evaluateHolds, OUT_OF_SERVICE_CAUTION } from './holds';
+export type { HoldInput } from './holds';
+export { reconcileWalk } from './reconcile';
+export type { ReconcileInput } from './reconcile';
+export { defaultPolicy, defaultPolicySources, makePolicy } from './policy';
+export {
+  celsiusToFahrenheit, fahrenheitToCelsius, gallonsToLitres, LITRES_PER_US_GALLON, litresToGallons,
+  MILLIMETRES_PER_INCH, roundTo, thirtySecondsToMillimetres,
+} from './units';
+export { formatWhen } from './wording';
+export * from './identity';
+export type * from './types';
