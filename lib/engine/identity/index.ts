@@ -1,6 +1,6 @@
 // Label tokens (node:crypto) are deliberately not re-exported here, so that client components
 // can import VIN and SCAC helpers; import them from './label-token' on the server.
-export { computeVinCheckDigit, decodeTrailerModelYear, modelYearCandidates, normalizeVin, validateVin } from './vin';
+export { computeVinCheckDigit, decodeTrailerModelYear, modelYearCandidates, normalizeVin, validateVin, vinWeightedSum } from './vin';
 export type { VinError, VinResult } from './vin';
 export { isEquipmentScac, isScac, validateScac } from './scac';
 export type { ScacResult } from './scac';

@@ -26,14 +26,19 @@ export function normalizeVin(raw: string): string {
  * sum, remainder mod 11. Expects 17 valid characters; position 9 itself is ignored.
  */
 export function computeVinCheckDigit(vin: string): string {
+  const r = vinWeightedSum(vin) % 11;
+  return r === 10 ? 'X' : String(r);
+}
+
+/** Sum of transliterated values × position weights (565.15(c)); 411 for the regulation's sample. */
+export function vinWeightedSum(vin: string): number {
   let sum = 0;
   for (let i = 0; i < 17; i++) {
     const ch = vin[i];
     const value = ch >= '0' && ch <= '9' ? ch.charCodeAt(0) - 48 : TRANSLITERATION[ch];
     sum += value * WEIGHTS[i];
   }
-  const r = sum % 11;
-  return r === 10 ? 'X' : String(r);
+  return sum;
 }
 
 /** Validates length, alphabet (no I, O, Q) and the check digit. Never throws. */
