@@ -31,25 +31,27 @@ export interface CompareInput {
 /**
  * Compares an inspection with the trailer's history, item by item: for every checklist item
  * (readings excepted) the latest earlier drop, hook or walk that inspected it, and a finding.
- * Runs in one backward pass over the history, stopping once every item is placed.
+ * One backward pass over the history, stopping once every item is placed: O(history × items)
+ * in the worst case, usually a few events.
  */
 export function compareInspection({ checklist, history, current }: CompareInput): ItemFinding[] {
   const items = inspectableItems(checklist);
-  const slot = new Map<string, number>();
-  items.forEach((item, i) => slot.set(item.key, i));
   const prevIndex: Array<number | null> = new Array(items.length).fill(null);
-  let unplaced = items.length;
+  // Items still looking for an earlier inspection; shrinks as the scan goes back.
+  const pending = items.map((_, i) => i);
 
-  for (let h = history.length - 1; h >= 0 && unplaced > 0; h--) {
+  for (let h = history.length - 1; h >= 0 && pending.length > 0; h--) {
     const event = history[h];
     if (!hasItems(event)) continue;
-    for (const key in event.items) {
-      const i = slot.get(key);
-      if (i === undefined || prevIndex[i] !== null) continue;
-      if (!isInspected(event.items[key].condition)) continue;
-      prevIndex[i] = h;
-      unplaced--;
+    const observed = event.items;
+    let kept = 0;
+    for (let p = 0; p < pending.length; p++) {
+      const i = pending[p];
+      const o = observed[items[i].key];
+      if (o !== undefined && isInspected(o.condition)) prevIndex[i] = h;
+      else pending[kept++] = i;
     }
+    pending.length = kept;
   }
 
   return items.map((item, i): ItemFinding => {

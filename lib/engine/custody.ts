@@ -51,15 +51,33 @@ export function legsBetweenEvents(a: TimelineEvent, b: TimelineEvent): CustodyLe
 }
 
 /**
+ * Appends a leg, merging it into the previous one when the same custodian simply continues
+ * (drop → move → walk → hook is one terminal leg, not three).
+ */
+export function appendLeg(legs: CustodyLeg[], next: CustodyLeg): void {
+  const last = legs[legs.length - 1];
+  if (last && !last.isUnrecordedChange && !next.isUnrecordedChange
+    && last.toEventId === next.fromEventId && custodianKey(last.custodian) === custodianKey(next.custodian)) {
+    last.toEventId = next.toEventId;
+    last.to = next.to;
+    return;
+  }
+  legs.push(next);
+}
+
+/**
  * Custody legs of a timeline (oldest first): the leg before the first event (the dropping
  * carrier, or the terminal), one or two legs between each pair of events, and the open leg after the
- * last. Moves and walks keep custody with the terminal.
+ * last, with consecutive legs of the same custodian merged. Moves and walks keep custody with
+ * the terminal.
  */
 export function buildCustodyLegs(timeline: readonly TimelineEvent[]): CustodyLeg[] {
   if (timeline.length === 0) return [];
   const legs: CustodyLeg[] = [leg(custodianBefore(timeline[0]), null, timeline[0], false)];
-  for (let i = 1; i < timeline.length; i++) legs.push(...legsBetweenEvents(timeline[i - 1], timeline[i]));
-  legs.push(leg(custodianAfter(timeline[timeline.length - 1]), timeline[timeline.length - 1], null, false));
+  for (let i = 1; i < timeline.length; i++) {
+    for (const l of legsBetweenEvents(timeline[i - 1], timeline[i])) appendLeg(legs, l);
+  }
+  appendLeg(legs, leg(custodianAfter(timeline[timeline.length - 1]), timeline[timeline.length - 1], null, false));
   return legs;
 }
 

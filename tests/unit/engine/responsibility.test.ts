@@ -17,10 +17,12 @@ describe('custody legs', () => {
   it('drop hands custody to the terminal, hook to the driver carrier, moves keep it (PRODUCT.md)', () => {
     const t = [drop('2026-11-01T10:00:00Z', northwind), move('2026-11-01T11:00:00Z'), hook('2026-11-02T10:00:00Z', bluefield)];
     const legs = buildCustodyLegs(t);
+    // drop → move → hook is one terminal leg, not two.
     expect(legs.map((l) => (l.custodian.type === 'terminal' ? 'terminal' : l.custodian.carrierId)))
-      .toEqual(['c-nw', 'terminal', 'terminal', 'c-bf']);
-    expect(legs[0].from).toBeNull();
-    expect(legs[3].to).toBeNull();
+      .toEqual(['c-nw', 'terminal', 'c-bf']);
+    expect(legs[0]).toMatchObject({ from: null, toEventId: t[0].id });
+    expect(legs[1]).toMatchObject({ fromEventId: t[0].id, toEventId: t[2].id, to: t[2].at });
+    expect(legs[2]).toMatchObject({ fromEventId: t[2].id, to: null });
     expect(legs.every((l) => !l.isUnrecordedChange)).toBe(true);
     expect(currentCustodian(t)).toMatchObject({ type: 'carrier', carrierId: 'c-bf' });
     expect(currentCustodian([])).toBeNull();
@@ -41,6 +43,8 @@ describe('attributeFindings', () => {
     const [a] = attribute([k, move('2026-11-04T09:00:00Z')], n, 'the Eastgate terminal');
     expect(a).toMatchObject({ status: 'single', responsible: { type: 'terminal' }, confidence: 'high', finding: 'new' });
     expect(a.candidates.some((c) => c.type === 'carrier' && c.carrierId === 'c-bf')).toBe(false);
+    expect(a.legs).toHaveLength(1);
+    expect(a.legs[0]).toMatchObject({ fromEventId: k.id, toEventId: n.id });
     // 20:05Z is 14:05 in America/Chicago (CST, UTC−6 after the November change; IANA tz database).
     expect(a.reason).toBe(
       'Left door hinge 3 (from top): inspected ok at the drop on 3 Nov 2026 14:05 by driver D. Example '
