@@ -13,6 +13,9 @@ export default defineConfig({
     include: ['tests/**/*.test.ts'],
     globalSetup: ['tests/unit/global-setup.ts'],
     environment: 'node',
+    // database tests use their own fresh database, made by the global setup
+    env: { HM_DB_NAME: process.env.HM_TEST_DB ?? 'hitchmark_test' },
+    fileParallelism: false,
     testTimeout: 20_000,
     hookTimeout: 60_000,
   },

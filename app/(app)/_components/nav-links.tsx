@@ -1,0 +1,25 @@
+'use client';
+
+import Link from 'next/link';
+import { usePathname } from 'next/navigation';
+
+export function NavLinks({ links }: { links: { href: string; label: string }[] }) {
+  const pathname = usePathname();
+  return (
+    <nav aria-label="Sections" className="order-last flex w-full gap-1 overflow-x-auto sm:order-none sm:w-auto">
+      {links.map((l) => {
+        const active = pathname === l.href || pathname.startsWith(`${l.href}/`);
+        return (
+          <Link
+            key={l.href}
+            href={l.href}
+            aria-current={active ? 'page' : undefined}
+            className={`flex min-h-tap items-center rounded-lg px-3 text-gate font-bold ${active ? 'bg-white text-brand' : 'hover:bg-brand-dark'}`}
+          >
+            {l.label}
+          </Link>
+        );
+      })}
+    </nav>
+  );
+}

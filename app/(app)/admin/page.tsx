@@ -1,0 +1,42 @@
+import type { Metadata } from 'next';
+import { listCarriers, listUsers } from '@/db/queries/admin';
+import { SECTION_ROLES } from '@/lib/roles';
+import { requireUser } from '@/lib/server/auth';
+
+export const metadata: Metadata = { title: 'Admin' };
+
+export default async function AdminPage() {
+  await requireUser(SECTION_ROLES.admin);
+  const [people, carrierRows] = await Promise.all([listUsers(), listCarriers()]);
+  return (
+    <div className="space-y-6">
+      <h1 className="text-gate-xl font-bold">Admin</h1>
+      <section aria-labelledby="people">
+        <h2 id="people" className="text-gate-lg font-bold">People and roles</h2>
+        <ul className="mt-2 divide-y divide-paper-line rounded-xl bg-paper">
+          {people.map((u) => (
+            <li key={u.id} className="flex flex-wrap justify-between gap-2 p-3 text-gate-sm">
+              <span className="font-bold">{u.name}</span>
+              <span>
+                {u.role} · {u.email ?? u.driverNumber} {u.carrierScac ? `· ${u.carrierScac}` : ''}
+              </span>
+            </li>
+          ))}
+        </ul>
+      </section>
+      <section aria-labelledby="carriers">
+        <h2 id="carriers" className="text-gate-lg font-bold">Carriers</h2>
+        <ul className="mt-2 divide-y divide-paper-line rounded-xl bg-paper">
+          {carrierRows.map((c) => (
+            <li key={c.id} className="flex flex-wrap justify-between gap-2 p-3 text-gate-sm">
+              <span className="font-bold">
+                {c.scac} — {c.name}
+              </span>
+              <span>{c.contactEmail}</span>
+            </li>
+          ))}
+        </ul>
+      </section>
+    </div>
+  );
+}

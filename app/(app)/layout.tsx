@@ -1,0 +1,42 @@
+import Link from 'next/link';
+import { signOutAction } from '@/app/(auth)/actions';
+import { canOpen, SECTION_LABELS, type Section } from '@/lib/roles';
+import { requireUser } from '@/lib/server/auth';
+import { NavLinks } from './_components/nav-links';
+
+const SECTIONS: Section[] = ['gate', 'yard', 'desk', 'trailers', 'admin'];
+
+// The signed-in shell. Not a security check: every page and action checks for itself.
+export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  const user = await requireUser();
+  const links = SECTIONS.filter((s) => canOpen(user.role, s)).map((s) => ({ href: `/${s}`, label: SECTION_LABELS[s] }));
+  return (
+    <div className="min-h-screen">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper focus:p-2">
+        Skip to content
+      </a>
+      <header className="no-print bg-brand text-white">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2">
+          <Link href="/" className="text-gate-lg font-bold">
+            Hitchmark
+          </Link>
+          <NavLinks links={links} />
+          <div className="ml-auto flex items-center gap-3 text-gate-sm">
+            <span>
+              <span className="font-bold">{user.name}</span> · {user.role}
+              {user.carrierScac ? ` · ${user.carrierScac}` : ''}
+            </span>
+            <form action={signOutAction}>
+              <button type="submit" className="min-h-tap rounded-lg border-2 border-white px-3 font-bold">
+                Sign out
+              </button>
+            </form>
+          </div>
+        </div>
+      </header>
+      <main id="main" className="mx-auto max-w-6xl p-3 sm:p-4">
+        {children}
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,9 @@
+import { SECTION_ROLES } from '@/lib/roles';
+import { requireUser } from '@/lib/server/auth';
+
+// Checked here, above this section's loading boundary, so a wrong role gets a real 403 status.
+// Pages, actions and route handlers still check for themselves.
+export default async function Layout({ children }: { children: React.ReactNode }) {
+  await requireUser(SECTION_ROLES.trailers);
+  return children;
+}

@@ -1,0 +1,22 @@
+import type { Metadata } from 'next';
+import { redirect } from 'next/navigation';
+import { homeFor } from '@/lib/roles';
+import { currentUser } from '@/lib/server/auth';
+import { SignInForm } from './_components/sign-in-form';
+
+export const metadata: Metadata = { title: 'Sign in' };
+
+export default async function LoginPage({ searchParams }: PageProps<'/login'>) {
+  const user = await currentUser();
+  if (user) redirect(homeFor(user.role));
+  const params = await searchParams;
+  const next = typeof params.next === 'string' ? params.next : undefined;
+  return (
+    <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center p-4">
+      <p className="text-gate-xl font-bold text-brand">Hitchmark</p>
+      <h1 className="mt-1 text-gate-lg font-bold">Sign in</h1>
+      <p className="text-gate-sm text-ink-soft">Trailer handoffs, yard and desk for the terminal.</p>
+      <SignInForm next={next} />
+    </main>
+  );
+}

@@ -1,0 +1,15 @@
+'use client';
+
+export default function GlobalError({ reset }: { error: Error & { digest?: string }; reset: () => void }) {
+  return (
+    <html lang="en">
+      <body style={{ fontFamily: 'system-ui', padding: 24 }}>
+        <h1>Hitchmark hit an unexpected problem</h1>
+        <p>Nothing you entered was sent twice. Try again; if it keeps happening, tell the terminal office.</p>
+        <button type="button" onClick={() => reset()} style={{ minHeight: 48, padding: '0 20px' }}>
+          Try again
+        </button>
+      </body>
+    </html>
+  );
+}

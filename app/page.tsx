@@ -1,0 +1,8 @@
+import { redirect } from 'next/navigation';
+import { homeFor } from '@/lib/roles';
+import { currentUser } from '@/lib/server/auth';
+
+export default async function Home() {
+  const user = await currentUser();
+  redirect(user ? homeFor(user.role) : '/login');
+}

@@ -1,0 +1,36 @@
+import 'server-only';
+import { and, asc, eq, ilike, or, sql } from 'drizzle-orm';
+import { db } from '@/db';
+import { carriers, terminals, trailers, yardSpots } from '@/db/schema';
+
+/** Trailers matching a unit number, VIN or plate fragment, with owner and where they stand. */
+export async function listTrailers({ q, limit = 50, offset = 0 }: { q?: string; limit?: number; offset?: number }) {
+  const pattern = q ? `%${q.replace(/[%_\\]/g, (c) => `\\${c}`)}%` : null;
+  return db
+    .select({
+      id: trailers.id,
+      unitNumber: trailers.unitNumber,
+      vin: trailers.vin,
+      kind: trailers.kind,
+      status: trailers.status,
+      ownerScac: carriers.scac,
+      terminalCode: terminals.code,
+      spotLabel: yardSpots.label,
+    })
+    .from(trailers)
+    .innerJoin(carriers, eq(carriers.id, trailers.ownerCarrierId))
+    .leftJoin(terminals, eq(terminals.id, trailers.currentTerminalId))
+    .leftJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId))
+    .where(pattern ? or(ilike(trailers.unitNumber, pattern), ilike(trailers.vin, pattern), ilike(trailers.plate, pattern)) : undefined)
+    .orderBy(asc(trailers.unitNumber))
+    .limit(limit)
+    .offset(offset);
+}
+
+export async function countTrailersByStatus(terminalId?: string | null) {
+  return db
+    .select({ status: trailers.status, count: sql<number>`count(*)::int` })
+    .from(trailers)
+    .where(terminalId ? and(eq(trailers.currentTerminalId, terminalId)) : undefined)
+    .groupBy(trailers.status);
+}

@@ -1,0 +1,150 @@
+import { boolean, index, integer, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  at,
+  conditionEnum,
+  confidenceEnum,
+  createdAt,
+  handoffKindEnum,
+  holdSeverityEnum,
+  id,
+  inspectionLevelEnum,
+  photoStatusEnum,
+  pretripEnum,
+} from './common';
+import { carriers, terminals, trailers, users } from './core';
+
+/** A printed QR label. The token is an HMAC over the label id; re-issuing revokes the old label. */
+export const labels = pgTable(
+  'labels',
+  {
+    id: id(),
+    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    issuedById: uuid('issued_by_id').references(() => users.id),
+    issuedAt: at('issued_at').notNull().defaultNow(),
+    revokedAt: at('revoked_at'),
+    createdAt: createdAt(),
+  },
+  (t) => [index('labels_trailer').on(t.trailerId)],
+);
+
+/** A condition record at a change of custody. Immutable once stored; a correction is a new row. */
+export const handoffs = pgTable(
+  'handoffs',
+  {
+    id: id(),
+    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    terminalId: uuid('terminal_id').notNull().references(() => terminals.id),
+    kind: handoffKindEnum('kind').notNull(),
+    level: inspectionLevelEnum('level').notNull().default('full'),
+    carrierId: uuid('carrier_id').notNull().references(() => carriers.id),
+    driverId: uuid('driver_id').references(() => users.id),
+    driverName: text('driver_name').notNull(),
+    tractorNumber: text('tractor_number').notNull(),
+    recordedById: uuid('recorded_by_id').notNull().references(() => users.id),
+    isLoaded: boolean('is_loaded').notNull(),
+    sealNumber: text('seal_number'),
+    fuelEighths: integer('fuel_eighths'),
+    isReeferOn: boolean('is_reefer_on'),
+    setpointTenthsF: integer('setpoint_tenths_f'),
+    returnAirTenthsF: integer('return_air_tenths_f'),
+    engineHoursTenths: integer('engine_hours_tenths'),
+    pretripResult: pretripEnum('pretrip_result'),
+    pretripAt: at('pretrip_at'),
+    note: text('note'),
+    occurredAt: at('occurred_at').notNull(),
+    idempotencyKey: text('idempotency_key').notNull().unique(),
+    correctsHandoffId: uuid('corrects_handoff_id'),
+    verificationCode: text('verification_code').notNull().unique(),
+    prevHash: text('prev_hash'),
+    contentHash: text('content_hash').notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index('handoffs_trailer_time').on(t.trailerId, t.occurredAt),
+    index('handoffs_carrier').on(t.carrierId),
+    index('handoffs_driver').on(t.driverId),
+  ],
+);
+
+export const handoffItems = pgTable(
+  'handoff_items',
+  {
+    id: id(),
+    handoffId: uuid('handoff_id').notNull().references(() => handoffs.id),
+    itemKey: text('item_key').notNull(),
+    condition: conditionEnum('condition').notNull(),
+    treadThirtySeconds: integer('tread_thirty_seconds'),
+    isHoldingAir: boolean('is_holding_air'),
+    note: text('note'),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('handoff_items_handoff_item').on(t.handoffId, t.itemKey), index('handoff_items_item').on(t.itemKey)],
+);
+
+export const photos = pgTable(
+  'photos',
+  {
+    id: id(),
+    objectKey: text('object_key').notNull().unique(),
+    uploadedById: uuid('uploaded_by_id').notNull().references(() => users.id),
+    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    handoffId: uuid('handoff_id').references(() => handoffs.id),
+    caseEventId: uuid('case_event_id'),
+    itemKey: text('item_key'),
+    status: photoStatusEnum('status').notNull().default('pending'),
+    contentType: text('content_type').notNull(),
+    byteSize: integer('byte_size').notNull(),
+    sha256: text('sha256').notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [index('photos_handoff').on(t.handoffId), index('photos_trailer').on(t.trailerId)],
+);
+
+/** The engine's output for one handoff: one row per compared item or rule (fuel, pins, spare). */
+export const findings = pgTable(
+  'findings',
+  {
+    id: id(),
+    handoffId: uuid('handoff_id').references(() => handoffs.id),
+    walkId: uuid('walk_id'),
+    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    itemKey: text('item_key').notNull(),
+    kind: text('kind').notNull(),
+    condition: conditionEnum('condition'),
+    previousCondition: conditionEnum('previous_condition'),
+    previousHandoffId: uuid('previous_handoff_id').references(() => handoffs.id),
+    responsibleCarrierId: uuid('responsible_carrier_id').references(() => carriers.id),
+    responsibleParty: text('responsible_party'),
+    confidence: confidenceEnum('confidence'),
+    candidates: jsonb('candidates').$type<unknown[]>(),
+    reason: text('reason').notNull(),
+    caseId: uuid('case_id'),
+    createdAt: createdAt(),
+  },
+  (t) => [index('findings_handoff').on(t.handoffId), index('findings_trailer').on(t.trailerId), index('findings_case').on(t.caseId)],
+);
+
+/** A hold on a trailer: `out_of_service` blocks a hook; `restricted` names what is not allowed. */
+export const holds = pgTable(
+  'holds',
+  {
+    id: id(),
+    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    handoffId: uuid('handoff_id').references(() => handoffs.id),
+    walkId: uuid('walk_id'),
+    severity: holdSeverityEnum('severity').notNull(),
+    restriction: text('restriction'),
+    ruleKey: text('rule_key').notNull(),
+    itemKey: text('item_key'),
+    reason: text('reason').notNull(),
+    source: text('source').notNull(),
+    placedById: uuid('placed_by_id').references(() => users.id),
+    placedAt: at('placed_at').notNull().defaultNow(),
+    releasedAt: at('released_at'),
+    releasedById: uuid('released_by_id').references(() => users.id),
+    repairNote: text('repair_note'),
+    repairedBy: text('repaired_by'),
+    createdAt: createdAt(),
+  },
+  (t) => [index('holds_trailer_open').on(t.trailerId, t.releasedAt)],
+);

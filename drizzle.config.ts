@@ -1,0 +1,11 @@
+import { defineConfig } from 'drizzle-kit';
+import { databaseUrl } from './db/url';
+
+export default defineConfig({
+  dialect: 'postgresql',
+  schema: './db/schema.ts',
+  out: './db/migrations',
+  dbCredentials: { url: databaseUrl() },
+  strict: true,
+  verbose: false,
+});

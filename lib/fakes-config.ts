@@ -1,0 +1,8 @@
+// Ports and names of the local fakes (S3-compatible storage, SMTP inbox). One source for the
+// fakes script, the app's defaults and the tests. Real deployments set the S3_* and SMTP_* env vars.
+export const fakes = {
+  s3Port: Number(process.env.HM_S3_PORT ?? 4569),
+  smtpPort: Number(process.env.HM_SMTP_PORT ?? 2525),
+  mailHttpPort: Number(process.env.HM_MAIL_HTTP_PORT ?? 2580),
+  bucket: process.env.S3_BUCKET ?? 'hitchmark-photos',
+};

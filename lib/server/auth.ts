@@ -1,0 +1,33 @@
+import 'server-only';
+import { forbidden, redirect } from 'next/navigation';
+import { getSessionUser, type SessionUser } from '@/db/queries/users';
+import type { Role } from '@/lib/roles';
+import { apiError } from './api';
+import { getSession } from './session';
+
+export type { SessionUser };
+
+/** The signed-in user, or null. Reads the sealed cookie, then checks the account still exists and is active. */
+export async function currentUser(): Promise<SessionUser | null> {
+  const session = await getSession();
+  if (!session.userId) return null;
+  return getSessionUser(session.userId);
+}
+
+/** Pages and server actions: no session → sign-in page; wrong role → 403 page. */
+export async function requireUser(roles?: readonly Role[]): Promise<SessionUser> {
+  const user = await currentUser();
+  if (!user) redirect('/login');
+  if (roles && !roles.includes(user.role)) forbidden();
+  return user;
+}
+
+export const requireRole = (roles: readonly Role[]) => requireUser(roles);
+
+/** Route handlers: returns the user, or a 401/403 JSON response to return as is. */
+export async function apiUser(roles?: readonly Role[]): Promise<SessionUser | Response> {
+  const user = await currentUser();
+  if (!user) return apiError('unauthenticated', 'Sign in first.');
+  if (roles && !roles.includes(user.role)) return apiError('forbidden', 'Your role may not do this.');
+  return user;
+}

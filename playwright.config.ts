@@ -1,0 +1,43 @@
+import { defineConfig, devices } from '@playwright/test';
+
+const port = Number(process.env.HM_APP_PORT ?? 3100);
+export const baseURL = `http://localhost:${port}`;
+
+// Debian's chromium, never a downloaded browser. Flags keep it off the (closed) network.
+export const chromiumArgs = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--no-first-run',
+  '--disable-quic',
+];
+
+export default defineConfig({
+  testDir: 'tests/e2e',
+  testMatch: '**/*.spec.ts',
+  fullyParallel: false,
+  workers: 1,
+  retries: process.env.CI ? 1 : 0,
+  timeout: 45_000,
+  expect: { timeout: 8_000 },
+  reporter: [['list']],
+  outputDir: '.data/test-results',
+  use: {
+    baseURL,
+    trace: 'retain-on-failure',
+    launchOptions: { executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium', args: chromiumArgs },
+  },
+  projects: [
+    { name: 'phone', use: { ...devices['Pixel 7'], browserName: 'chromium' } },
+  ],
+  webServer: {
+    command: `node_modules/.bin/next start -p ${port}`,
+    url: `${baseURL}/api/health`,
+    reuseExistingServer: false,
+    timeout: 60_000,
+    stdout: 'pipe',
+    stderr: 'pipe',
+  },
+});

@@ -1,0 +1,93 @@
+// Local stand-ins for hosted services, in one process:
+//  - s3rver: S3-compatible object storage on 127.0.0.1 (photos), bucket with CORS for browser PUTs
+//  - smtp-server + mailparser: an SMTP inbox; GET /messages on the HTTP port lists what arrived
+// Run: npx tsx scripts/fakes.ts   (scripts/start.sh and scripts/test.sh start it for you)
+import { mkdirSync } from 'node:fs';
+import http from 'node:http';
+import { simpleParser } from 'mailparser';
+import S3rver from 's3rver';
+import { SMTPServer } from 'smtp-server';
+import { fakes } from '../lib/fakes-config';
+
+const dataDir = new URL('../.data/s3', import.meta.url).pathname;
+mkdirSync(dataDir, { recursive: true });
+
+const cors = `<CORSConfiguration><CORSRule>
+  <AllowedOrigin>*</AllowedOrigin>
+  <AllowedMethod>GET</AllowedMethod><AllowedMethod>PUT</AllowedMethod><AllowedMethod>HEAD</AllowedMethod>
+  <AllowedHeader>*</AllowedHeader><ExposeHeader>ETag</ExposeHeader><MaxAgeSeconds>3000</MaxAgeSeconds>
+</CORSRule></CORSConfiguration>`;
+
+const s3 = new S3rver({
+  address: '127.0.0.1',
+  port: fakes.s3Port,
+  directory: dataDir,
+  silent: true,
+  configureBuckets: [{ name: fakes.bucket, configs: [cors] }],
+});
+await s3.run();
+
+type Message = { id: number; to: string[]; from: string; subject: string; text: string; html: string; date: string };
+const inbox: Message[] = [];
+let nextId = 1;
+
+const smtp = new SMTPServer({
+  authOptional: true,
+  disabledCommands: ['STARTTLS'], // the built-in certificate is expired; loopback only
+  logger: false,
+  onData(stream, session, callback) {
+    simpleParser(stream)
+      .then((mail) => {
+        inbox.push({
+          id: nextId++,
+          to: session.envelope.rcptTo.map((r) => r.address),
+          from: session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
+          subject: mail.subject ?? '',
+          text: mail.text ?? '',
+          html: typeof mail.html === 'string' ? mail.html : '',
+          date: new Date().toISOString(),
+        });
+        callback();
+      })
+      .catch((err: Error) => callback(err));
+  },
+});
+smtp.listen(fakes.smtpPort, '127.0.0.1');
+
+const inboxServer = http.createServer((req, res) => {
+  const url = new URL(req.url ?? '/', 'http://127.0.0.1');
+  if (url.pathname === '/messages' && req.method === 'GET') {
+    const to = url.searchParams.get('to');
+    const list = to ? inbox.filter((m) => m.to.includes(to)) : inbox;
+    res.writeHead(200, { 'content-type': 'application/json' });
+    res.end(JSON.stringify(list));
+  } else if (url.pathname === '/messages' && req.method === 'DELETE') {
+    inbox.length = 0;
+    res.writeHead(204).end();
+  } else if (url.pathname === '/health') {
+    res.writeHead(200).end('ok');
+  } else {
+    res.writeHead(200, { 'content-type': 'text/html; charset=utf-8' });
+    const rows = inbox
+      .slice()
+      .reverse()
+      .map((m) => `<li><b>${escape(m.subject)}</b> to ${escape(m.to.join(', '))}<pre>${escape(m.text)}</pre></li>`);
+    res.end(`<!doctype html><title>Hitchmark local inbox</title><h1>Local inbox (${inbox.length})</h1><ul>${rows.join('')}</ul>`);
+  }
+});
+inboxServer.listen(fakes.mailHttpPort, '127.0.0.1');
+
+function escape(s: string) {
+  return s.replace(/[&<>"]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;' })[c] ?? c);
+}
+
+console.log(
+  `fakes up: s3 http://127.0.0.1:${fakes.s3Port} bucket ${fakes.bucket}; smtp 127.0.0.1:${fakes.smtpPort}; inbox http://127.0.0.1:${fakes.mailHttpPort}`,
+);
+const stop = () => {
+  smtp.close(() => undefined);
+  inboxServer.close();
+  void s3.close().finally(() => process.exit(0));
+};
+process.on('SIGTERM', stop);
+process.on('SIGINT', stop);
