@@ -8,6 +8,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 ROOT=$(pwd)
+source scripts/env.sh
 PORT=${HM_PG_PORT:-54329}
 DATA=${HM_PG_DATA:-$ROOT/.data/postgres}
 SOCK=${HM_PG_SOCKET_DIR:-/tmp}

@@ -1,6 +1,8 @@
 # Sourced by the other scripts: local defaults for every setting. Anything already set wins.
 ROOT=${ROOT:-$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)}
 mkdir -p "$ROOT/.data"
+# A checkout may pin its own ports (several checkouts on one machine): .data/ports.env
+[ -f "$ROOT/.data/ports.env" ] && source "$ROOT/.data/ports.env"
 export NEXT_TELEMETRY_DISABLED=1
 export HM_PG_PORT=${HM_PG_PORT:-54329}
 export HM_S3_PORT=${HM_S3_PORT:-4569}
