@@ -1,5 +1,5 @@
 // Label tokens (node:crypto) are deliberately not re-exported here, so that client components
-// can import VIN and SCAC helpers; import them from './label-token' on the server.
+// can import VIN and SCAC helpers; on the server, import the label-token module directly.
 export { computeVinCheckDigit, decodeTrailerModelYear, modelYearCandidates, normalizeVin, validateVin, vinWeightedSum } from './vin';
 export type { VinError, VinResult } from './vin';
 export { isEquipmentScac, isScac, validateScac } from './scac';
