@@ -6,8 +6,9 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 bash scripts/setup.sh --with-browser
-export HM_APP_PORT=${HM_E2E_PORT:-3100}
 source scripts/env.sh
+# the browser tests run their own server on their own port
+export HM_APP_PORT=${HM_E2E_PORT:-3100}
 export APP_URL=http://localhost:$HM_APP_PORT
 bash scripts/fakes.sh start
 cleanup() { bash scripts/fakes.sh stop; }
