@@ -1,6 +1,8 @@
 import { inspectableItems } from './checklist';
 import { isInspected, severityOf } from './conditions';
-import type { Checklist, Condition, FindingKind, InspectionEvent, ItemFinding, TimelineEvent } from './types';
+import type {
+  Checklist, Condition, FindingKind, InspectionEvent, InspectionKind, ItemFinding, TimelineEvent,
+} from './types';
 
 /**
  * Classifies one item: `current` against the condition at the latest earlier inspection of it
@@ -15,6 +17,11 @@ export function classifyChange(current: Condition, previous: Condition | null): 
   if (diff === 0) return 'unchanged';
   if (diff < 0) return 'repaired';
   return previous === 'ok' ? 'new' : 'worse';
+}
+
+/** A drop or hook is a full inspection; a yard walk's checks are quick. */
+export function inspectionKindOf(event: InspectionEvent): InspectionKind {
+  return event.type === 'walk' ? 'quick' : 'full';
 }
 
 function hasItems(e: TimelineEvent): e is InspectionEvent {
@@ -68,6 +75,7 @@ export function compareInspection({ checklist, history, current }: CompareInput)
       previous: prev,
       previousEventId: prevEvent?.id ?? null,
       previousAt: prevEvent?.at ?? null,
+      previousInspection: prevEvent ? inspectionKindOf(prevEvent) : null,
       previousIndex: h,
     };
   });

@@ -7,7 +7,7 @@ export { buildChecklist, inspectableItems, OBSERVATION_FIELDS } from './checklis
 export {
   CONDITION_LABELS, CONDITIONS, compareSeverity, isCondition, isInspected, severityOf, worstCondition,
 } from './conditions';
-export { classifyChange, compareInspection, damageFindings } from './compare';
+export { classifyChange, compareInspection, damageFindings, inspectionKindOf } from './compare';
 export type { CompareInput } from './compare';
 export {
   buildCustodyLegs, currentCustodian, custodianAfter, custodianBefore, custodianKey, custodianName, legsBetweenEvents,

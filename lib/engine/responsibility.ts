@@ -71,7 +71,7 @@ export function attributeFindings(input: AttributeInput): Attribution[] {
     const names = interval.candidates.map((c) => custodianName(c, terminal));
 
     if (interval.candidates.length === 1) {
-      const quick = before.type === 'walk' || current.type === 'walk';
+      const quick = f.previousInspection === 'quick' || current.type === 'walk';
       let reason = `${head}only ${names[0]} held the trailer between.`;
       if (current.type === 'hook') {
         reason += ' A hook is the driver\'s pickup report, so this is not charged to the hooking driver.';

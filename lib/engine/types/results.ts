@@ -1,6 +1,6 @@
 /** What the engine returns: findings, custody legs, attributions, fuel, holds. */
 import type { Condition, ZoneKey } from './checklist';
-import type { Custodian } from './timeline';
+import type { Custodian, InspectionKind } from './timeline';
 
 // ---------- Comparison ----------
 
@@ -17,6 +17,8 @@ export interface ItemFinding {
   previous: Condition | null;
   previousEventId: string | null;
   previousAt: Date | null;
+  /** `full` for a drop or hook, `quick` for a yard walk; null when there was no earlier inspection. */
+  previousInspection: InspectionKind | null;
   /** Index in the history passed in; null when there was no earlier inspection. */
   previousIndex: number | null;
 }

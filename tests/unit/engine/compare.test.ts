@@ -89,8 +89,8 @@ describe('compareInspection', () => {
     const m = move('2026-11-02T12:00:00Z');
     const b = hook('2026-11-03T10:00:00Z', bluefield, { [HINGE]: { condition: 'ok' }, 'rear.header': { condition: 'minor' } });
     const fs = compareInspection({ checklist, history: [a, w, m], current: b });
-    expect(find(fs, 'rear.header')).toMatchObject({ finding: 'unchanged', previousEventId: w.id });
-    expect(find(fs, HINGE)).toMatchObject({ finding: 'unchanged', previousEventId: a.id });
+    expect(find(fs, 'rear.header')).toMatchObject({ finding: 'unchanged', previousEventId: w.id, previousInspection: 'quick' });
+    expect(find(fs, HINGE)).toMatchObject({ finding: 'unchanged', previousEventId: a.id, previousInspection: 'full' });
   });
 
   it('ignores keys that are not on this trailer checklist', () => {

@@ -118,4 +118,31 @@ describe('attributeFindings', () => {
     expect(a).toMatchObject({ finding: 'worse', status: 'single' });
     expect(a.reason).toContain('inspected with minor marks at the hook');
   });
+
+  it('damage first seen on a yard walk after a drop lands on the terminal, medium confidence', () => {
+    const k = drop('2026-11-01T10:00:00Z', northwind, { 'undercarriage.mud_flap.left': { condition: 'ok' } });
+    const w = walk('2026-11-02T10:00:00Z', { 'undercarriage.mud_flap.left': { condition: 'missing' } });
+    const [a] = attribute([k, move('2026-11-01T12:00:00Z')], w);
+    expect(a).toMatchObject({ status: 'single', confidence: 'medium', responsible: { type: 'terminal' }, finding: 'new' });
+    expect(a.reason).toContain('found missing at the yard walk');
+  });
+
+  it('over a long history finds the one old inspection and every custodian since', () => {
+    const history: TimelineEvent[] = [drop('2026-01-01T00:00:00Z', northwind, { [HINGE]: { condition: 'ok' } })];
+    const parties = [bluefield, corvid];
+    for (let i = 1; i <= 200; i++) {
+      const at = new Date(Date.UTC(2026, 0, 1, i)).toISOString();
+      const p = parties[Math.floor(i / 2) % 2];
+      history.push(i % 2 === 1 ? hook(at, p) : drop(at, parties[Math.floor((i - 1) / 2) % 2]));
+    }
+    const n = hook('2026-02-01T00:00:00Z', corvid, { [HINGE]: { condition: 'damaged' } });
+    const [a] = attribute(history, n);
+    expect(a.previousEventId).toBe(history[0].id);
+    expect(a.status).toBe('several');
+    expect(a.candidates.map((c) => (c.type === 'terminal' ? 'terminal' : c.carrierId)).sort())
+      .toEqual(['c-bf', 'c-cv', 'terminal']);
+    // Legs alternate: 100 terminal legs ending at the 100 earlier hooks, 100 carrier trips, and
+    // the terminal leg ending at this hook.
+    expect(a.legs).toHaveLength(201);
+  });
 });
