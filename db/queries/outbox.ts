@@ -1,0 +1,64 @@
+import { and, asc, eq, lte, sql } from 'drizzle-orm';
+import { db, type Tx } from '@/db';
+import { emailOutbox } from '@/db/schema';
+import { nextAttemptAt } from '@/lib/outbox-retry';
+
+// No `server-only` marker: the outbox worker script imports this under plain Node.
+
+export type OutgoingEmail = {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+  relatedType?: string;
+  relatedId?: string;
+};
+
+/** Writes an e-mail to the outbox (inside the caller's transaction when `tx` is given). Returns its id. */
+export async function enqueueEmail(email: OutgoingEmail, tx?: Tx): Promise<string> {
+  const [row] = await (tx ?? db)
+    .insert(emailOutbox)
+    .values({
+      toAddress: email.to,
+      subject: email.subject,
+      textBody: email.text,
+      htmlBody: email.html ?? null,
+      relatedType: email.relatedType ?? null,
+      relatedId: email.relatedId ?? null,
+    })
+    .returning({ id: emailOutbox.id });
+  return row.id;
+}
+
+/** Claims up to `limit` due e-mails; SKIP LOCKED lets several app servers share the work. */
+export async function claimDueEmails(tx: Tx, now: Date, limit = 20) {
+  return tx
+    .select()
+    .from(emailOutbox)
+    .where(and(eq(emailOutbox.status, 'pending'), lte(emailOutbox.nextAttemptAt, now)))
+    .orderBy(asc(emailOutbox.createdAt))
+    .limit(limit)
+    .for('update', { skipLocked: true });
+}
+
+export async function markEmailSent(tx: Tx, id: string, now: Date) {
+  await tx
+    .update(emailOutbox)
+    .set({ status: 'sent', sentAt: now, attempts: sql`${emailOutbox.attempts} + 1`, lastError: null })
+    .where(eq(emailOutbox.id, id));
+}
+
+export async function markEmailFailed(tx: Tx, id: string, attempts: number, error: string, now: Date) {
+  await tx
+    .update(emailOutbox)
+    .set({ attempts: attempts + 1, lastError: error.slice(0, 500), nextAttemptAt: nextAttemptAt(attempts + 1, now) })
+    .where(eq(emailOutbox.id, id));
+}
+
+export async function listEmailsFor(relatedType: string, relatedId: string) {
+  return db
+    .select({ id: emailOutbox.id, to: emailOutbox.toAddress, subject: emailOutbox.subject, status: emailOutbox.status, attempts: emailOutbox.attempts, sentAt: emailOutbox.sentAt })
+    .from(emailOutbox)
+    .where(and(eq(emailOutbox.relatedType, relatedType), eq(emailOutbox.relatedId, relatedId)))
+    .orderBy(asc(emailOutbox.createdAt));
+}
