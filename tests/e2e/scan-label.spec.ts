@@ -45,8 +45,18 @@ test('a code that is not a label shows what was read and offers typing', async (
 });
 
 test('with no camera the gate says so and the typed lookup still works', async ({ page }) => {
+  // the camera code (@zxing/browser; its option name tryPlayVideoTimeout survives minifying) loads only on demand
+  const scannerChunks: string[] = [];
+  page.on('response', async (response) => {
+    if (!response.url().endsWith('.js')) return;
+    if ((await response.text().catch(() => '')).includes('tryPlayVideoTimeout')) scannerChunks.push(response.url());
+  });
   await signInAs(page, 'driver');
+  await expect(page.getByRole('button', { name: 'Scan trailer label' })).toBeVisible();
+  await page.waitForLoadState('networkidle');
+  expect(scannerChunks).toEqual([]);
   await page.getByRole('button', { name: 'Scan trailer label' }).click();
+  await expect.poll(() => scannerChunks.length).toBeGreaterThan(0);
   // headless Chromium without the fake device has no camera at all
   await expect(page.getByRole('alert').filter({ hasText: 'No camera found' })).toBeVisible();
   await page.getByLabel('Or type the unit number or VIN').fill('R99999');

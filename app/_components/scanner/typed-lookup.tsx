@@ -25,6 +25,9 @@ export function TypedLookup({ onLookup, isBusy, initial = '' }: { onLookup: (q: 
       <label htmlFor="typed-trailer" className="block text-gate font-bold">
         Or type the unit number or VIN
       </label>
+      <p id="typed-trailer-hint" className="text-gate-sm text-ink-soft">
+        Unit number from the nose or doors, or all 17 characters of the VIN.
+      </p>
       <input
         id="typed-trailer"
         value={value}
@@ -34,7 +37,8 @@ export function TypedLookup({ onLookup, isBusy, initial = '' }: { onLookup: (q: 
         spellCheck={false}
         inputMode="text"
         maxLength={40}
-        placeholder="R53012 or 17-character VIN"
+        placeholder="R53012"
+        aria-describedby="typed-trailer-hint"
         className="block min-h-tap-lg w-full rounded-lg border-2 border-paper-line bg-paper px-3 font-mono text-gate-xl uppercase"
       />
       <Button type="submit" variant="secondary" className="w-full" disabled={isBusy || !value.trim()}>

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { ButtonLink } from '@/app/_components/button';
+import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { getRowName, listLabelSheet, listRowsForLabels } from '@/db/queries/labels';
 import { SECTION_ROLES } from '@/lib/roles';
@@ -32,6 +33,7 @@ export default async function LabelsPage({ searchParams }: PageProps<'/trailers/
         <p className="text-gate text-ink-soft">
           Print on plain paper or label stock, four to a Letter page. Stick the label where a driver can reach it from the ground, away from the reefer unit.
         </p>
+        <Caution title="Putting labels on">{CAUTIONS.reefer} Stick labels on from the ground; do not climb the trailer or go under it to do so.</Caution>
         <div className="flex flex-wrap gap-2">
           <PrintButton />
           <ButtonLink variant="secondary" href={`/trailers/labels/pdf?${pdfQuery}`} prefetch={false}>

@@ -28,7 +28,7 @@ export default async function TrailerLabelPage({ params, searchParams }: PagePro
           </p>
         ) : null}
         <div className="flex flex-wrap gap-2">
-          <PrintButton />
+          <PrintButton label="Print label" />
           <ButtonLink variant="secondary" href={`/trailers/labels/pdf?ids=${trailer.id}`} prefetch={false}>
             Download PDF
           </ButtonLink>

@@ -2,10 +2,10 @@
 
 import { Button } from '@/app/_components/button';
 
-export function PrintButton() {
+export function PrintButton({ label = 'Print labels' }: { label?: string }) {
   return (
     <Button type="button" onClick={() => window.print()}>
-      Print labels
+      {label}
     </Button>
   );
 }
