@@ -111,12 +111,14 @@ test('the lookup API answers each case with the right status and a clear message
   expect((await api.get('/api/trailers/lookup')).status()).toBe(422);
   expect((await api.get(`/api/trailers/lookup?unit=R53001&vin=${trailer.vin}`)).status()).toBe(422);
   expect((await api.get('/api/trailers/lookup?unit=R99999')).status()).toBe(404);
+  // drivers look trailers up but do not print labels
+  expect((await api.get(`/trailers/labels/pdf?ids=${trailer.id}`)).status()).toBe(403);
   const forged = await api.get(`/api/trailers/lookup?token=${'A'.repeat(68)}`);
   expect(forged.status()).toBe(422);
   expect(await forged.json()).toMatchObject({ code: 'invalid', message: 'This label is not a Hitchmark label or it is damaged.' });
 });
 
-test('a revoked label token gets 410 from the lookup API; the PDF prints for clerks only', async ({ page }) => {
+test('a revoked label token gets 410 from the lookup API; a clerk downloads the PDF', async ({ page }) => {
   await signInAs(page, 'clerk');
   const labels = new LabelPage(page);
   const trailerId = await labels.trailerId('R53043');
@@ -132,4 +134,23 @@ test('a revoked label token gets 410 from the lookup API; the PDF prints for cle
   expect(pdf.headers()['content-type']).toBe('application/pdf');
   expect((await pdf.body()).subarray(0, 5).toString()).toBe('%PDF-');
   expect((await page.request.get('/trailers/labels/pdf?ids=R53043')).status()).toBe(422);
+});
+
+test('a label scanned while signed out opens sign-in first, then the trailer', async ({ page, browser, baseURL }) => {
+  await signInAs(page, 'clerk');
+  const labels = new LabelPage(page);
+  const trailerId = await labels.trailerId('R53044');
+  await labels.open(trailerId);
+  const path = new URL(await labels.link()).pathname;
+
+  const context = await browser.newContext({ baseURL });
+  try {
+    const phone = await context.newPage();
+    await phone.goto(path);
+    await expect(phone).toHaveURL(/\/login\?next=%2Fl%2F/);
+    await new SignInPage(phone).fill('driver', ACCOUNTS.driver.id, ACCOUNTS.driver.secret);
+    await expect(phone).toHaveURL(new RegExp(`/gate/trailers/${trailerId}$`));
+  } finally {
+    await context.close();
+  }
 });
