@@ -1,7 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { LabelPage } from './pages/label-page';
 import { ACCOUNTS, SignInPage, type AccountName } from './pages/sign-in-page';
-import { launchWithCamera, writeLabelVideo } from './support/fake-camera';
+import { code39Image, launchWithCamera, writeImageVideo, writeLabelVideo } from './support/fake-camera';
 
 async function signInAs(page: Page, name: AccountName) {
   await new SignInPage(page).signIn(name);
@@ -22,7 +22,21 @@ test('a driver scans a real label with the camera and lands on that trailer’s 
     const driver = camera.page;
     await signInAs(driver, 'driver');
     await driver.getByRole('button', { name: 'Scan trailer label' }).click();
-    await expect(driver).toHaveURL(new RegExp(`/gate/trailers/${trailerId}$`), { timeout: 15_000 });
+    await expect(driver).toHaveURL(new RegExp(`/gate/trailers/${trailerId}$`), { timeout: 20_000 });
+  } finally {
+    await camera.browser.close();
+  }
+});
+
+test('a driver scans a VIN barcode (Code 39 with the leading I marker) when the label is gone', async ({ page }) => {
+  await signInAs(page, 'driver');
+  const found = await (await page.request.get('/api/trailers/lookup?unit=R53045')).json();
+  const video = await writeImageVideo(code39Image(`I${found.trailer.vin}`), '.data/e2e-vin-R53045.y4m');
+  const camera = await launchWithCamera(video);
+  try {
+    await signInAs(camera.page, 'driver');
+    await camera.page.getByRole('button', { name: 'Scan trailer label' }).click();
+    await expect(camera.page).toHaveURL(new RegExp(`/gate/trailers/${found.trailer.id}$`), { timeout: 20_000 });
   } finally {
     await camera.browser.close();
   }
@@ -34,7 +48,7 @@ test('a code that is not a label shows what was read and offers typing', async (
     const driver = camera.page;
     await signInAs(driver, 'driver');
     await driver.getByRole('button', { name: 'Scan trailer label' }).click();
-    await expect(driver.getByText('That code is not a Hitchmark label or a VIN barcode.')).toBeVisible({ timeout: 15_000 });
+    await expect(driver.getByText('That code is not a Hitchmark label or a VIN barcode.')).toBeVisible({ timeout: 20_000 });
     await expect(driver.getByText('Read: SLOT B07')).toBeVisible();
     await driver.getByLabel('Or type the unit number or VIN').fill('r53041');
     await driver.getByRole('button', { name: 'Find trailer' }).click();
