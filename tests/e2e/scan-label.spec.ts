@@ -9,6 +9,7 @@ async function signInAs(page: Page, name: AccountName) {
 }
 
 test('a driver scans a real label with the camera and lands on that trailer’s handoff start', async ({ page }) => {
+  test.slow(); // launches its own browser with a fake camera
   // the clerk's label page renders the label; its link is what the QR on the trailer encodes
   await signInAs(page, 'clerk');
   const labels = new LabelPage(page);
@@ -22,13 +23,14 @@ test('a driver scans a real label with the camera and lands on that trailer’s 
     const driver = camera.page;
     await signInAs(driver, 'driver');
     await driver.getByRole('button', { name: 'Scan trailer label' }).click();
-    await expect(driver).toHaveURL(new RegExp(`/gate/trailers/${trailerId}$`), { timeout: 20_000 });
+    await expect(driver).toHaveURL(new RegExp(`/gate/trailers/${trailerId}$`), { timeout: 30_000 });
   } finally {
     await camera.browser.close();
   }
 });
 
 test('a driver scans a VIN barcode (Code 39 with the leading I marker) when the label is gone', async ({ page }) => {
+  test.slow(); // launches its own browser with a fake camera
   await signInAs(page, 'driver');
   const found = await (await page.request.get('/api/trailers/lookup?unit=R53045')).json();
   const video = await writeImageVideo(code39Image(`I${found.trailer.vin}`), '.data/e2e-vin-R53045.y4m');
@@ -36,19 +38,20 @@ test('a driver scans a VIN barcode (Code 39 with the leading I marker) when the 
   try {
     await signInAs(camera.page, 'driver');
     await camera.page.getByRole('button', { name: 'Scan trailer label' }).click();
-    await expect(camera.page).toHaveURL(new RegExp(`/gate/trailers/${found.trailer.id}$`), { timeout: 20_000 });
+    await expect(camera.page).toHaveURL(new RegExp(`/gate/trailers/${found.trailer.id}$`), { timeout: 30_000 });
   } finally {
     await camera.browser.close();
   }
 });
 
 test('a code that is not a label shows what was read and offers typing', async () => {
+  test.slow(); // launches its own browser with a fake camera
   const camera = await launchWithCamera(await writeLabelVideo('SLOT B07', '.data/e2e-unknown-code.y4m'));
   try {
     const driver = camera.page;
     await signInAs(driver, 'driver');
     await driver.getByRole('button', { name: 'Scan trailer label' }).click();
-    await expect(driver.getByText('That code is not a Hitchmark label or a VIN barcode.')).toBeVisible({ timeout: 20_000 });
+    await expect(driver.getByText('That code is not a Hitchmark label or a VIN barcode.')).toBeVisible({ timeout: 30_000 });
     await expect(driver.getByText('Read: SLOT B07')).toBeVisible();
     await driver.getByLabel('Or type the unit number or VIN').fill('r53041');
     await driver.getByRole('button', { name: 'Find trailer' }).click();
