@@ -46,7 +46,7 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
       <Field label="To slot or door" name="target" list="free-spots" autoCapitalize="characters" autoComplete="off" required error={errors.target} />
       <datalist id="free-spots">{freeSpots.map((s) => <option key={s} value={s} />)}</datalist>
       <Button type="submit" disabled={pending}>{pending ? 'Recording…' : 'Record move'}</Button>
-      <FormError message={result && !result.ok ? result.message : null} />
+      <FormError message={result && !result.ok && !result.fieldErrors ? result.message : null} />
       <div aria-live="polite">
         {result?.ok ? (
           <div className="space-y-2">
