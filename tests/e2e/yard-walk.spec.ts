@@ -2,15 +2,17 @@ import { expect, test } from '@playwright/test';
 import { pool } from '../../db';
 import { SignInPage } from './pages/sign-in-page';
 import { YardWalkPage } from './pages/yard-walk-page';
-import { walkRowFixture } from './support/yard-state';
+import { launchWithCamera, writeLabelVideo } from './support/fake-camera';
+import { labelLinkFor, walkRowFixture } from './support/yard-state';
 
 test.afterAll(async () => {
   await pool.end();
 });
 
 test('a jockey walks a row: one missing, one in the wrong slot, one unknown label; accepting the correction updates the board', async ({ page, context }) => {
+  test.setTimeout(90_000); // two browsers: this phone and a second one with a fake camera
   // board: slot 1 = unit 1, slot 2 = unit 2, slot 3 = unit 3, slot 4 empty
-  const { rowName, tag, slots, units } = await walkRowFixture();
+  const { rowName, tag, slots, units, trailerIds } = await walkRowFixture();
   await new SignInPage(page).signIn('jockey');
   await expect(page).toHaveURL(/\/yard$/);
   const walk = new YardWalkPage(page);
@@ -31,8 +33,24 @@ test('a jockey walks a row: one missing, one in the wrong slot, one unknown labe
   await context.setOffline(false);
   await expect(walk.scans().filter({ hasText: `${slots[1]}: NOLABEL${tag} (unknown) · Sent` })).toHaveCount(1);
 
-  // unit 3 stands in slot 4, not slot 3; unit 2 is nowhere
-  await walk.scan(units[2], slots[3]);
+  // unit 3 stands in slot 4, not slot 3; unit 2 is nowhere. Unit 3's label is read by a second
+  // phone's camera (fake camera fed the label's QR code) on the same walk.
+  const video = await writeLabelVideo(await labelLinkFor(trailerIds[2]), `.data/e2e-walk-${tag}.y4m`);
+  const camera = await launchWithCamera(video);
+  try {
+    const other = camera.page;
+    await new SignInPage(other).signIn('jockey');
+    await expect(other).toHaveURL(/\/yard$/);
+    await other.goto(page.url());
+    await other.getByRole('button', { name: 'Scan label' }).click();
+    await expect(other.getByLabel('Unit', { exact: true })).toHaveValue(/\/l\//, { timeout: 15_000 });
+    const otherWalk = new YardWalkPage(other);
+    await otherWalk.scan('', slots[3], { keepUnit: true });
+    await expect(otherWalk.scans().filter({ hasText: `${slots[3]}: ${units[2]} · Sent` })).toHaveCount(1);
+  } finally {
+    await camera.browser.close();
+  }
+  await page.reload();
   await expect(walk.scans().filter({ hasText: 'Sent' })).toHaveCount(3);
   await walk.finish();
 

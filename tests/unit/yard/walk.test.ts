@@ -42,8 +42,10 @@ describe('walk scan as an engine timeline event', () => {
 
 describe('scanned text', () => {
   it('tells a label link, a VIN and a unit number apart', () => {
-    expect(classifyScanText('http://localhost:3000/l/abc.def')).toEqual({ kind: 'label', token: 'abc.def' });
-    expect(classifyScanText('https://hitchmark.example/scan?t=tok')).toEqual({ kind: 'label', token: 'tok' });
+    const token = 'AQ_-abcdefghijklmnopqrstuvwxyz0123456789';
+    expect(classifyScanText(`http://localhost:3000/l/${token}`)).toEqual({ kind: 'label', token });
+    // a link that is not a label link is just text: it will match no unit and show as unknown
+    expect(classifyScanText('https://elsewhere.example/x')).toEqual({ kind: 'unit', unitNumber: 'HTTPS://ELSEWHERE.EXAMPLE/X' });
     // 1G4AH59H45G118341: the VIN example of 49 CFR 565.15 (17 characters, no I, O or Q)
     expect(classifyScanText(' 1g4ah59h45g118341 ')).toEqual({ kind: 'vin', vin: '1G4AH59H45G118341' });
     expect(classifyScanText('r53001')).toEqual({ kind: 'unit', unitNumber: 'R53001' });

@@ -5,6 +5,7 @@ import { useSWRConfig } from 'swr';
 import { Button } from '@/app/_components/button';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { Field, FormError } from '@/app/_components/field';
+import { CameraButton } from '../../_components/camera-button';
 import { BOARD_KEY } from '../../_components/use-board';
 
 type Result =
@@ -38,12 +39,19 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
     }
   }
 
+  function fill(text: string, name: 'unit' | 'target') {
+    const input = document.querySelector<HTMLInputElement>(`form[data-move] input[name="${name}"]`);
+    if (input) input.value = text.trim();
+  }
+
   const errors = result && !result.ok ? result.fieldErrors ?? {} : {};
   return (
-    <form onSubmit={submit} noValidate className="space-y-2 rounded-xl bg-paper p-4 shadow">
+    <form data-move onSubmit={submit} noValidate className="space-y-2 rounded-xl bg-paper p-4 shadow">
       <Field label="Unit" name="unit" list="yard-units" autoCapitalize="characters" autoComplete="off" required hint="Unit number, VIN or label" error={errors.unit} />
+      <CameraButton label="Scan trailer label" onText={(t) => fill(t, 'unit')} />
       <datalist id="yard-units">{units.map((u) => <option key={u} value={u} />)}</datalist>
       <Field label="To slot or door" name="target" list="free-spots" autoCapitalize="characters" autoComplete="off" required error={errors.target} />
+      <CameraButton label="Scan slot label" onText={(t) => fill(t, 'target')} />
       <datalist id="free-spots">{freeSpots.map((s) => <option key={s} value={s} />)}</datalist>
       <Button type="submit" disabled={pending}>{pending ? 'Recording…' : 'Record move'}</Button>
       <FormError message={result && !result.ok && !result.fieldErrors ? result.message : null} />

@@ -6,6 +6,7 @@ import { FormError } from '@/app/_components/field';
 import { pendingCount } from '@/lib/yard/scan-queue';
 import { suggestNextSpot, type WalkSpot } from '@/lib/yard/walk';
 import { finishWalkAction } from '../../actions';
+import { CameraButton } from '../../../_components/camera-button';
 import { QuickCheckFields, readQuickChecks } from './quick-checks';
 import { useScanQueue } from './use-scan-queue';
 
@@ -47,6 +48,7 @@ export function WalkScanner({ walkId, spots, stored }: { walkId: string; spots: 
         <label className="block text-gate font-bold" htmlFor="unit">Unit</label>
         <input ref={unitRef} autoFocus id="unit" name="unit" autoComplete="off" autoCapitalize="characters" placeholder="Unit number, VIN or label"
           className="block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-gate" />
+        <CameraButton label="Scan label" onText={(text) => { if (unitRef.current) unitRef.current.value = text; }} />
         <label className="block text-gate font-bold" htmlFor="spotId">Slot</label>
         <select id="spotId" name="spotId" defaultValue={suggested?.id ?? ''} className="block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-3 text-gate">
           <option value="">Choose the slot</option>
