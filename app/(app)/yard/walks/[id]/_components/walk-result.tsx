@@ -63,17 +63,26 @@ export function WalkResult({ summary, outcomes }: { summary: Record<string, numb
       {GROUPS.map((g) => {
         const list = outcomes.filter((o) => o.outcome === g.key);
         if (list.length === 0) return null;
-        return (
+        const items = (
+          <ul className="space-y-2">
+            {list.map((o) => (
+              <li key={o.id} className="rounded-lg bg-paper p-3 shadow">
+                <p className="text-gate">{describe(o)}</p>
+                <Resolve o={o} />
+              </li>
+            ))}
+          </ul>
+        );
+        // matched trailers need nothing done: folded away so the problems come first
+        return g.key === 'matched' ? (
+          <details key={g.key}>
+            <summary className="min-h-tap cursor-pointer py-2 text-gate font-bold">{g.title} ({list.length})</summary>
+            {items}
+          </details>
+        ) : (
           <section key={g.key} aria-label={g.title} className="space-y-2">
             <h3 className="text-gate font-bold">{g.title} ({list.length})</h3>
-            <ul className="space-y-2">
-              {list.map((o) => (
-                <li key={o.id} className="rounded-lg bg-paper p-3 shadow">
-                  <p className="text-gate">{describe(o)}</p>
-                  <Resolve o={o} />
-                </li>
-              ))}
-            </ul>
+            {items}
           </section>
         );
       })}
