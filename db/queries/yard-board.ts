@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, asc, eq, inArray, isNull } from 'drizzle-orm';
+import { and, asc, eq, isNull } from 'drizzle-orm';
 import { db } from '@/db';
 import { holds, policies, terminals, trailers, yardRows, yardSpots } from '@/db/schema';
 import { yardPolicyOf } from '@/lib/yard/policy';
@@ -14,7 +14,7 @@ export async function getBoard(terminalId: string, now = new Date()): Promise<Bo
     .where(eq(terminals.id, terminalId))
     .limit(1);
   if (!terminal) return null;
-  const [rows, spots] = await Promise.all([
+  const [rows, spots, openHolds] = await Promise.all([
     db.select({ id: yardRows.id, name: yardRows.name }).from(yardRows).where(eq(yardRows.terminalId, terminalId)).orderBy(asc(yardRows.sortOrder), asc(yardRows.name)),
     db
       .select({
@@ -29,14 +29,12 @@ export async function getBoard(terminalId: string, now = new Date()): Promise<Bo
       .leftJoin(trailers, and(eq(trailers.currentSpotId, yardSpots.id), eq(trailers.status, 'in_yard')))
       .where(and(eq(yardSpots.terminalId, terminalId), isNull(yardSpots.retiredAt)))
       .orderBy(asc(yardSpots.kind), asc(yardRows.sortOrder), asc(yardSpots.sortOrder), asc(yardSpots.label)),
-  ]);
-  const trailerIds = spots.flatMap((s) => (s.trailerId ? [s.trailerId] : []));
-  const openHolds = trailerIds.length
-    ? await db
+    db
       .select({ trailerId: holds.trailerId, severity: holds.severity, reason: holds.reason })
       .from(holds)
-      .where(and(inArray(holds.trailerId, trailerIds), isNull(holds.releasedAt)))
-    : [];
+      .innerJoin(trailers, eq(trailers.id, holds.trailerId))
+      .where(and(eq(trailers.currentTerminalId, terminalId), eq(trailers.status, 'in_yard'), isNull(holds.releasedAt))),
+  ]);
   const holdsOf = new Map<string, BoardHold[]>();
   for (const h of openHolds) {
     const list = holdsOf.get(h.trailerId) ?? [];

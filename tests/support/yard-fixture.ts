@@ -8,7 +8,7 @@ import { carriers, terminals, trailers, users, yardRows, yardSpots } from '../..
 export const uniqueTag = () => randomBytes(3).toString('hex').toUpperCase();
 
 /** A 17-character fake VIN that cannot collide with the seed's (starts with "HMT"); not a valid check digit. */
-const fakeVin = (tag: string, n: number) => `HMT${tag}${String(n).padStart(8, '0')}`.slice(0, 17).padEnd(17, '0');
+const fakeVin = (tag: string, n: number) => `HMT${tag.slice(0, 6).padEnd(6, "0")}${String(n).padStart(8, "0")}`;
 
 export async function ensureTerminal(db: Db, code: string, timeZone = 'America/Chicago') {
   await db.insert(terminals).values({ code, name: `${code} test terminal`, timeZone }).onConflictDoNothing();
