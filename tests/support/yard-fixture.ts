@@ -68,3 +68,29 @@ export async function spotIdByLabel(db: Db, terminalId: string, label: string) {
   const [s] = await db.select({ id: yardSpots.id }).from(yardSpots).where(and(eq(yardSpots.terminalId, terminalId), eq(yardSpots.label, label)));
   return s?.id ?? null;
 }
+
+/**
+ * Removes what the helpers above made in one terminal (walks, moves, tasks, trailers of the test
+ * carrier, rows and slots) so other test files see the seeded data alone. Users and audit entries
+ * stay: the audit log is append-only and refers to its actors.
+ */
+export async function removeTestYard(db: Db, terminalId: string) {
+  const { labels, walkOutcomes, walkScans, yardMoves, yardTasks, yardWalks } = await import('../../db/schema');
+  const { inArray } = await import('drizzle-orm');
+  const carrierId = await ensureCarrier(db);
+  const own = (await db.select({ id: trailers.id }).from(trailers).where(eq(trailers.ownerCarrierId, carrierId))).map((t) => t.id);
+  const walks = (await db.select({ id: yardWalks.id }).from(yardWalks).where(eq(yardWalks.terminalId, terminalId))).map((w) => w.id);
+  if (walks.length) {
+    await db.delete(walkOutcomes).where(inArray(walkOutcomes.walkId, walks));
+    await db.delete(walkScans).where(inArray(walkScans.walkId, walks));
+  }
+  await db.delete(yardTasks).where(eq(yardTasks.terminalId, terminalId));
+  if (walks.length) await db.delete(yardWalks).where(inArray(yardWalks.id, walks));
+  await db.delete(yardMoves).where(eq(yardMoves.terminalId, terminalId));
+  if (own.length) {
+    await db.delete(labels).where(inArray(labels.trailerId, own));
+    await db.delete(trailers).where(inArray(trailers.id, own));
+  }
+  await db.delete(yardSpots).where(eq(yardSpots.terminalId, terminalId));
+  await db.delete(yardRows).where(eq(yardRows.terminalId, terminalId));
+}

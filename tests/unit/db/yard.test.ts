@@ -8,7 +8,8 @@ import { moveTrailer } from '@/db/queries/yard-moves';
 import { resolveWalkOutcome } from '@/db/queries/yard-outcomes';
 import { finishWalk } from '@/db/queries/yard-walk-finish';
 import { addWalkScan, startWalk } from '@/db/queries/yard-walks';
-import { createJockey, createRowWithSlots, ensureTerminal, placeTrailers, uniqueTag } from '../../support/yard-fixture';
+import { seed } from '@/db/seed';
+import { createJockey, createRowWithSlots, ensureTerminal, placeTrailers, removeTestYard, uniqueTag } from '../../support/yard-fixture';
 
 let terminalId: string;
 let jockeyId: string;
@@ -16,10 +17,13 @@ const checks = { isUnitRunning: true, setpointTenthsF: 340, fuelEighths: 6, areD
 const scanAt = (n: number) => new Date(Date.UTC(2030, 0, 1, 12, n)).toISOString();
 
 beforeAll(async () => {
+  // the demo seed first (idempotent), so its placement of trailers is not skipped because ours exist
+  await seed();
   terminalId = await ensureTerminal(db, 'HMYT');
   jockeyId = await createJockey(db, terminalId);
 });
 afterAll(async () => {
+  await removeTestYard(db, terminalId);
   await pool.end();
 });
 
