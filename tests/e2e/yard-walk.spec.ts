@@ -91,3 +91,25 @@ test('a move into an occupied slot is refused naming the occupant; the board sho
   await page.goto('/yard');
   await expect(page.getByTestId('yard-map').locator(`[data-spot="${slots[3]}"]`)).toContainText(units[0]);
 });
+
+test('the CSV export carries the table columns and rows; bad input gets a clear 4xx', async ({ page }) => {
+  const { slots, units } = await walkRowFixture();
+  await new SignInPage(page).signIn('clerk');
+  await expect(page).toHaveURL(/\/desk$/);
+  const csv = await page.request.get('/api/yard/board.csv?sort=unit&dir=asc');
+  expect(csv.status()).toBe(200);
+  expect(csv.headers()['content-type']).toContain('text/csv');
+  const lines = (await csv.text()).split('\r\n');
+  expect(lines[0]).toBe('Unit,Slot,Loaded/empty,Reefer,Fuel,Holds,Dwell,Gate in,Last seen');
+  // the fixture's first trailer: loaded reefer at 34.0 °F, 6/8 fuel, gated in an hour ago
+  expect(lines.find((l) => l.startsWith(`${units[0]},`))).toMatch(new RegExp(`^${units[0]},${slots[0]},Loaded,"On, 34\\.0 °F",6/8,None,1 h 0\\d min,`));
+
+  expect((await page.request.get('/api/yard/board.csv?filter=bogus')).status()).toBe(422);
+  const notJson = await page.request.post('/api/yard/moves', { headers: { 'content-type': 'application/json' }, data: Buffer.from('{not json') });
+  expect(notJson.status()).toBe(400);
+  const empty = await page.request.post('/api/yard/moves', { data: { unit: '', target: 'A01' } });
+  expect(empty.status()).toBe(422);
+  expect((await empty.json()).fieldErrors.unit[0]).toBe('Scan or type the unit number.');
+  const badScan = await page.request.post('/api/yard/walks/00000000-0000-4000-8000-000000000000/scans', { data: { clientKey: 'short' } });
+  expect(badScan.status()).toBe(422);
+});
