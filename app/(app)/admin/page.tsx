@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { listCarriers, listUsers } from '@/db/queries/admin';
 import { SECTION_ROLES } from '@/lib/roles';
 import { requireUser } from '@/lib/server/auth';
@@ -11,6 +12,9 @@ export default async function AdminPage() {
   return (
     <div className="space-y-6">
       <h1 className="text-gate-xl font-bold">Admin</h1>
+      <Link href="/admin/yard" className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand">
+        Yard layout: rows, slots and dock doors
+      </Link>
       <section aria-labelledby="people">
         <h2 id="people" className="text-gate-lg font-bold">People and roles</h2>
         <ul className="mt-2 divide-y divide-paper-line rounded-xl bg-paper">

@@ -1,20 +1,24 @@
 import type { Metadata } from 'next';
-import { countTrailersByStatus } from '@/db/queries/trailers';
+import { EmptyState } from '@/app/_components/empty-state';
+import { getBoard } from '@/db/queries/yard-board';
 import { SECTION_ROLES } from '@/lib/roles';
 import { requireUser } from '@/lib/server/auth';
+import { YardBoard } from './_components/yard-board';
+import { YardNav } from './_components/yard-nav';
 
-export const metadata: Metadata = { title: 'Yard' };
+export const metadata: Metadata = { title: 'Yard board' };
 
 export default async function YardPage() {
   const user = await requireUser(SECTION_ROLES.yard);
-  const counts = await countTrailersByStatus(user.terminalId);
-  const inYard = counts.find((c) => c.status === 'in_yard')?.count ?? 0;
+  const board = user.terminalId ? await getBoard(user.terminalId) : null;
   return (
-    <div className="space-y-3">
-      <h1 className="text-gate-xl font-bold">Yard</h1>
-      <p className="text-gate">
-        {user.terminalName ?? 'No home terminal'}: {inYard} trailers in the yard.
-      </p>
+    <div>
+      <YardNav current="/yard" />
+      {board ? (
+        <YardBoard initial={board} />
+      ) : (
+        <EmptyState title="No home terminal">Ask an admin to set your home terminal to see its yard.</EmptyState>
+      )}
     </div>
   );
 }

@@ -1,0 +1,32 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { listWalkOutcomes } from '@/db/queries/yard-outcomes';
+import { getWalk } from '@/db/queries/yard-walks';
+import { SECTION_ROLES } from '@/lib/roles';
+import { requireUser } from '@/lib/server/auth';
+import { YardNav } from '../../_components/yard-nav';
+import { WalkResult } from './_components/walk-result';
+import { WalkScanner } from './_components/walk-scanner';
+
+export const metadata: Metadata = { title: 'Yard walk' };
+
+export default async function WalkPage({ params }: { params: Promise<{ id: string }> }) {
+  const user = await requireUser(SECTION_ROLES.yard);
+  const { id } = await params;
+  if (!z.uuid().safeParse(id).success || !user.terminalId) notFound();
+  const walk = await getWalk(id, user.terminalId);
+  if (!walk) notFound();
+  const rowNames = walk.rows.map((r) => r.name).join(', ');
+  return (
+    <div className="space-y-3">
+      <YardNav current="/yard/walks" />
+      <h1 className="text-gate-xl font-bold">Yard walk: {rowNames}</h1>
+      {walk.status === 'in_progress' ? (
+        <WalkScanner walkId={walk.id} spots={walk.spots} stored={walk.scans.map((s) => ({ clientKey: s.clientKey, text: s.scannedText, unitNumber: s.unitNumber, spotLabel: s.spotLabel }))} />
+      ) : (
+        <WalkResult summary={walk.summary ?? {}} outcomes={await listWalkOutcomes(walk.id, user.terminalId)} />
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,72 @@
+import 'server-only';
+import { and, asc, eq, isNull } from 'drizzle-orm';
+import { db } from '@/db';
+import { holds, policies, terminals, trailers, yardRows, yardSpots } from '@/db/schema';
+import { yardPolicyOf } from '@/lib/yard/policy';
+import type { Board, BoardHold, BoardSpot } from '@/lib/yard/types';
+
+/** The yard board of one terminal: live slots and doors in map order, who sits where, open holds. */
+export async function getBoard(terminalId: string, now = new Date()): Promise<Board | null> {
+  const [terminal] = await db
+    .select({ name: terminals.name, timeZone: terminals.timeZone, policy: policies.data })
+    .from(terminals)
+    .leftJoin(policies, eq(policies.terminalId, terminals.id))
+    .where(eq(terminals.id, terminalId))
+    .limit(1);
+  if (!terminal) return null;
+  const [rows, spots, openHolds] = await Promise.all([
+    db.select({ id: yardRows.id, name: yardRows.name }).from(yardRows).where(eq(yardRows.terminalId, terminalId)).orderBy(asc(yardRows.sortOrder), asc(yardRows.name)),
+    db
+      .select({
+        id: yardSpots.id, label: yardSpots.label, kind: yardSpots.kind, rowId: yardSpots.rowId,
+        trailerId: trailers.id, unitNumber: trailers.unitNumber, trailerKind: trailers.kind, isLoaded: trailers.isLoaded,
+        isReeferOn: trailers.isReeferOn, setpointTenthsF: trailers.setpointTenthsF, fuelEighths: trailers.fuelEighths,
+        gateInAt: trailers.gateInAt, lastSeenAt: trailers.lastSeenAt,
+        rowOrder: yardRows.sortOrder,
+      })
+      .from(yardSpots)
+      .leftJoin(yardRows, eq(yardRows.id, yardSpots.rowId))
+      .leftJoin(trailers, and(eq(trailers.currentSpotId, yardSpots.id), eq(trailers.status, 'in_yard')))
+      .where(and(eq(yardSpots.terminalId, terminalId), isNull(yardSpots.retiredAt)))
+      .orderBy(asc(yardSpots.kind), asc(yardRows.sortOrder), asc(yardSpots.sortOrder), asc(yardSpots.label)),
+    db
+      .select({ trailerId: holds.trailerId, severity: holds.severity, reason: holds.reason })
+      .from(holds)
+      .innerJoin(trailers, eq(trailers.id, holds.trailerId))
+      .where(and(eq(trailers.currentTerminalId, terminalId), eq(trailers.status, 'in_yard'), isNull(holds.releasedAt))),
+  ]);
+  const holdsOf = new Map<string, BoardHold[]>();
+  for (const h of openHolds) {
+    const list = holdsOf.get(h.trailerId) ?? [];
+    list.push({ severity: h.severity, reason: h.reason });
+    holdsOf.set(h.trailerId, list);
+  }
+  const boardSpots: BoardSpot[] = spots.map((s, order) => ({
+    id: s.id,
+    label: s.label,
+    kind: s.kind,
+    rowId: s.rowId,
+    order,
+    trailer: s.trailerId
+      ? {
+        id: s.trailerId,
+        unitNumber: s.unitNumber!,
+        kind: s.trailerKind!,
+        isLoaded: s.isLoaded!,
+        isReeferOn: s.isReeferOn,
+        setpointTenthsF: s.setpointTenthsF,
+        fuelEighths: s.fuelEighths,
+        gateInAt: s.gateInAt?.toISOString() ?? null,
+        lastSeenAt: s.lastSeenAt?.toISOString() ?? null,
+        holds: holdsOf.get(s.trailerId) ?? [],
+      }
+      : null,
+  }));
+  return {
+    terminal: { name: terminal.name, timeZone: terminal.timeZone },
+    policy: yardPolicyOf(terminal.policy),
+    rows,
+    spots: boardSpots,
+    generatedAt: now.toISOString(),
+  };
+}

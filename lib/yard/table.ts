@@ -1,0 +1,95 @@
+import { format } from 'date-fns';
+import { tz } from '@date-fns/tz';
+import { dwellMinutes, formatDwell } from './board';
+import type { BoardTrailer, TableRow } from './types';
+
+export type SortKey = 'unit' | 'slot' | 'load' | 'reefer' | 'fuel' | 'holds' | 'dwell' | 'lastSeen';
+export type SortDir = 'asc' | 'desc';
+export const SORT_KEYS: readonly SortKey[] = ['unit', 'slot', 'load', 'reefer', 'fuel', 'holds', 'dwell', 'lastSeen'];
+
+/** Table columns in order; the CSV export uses the same headers and cells. */
+export const COLUMNS: readonly { key: SortKey | 'gateIn'; header: string }[] = [
+  { key: 'unit', header: 'Unit' },
+  { key: 'slot', header: 'Slot' },
+  { key: 'load', header: 'Loaded/empty' },
+  { key: 'reefer', header: 'Reefer' },
+  { key: 'fuel', header: 'Fuel' },
+  { key: 'holds', header: 'Holds' },
+  { key: 'dwell', header: 'Dwell' },
+  { key: 'gateIn', header: 'Gate in' },
+  { key: 'lastSeen', header: 'Last seen' },
+];
+
+/** A local date and time in the terminal's IANA zone, e.g. "7 Mar 2026 12:00 CST". */
+export function formatLocal(at: string | null, timeZone: string): string {
+  if (at === null) return '—';
+  return format(new Date(at), 'd MMM yyyy HH:mm zzz', { in: tz(timeZone) });
+}
+
+export function reeferText(t: BoardTrailer): string {
+  if (t.kind !== 'reefer') return 'No unit';
+  if (t.isReeferOn === null) return 'Not read';
+  if (!t.isReeferOn) return 'Off';
+  return t.setpointTenthsF === null ? 'On' : `On, ${(t.setpointTenthsF / 10).toFixed(1)} °F`;
+}
+
+export function fuelText(t: BoardTrailer): string {
+  if (t.kind !== 'reefer') return '—';
+  return t.fuelEighths === null ? 'Not read' : `${t.fuelEighths}/8`;
+}
+
+export function holdsText(t: BoardTrailer): string {
+  if (t.holds.length === 0) return 'None';
+  return t.holds.map((h) => `${h.severity === 'out_of_service' ? 'Out of service' : 'Restricted'}: ${h.reason}`).join('; ');
+}
+
+/** The cells of one table row as text, in COLUMNS order. */
+export function rowCells(row: TableRow, timeZone: string, now: Date): string[] {
+  const t = row.trailer;
+  return [
+    t.unitNumber,
+    row.spotLabel,
+    t.isLoaded ? 'Loaded' : 'Empty',
+    reeferText(t),
+    fuelText(t),
+    holdsText(t),
+    formatDwell(dwellMinutes(t.gateInAt, now)),
+    formatLocal(t.gateInAt, timeZone),
+    formatLocal(t.lastSeenAt, timeZone),
+  ];
+}
+
+function holdRank(t: BoardTrailer): number {
+  if (t.holds.some((h) => h.severity === 'out_of_service')) return 2;
+  return t.holds.length ? 1 : 0;
+}
+
+function sortValue(row: TableRow, key: SortKey, now: Date): number | string | null {
+  const t = row.trailer;
+  switch (key) {
+    case 'unit': return t.unitNumber;
+    case 'slot': return row.spotOrder;
+    case 'load': return t.isLoaded ? 1 : 0;
+    case 'reefer': return t.kind !== 'reefer' || t.isReeferOn === null ? null : t.isReeferOn ? 1 : 0;
+    case 'fuel': return t.kind === 'reefer' ? t.fuelEighths : null;
+    case 'holds': return holdRank(t);
+    case 'dwell': return dwellMinutes(t.gateInAt, now);
+    case 'lastSeen': return t.lastSeenAt === null ? null : Date.parse(t.lastSeenAt);
+  }
+}
+
+/** Sorted copy; unknown values (null) always last; ties keep map order. */
+export function sortRows(rows: TableRow[], key: SortKey, dir: SortDir, now: Date): TableRow[] {
+  const sign = dir === 'asc' ? 1 : -1;
+  return rows
+    .map((row) => ({ row, v: sortValue(row, key, now) }))
+    .sort((a, b) => {
+      if (a.v === null || b.v === null) {
+        if (a.v === b.v) return a.row.spotOrder - b.row.spotOrder;
+        return a.v === null ? 1 : -1;
+      }
+      const c = typeof a.v === 'string' ? a.v.localeCompare(b.v as string, 'en', { numeric: true }) : a.v - (b.v as number);
+      return c !== 0 ? sign * c : a.row.spotOrder - b.row.spotOrder;
+    })
+    .map((x) => x.row);
+}
