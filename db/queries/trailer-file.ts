@@ -2,7 +2,7 @@ import 'server-only';
 import { aliasedTable, asc, desc, eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { carriers, cases, findings, handoffItems, handoffs, holds, photos, terminals, trailers, users, walkScans, yardMoves, yardSpots, yardWalks } from '@/db/schema';
-import { checkTrailerChain, type Rebuild } from '@/lib/desk/chain';
+import { checkTrailerChain } from '@/lib/desk/chain';
 import type { FileRows } from '@/lib/desk/trailer-file';
 
 export async function getTrailerHeader(id: string) {
@@ -38,11 +38,11 @@ export async function listOpenHolds(trailerId: string) {
   return db.select({ id: holds.id, severity: holds.severity, reason: holds.reason, placedAt: holds.placedAt, releasedAt: holds.releasedAt }).from(holds).where(eq(holds.trailerId, trailerId)).orderBy(asc(holds.placedAt));
 }
 
-/** Re-verifies the trailer's hash chain from the rows as they are in the database now. */
-export async function checkHandoffChain(trailerId: string, rebuild?: Rebuild) {
-  const rows = await db.select().from(handoffs).where(eq(handoffs.trailerId, trailerId)).orderBy(asc(handoffs.createdAt), asc(handoffs.occurredAt));
+/** Re-verifies the trailer's hash chain from the rows as they are in the database now (oldest first, as the submit service links them). */
+export async function checkHandoffChain(trailerId: string) {
+  const rows = await db.select().from(handoffs).where(eq(handoffs.trailerId, trailerId)).orderBy(asc(handoffs.occurredAt), asc(handoffs.createdAt));
   const [items, pics] = await Promise.all([
-    db.select({ handoffId: handoffItems.handoffId, itemKey: handoffItems.itemKey, condition: handoffItems.condition, treadThirtySeconds: handoffItems.treadThirtySeconds, isHoldingAir: handoffItems.isHoldingAir, note: handoffItems.note }).from(handoffItems).innerJoin(handoffs, eq(handoffs.id, handoffItems.handoffId)).where(eq(handoffs.trailerId, trailerId)),
+    db.select({ handoffId: handoffItems.handoffId, itemKey: handoffItems.itemKey, condition: handoffItems.condition, treadThirtySeconds: handoffItems.treadThirtySeconds, isHoldingAir: handoffItems.isHoldingAir, note: handoffItems.note, details: handoffItems.details }).from(handoffItems).innerJoin(handoffs, eq(handoffs.id, handoffItems.handoffId)).where(eq(handoffs.trailerId, trailerId)),
     db.select({ handoffId: photos.handoffId, sha256: photos.sha256, status: photos.status }).from(photos).where(eq(photos.trailerId, trailerId)),
   ]);
   const check = checkTrailerChain(
@@ -51,7 +51,6 @@ export async function checkHandoffChain(trailerId: string, rebuild?: Rebuild) {
       items: items.filter((i) => i.handoffId === row.id),
       photoSha256s: pics.filter((p) => p.handoffId === row.id && p.status === 'stored').map((p) => p.sha256),
     })),
-    rebuild,
   );
   const brokenAt = check.ok ? null : (rows.find((r) => r.id === check.brokenAt)?.occurredAt ?? null);
   return { check, brokenAt };

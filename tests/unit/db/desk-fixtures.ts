@@ -3,7 +3,7 @@
 import { randomUUID } from 'node:crypto';
 import { db } from '@/db';
 import { carriers, cases, caseEvents, findings, handoffItems, handoffs, holds, policies, rateCard, terminals, trailers, users } from '@/db/schema';
-import { hashableFromRows } from '@/lib/desk/chain';
+import { hashableFromRows } from '@/lib/handoff-canonical';
 import { handoffContentHash } from '@/lib/handoff-hash';
 
 const tag = () => randomUUID().replace(/-/g, '').slice(0, 6).toUpperCase();
@@ -49,13 +49,15 @@ export async function makeDeskFixture() {
       occurredAt: new Date(at),
       idempotencyKey: randomUUID(),
       verificationCode: tag() + tag(),
+      sealNumber: null, fuelEighths: null, isReeferOn: null, setpointTenthsF: null, returnAirTenthsF: null, engineHoursTenths: null,
+      pretripResult: null, pretripAt: null, note: null, correctsHandoffId: null, prevHash,
     };
     const items = [
       { itemKey: 'left_side.skin', condition: skin, treadThirtySeconds: null, isHoldingAir: null, note: skin === 'ok' ? null : 'Torn skin behind the landing gear' },
       { itemKey: 'rear.header', condition: 'ok' as const, treadThirtySeconds: null, isHoldingAir: null, note: null },
     ];
-    const contentHash = handoffContentHash(hashableFromRows(row, items, [], prevHash));
-    await db.insert(handoffs).values({ ...row, prevHash, contentHash });
+    const contentHash = handoffContentHash(hashableFromRows(row, items, []));
+    await db.insert(handoffs).values({ ...row, contentHash });
     await db.insert(handoffItems).values(items.map((i) => ({ ...i, handoffId: row.id })));
     prevHash = contentHash;
     return row;
