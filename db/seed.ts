@@ -7,6 +7,7 @@ import { computeVinCheckDigit } from '../lib/engine/identity';
 import { defaultPolicy } from '../lib/engine/policy';
 import { db, pool } from './index';
 import { carriers, labels, policies, rateCard, terminals, trailers, users, yardRows, yardSpots } from './schema';
+import { seedDesk } from './seed-desk';
 import { seedHistory } from './seed-history';
 
 export const DEMO_ACCOUNTS = [
@@ -180,6 +181,7 @@ export async function seed() {
   }
 
   await seedHistory({ terminalIds, carrierIds });
+  await seedDesk();
 }
 
 const isMain = process.argv[1] && import.meta.url.endsWith(process.argv[1].split('/').pop() ?? '');

@@ -1,4 +1,4 @@
-import 'server-only';
+// No `server-only` marker: the demo seed (db/seed-desk.ts) runs these commands under plain Node.
 import { and, eq, inArray } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { carriers, caseEvents, cases, findings, handoffs, policies, rateCard, terminals, trailers } from '@/db/schema';
@@ -9,10 +9,10 @@ import { applyCaseCommand, type CaseCommand, type CaseState } from '@/lib/desk/c
 import { effectiveAmountCents, estimateCase, formatCents } from '@/lib/desk/estimate';
 import { itemLabel } from '@/lib/desk/item-labels';
 import { CONDITION_LABELS } from '@/lib/engine';
-import { caseVisibleTo, type CaseViewer } from './cases';
+import { caseVisibleTo, type CaseViewer } from './case-visibility';
 
 export type CaseActor = CaseViewer & { id: string | null };
-export type CommandOutcome = { ok: true; toState: CaseState } | { ok: false; reason: string; status: 404 | 409 };
+export type CommandOutcome = { ok: true; toState: CaseState; eventId: string } | { ok: false; reason: string; status: 404 | 409 };
 
 const DEFAULT_DISPUTE_WINDOW_DAYS = 14; // terminal policy default when a policy row lacks it (common practice)
 
@@ -53,7 +53,7 @@ async function emailFacts(tx: Tx, row: NonNullable<Awaited<ReturnType<typeof loc
  * writes the case_events row and, for notify and decide, the e-mail to the outbox. The actor's
  * ownership is part of the WHERE clause (a driver can only touch their carrier's cases).
  */
-export async function runCaseCommand(input: { caseId: string; command: CaseCommand; actor: CaseActor; now: Date; appUrl: string; linkSecret: string }): Promise<CommandOutcome> {
+export async function runCaseCommand(input: { caseId: string; command: CaseCommand; actor: CaseActor; now: Date; appUrl: string; linkSecret: string; sendEmail?: boolean }): Promise<CommandOutcome> {
   const { caseId, command, actor, now } = input;
   return db.transaction(async (tx) => {
     const row = await lockCase(tx, caseId, actor);
@@ -80,12 +80,12 @@ export async function runCaseCommand(input: { caseId: string; command: CaseComma
       .values({ caseId, kind: result.event.kind, fromState: result.event.fromState, toState: result.event.toState, actorId: actor.id, note, createdAt: now })
       .returning({ id: caseEvents.id });
 
-    if (command.kind === 'notify' && row.carrierEmail && c.proposedCarrierId && result.disputeDeadline) {
+    if (input.sendEmail !== false && command.kind === 'notify' && row.carrierEmail && c.proposedCarrierId && result.disputeDeadline) {
       const token = signCaseLink({ caseId, carrierId: c.proposedCarrierId, expiresAt: result.disputeDeadline }, input.linkSecret);
       const mail = notifyEmail(await emailFacts(tx, row, amountCents), result.disputeDeadline, `${input.appUrl}/case-link/${token}`);
       await enqueueEmail({ to: row.carrierEmail, ...mail, relatedType: 'case', relatedId: caseId }, tx);
     }
-    if (command.kind === 'decide' && row.carrierEmail) {
+    if (input.sendEmail !== false && command.kind === 'decide' && row.carrierEmail) {
       const mail = decisionEmail(await emailFacts(tx, row, amountCents), command.decision, command.chargedCents, command.reason.trim());
       await enqueueEmail({ to: row.carrierEmail, ...mail, relatedType: 'case', relatedId: caseId }, tx);
     }

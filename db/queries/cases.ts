@@ -1,18 +1,11 @@
 import 'server-only';
-import { aliasedTable, and, asc, desc, eq, gte, lte, sql, type SQL } from 'drizzle-orm';
+import { aliasedTable, and, asc, desc, eq, gte, lte, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { carriers, caseEvents, cases, handoffs, terminals, trailers, users } from '@/db/schema';
 import type { CaseQueueQuery } from '@/lib/validation/desk';
+import { caseVisibleTo, type CaseViewer } from './case-visibility';
 
-/** Who is looking: drivers see only cases proposed to their own carrier. */
-export type CaseViewer = { role: 'driver' | 'jockey' | 'clerk' | 'admin'; carrierId: string | null };
-
-/** The ownership condition every case read carries in its WHERE clause. */
-export function caseVisibleTo(viewer: CaseViewer): SQL | undefined {
-  if (viewer.role === 'clerk' || viewer.role === 'admin') return undefined;
-  if (viewer.role === 'driver' && viewer.carrierId) return eq(cases.proposedCarrierId, viewer.carrierId);
-  return sql`false`;
-}
+export { caseVisibleTo, type CaseViewer } from './case-visibility';
 
 const amount = sql<number>`coalesce(${cases.overrideCents}, ${cases.estimateCents})`;
 

@@ -1,0 +1,111 @@
+// Demo damage cases for the desk: eight outside-carrier trailers, each with a drop and hook all
+// ok and then a drop with new damage, recorded through the gate's real submit service; the cases
+// are then walked through the desk's own commands into every state, two of them disputed.
+// Invented data only. Skips when it ran before (its idempotency keys start with "seed-desk-").
+import { createHash } from 'node:crypto';
+import { and, asc, eq, inArray, like } from 'drizzle-orm';
+import { buildChecklist, type Checklist } from '../lib/engine';
+import { submitHandoff, type HandoffActor } from '../lib/server/handoffs';
+import type { ItemObservationInput } from '../lib/validation/handoffs';
+import { priceNewCases, runCaseCommand } from './queries/case-commands';
+import { db } from './index';
+import { cases, handoffs, photos, trailers, users } from './schema';
+
+const DAY = 86_400_000;
+
+function okItems(checklist: Checklist): Record<string, ItemObservationInput> {
+  const out: Record<string, ItemObservationInput> = {};
+  for (const i of checklist.items) {
+    if (i.kind === 'reading') continue;
+    const o: ItemObservationInput = { condition: 'ok' };
+    if (i.kind === 'pin') o.isEngaged = true;
+    if (i.kind === 'spare') Object.assign(o, { isMounted: true, isHoldingAir: true });
+    if (i.kind === 'tire') Object.assign(o, { treadThirtySeconds: 10, isHoldingAir: true });
+    if (i.kind === 'hinge') o.isLocking = true;
+    if (i.kind === 'skin') o.isInsulationShowing = false;
+    if (i.kind === 'leak') o.isLeaking = false;
+    if (i.kind === 'cleanliness') o.cleanliness = 'clean';
+    out[i.key] = o;
+  }
+  return out;
+}
+
+const DAMAGE: { itemKey: string; condition: 'damaged'; note: string }[] = [
+  { itemKey: 'left_side.skin', condition: 'damaged', note: 'Skin torn about 40 cm behind the landing gear' },
+  { itemKey: 'rear.header', condition: 'damaged', note: 'Door header bent at the right corner' },
+  { itemKey: 'right_side.skin', condition: 'damaged', note: 'Long scrape with a puncture near the rear' },
+  { itemKey: 'reefer_unit.housing', condition: 'damaged', note: 'Unit door cracked, latch missing' },
+  { itemKey: 'left_side.bottom_rail', condition: 'damaged', note: 'Bottom rail dented at the tandem' },
+  { itemKey: 'right_side.top_rail', condition: 'damaged', note: 'Top rail creased near the nose' },
+  { itemKey: 'left_side.skin', condition: 'damaged', note: 'Hole in the skin at shoulder height' },
+  { itemKey: 'rear.header', condition: 'damaged', note: 'Header detached on the left' },
+];
+const DRIVERS = ['D2001', 'D3001', 'D4001', 'D2002'];
+
+async function demoPhoto(trailerId: string, uploadedById: string, key: string) {
+  const sha256 = createHash('sha256').update(key).digest('hex');
+  const [p] = await db
+    .insert(photos)
+    .values({ objectKey: `seed-desk/${key}.jpg`, uploadedById, trailerId, status: 'stored', contentType: 'image/jpeg', byteSize: 1, sha256 })
+    .returning({ id: photos.id });
+  return p.id;
+}
+
+export async function seedDesk(now = new Date()) {
+  const done = await db.select({ id: handoffs.id }).from(handoffs).where(like(handoffs.idempotencyKey, 'seed-desk-%')).limit(1);
+  if (done.length) return;
+  const people = await db.select().from(users).where(inArray(users.driverNumber, DRIVERS));
+  const [clerk] = await db.select().from(users).where(eq(users.email, 'clerk@bramblecrest.example'));
+  // eight home-carrier reefers out on the road (seed-history parks R53001–R53180), hauled power-only by outside carriers
+  const units = Array.from({ length: DAMAGE.length }, (_, k) => `R${53241 + k}`);
+  const fleet = await db.select().from(trailers).where(and(inArray(trailers.unitNumber, units), eq(trailers.status, 'on_road'), eq(trailers.kind, 'reefer'))).orderBy(asc(trailers.unitNumber));
+  const pickable = fleet;
+  const caseIds: string[] = [];
+  for (const [k, t] of pickable.entries()) {
+    const p = people.find((u) => u.driverNumber === DRIVERS[k % DRIVERS.length])!;
+    const actor: HandoffActor = { id: p.id, role: 'driver', carrierId: p.carrierId, terminalId: p.homeTerminalId };
+    const checklist = buildChecklist({ kind: t.kind, hingesPerDoor: t.hingesPerDoor === 5 ? 5 : 4, axles: t.axleCount, tireLayout: t.tireLayout, fuelTankGallons: t.fuelTankGallons || undefined });
+    const ok = okItems(checklist);
+    const base = now.getTime() - (90 - k * 8) * DAY;
+    const submit = async (kind: 'drop' | 'hook', at: number, items: Record<string, ItemObservationInput>, n: number) =>
+      submitHandoff(
+        {
+          idempotencyKey: `seed-desk-${t.unitNumber}-${n}`, trailerId: t.id, kind, carrierId: p.carrierId!, driverName: p.name, tractorNumber: `TR-${400 + k}`,
+          isLoaded: false, sealNumber: null, fuelEighths: 8,
+          reefer: { isUnitOn: true, setpointF: 34, returnAirF: 35, engineHours: 4000 + k * 50 + n * 8, preTripResult: 'pass', preTripAt: new Date(at - 3_600_000).toISOString() },
+          items, spotId: null, note: null,
+        },
+        actor,
+        { now: new Date(at), sendReceipt: false },
+      );
+    const d = DAMAGE[k];
+    await submit('drop', base, ok, 1);
+    const beforePhoto = await demoPhoto(t.id, p.id, `${t.unitNumber}-before`);
+    await submit('hook', base + 2 * DAY, { ...ok, [d.itemKey]: { ...ok[d.itemKey], photoIds: [beforePhoto] } }, 2);
+    const afterPhoto = await demoPhoto(t.id, p.id, `${t.unitNumber}-after`);
+    const { handoffId } = await submit('drop', base + 4 * DAY, { ...ok, [d.itemKey]: { ...ok[d.itemKey], condition: d.condition, note: d.note, photoIds: [afterPhoto] } }, 3);
+    const [c] = await db.select({ id: cases.id }).from(cases).where(eq(cases.handoffId, handoffId));
+    if (c) caseIds.push(c.id);
+  }
+  await priceNewCases(now, caseIds);
+
+  // Walk the cases through the desk: 0 open, 1 notified, 2 disputed, 3 charged, 4 shared after a
+  // dispute, 5 absorbed without notice, 6 closed, 7 waived.
+  const clerkActor = { id: clerk.id, role: 'clerk' as const, carrierId: null };
+  const at = (i: number, days: number) => new Date(now.getTime() - (90 - i * 8) * DAY + (4 + days) * DAY);
+  const step = (i: number, command: Parameters<typeof runCaseCommand>[0]['command'], days: number, actor: { id: string; role: 'clerk' | 'driver'; carrierId: string | null } = clerkActor) =>
+    caseIds[i] ? runCaseCommand({ caseId: caseIds[i], command, actor, now: at(i, days), appUrl: '', linkSecret: 'seed-sends-no-mail', sendEmail: false }) : null;
+  const driverOf = (i: number) => {
+    const p = people.find((u) => u.driverNumber === DRIVERS[i % DRIVERS.length])!;
+    return { id: p.id, role: 'driver' as const, carrierId: p.carrierId };
+  };
+  for (const i of [1, 2, 3, 4, 6, 7]) await step(i, { kind: 'notify' }, 0.1);
+  await step(2, { kind: 'dispute', note: 'Our driver photographed that side at the hook; the tear is not in our pictures.' }, 2, driverOf(2));
+  await step(3, { kind: 'decide', decision: 'charge', chargedCents: 95_000, reason: 'Unit door was ok at the hook and cracked at the drop; no dispute.' }, 15);
+  await step(4, { kind: 'dispute', note: 'The rail was already dented when we took it.' }, 3, driverOf(4));
+  await step(4, { kind: 'decide', decision: 'share', chargedCents: 42_500, reason: 'Hook photo is unclear on the rail; split the repair.' }, 6);
+  await step(5, { kind: 'decide', decision: 'absorb', chargedCents: 0, reason: 'Yard tractor contact reported by our own jockey.' }, 1);
+  await step(6, { kind: 'decide', decision: 'charge', chargedCents: 85_000, reason: 'Clear before and after photos.' }, 15);
+  await step(6, { kind: 'close', note: 'Carrier paid.' }, 20);
+  await step(7, { kind: 'decide', decision: 'waive', chargedCents: 0, reason: 'Long-standing customer; small repair done in house.' }, 5);
+}
