@@ -9,7 +9,7 @@ import { submitHandoff, type HandoffActor } from '../lib/server/handoffs';
 import type { ItemObservationInput } from '../lib/validation/handoffs';
 import { priceNewCases, runCaseCommand } from './queries/case-commands';
 import { db } from './index';
-import { cases, handoffs, photos, trailers, users } from './schema';
+import { caseEvents, cases, handoffs, photos, trailers, users } from './schema';
 
 const DAY = 86_400_000;
 
@@ -30,8 +30,8 @@ function okItems(checklist: Checklist): Record<string, ItemObservationInput> {
   return out;
 }
 
-const DAMAGE: { itemKey: string; condition: 'damaged'; note: string }[] = [
-  { itemKey: 'left_side.skin', condition: 'damaged', note: 'Skin torn about 40 cm behind the landing gear' },
+const DAMAGE: { itemKey: string; condition: 'damaged'; note: string; isInsulationShowing?: boolean }[] = [
+  { itemKey: 'left_side.skin', condition: 'damaged', note: 'Skin torn about 40 cm behind the landing gear, insulation showing', isInsulationShowing: true },
   { itemKey: 'rear.header', condition: 'damaged', note: 'Door header bent at the right corner' },
   { itemKey: 'right_side.skin', condition: 'damaged', note: 'Long scrape with a puncture near the rear' },
   { itemKey: 'reefer_unit.housing', condition: 'damaged', note: 'Unit door cracked, latch missing' },
@@ -83,11 +83,13 @@ export async function seedDesk(now = new Date()) {
     const beforePhoto = await demoPhoto(t.id, p.id, `${t.unitNumber}-before`);
     await submit('hook', base + 2 * DAY, { ...ok, [d.itemKey]: { ...ok[d.itemKey], photoIds: [beforePhoto] } }, 2);
     const afterPhoto = await demoPhoto(t.id, p.id, `${t.unitNumber}-after`);
-    const { handoffId } = await submit('drop', base + 4 * DAY, { ...ok, [d.itemKey]: { ...ok[d.itemKey], condition: d.condition, note: d.note, photoIds: [afterPhoto] } }, 3);
+    const { handoffId } = await submit('drop', base + 4 * DAY, { ...ok, [d.itemKey]: { ...ok[d.itemKey], condition: d.condition, note: d.note, photoIds: [afterPhoto], ...(d.isInsulationShowing ? { isInsulationShowing: true } : {}) } }, 3);
     const [c] = await db.select({ id: cases.id }).from(cases).where(eq(cases.handoffId, handoffId));
     if (c) caseIds.push(c.id);
+    // the case's first events are dated by the drop that opened it, not by when the seed ran
+    if (c) await db.update(caseEvents).set({ createdAt: new Date(base + 4 * DAY) }).where(eq(caseEvents.caseId, c.id));
   }
-  await priceNewCases(now, caseIds);
+  for (const [i, id] of caseIds.entries()) await priceNewCases(new Date(now.getTime() - (90 - i * 8) * DAY + 4 * DAY + 60_000), [id]);
 
   // Walk the cases through the desk: 0 open, 1 notified, 2 disputed, 3 charged, 4 shared after a
   // dispute, 5 absorbed without notice, 6 closed, 7 waived.
