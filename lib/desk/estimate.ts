@@ -55,3 +55,8 @@ export function parseDollarsToCents(text: string): number | null {
   const cents = Number(m[1].replace(/,/g, '')) * 100 + Number((m[2] ?? '').padEnd(2, '0'));
   return Number.isSafeInteger(cents) ? cents : null;
 }
+
+/** Whole cents as a plain dollars field value: 85000 → "850.00" (for form inputs). */
+export function centsToDollarsText(cents: number): string {
+  return `${Math.trunc(cents / 100)}.${String(Math.abs(cents % 100)).padStart(2, '0')}`;
+}

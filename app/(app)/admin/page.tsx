@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { listCarriers, listUsers } from '@/db/queries/admin';
 import { SECTION_ROLES } from '@/lib/roles';
 import { requireUser } from '@/lib/server/auth';
@@ -11,6 +12,11 @@ export default async function AdminPage() {
   return (
     <div className="space-y-6">
       <h1 className="text-gate-xl font-bold">Admin</h1>
+      <p>
+        <Link href="/admin/rates" className="text-gate font-bold text-brand underline">
+          Repair rate card
+        </Link>
+      </p>
       <section aria-labelledby="people">
         <h2 id="people" className="text-gate-lg font-bold">People and roles</h2>
         <ul className="mt-2 divide-y divide-paper-line rounded-xl bg-paper">

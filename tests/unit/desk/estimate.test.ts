@@ -66,3 +66,12 @@ describe('estimate from the rate card', () => {
     expect(parseDollarsToCents('abc')).toBeNull();
   });
 });
+
+describe('dollars text for form fields', () => {
+  it('writes whole cents back as dollars with two decimals', async () => {
+    const { centsToDollarsText } = await import('@/lib/desk/estimate');
+    expect(centsToDollarsText(85_000)).toBe('850.00');
+    expect(centsToDollarsText(42_505)).toBe('425.05');
+    expect(parseDollarsToCents(centsToDollarsText(123_456_78))).toBe(123_456_78);
+  });
+});

@@ -7,7 +7,7 @@ import { priceNewCases } from '@/db/queries/case-commands';
 import { getCaseEvidence, listCustodyEvents } from '@/db/queries/case-evidence';
 import { getCase, listCaseEvents } from '@/db/queries/cases';
 import { isWithinDisputeWindow } from '@/lib/desk/case-state';
-import { effectiveAmountCents, formatCents } from '@/lib/desk/estimate';
+import { centsToDollarsText, effectiveAmountCents, formatCents } from '@/lib/desk/estimate';
 import { itemZone } from '@/lib/desk/item-labels';
 import { formatWhen } from '@/lib/engine';
 import { SECTION_ROLES } from '@/lib/roles';
@@ -77,7 +77,7 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
           </section>
         </div>
         <aside className="space-y-4">
-          <CaseActions caseId={c.id} state={c.state} role={user.role} carrierEmail={c.carrierEmail} amountDollars={(amount / 100).toFixed(2)} isDisputeOpen={isWithinDisputeWindow(c.disputeDeadline, new Date())} />
+          <CaseActions caseId={c.id} state={c.state} role={user.role} carrierEmail={c.carrierEmail} amountDollars={centsToDollarsText(amount)} isDisputeOpen={isWithinDisputeWindow(c.disputeDeadline, new Date())} />
           <section aria-labelledby="history">
             <h2 id="history" className="text-gate-lg font-bold">History</h2>
             <CaseHistory events={events} timeZone={tz} />
