@@ -20,7 +20,7 @@ function smallPng(): Uint8Array {
 
 async function announceAndPut(trailerId: string, userId: string, declared: { contentType: string; byteSize: number; sha256: string }, body: Uint8Array) {
   const up = await createUpload({ trailerId, itemKey: 'left_side.skin', ...declared }, { id: userId });
-  const put = await fetch(up.uploadUrl, { method: 'PUT', headers: up.headers, body });
+  const put = await fetch(up.uploadUrl, { method: 'PUT', headers: up.headers, body: new Blob([new Uint8Array(body)]) });
   expect(put.status).toBe(200);
   return up.photoId;
 }
