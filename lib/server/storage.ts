@@ -1,4 +1,4 @@
-import 'server-only';
+// No `server-only` marker: the demo seed stores its example photos through this under plain Node.
 import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 
