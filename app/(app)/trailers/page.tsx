@@ -29,10 +29,22 @@ export default async function TrailersPage({ searchParams }: PageProps<'/trailer
       {rows.length === 0 ? (
         <EmptyState title="No trailer matches">Check the unit number, or search by the last digits of the VIN.</EmptyState>
       ) : (
+        <form action="/trailers/labels" className="space-y-2">
+          <div className="flex flex-wrap gap-2">
+            <button type="submit" className="min-h-tap rounded-lg bg-brand px-5 text-gate font-bold text-white">
+              Print labels for ticked trailers
+            </button>
+            <Link href="/trailers/labels" className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-5 text-gate font-bold text-brand">
+              Print a whole row
+            </Link>
+          </div>
         <div className="overflow-x-auto rounded-xl bg-paper">
           <table className="w-full text-left text-gate-sm">
             <thead className="bg-paper-dim">
               <tr>
+                <th className="p-2">
+                  <span className="sr-only">Print label</span>
+                </th>
                 <th className="p-2">Unit</th>
                 <th className="p-2">Kind</th>
                 <th className="p-2">Owner</th>
@@ -43,9 +55,15 @@ export default async function TrailersPage({ searchParams }: PageProps<'/trailer
             <tbody>
               {rows.map((t) => (
                 <tr key={t.id} className="border-t border-paper-line">
+                  <td className="p-2">
+                    <input type="checkbox" name="ids" value={t.id} aria-label={`Print label for ${t.unitNumber}`} className="size-6" />
+                  </td>
                   <td className="p-2 font-bold">
                     <Link className="text-brand underline" href={`/trailers/${t.id}`}>
                       {t.unitNumber}
+                    </Link>{' '}
+                    <Link className="text-gate-sm font-normal text-brand underline" href={`/trailers/${t.id}/label`} aria-label={`Label of ${t.unitNumber}`}>
+                      label
                     </Link>
                   </td>
                   <td className="p-2">{t.kind === 'reefer' ? 'Reefer' : 'Dry van'}</td>
@@ -57,6 +75,7 @@ export default async function TrailersPage({ searchParams }: PageProps<'/trailer
             </tbody>
           </table>
         </div>
+        </form>
       )}
     </div>
   );

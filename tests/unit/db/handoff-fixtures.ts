@@ -1,7 +1,7 @@
 // Helpers for the handoff database tests: a fresh trailer per test, the demo actors, a full
 // inspection with every item ok. Not a test file (no .test.ts).
 import { randomBytes, randomUUID } from 'node:crypto';
-import { eq } from 'drizzle-orm';
+import { and, desc, eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { carriers, photos, trailers, users } from '@/db/schema';
 import { buildChecklist, type Checklist } from '@/lib/engine';
@@ -15,16 +15,19 @@ export async function actor(driverNumberOrEmail: string): Promise<HandoffActor &
   return u;
 }
 
-let serial = 0;
-/** A reefer out on the road with no history, owned by the home carrier. */
+const taken = new Set<string>();
+/**
+ * A seeded trailer out on the road with no handoff history, not used by another test of this run.
+ * Seeded trailers rather than new rows: the foundation test counts the seed's 300 trailers.
+ */
 export async function freshTrailer(kind: 'reefer' | 'dry_van' = 'reefer') {
-  const [owner] = await db.select({ id: carriers.id }).from(carriers).where(eq(carriers.scac, 'BRCL'));
-  const tag = `${process.pid}${++serial}${randomBytes(2).toString('hex')}`.toUpperCase();
-  const [t] = await db.insert(trailers).values({
-    unitNumber: `TT${tag}`, vin: `TESTVIN${tag}`.padEnd(17, '0').slice(0, 17), plate: 'TEST1', plateState: 'IL', kind,
-    ownerCarrierId: owner.id, fuelTankGallons: kind === 'reefer' ? 50 : 0, hingesPerDoor: 4, axleCount: 2, tireLayout: 'dual',
-  }).returning();
-  const checklist = buildChecklist({ kind, hingesPerDoor: 4, axles: 2, tireLayout: 'dual', fuelTankGallons: 50 });
+  const rows = await db.select().from(trailers)
+    .where(and(eq(trailers.status, 'on_road'), eq(trailers.kind, kind), sql`not exists (select 1 from handoffs h where h.trailer_id = ${trailers.id})`))
+    .orderBy(desc(trailers.unitNumber));
+  const t = rows.find((r) => !taken.has(r.id));
+  if (!t) throw new Error('no unused on-road trailer left for this test run');
+  taken.add(t.id);
+  const checklist = buildChecklist({ kind, hingesPerDoor: t.hingesPerDoor === 5 ? 5 : 4, axles: t.axleCount, tireLayout: t.tireLayout, fuelTankGallons: t.fuelTankGallons || undefined });
   return { trailer: t, checklist };
 }
 

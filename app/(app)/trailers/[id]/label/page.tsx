@@ -1,0 +1,47 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { ButtonLink } from '@/app/_components/button';
+import { listLabelSheet } from '@/db/queries/labels';
+import { SECTION_ROLES } from '@/lib/roles';
+import { requireUser } from '@/lib/server/auth';
+import { LabelSheet } from '../../labels/_components/label-sheet';
+import { PrintButton } from '../../labels/_components/print-button';
+import { ReissueForm } from '../../labels/_components/reissue-form';
+
+export const metadata: Metadata = { title: 'Trailer label' };
+
+export default async function TrailerLabelPage({ params, searchParams }: PageProps<'/trailers/[id]/label'>) {
+  const user = await requireUser(SECTION_ROLES.trailers);
+  const id = z.uuid().safeParse((await params).id);
+  if (!id.success) notFound();
+  const [trailer] = await listLabelSheet({ trailerIds: [id.data] }, user.id);
+  if (!trailer) notFound();
+  const wasReissued = (await searchParams).reissued === '1';
+  return (
+    <div className="space-y-4">
+      <div className="no-print space-y-3">
+        <h1 className="text-gate-xl font-bold">Label for {trailer.unitNumber}</h1>
+        {wasReissued ? (
+          <p role="status" className="rounded-lg border-2 border-ok bg-ok-bg p-3 text-gate font-bold text-ok">
+            New label issued. Print it and replace the old one on the trailer.
+          </p>
+        ) : null}
+        <div className="flex flex-wrap gap-2">
+          <PrintButton label="Print label" />
+          <ButtonLink variant="secondary" href={`/trailers/labels/pdf?ids=${trailer.id}`} prefetch={false}>
+            Download PDF
+          </ButtonLink>
+        </div>
+      </div>
+      <div className="max-w-md print:max-w-none">
+        <LabelSheet trailers={[trailer]} />
+      </div>
+      {user.role === 'clerk' || user.role === 'admin' ? (
+        <div className="no-print max-w-md">
+          <ReissueForm trailerId={trailer.id} unitNumber={trailer.unitNumber} />
+        </div>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,75 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { ButtonLink } from '@/app/_components/button';
+import { Caution, CAUTIONS } from '@/app/_components/caution';
+import { EmptyState } from '@/app/_components/empty-state';
+import { getRowName, listLabelSheet, listRowsForLabels } from '@/db/queries/labels';
+import { SECTION_ROLES } from '@/lib/roles';
+import { requireUser } from '@/lib/server/auth';
+import { labelSheetQuerySchema } from '@/lib/validation/labels';
+import { LabelSheet } from './_components/label-sheet';
+import { PrintButton } from './_components/print-button';
+
+export const metadata: Metadata = { title: 'Trailer labels' };
+
+export default async function LabelsPage({ searchParams }: PageProps<'/trailers/labels'>) {
+  const user = await requireUser(SECTION_ROLES.trailers);
+  const sp = await searchParams;
+  if (sp.ids === undefined && sp.row === undefined) return <RowChooser />;
+
+  const parsed = labelSheetQuerySchema.safeParse({ ids: sp.ids, row: sp.row });
+  if (!parsed.success) {
+    return <EmptyState title="Nothing to print">{parsed.error.issues[0]?.message} Choose trailers on the Trailers page, or a row below.</EmptyState>;
+  }
+  const q = parsed.data;
+  const trailers = await listLabelSheet(q.row ? { rowId: q.row } : { trailerIds: q.ids! }, user.id);
+  const row = q.row ? await getRowName(q.row) : null;
+  const title = row ? `Labels for ${row.terminalName}, ${row.name}` : `Labels for ${trailers.length} trailer${trailers.length === 1 ? '' : 's'}`;
+  const pdfQuery = q.row ? `row=${q.row}` : `ids=${q.ids!.join(',')}`;
+  return (
+    <div className="space-y-4">
+      <div className="no-print space-y-3">
+        <h1 className="text-gate-xl font-bold">{title}</h1>
+        <p className="text-gate text-ink-soft">
+          Print on plain paper or label stock, four to a Letter page. Stick the label where a driver can reach it from the ground, away from the reefer unit.
+        </p>
+        <Caution title="Putting labels on">{CAUTIONS.reefer} Stick labels on from the ground; do not climb the trailer or go under it to do so.</Caution>
+        <div className="flex flex-wrap gap-2">
+          <PrintButton />
+          <ButtonLink variant="secondary" href={`/trailers/labels/pdf?${pdfQuery}`} prefetch={false}>
+            Download PDF
+          </ButtonLink>
+        </div>
+      </div>
+      {trailers.length === 0 ? <EmptyState title="No trailers here">No trailer stands in this row now.</EmptyState> : <LabelSheet trailers={trailers} />}
+    </div>
+  );
+}
+
+async function RowChooser() {
+  const rows = await listRowsForLabels();
+  return (
+    <div className="space-y-4">
+      <h1 className="text-gate-xl font-bold">Print trailer labels</h1>
+      <p className="text-gate">
+        Pick a row to print a label for every trailer standing in it, or tick trailers on the{' '}
+        <Link href="/trailers" className="font-bold text-brand underline">
+          Trailers
+        </Link>{' '}
+        page.
+      </p>
+      <ul className="grid gap-2 sm:grid-cols-2">
+        {rows.map((r) => (
+          <li key={r.id}>
+            <Link href={`/trailers/labels?row=${r.id}`} className="flex min-h-tap items-center justify-between rounded-lg bg-paper px-4 text-gate font-bold">
+              <span>
+                {r.terminalName}, {r.name}
+              </span>
+              <span className="text-ink-soft">{r.trailerCount} trailers</span>
+            </Link>
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}

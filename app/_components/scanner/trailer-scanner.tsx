@@ -1,0 +1,91 @@
+'use client';
+
+import { useCallback, useState } from 'react';
+import { Button } from '@/app/_components/button';
+import { classifyScan } from '@/lib/labels/scan-text';
+import { lookupTrailer, type LookupQuery, type ScannedTrailer } from './lookup';
+import { ScanProblem } from './scan-problem';
+import { TypedLookup } from './typed-lookup';
+import { useCameraScan } from './use-camera-scan';
+
+export type { ScannedTrailer };
+
+/**
+ * Finds a trailer by its Hitchmark label (QR), its VIN barcode (Code 39) or a typed unit number/VIN.
+ *
+ * Props:
+ * - `onTrailer(trailer)`: called once a scan or typed entry is looked up and found.
+ * - `onText(text)`: optional; raw decoded text that is neither a label link nor a VIN (say, a slot
+ *   label). Return true when handled; otherwise the scanner shows it as an unknown code.
+ * - `startLabel`: the start button's words (default "Scan trailer label").
+ * The camera code (@zxing/browser) is loaded only when the start button is pressed.
+ */
+export function TrailerScanner({
+  onTrailer,
+  onText,
+  startLabel = 'Scan trailer label',
+}: {
+  onTrailer: (trailer: ScannedTrailer) => void;
+  onText?: (text: string) => boolean;
+  startLabel?: string;
+}) {
+  const [problem, setProblem] = useState<{ message: string; read?: string } | null>(null);
+  const [isBusy, setBusy] = useState(false);
+
+  const find = useCallback(
+    async (query: LookupQuery, read?: string) => {
+      setBusy(true);
+      setProblem(null);
+      const result = await lookupTrailer(query);
+      setBusy(false);
+      if (result.ok) onTrailer(result.trailer);
+      else setProblem({ message: result.message, read });
+    },
+    [onTrailer],
+  );
+
+  const onDecoded = useCallback(
+    (text: string) => {
+      const code = classifyScan(text);
+      if (code.kind === 'token') return void find({ token: code.token }, text);
+      if (code.kind === 'vin') return void find({ vin: code.vin }, text);
+      if (onText?.(text)) return;
+      setProblem({ message: 'That code is not a Hitchmark label or a VIN barcode.', read: code.text });
+    },
+    [find, onText],
+  );
+
+  const { videoRef, camera, start, stop } = useCameraScan(onDecoded);
+  const isLive = camera === 'starting' || camera === 'scanning';
+
+  return (
+    <div className="space-y-4">
+      <div className="space-y-2">
+        <video
+          ref={videoRef}
+          muted
+          playsInline
+          aria-label="Camera view"
+          className={isLive ? 'aspect-[4/3] w-full rounded-xl bg-ink object-cover' : 'hidden'}
+        />
+        {isLive ? (
+          <>
+            <p role="status" className="text-gate font-bold">
+              {camera === 'starting' ? 'Starting the camera…' : 'Point the camera at the label. Hold still about a forearm away.'}
+            </p>
+            <Button type="button" variant="secondary" className="w-full" onClick={stop}>
+              Stop camera
+            </Button>
+          </>
+        ) : (
+          <Button type="button" className="min-h-tap-lg w-full text-gate-lg" onClick={() => { setProblem(null); void start(); }} disabled={isBusy}>
+            {startLabel}
+          </Button>
+        )}
+        {isBusy ? <p role="status" className="text-gate font-bold">Looking the trailer up…</p> : null}
+        <ScanProblem camera={camera} problem={problem} />
+      </div>
+      <TypedLookup onLookup={(q) => void find(q)} isBusy={isBusy} />
+    </div>
+  );
+}

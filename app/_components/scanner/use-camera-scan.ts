@@ -1,0 +1,66 @@
+'use client';
+
+import { useCallback, useEffect, useRef, useState } from 'react';
+import type { IScannerControls } from '@zxing/browser';
+
+export type CameraState = 'idle' | 'starting' | 'scanning' | 'denied' | 'no_camera' | 'failed';
+
+function cameraErrorState(error: unknown): CameraState {
+  const name = error instanceof Error || error instanceof DOMException ? error.name : '';
+  if (name === 'NotAllowedError' || name === 'SecurityError') return 'denied';
+  if (name === 'NotFoundError' || name === 'OverconstrainedError' || name === 'DevicesNotFoundError') return 'no_camera';
+  return 'failed';
+}
+
+/**
+ * Runs the rear camera (facingMode 'environment' as a preference, never `exact`) through
+ * @zxing/browser, loaded with import() only when scanning starts, and hands over the first
+ * decoded text (QR or Code 39). The camera stops after one read.
+ */
+export function useCameraScan(onDecoded: (text: string) => void) {
+  const videoRef = useRef<HTMLVideoElement>(null);
+  const controlsRef = useRef<IScannerControls | null>(null);
+  const onDecodedRef = useRef(onDecoded);
+  const [camera, setCamera] = useState<CameraState>('idle');
+
+  useEffect(() => {
+    onDecodedRef.current = onDecoded;
+  }, [onDecoded]);
+
+  const stop = useCallback(() => {
+    controlsRef.current?.stop();
+    controlsRef.current = null;
+    setCamera((c) => (c === 'scanning' || c === 'starting' ? 'idle' : c));
+  }, []);
+
+  const start = useCallback(async () => {
+    if (!videoRef.current) return;
+    if (typeof navigator === 'undefined' || !navigator.mediaDevices?.getUserMedia) {
+      setCamera('no_camera');
+      return;
+    }
+    setCamera('starting');
+    try {
+      const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([import('@zxing/browser'), import('@zxing/library')]);
+      const hints = new Map<unknown, unknown>([[DecodeHintType.POSSIBLE_FORMATS, [BarcodeFormat.QR_CODE, BarcodeFormat.CODE_39]]]);
+      const reader = new BrowserMultiFormatReader(hints as never, { delayBetweenScanAttempts: 100 });
+      let isDone = false;
+      controlsRef.current = await reader.decodeFromVideoDevice(undefined, videoRef.current, (result, _error, controls) => {
+        if (!result || isDone) return;
+        isDone = true;
+        controls.stop();
+        controlsRef.current = null;
+        setCamera('idle');
+        onDecodedRef.current(result.getText());
+      });
+      if (!isDone) setCamera('scanning');
+    } catch (error) {
+      controlsRef.current = null;
+      setCamera(cameraErrorState(error));
+    }
+  }, []);
+
+  useEffect(() => () => controlsRef.current?.stop(), []);
+
+  return { videoRef, camera, start, stop };
+}

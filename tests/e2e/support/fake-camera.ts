@@ -1,0 +1,71 @@
+// A fake camera for Playwright: any text becomes a QR image drawn in Node (integer module size,
+// white quiet zone), written as a one-frame .y4m that Chromium loops as its camera
+// (--use-file-for-fake-video-capture). Shared by the gate, yard and label journeys.
+import { writeFile } from 'node:fs/promises';
+import { resolve } from 'node:path';
+import { chromium, devices, type Browser, type BrowserContext, type Page } from '@playwright/test';
+import { PNG } from 'pngjs';
+import QRCode from 'qrcode';
+import { baseURL, chromiumArgs } from '../../../playwright.config';
+
+export const FRAME = { width: 1280, height: 720 };
+
+/** The QR of `text` as RGBA at `scale` pixels per module (whole pixels: the decoder misreads fractions). */
+export async function qrImage(text: string, { scale = 8, level = 'Q' as 'L' | 'M' | 'Q' | 'H' } = {}) {
+  const png = PNG.sync.read(await QRCode.toBuffer(text, { errorCorrectionLevel: level, margin: 4, scale }));
+  return { data: png.data, width: png.width, height: png.height };
+}
+
+/** RGBA centred on a white 1280×720 frame → I420 planes, BT.601 limited range (Y 16–235, Cb/Cr 16–240). */
+export function toI420(image: { data: Uint8Array; width: number; height: number }): Buffer {
+  const { width: W, height: H } = FRAME;
+  if (image.width > W || image.height > H) throw new RangeError('image larger than the camera frame');
+  const left = Math.floor((W - image.width) / 2);
+  const top = Math.floor((H - image.height) / 2);
+  const rgbAt = (x: number, y: number): [number, number, number] => {
+    const ix = x - left;
+    const iy = y - top;
+    if (ix < 0 || iy < 0 || ix >= image.width || iy >= image.height) return [255, 255, 255];
+    const i = (iy * image.width + ix) * 4;
+    return [image.data[i], image.data[i + 1], image.data[i + 2]];
+  };
+  const y = Buffer.alloc(W * H);
+  const u = Buffer.alloc((W / 2) * (H / 2));
+  const v = Buffer.alloc((W / 2) * (H / 2));
+  for (let row = 0; row < H; row++) {
+    for (let col = 0; col < W; col++) {
+      const [r, g, b] = rgbAt(col, row);
+      y[row * W + col] = Math.round(16 + 0.257 * r + 0.504 * g + 0.098 * b);
+    }
+  }
+  for (let row = 0; row < H / 2; row++) {
+    for (let col = 0; col < W / 2; col++) {
+      let r = 0, g = 0, b = 0;
+      for (const [dx, dy] of [[0, 0], [1, 0], [0, 1], [1, 1]]) {
+        const px = rgbAt(col * 2 + dx, row * 2 + dy);
+        r += px[0] / 4; g += px[1] / 4; b += px[2] / 4;
+      }
+      u[row * (W / 2) + col] = Math.round(128 - 0.148 * r - 0.291 * g + 0.439 * b);
+      v[row * (W / 2) + col] = Math.round(128 + 0.439 * r - 0.368 * g - 0.071 * b);
+    }
+  }
+  return Buffer.concat([y, u, v]);
+}
+
+/** Writes a one-frame .y4m showing the QR of `text`; returns the absolute path. */
+export async function writeLabelVideo(text: string, file: string, options?: { scale?: number }): Promise<string> {
+  const path = resolve(file);
+  const header = Buffer.from(`YUV4MPEG2 W${FRAME.width} H${FRAME.height} F30:1 Ip A1:1 C420jpeg\n`);
+  await writeFile(path, Buffer.concat([header, Buffer.from('FRAME\n'), toI420(await qrImage(text, options))]));
+  return path;
+}
+
+/** A phone-sized Chromium whose camera shows `file`, with the camera permission granted. */
+export async function launchWithCamera(file: string): Promise<{ browser: Browser; context: BrowserContext; page: Page }> {
+  const browser = await chromium.launch({
+    executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
+    args: [...chromiumArgs, '--use-fake-ui-for-media-stream', '--use-fake-device-for-media-stream', `--use-file-for-fake-video-capture=${resolve(file)}`],
+  });
+  const context = await browser.newContext({ ...devices['Pixel 7'], baseURL, permissions: ['camera'] });
+  return { browser, context, page: await context.newPage() };
+}
