@@ -3,7 +3,7 @@
 // are then walked through the desk's own commands into every state, two of them disputed.
 // Invented data only. Skips when it ran before (its idempotency keys start with "seed-desk-").
 import { createHash } from 'node:crypto';
-import { and, asc, eq, inArray, like } from 'drizzle-orm';
+import { and, desc, eq, inArray, like, sql } from 'drizzle-orm';
 import { buildChecklist, type Checklist } from '../lib/engine';
 import { submitHandoff, type HandoffActor } from '../lib/server/handoffs';
 import type { ItemObservationInput } from '../lib/validation/handoffs';
@@ -56,10 +56,15 @@ export async function seedDesk(now = new Date()) {
   if (done.length) return;
   const people = await db.select().from(users).where(inArray(users.driverNumber, DRIVERS));
   const [clerk] = await db.select().from(users).where(eq(users.email, 'clerk@bramblecrest.example'));
-  // eight home-carrier reefers out on the road (seed-history parks R53001–R53180), hauled power-only by outside carriers
-  const units = Array.from({ length: DAMAGE.length }, (_, k) => `R${53241 + k}`);
-  const fleet = await db.select().from(trailers).where(and(inArray(trailers.unitNumber, units), eq(trailers.status, 'on_road'), eq(trailers.kind, 'reefer'))).orderBy(asc(trailers.unitNumber));
-  const pickable = fleet;
+  // eight home-carrier reefers out on the road with no handoff yet (the gate's seed history runs
+  // first and uses others), hauled power-only by outside carriers
+  const fleet = await db
+    .select()
+    .from(trailers)
+    .where(and(eq(trailers.status, 'on_road'), eq(trailers.kind, 'reefer'), like(trailers.unitNumber, 'R53%'), sql`not exists (select 1 from ${handoffs} where ${handoffs.trailerId} = ${trailers.id})`))
+    .orderBy(desc(trailers.unitNumber))
+    .limit(DAMAGE.length);
+  const pickable = fleet.reverse();
   const caseIds: string[] = [];
   for (const [k, t] of pickable.entries()) {
     const p = people.find((u) => u.driverNumber === DRIVERS[k % DRIVERS.length])!;
@@ -110,4 +115,6 @@ export async function seedDesk(now = new Date()) {
   await step(6, { kind: 'decide', decision: 'charge', chargedCents: 85_000, reason: 'Clear before and after photos.' }, 15);
   await step(6, { kind: 'close', note: 'Carrier paid.' }, 20);
   await step(7, { kind: 'decide', decision: 'waive', chargedCents: 0, reason: 'Long-standing customer; small repair done in house.' }, 5);
+  // the gate's seed history opens cases of its own: price them from the rate card too
+  await priceNewCases(now);
 }
