@@ -4,7 +4,9 @@
 // Invented data only. Skips when it ran before (its idempotency keys start with "seed-desk-").
 import { createHash } from 'node:crypto';
 import { and, desc, eq, inArray, like, sql } from 'drizzle-orm';
+import { PNG } from 'pngjs';
 import { buildChecklist, type Checklist } from '../lib/engine';
+import { putObject } from '../lib/server/storage';
 import { submitHandoff, type HandoffActor } from '../lib/server/handoffs';
 import type { ItemObservationInput } from '../lib/validation/handoffs';
 import { priceNewCases, runCaseCommand } from './queries/case-commands';
@@ -42,11 +44,30 @@ const DAMAGE: { itemKey: string; condition: 'damaged'; note: string; isInsulatio
 ];
 const DRIVERS = ['D2001', 'D3001', 'D4001', 'D2002'];
 
-async function demoPhoto(trailerId: string, uploadedById: string, key: string) {
-  const sha256 = createHash('sha256').update(key).digest('hex');
+/** An invented picture of a trailer panel: light grey skin with rivet lines; `isTorn` adds a dark tear. */
+function panelPng(isTorn: boolean, shade: number): Uint8Array {
+  const w = 320;
+  const h = 200;
+  const png = new PNG({ width: w, height: h });
+  for (let y = 0; y < h; y++) {
+    for (let x = 0; x < w; x++) {
+      const rivet = x % 40 < 2 || y % 50 < 2;
+      const tear = isTorn && Math.abs(y - 60 - (x - 80) * 0.45) < 5 && x > 80 && x < 260;
+      const v = tear ? 35 : rivet ? 150 : 205 + ((x + y + shade) % 7);
+      png.data.set(tear ? [70, 40, 30, 255] : [v, v, v + 6, 255], (y * w + x) * 4);
+    }
+  }
+  return PNG.sync.write(png);
+}
+
+async function demoPhoto(trailerId: string, uploadedById: string, key: string, isTorn: boolean, shade: number) {
+  const bytes = panelPng(isTorn, shade);
+  const objectKey = `photos/${trailerId}/seed-desk-${key}.png`;
+  await putObject(objectKey, bytes, 'image/png');
+  const sha256 = createHash('sha256').update(bytes).digest('hex');
   const [p] = await db
     .insert(photos)
-    .values({ objectKey: `seed-desk/${key}.jpg`, uploadedById, trailerId, status: 'stored', contentType: 'image/jpeg', byteSize: 1, sha256 })
+    .values({ objectKey, uploadedById, trailerId, status: 'stored', contentType: 'image/png', byteSize: bytes.length, sha256 })
     .returning({ id: photos.id });
   return p.id;
 }
@@ -85,10 +106,12 @@ export async function seedDesk(now = new Date()) {
       );
     const d = DAMAGE[k];
     await submit('drop', base, ok, 1);
-    const beforePhoto = await demoPhoto(t.id, p.id, `${t.unitNumber}-before`);
+    const beforePhoto = await demoPhoto(t.id, p.id, `${t.unitNumber}-before`, false, k);
     await submit('hook', base + 2 * DAY, { ...ok, [d.itemKey]: { ...ok[d.itemKey], photoIds: [beforePhoto] } }, 2);
-    const afterPhoto = await demoPhoto(t.id, p.id, `${t.unitNumber}-after`);
+    const afterPhoto = await demoPhoto(t.id, p.id, `${t.unitNumber}-after`, true, k);
     const { handoffId } = await submit('drop', base + 4 * DAY, { ...ok, [d.itemKey]: { ...ok[d.itemKey], condition: d.condition, note: d.note, photoIds: [afterPhoto], ...(d.isInsulationShowing ? { isInsulationShowing: true } : {}) } }, 3);
+    // all but the first leave again an hour later, so the demo yard keeps free slots
+    if (k > 0) await submit('hook', base + 4 * DAY + 3_600_000, { ...ok, [d.itemKey]: { ...ok[d.itemKey], condition: d.condition, note: d.note } }, 4);
     const [c] = await db.select({ id: cases.id }).from(cases).where(eq(cases.handoffId, handoffId));
     if (c) caseIds.push(c.id);
     // the case's first events are dated by the drop that opened it, not by when the seed ran

@@ -98,3 +98,22 @@ test('a damage case from drop to shared decision, with e-mails through the outbo
   await driver.context().close();
   await clerk.context().close();
 });
+
+test('reports CSV: clerks get RFC 4180 CSV, bad input a 422, drivers a 403', async ({ browser, baseURL }) => {
+  const clerk = await signedIn(browser, 'clerk', baseURL!);
+  const csv = await clerk.request.get('/api/desk/reports.csv?months=12');
+  expect(csv.status()).toBe(200);
+  expect(csv.headers()['content-type']).toContain('text/csv');
+  const text = await csv.text();
+  expect(text.split('\r\n')[0]).toBe('month,carrier,cases,estimate_usd,charged_usd,absorbed_usd,waived_usd,open_usd');
+  expect(text.split('\r\n').length).toBeGreaterThan(2); // the seed's cases are in it
+  const bad = await clerk.request.get('/api/desk/reports.csv?months=banana');
+  expect(bad.status()).toBe(422);
+  expect(await bad.json()).toMatchObject({ code: 'invalid' });
+  await clerk.goto('/desk/reports');
+  await expect(clerk.getByRole('img', { name: /^By carrier:/ })).toBeVisible();
+  const driver = await signedIn(browser, 'outsideDriver', baseURL!);
+  expect((await driver.request.get('/api/desk/reports.csv')).status()).toBe(403);
+  await clerk.context().close();
+  await driver.context().close();
+});
