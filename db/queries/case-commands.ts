@@ -1,7 +1,7 @@
 // No `server-only` marker: the demo seed (db/seed-desk.ts) runs these commands under plain Node.
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray, isNull } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
-import { carriers, caseEvents, cases, findings, handoffs, policies, rateCard, terminals, trailers } from '@/db/schema';
+import { carriers, caseEvents, cases, findings, handoffs, photos, policies, rateCard, terminals, trailers } from '@/db/schema';
 import { enqueueEmail } from '@/db/queries/outbox';
 import { signCaseLink } from '@/lib/desk/case-link';
 import { decisionEmail, notifyEmail, type CaseEmailFacts } from '@/lib/desk/case-email';
@@ -67,6 +67,13 @@ export async function runCaseCommand(input: { caseId: string; command: CaseComma
       { now, disputeWindowDays: windowDays, timeZone: row.timeZone },
     );
     if (!result.ok) return { ok: false, reason: result.reason, status: 409 };
+    const photoIds = command.kind === 'dispute' ? (command.photoIds ?? []) : [];
+    const ownPhotos = photoIds.length
+      ? and(inArray(photos.id, photoIds), eq(photos.trailerId, c.trailerId), eq(photos.status, 'stored'), isNull(photos.handoffId), isNull(photos.caseEventId), actor.id ? eq(photos.uploadedById, actor.id) : isNull(photos.id))
+      : undefined;
+    if (ownPhotos && (await tx.select({ id: photos.id }).from(photos).where(ownPhotos)).length !== photoIds.length) {
+      return { ok: false, reason: 'A photo is missing, still uploading, or belongs to another record. Take it again.', status: 409 };
+    }
 
     const patch: Partial<typeof cases.$inferInsert> = { state: result.toState, updatedAt: now };
     if (result.disputeDeadline) patch.disputeDeadline = result.disputeDeadline;
@@ -79,6 +86,7 @@ export async function runCaseCommand(input: { caseId: string; command: CaseComma
       .insert(caseEvents)
       .values({ caseId, kind: result.event.kind, fromState: result.event.fromState, toState: result.event.toState, actorId: actor.id, note, createdAt: now })
       .returning({ id: caseEvents.id });
+    if (ownPhotos) await tx.update(photos).set({ caseEventId: event.id }).where(ownPhotos);
 
     if (input.sendEmail !== false && command.kind === 'notify' && row.carrierEmail && c.proposedCarrierId && result.disputeDeadline) {
       const token = signCaseLink({ caseId, carrierId: c.proposedCarrierId, expiresAt: result.disputeDeadline }, input.linkSecret);

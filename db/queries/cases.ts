@@ -1,7 +1,7 @@
 import 'server-only';
 import { aliasedTable, and, asc, desc, eq, gte, lte, sql } from 'drizzle-orm';
 import { db } from '@/db';
-import { carriers, caseEvents, cases, handoffs, terminals, trailers, users } from '@/db/schema';
+import { carriers, caseEvents, cases, handoffs, photos, terminals, trailers, users } from '@/db/schema';
 import type { CaseQueueQuery } from '@/lib/validation/desk';
 import { caseVisibleTo, type CaseViewer } from './case-visibility';
 
@@ -91,7 +91,13 @@ export type CaseDetail = NonNullable<Awaited<ReturnType<typeof getCase>>>;
 
 const actors = aliasedTable(users, 'actors');
 
+/** A case's history, oldest first, each event with the ids of photos attached to it (a dispute's evidence). */
 export async function listCaseEvents(caseId: string) {
+  const [events, pics] = await Promise.all([listEventRows(caseId), db.select({ id: photos.id, caseEventId: photos.caseEventId }).from(photos).innerJoin(caseEvents, eq(caseEvents.id, photos.caseEventId)).where(and(eq(caseEvents.caseId, caseId), eq(photos.status, 'stored')))]);
+  return events.map((e) => ({ ...e, photoIds: pics.filter((p) => p.caseEventId === e.id).map((p) => p.id) }));
+}
+
+function listEventRows(caseId: string) {
   return db
     .select({ id: caseEvents.id, kind: caseEvents.kind, fromState: caseEvents.fromState, toState: caseEvents.toState, note: caseEvents.note, createdAt: caseEvents.createdAt, actorName: actors.name, actorRole: actors.role })
     .from(caseEvents)

@@ -24,7 +24,7 @@ export type CaseSnapshot = {
 
 export type CaseCommand =
   | { kind: 'notify' }
-  | { kind: 'dispute'; note: string }
+  | { kind: 'dispute'; note: string; photoIds?: string[] }
   | { kind: 'decide'; decision: Decision; chargedCents: number; reason: string }
   | { kind: 'close'; note?: string }
   | { kind: 'override'; overrideCents: number; reason: string };

@@ -50,11 +50,19 @@ const caseIdSchema = z.uuid({ error: 'This case does not exist.' });
 
 export const notifyCaseSchema = z.object({ caseId: caseIdSchema });
 export const closeCaseSchema = z.object({ caseId: caseIdSchema, note: z.string().trim().max(2000).optional() });
+/** Photo ids from the form, comma separated (uploaded first through /api/uploads). */
+const photoIdsSchema = z
+  .string()
+  .optional()
+  .transform((v) => (v ? v.split(',').map((x) => x.trim()).filter(Boolean) : []))
+  .pipe(z.array(z.uuid({ error: 'A photo reference is not valid; take the photo again.' })).max(6, { error: 'At most 6 photos.' }));
+
 export const disputeCaseSchema = z.object({
   caseId: caseIdSchema,
+  photoIds: photoIdsSchema,
   note: z.string({ error: 'Say why you dispute the case.' }).trim().min(10, { error: 'Say why you dispute the case (10 characters at least).' }).max(4000),
 });
-export const linkDisputeSchema = disputeCaseSchema.omit({ caseId: true }).extend({ token: z.string().min(10).max(300) });
+export const linkDisputeSchema = disputeCaseSchema.omit({ caseId: true, photoIds: true }).extend({ token: z.string().min(10).max(300) });
 export const overrideEstimateSchema = z.object({ caseId: caseIdSchema, amount: dollarsSchema, reason: reasonSchema });
 export const decideCaseSchema = z
   .object({

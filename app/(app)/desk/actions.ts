@@ -41,7 +41,7 @@ export async function notifyCaseAction(_prev: CaseActionState, formData: FormDat
 }
 
 export async function disputeCaseAction(_prev: CaseActionState, formData: FormData) {
-  return run(formData, ['driver', 'clerk', 'admin'], disputeCaseSchema, (v: z.infer<typeof disputeCaseSchema>) => ({ kind: 'dispute', note: v.note }), 'Your dispute is recorded. The terminal clerk will decide.');
+  return run(formData, ['driver', 'clerk', 'admin'], disputeCaseSchema, (v: z.infer<typeof disputeCaseSchema>) => ({ kind: 'dispute', note: v.note, photoIds: v.photoIds }), 'Your dispute is recorded. The terminal clerk will decide.');
 }
 
 export async function decideCaseAction(_prev: CaseActionState, formData: FormData) {

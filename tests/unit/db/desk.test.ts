@@ -1,12 +1,13 @@
+import { randomUUID } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
-import { getCase, listCases } from '@/db/queries/cases';
+import { getCase, listCaseEvents, listCases } from '@/db/queries/cases';
 import { priceNewCases, runCaseCommand } from '@/db/queries/case-commands';
 import { getCaseEvidence } from '@/db/queries/case-evidence';
 import { releaseHold } from '@/db/queries/holds';
 import { checkHandoffChain, getTrailerFileRows } from '@/db/queries/trailer-file';
-import { caseEvents, cases, emailOutbox, holds, rateCard } from '@/db/schema';
+import { caseEvents, cases, emailOutbox, holds, photos, rateCard } from '@/db/schema';
 import { verifyCaseLink } from '@/lib/desk/case-link';
 import { buildTrailerFile } from '@/lib/desk/trailer-file';
 import { makeDeskFixture } from './desk-fixtures';
@@ -101,6 +102,24 @@ describe('desk in the database', () => {
     await r({ kind: 'notify' }, { id: g.clerk.id, role: 'clerk', carrierId: null }, new Date('2026-10-24T15:00:00Z'));
     const late = await r({ kind: 'dispute', note: 'Too late but trying.' }, { id: g.driverA.id, role: 'driver', carrierId: g.carrierA.id }, new Date('2026-11-07T16:00:00.001Z'));
     expect(late).toMatchObject({ ok: false, reason: expect.stringMatching(/window/) });
+  });
+
+  it('attaches the disputer\'s own uploaded photos to the dispute, and refuses someone else\'s', async () => {
+    const h = await makeDeskFixture();
+    await priceNewCases(new Date(), [h.kase.id]);
+    const cmd = (command: Parameters<typeof runCaseCommand>[0]['command'], actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null }, now: Date) =>
+      runCaseCommand({ caseId: h.kase.id, command, actor, now, appUrl: 'http://x', linkSecret: secret, sendEmail: false });
+    await cmd({ kind: 'notify' }, { id: h.clerk.id, role: 'clerk', carrierId: null }, new Date('2026-10-24T15:00:00Z'));
+    const photo = async (uploadedById: string) =>
+      (await db.insert(photos).values({ objectKey: `test/${randomUUID()}.png`, uploadedById, trailerId: h.trailer.id, status: 'stored', contentType: 'image/png', byteSize: 10, sha256: 'a'.repeat(64) }).returning())[0].id;
+    const driver = { id: h.driverA.id, role: 'driver' as const, carrierId: h.carrierA.id };
+    const foreign = await photo(h.clerk.id);
+    expect(await cmd({ kind: 'dispute', note: 'See the attached photo.', photoIds: [foreign] }, driver, new Date('2026-10-25T10:00:00Z'))).toMatchObject({ ok: false, status: 409 });
+    const mine = await photo(h.driverA.id);
+    expect(await cmd({ kind: 'dispute', note: 'See the attached photo.', photoIds: [mine] }, driver, new Date('2026-10-25T10:00:00Z'))).toMatchObject({ ok: true, toState: 'disputed' });
+    const events = await listCaseEvents(h.kase.id);
+    expect(events.find((e) => e.kind === 'dispute')?.photoIds).toEqual([mine]);
+    expect(events.filter((e) => e.kind === 'dispute')).toHaveLength(1);
   });
 
   it('releases a hold by recording the repair, shown on the trailer file', async () => {

@@ -77,7 +77,7 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
           </section>
         </div>
         <aside className="space-y-4">
-          <CaseActions caseId={c.id} state={c.state} role={user.role} carrierEmail={c.carrierEmail} amountDollars={centsToDollarsText(amount)} isDisputeOpen={isWithinDisputeWindow(c.disputeDeadline, new Date())} />
+          <CaseActions caseId={c.id} trailerId={c.trailerId} itemKey={evidence.findings[0]?.itemKey ?? 'left_side.skin'} state={c.state} role={user.role} carrierEmail={c.carrierEmail} amountDollars={centsToDollarsText(amount)} isDisputeOpen={isWithinDisputeWindow(c.disputeDeadline, new Date())} />
           <section aria-labelledby="history">
             <h2 id="history" className="text-gate-lg font-bold">History</h2>
             <CaseHistory events={events} timeZone={tz} />

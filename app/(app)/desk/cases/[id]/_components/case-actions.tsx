@@ -1,21 +1,19 @@
 import { availableCommands, type CaseState } from '@/lib/desk/case-state';
 import { closeCaseAction, decideCaseAction, disputeCaseAction, notifyCaseAction, overrideEstimateAction } from '../../../actions';
 import { ActionForm, inputClass } from './action-form';
+import { DisputeFields } from './dispute-fields';
 
-type Props = { caseId: string; state: CaseState; role: string; carrierEmail: string | null; amountDollars: string; isDisputeOpen: boolean };
+type Props = { caseId: string; trailerId: string; itemKey: string; state: CaseState; role: string; carrierEmail: string | null; amountDollars: string; isDisputeOpen: boolean };
 
 /** The commands this viewer may give in this state; the server checks again. */
-export function CaseActions({ caseId, state, role, carrierEmail, amountDollars, isDisputeOpen }: Props) {
+export function CaseActions({ caseId, trailerId, itemKey, state, role, carrierEmail, amountDollars, isDisputeOpen }: Props) {
   const can = new Set(availableCommands(state));
   const isStaff = role === 'clerk' || role === 'admin';
   const forms: React.ReactNode[] = [];
   if (can.has('dispute') && isDisputeOpen && (role === 'driver' || isStaff)) {
     forms.push(
       <ActionForm key="dispute" action={disputeCaseAction} caseId={caseId} title="Dispute this case" submit="Send dispute" variant="danger">
-        <label className="block text-gate font-bold">
-          Why is this damage not yours?
-          <textarea name="note" required minLength={10} rows={4} className={`${inputClass} py-2`} />
-        </label>
+        <DisputeFields trailerId={trailerId} itemKey={itemKey} />
       </ActionForm>,
     );
   }
