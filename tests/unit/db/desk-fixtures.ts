@@ -1,12 +1,28 @@
 // Test data for the desk's database tests: an invented terminal, two outside carriers, a trailer
 // with a hook and a drop (new damage on the left side skin), its finding and its open case.
 import { randomUUID } from 'node:crypto';
+import { and, asc, eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { carriers, cases, caseEvents, findings, handoffItems, handoffs, holds, policies, rateCard, terminals, trailers, users } from '@/db/schema';
 import { hashableFromRows } from '@/lib/handoff-canonical';
 import { handoffContentHash } from '@/lib/handoff-hash';
 
 const tag = () => randomUUID().replace(/-/g, '').slice(0, 6).toUpperCase();
+
+/**
+ * A seeded reefer on the road that no handoff has touched. The demo seed must have run (the
+ * foundation test counts the seeded trailers, so desk tests add none of their own).
+ */
+export async function untouchedTrailer() {
+  const [row] = await db
+    .select()
+    .from(trailers)
+    .where(and(eq(trailers.status, 'on_road'), eq(trailers.kind, 'reefer'), sql`not exists (select 1 from ${handoffs} where ${handoffs.trailerId} = ${trailers.id})`))
+    .orderBy(asc(trailers.unitNumber))
+    .limit(1);
+  if (!row) throw new Error('no untouched trailer left in the test database');
+  return row;
+}
 
 export async function makeDeskFixture() {
   const t = tag();
@@ -27,10 +43,7 @@ export async function makeDeskFixture() {
       { name: 'Driver of B', role: 'driver', driverNumber: `DB${t}`, secretHash: 'x', carrierId: carrierB.id },
     ])
     .returning();
-  const [trailer] = await db
-    .insert(trailers)
-    .values({ unitNumber: `U${t}`, vin: `VIN${t}${tag()}`.slice(0, 17), plate: 'TEST1', plateState: 'IL', kind: 'reefer', ownerCarrierId: carrierA.id })
-    .returning();
+  const trailer = await untouchedTrailer();
 
   let prevHash: string | null = null;
   const addHandoff = async (kind: 'drop' | 'hook', at: string, skin: 'ok' | 'damaged', carrierId: string, driver: { id: string; name: string }) => {

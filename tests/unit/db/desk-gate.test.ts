@@ -10,7 +10,9 @@ import { checkHandoffChain } from '@/db/queries/trailer-file';
 import { cases } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { submitHandoff } from '@/lib/server/handoffs';
-import { actor, allOk, freshTrailer, storedPhoto, submitInput } from './handoff-fixtures';
+import { buildChecklist } from '@/lib/engine';
+import { untouchedTrailer } from './desk-fixtures';
+import { actor, allOk, storedPhoto, submitInput } from './handoff-fixtures';
 
 describe('desk over submitted handoffs', () => {
   beforeAll(async () => {
@@ -22,7 +24,9 @@ describe('desk over submitted handoffs', () => {
 
   it('prices the case, pairs before/after photos, and verifies the chain', async () => {
     const driver = await actor('D2001');
-    const { trailer, checklist } = await freshTrailer();
+    // a seeded trailer, not a new one: the foundation test counts the seeded trailers
+    const trailer = await untouchedTrailer();
+    const checklist = buildChecklist({ kind: 'reefer', hingesPerDoor: trailer.hingesPerDoor === 5 ? 5 : 4, axles: trailer.axleCount, tireLayout: trailer.tireLayout, fuelTankGallons: trailer.fuelTankGallons });
     const ok = allOk(checklist);
     const t0 = new Date('2026-09-01T12:00:00Z');
     await submitHandoff(submitInput(trailer.id, driver.carrierId!, 'drop', ok, t0), driver, { now: t0, sendReceipt: false });

@@ -10,6 +10,7 @@ import { checkHandoffChain, getTrailerFileRows } from '@/db/queries/trailer-file
 import { caseEvents, cases, emailOutbox, holds, photos, rateCard } from '@/db/schema';
 import { verifyCaseLink } from '@/lib/desk/case-link';
 import { buildTrailerFile } from '@/lib/desk/trailer-file';
+import { seed } from '@/db/seed';
 import { makeDeskFixture } from './desk-fixtures';
 
 type Fixture = Awaited<ReturnType<typeof makeDeskFixture>>;
@@ -24,6 +25,7 @@ const eventsOf = () => db.select().from(caseEvents).where(eq(caseEvents.caseId, 
 
 describe('desk in the database', () => {
   beforeAll(async () => {
+    await seed();
     f = await makeDeskFixture();
   });
   afterAll(async () => {
