@@ -3,7 +3,7 @@ import { NextResponse, type NextRequest } from 'next/server';
 // Cheap redirects only: no session cookie → sign-in page (pages) or 401 (API). The real checks
 // sit next to the data (requireUser / apiUser); this never opens the cookie or touches the db.
 const SESSION_COOKIE = 'hm_session';
-const PUBLIC_PREFIXES = ['/login', '/verify', '/api/verify', '/api/health'];
+const PUBLIC_PREFIXES = ['/login', '/verify', '/api/verify', '/api/health', '/case-link/'];
 
 export function proxy(request: NextRequest) {
   const { pathname, search } = request.nextUrl;

@@ -7,6 +7,7 @@ import { computeVinCheckDigit } from '../lib/engine/identity';
 import { defaultPolicy } from '../lib/engine/policy';
 import { db, pool } from './index';
 import { carriers, labels, policies, rateCard, terminals, trailers, users, yardRows, yardSpots } from './schema';
+import { seedDesk } from './seed-desk';
 import { seedHistory } from './seed-history';
 
 export const DEMO_ACCOUNTS = [
@@ -43,6 +44,13 @@ const EXTRA_DRIVER_PIN = '1357';
 const RATES: { itemPattern: string; condition: 'minor' | 'damaged' | 'unsafe' | 'missing'; amountCents: number }[] = [
   { itemPattern: 'side', condition: 'damaged', amountCents: 85_000 },
   { itemPattern: 'side', condition: 'unsafe', amountCents: 160_000 },
+  // item keys are left_side.* / right_side.*: rates apply to dot-separated key prefixes (lib/desk/estimate.ts)
+  { itemPattern: 'left_side', condition: 'damaged', amountCents: 85_000 },
+  { itemPattern: 'left_side', condition: 'unsafe', amountCents: 160_000 },
+  { itemPattern: 'right_side', condition: 'damaged', amountCents: 85_000 },
+  { itemPattern: 'right_side', condition: 'unsafe', amountCents: 160_000 },
+  { itemPattern: 'rear.header', condition: 'damaged', amountCents: 62_000 },
+  { itemPattern: 'reefer_unit', condition: 'damaged', amountCents: 95_000 },
   { itemPattern: 'rear', condition: 'damaged', amountCents: 45_000 },
   { itemPattern: 'rear', condition: 'unsafe', amountCents: 90_000 },
   { itemPattern: 'rear', condition: 'missing', amountCents: 30_000 },
@@ -173,6 +181,7 @@ export async function seed() {
   }
 
   await seedHistory({ terminalIds, carrierIds });
+  await seedDesk();
 }
 
 const isMain = process.argv[1] && import.meta.url.endsWith(process.argv[1].split('/').pop() ?? '');

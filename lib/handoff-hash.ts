@@ -6,7 +6,11 @@ import { createHash } from 'node:crypto';
 
 export type HashableHandoff = {
   content: Record<string, string | number | boolean | null>;
-  items: { itemKey: string; condition: string; treadThirtySeconds: number | null; isHoldingAir: boolean | null; note: string | null }[];
+  items: {
+    itemKey: string; condition: string; treadThirtySeconds: number | null; isHoldingAir: boolean | null; note: string | null;
+    /** Other observation fields (pins, spare, hinges, skin, leaks); absent keys leave older hashes unchanged. */
+    details?: Record<string, boolean | string> | null;
+  }[];
   photoSha256s: string[];
   prevHash: string | null;
 };

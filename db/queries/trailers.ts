@@ -34,3 +34,27 @@ export async function countTrailersByStatus(terminalId?: string | null) {
     .where(terminalId ? and(eq(trailers.currentTerminalId, terminalId)) : undefined)
     .groupBy(trailers.status);
 }
+
+/** One trailer as the gate start page shows it; null when unknown. */
+export async function getTrailerForGate(id: string) {
+  const [row] = await db
+    .select({
+      id: trailers.id, unitNumber: trailers.unitNumber, vin: trailers.vin, kind: trailers.kind, status: trailers.status,
+      hingesPerDoor: trailers.hingesPerDoor, axleCount: trailers.axleCount, tireLayout: trailers.tireLayout,
+      fuelTankGallons: trailers.fuelTankGallons, isLoaded: trailers.isLoaded, fuelEighths: trailers.fuelEighths,
+      ownerName: carriers.name, ownerScac: carriers.scac, terminalName: terminals.name, spotLabel: yardSpots.label,
+      gateInAt: trailers.gateInAt,
+    })
+    .from(trailers)
+    .innerJoin(carriers, eq(carriers.id, trailers.ownerCarrierId))
+    .leftJoin(terminals, eq(terminals.id, trailers.currentTerminalId))
+    .leftJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId))
+    .where(eq(trailers.id, id))
+    .limit(1);
+  return row ?? null;
+}
+
+/** Carriers for the clerk's carrier picker. */
+export function listCarriers() {
+  return db.select({ id: carriers.id, name: carriers.name, scac: carriers.scac }).from(carriers).orderBy(asc(carriers.name));
+}

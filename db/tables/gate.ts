@@ -75,6 +75,8 @@ export const handoffItems = pgTable(
     condition: conditionEnum('condition').notNull(),
     treadThirtySeconds: integer('tread_thirty_seconds'),
     isHoldingAir: boolean('is_holding_air'),
+    /** The other observation fields of the item's kind (isEngaged, isMounted, isLocking, isInsulationShowing, isLeaking, cleanliness). */
+    details: jsonb('details').$type<Record<string, boolean | string>>(),
     note: text('note'),
     createdAt: createdAt(),
   },

@@ -12,9 +12,14 @@ export default async function AdminPage() {
   return (
     <div className="space-y-6">
       <h1 className="text-gate-xl font-bold">Admin</h1>
-      <Link href="/admin/yard" className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand">
-        Yard layout: rows, slots and dock doors
-      </Link>
+      <nav aria-label="Admin areas" className="flex flex-wrap gap-2">
+        <Link href="/admin/yard" className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand">
+          Yard layout: rows, slots and dock doors
+        </Link>
+        <Link href="/admin/rates" className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand">
+          Repair rate card
+        </Link>
+      </nav>
       <section aria-labelledby="people">
         <h2 id="people" className="text-gate-lg font-bold">People and roles</h2>
         <ul className="mt-2 divide-y divide-paper-line rounded-xl bg-paper">

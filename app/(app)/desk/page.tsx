@@ -1,20 +1,73 @@
 import type { Metadata } from 'next';
-import { countTrailersByStatus } from '@/db/queries/trailers';
+import Link from 'next/link';
+import { z } from 'zod';
+import { EmptyState } from '@/app/_components/empty-state';
+import { priceNewCases } from '@/db/queries/case-commands';
+import { listCaseCarriers, listCases } from '@/db/queries/cases';
+import { formatCents } from '@/lib/desk/estimate';
+import { formatWhen } from '@/lib/engine';
 import { SECTION_ROLES } from '@/lib/roles';
 import { requireUser } from '@/lib/server/auth';
+import { caseQueueQuerySchema } from '@/lib/validation/desk';
+import { CaseStateBadge } from './_components/case-state-badge';
+import { QueueFilters } from './_components/queue-filters';
 
 export const metadata: Metadata = { title: 'Desk' };
 
-export default async function DeskPage() {
+const pick = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
+
+export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
   const user = await requireUser(SECTION_ROLES.desk);
-  const counts = await countTrailersByStatus(user.terminalId);
-  const inYard = counts.find((c) => c.status === 'in_yard')?.count ?? 0;
+  const raw = Object.fromEntries((Object.entries(await searchParams) as [string, string | string[] | undefined][]).map(([k, v]) => [k, pick(v)]));
+  const parsed = caseQueueQuerySchema.safeParse(raw);
+  const errors = parsed.success ? {} : (z.flattenError(parsed.error).fieldErrors as Record<string, string[]>);
+  const isStaff = user.role !== 'driver';
+  if (isStaff) await priceNewCases();
+  const now = new Date();
+  const [rows, carriers] = await Promise.all([
+    parsed.success ? listCases(user, { ...parsed.data, now }) : Promise.resolve([]),
+    isStaff ? listCaseCarriers() : Promise.resolve([]),
+  ]);
+  const tz = user.terminalTimeZone ?? 'UTC';
   return (
-    <div className="space-y-3">
-      <h1 className="text-gate-xl font-bold">Desk</h1>
-      <p className="text-gate">
-        {user.terminalName ?? 'No home terminal'}: {inYard} trailers in the yard.
-      </p>
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <h1 className="text-gate-xl font-bold">{isStaff ? 'Damage cases' : `Damage cases for ${user.carrierName ?? 'your carrier'}`}</h1>
+        {isStaff ? (
+          <Link href="/desk/reports" className="text-gate font-bold text-brand underline">
+            Reports
+          </Link>
+        ) : null}
+      </div>
+      {isStaff ? <QueueFilters carriers={carriers} values={raw as Record<string, string>} errors={errors} /> : null}
+      {!parsed.success ? (
+        <p role="alert" className="rounded-lg border-2 border-danger bg-danger-bg p-3 text-gate font-bold text-danger">
+          Some filters are not valid; fix them to see cases.
+        </p>
+      ) : rows.length === 0 ? (
+        <EmptyState title="No cases here">{isStaff ? 'No case matches these filters.' : 'No damage case names your carrier.'}</EmptyState>
+      ) : (
+        <ul className="divide-y divide-paper-line rounded-xl bg-paper" aria-label="Cases">
+          {rows.map((c) => (
+            <li key={c.id}>
+              <Link href={`/desk/cases/${c.id}`} className="grid min-h-tap grid-cols-[1fr_auto] gap-x-3 gap-y-1 p-3 hover:bg-brand-light sm:grid-cols-[8rem_1fr_8rem_9rem_7rem]">
+                <span className="text-gate font-bold">Trailer {c.unitNumber}</span>
+                <span className="text-gate-sm text-ink-soft sm:order-none">
+                  {c.carrierScac ?? 'no single carrier'} · {c.terminalCode} · {c.handoffKind}
+                </span>
+                <span className="text-gate font-bold">
+                  {formatCents(c.amountCents)}
+                  {c.isOverridden ? <span className="text-gate-sm text-ink-soft"> (set)</span> : null}
+                </span>
+                <span className="text-gate-sm">opened {formatWhen(c.openedAt, tz)}</span>
+                <span>
+                  <CaseStateBadge state={c.state} />
+                </span>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      )}
     </div>
   );
 }

@@ -1,0 +1,66 @@
+import type { CaseEvidence, CaseFinding } from '@/db/queries/case-evidence';
+import { itemLabel } from '@/lib/desk/item-labels';
+import { CONDITION_LABELS, formatWhen, type Condition } from '@/lib/engine';
+import { PhotoZoom } from './photo-zoom';
+
+type Side = { title: string; handoff: CaseEvidence['handoffs'][number] | undefined; item: CaseEvidence['items'][number] | undefined; photoIds: string[] };
+
+function Record({ side, itemName, timeZone }: { side: Side; itemName: string; timeZone: string }) {
+  const { handoff, item } = side;
+  return (
+    <div className="min-w-0 space-y-2 rounded-lg border-2 border-paper-line p-2">
+      <h4 className="text-gate-sm font-bold uppercase tracking-wide text-ink-soft">{side.title}</h4>
+      {handoff ? (
+        <p className="text-gate-sm">
+          {handoff.kind === 'drop' ? 'Drop' : 'Hook'} {formatWhen(handoff.occurredAt, timeZone)} · {handoff.driverName} ({handoff.carrierScac})
+        </p>
+      ) : (
+        <p className="text-gate-sm text-ink-soft">No earlier record of this item.</p>
+      )}
+      <p className="text-gate font-bold" data-testid="condition">
+        {item ? CONDITION_LABELS[item.condition as Condition] : 'not checked'}
+      </p>
+      {item?.note ? <p className="text-gate-sm">“{item.note}”</p> : null}
+      {side.photoIds.length ? (
+        <div className="grid grid-cols-1 gap-2 sm:grid-cols-2">
+          {side.photoIds.map((id) => (
+            <PhotoZoom key={id} photoId={id} alt={`${itemName}, ${side.title.toLowerCase()}`} />
+          ))}
+        </div>
+      ) : handoff ? (
+        <p className="text-gate-sm text-ink-soft">No photo of this item at this record.</p>
+      ) : null}
+    </div>
+  );
+}
+
+const CONFIDENCE_WORDS: Record<string, string> = { high: 'high confidence', medium: 'medium confidence', none: 'no single party' };
+
+/** One damaged item: the before record (the inspection the engine compared against) and the after record, side by side. */
+export function EvidencePair({ finding, evidence, afterHandoffId, timeZone }: { finding: CaseFinding; evidence: CaseEvidence; afterHandoffId: string; timeZone: string }) {
+  const name = itemLabel(finding.itemKey);
+  const sideOf = (title: string, handoffId: string | null): Side => ({
+    title,
+    handoff: evidence.handoffs.find((h) => h.id === handoffId),
+    item: evidence.items.find((i) => i.handoffId === handoffId && i.itemKey === finding.itemKey),
+    photoIds: evidence.photos.filter((p) => p.handoffId === handoffId && p.itemKey === finding.itemKey).map((p) => p.id),
+  });
+  return (
+    <article className="space-y-2 rounded-xl bg-paper p-3" aria-label={name}>
+      <h3 className="text-gate-lg font-bold">
+        {name} <span className="text-gate-sm font-normal text-ink-soft">({finding.kind === 'worse' ? 'worse' : 'new damage'})</span>
+      </h3>
+      <div className="grid grid-cols-2 gap-2" data-testid="evidence-pair">
+        <Record side={sideOf('Before', finding.previousHandoffId)} itemName={name} timeZone={timeZone} />
+        <Record side={sideOf('After', afterHandoffId)} itemName={name} timeZone={timeZone} />
+      </div>
+      <p className="rounded-lg bg-brand-light p-2 text-gate">
+        <span className="font-bold">
+          {finding.responsibleCarrierName ?? finding.responsibleParty ?? 'No single party'}
+          {finding.confidence ? ` · ${CONFIDENCE_WORDS[finding.confidence] ?? finding.confidence}` : ''}:
+        </span>{' '}
+        {finding.reason}
+      </p>
+    </article>
+  );
+}

@@ -1,0 +1,83 @@
+// Hitchmark's own drawing of a reefer trailer, nose to the left, seen from above and from its left
+// side, with the zones that have damage in this case filled in.
+type Props = { damagedZones: string[]; isReefer: boolean; axles: number };
+
+const ZONE_NAMES: Record<string, string> = {
+  nose: 'Nose',
+  reefer_unit: 'Refrigeration unit',
+  left_side: 'Left side',
+  right_side: 'Right side',
+  undercarriage: 'Undercarriage',
+  tires: 'Tires and wheels',
+  rear: 'Rear doors',
+  interior: 'Interior',
+};
+
+export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
+  const hit = new Set(damagedZones);
+  const fill = (zone: string) => (hit.has(zone) ? 'fill-danger/70 stroke-danger' : 'fill-paper-dim stroke-ink-faint');
+  const label = damagedZones.length ? `Damage at: ${damagedZones.map((z) => ZONE_NAMES[z] ?? z).join(', ')}` : 'No zone marked';
+  const Zone = ({ zone, children }: { zone: string; children: React.ReactNode }) => (
+    <g className={fill(zone)} strokeWidth={2} data-zone={zone} data-damaged={hit.has(zone) || undefined}>
+      <title>{`${ZONE_NAMES[zone] ?? zone}${hit.has(zone) ? ': damaged' : ''}`}</title>
+      {children}
+    </g>
+  );
+  const wheelXs = Array.from({ length: Math.max(1, Math.min(axles, 3)) }, (_, i) => 470 - i * 34);
+  return (
+    <figure className="rounded-xl bg-paper p-3">
+      <svg viewBox="0 0 600 330" role="img" aria-label={`Trailer diagram. ${label}`} className="h-auto w-full max-w-2xl">
+        <text x="10" y="18" className="fill-ink text-[14px] font-bold">From above (nose left)</text>
+        {isReefer ? (
+          <Zone zone="reefer_unit">
+            <rect x="22" y="48" width="22" height="74" rx="4" />
+          </Zone>
+        ) : null}
+        <Zone zone="nose">
+          <rect x="46" y="34" width="14" height="102" />
+        </Zone>
+        <Zone zone="right_side">
+          <rect x="60" y="34" width="480" height="14" />
+        </Zone>
+        <Zone zone="interior">
+          <rect x="60" y="48" width="480" height="74" />
+        </Zone>
+        <Zone zone="left_side">
+          <rect x="60" y="122" width="480" height="14" />
+        </Zone>
+        <Zone zone="rear">
+          <rect x="540" y="34" width="16" height="102" />
+        </Zone>
+        <text x="300" y="30" textAnchor="middle" className="fill-ink-soft text-[12px]">right side</text>
+        <text x="300" y="152" textAnchor="middle" className="fill-ink-soft text-[12px]">left side</text>
+
+        <text x="10" y="186" className="fill-ink text-[14px] font-bold">Left side view</text>
+        {isReefer ? (
+          <Zone zone="reefer_unit">
+            <rect x="22" y="208" width="22" height="50" rx="4" />
+          </Zone>
+        ) : null}
+        <Zone zone="nose">
+          <rect x="46" y="198" width="14" height="82" />
+        </Zone>
+        <Zone zone="left_side">
+          <rect x="60" y="198" width="480" height="82" />
+        </Zone>
+        <Zone zone="rear">
+          <rect x="540" y="198" width="16" height="82" />
+        </Zone>
+        <Zone zone="undercarriage">
+          <rect x="120" y="280" width="20" height="32" />
+          <rect x="200" y="280" width="70" height="16" rx="6" />
+          <rect x="400" y="280" width="110" height="10" />
+        </Zone>
+        <Zone zone="tires">
+          {wheelXs.map((x) => (
+            <circle key={x} cx={x} cy={304} r={15} />
+          ))}
+        </Zone>
+      </svg>
+      <figcaption className="mt-1 text-gate-sm text-ink-soft">{label}. Red zones hold the damage of this case.</figcaption>
+    </figure>
+  );
+}

@@ -1,0 +1,89 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { Caution, CAUTIONS } from '@/app/_components/caution';
+import { priceNewCases } from '@/db/queries/case-commands';
+import { getCaseEvidence, listCustodyEvents } from '@/db/queries/case-evidence';
+import { getCase, listCaseEvents } from '@/db/queries/cases';
+import { isWithinDisputeWindow } from '@/lib/desk/case-state';
+import { centsToDollarsText, effectiveAmountCents, formatCents } from '@/lib/desk/estimate';
+import { itemZone } from '@/lib/desk/item-labels';
+import { formatWhen } from '@/lib/engine';
+import { SECTION_ROLES } from '@/lib/roles';
+import { requireUser } from '@/lib/server/auth';
+import { CaseStateBadge } from '../../_components/case-state-badge';
+import { CaseActions } from './_components/case-actions';
+import { CaseHistory } from './_components/case-history';
+import { CustodyTimeline } from './_components/custody-timeline';
+import { EvidencePair } from './_components/evidence-pair';
+import { TrailerDiagram } from './_components/trailer-diagram';
+
+export const metadata: Metadata = { title: 'Case' };
+
+export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>) {
+  const user = await requireUser(SECTION_ROLES.desk);
+  const { id } = (await params) as { id: string };
+  if (!z.uuid().safeParse(id).success) notFound();
+  if (user.role !== 'driver') await priceNewCases(new Date(), [id]);
+  const c = await getCase(id, user);
+  if (!c) notFound();
+  const [evidence, events] = await Promise.all([getCaseEvidence(c), listCaseEvents(c.id)]);
+  const after = evidence.handoffs.find((h) => h.id === c.handoffId);
+  const befores = evidence.handoffs.filter((h) => h.id !== c.handoffId).map((h) => h.occurredAt.getTime());
+  const custody = after && befores.length ? await listCustodyEvents(c.trailerId, new Date(Math.min(...befores)), after.occurredAt) : [];
+  const amount = effectiveAmountCents(c);
+  const isUnsafe = evidence.findings.some((f) => f.condition === 'unsafe');
+  const tz = c.timeZone;
+  return (
+    <div className="space-y-4">
+      <p>
+        <Link href="/desk" className="text-gate font-bold text-brand underline">
+          ← All cases
+        </Link>
+      </p>
+      <header className="space-y-1">
+        <h1 className="text-gate-xl font-bold">
+          Trailer {c.unitNumber} <CaseStateBadge state={c.state} />
+        </h1>
+        <p className="text-gate">
+          {c.terminalName} · {after ? `${after.kind === 'drop' ? 'drop' : 'hook'} on ${formatWhen(after.occurredAt, tz)}` : ''} · proposed: <span className="font-bold">{c.carrierName ?? 'no single carrier'}</span>
+        </p>
+        <p className="text-gate">
+          Estimate <span className="font-bold">{formatCents(amount)}</span>
+          {c.overrideCents !== null ? ` (set by the clerk: ${c.overrideReason}; rate card ${formatCents(c.estimateCents)})` : ' from the rate card'}
+          {c.decision ? ` · decided: ${c.decision}, charged ${formatCents(c.chargedCents ?? 0)}` : ''}
+          {c.disputeDeadline ? ` · dispute until ${formatWhen(c.disputeDeadline, tz)}` : ''}
+        </p>
+        {user.role !== 'driver' ? (
+          <Link href={`/trailers/${c.trailerId}`} className="text-gate-sm font-bold text-brand underline">
+            Trailer file
+          </Link>
+        ) : null}
+      </header>
+      {isUnsafe ? <Caution title="Out of service">{CAUTIONS.outOfService}</Caution> : null}
+      <div className="grid gap-4 lg:grid-cols-[1fr_22rem]">
+        <div className="space-y-4">
+          <section aria-labelledby="evidence" className="space-y-3">
+            <h2 id="evidence" className="text-gate-lg font-bold">Evidence, before and after</h2>
+            {evidence.findings.map((f) => (
+              <EvidencePair key={f.id} finding={f} evidence={evidence} afterHandoffId={c.handoffId} timeZone={tz} />
+            ))}
+          </section>
+          <TrailerDiagram damagedZones={[...new Set(evidence.findings.map((f) => itemZone(f.itemKey)))]} isReefer={c.trailerKind === 'reefer'} axles={c.axleCount} />
+          <section aria-labelledby="custody" className="space-y-2 rounded-xl bg-paper p-3">
+            <h2 id="custody" className="text-gate-lg font-bold">Custody between the two inspections</h2>
+            <CustodyTimeline events={custody} timeZone={tz} />
+          </section>
+        </div>
+        <aside className="space-y-4">
+          <CaseActions caseId={c.id} trailerId={c.trailerId} itemKey={evidence.findings[0]?.itemKey ?? 'left_side.skin'} state={c.state} role={user.role} carrierEmail={c.carrierEmail} amountDollars={centsToDollarsText(amount)} isDisputeOpen={isWithinDisputeWindow(c.disputeDeadline, new Date())} />
+          <section aria-labelledby="history">
+            <h2 id="history" className="text-gate-lg font-bold">History</h2>
+            <CaseHistory events={events} timeZone={tz} />
+          </section>
+        </aside>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,48 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { listOpenHolds } from '@/db/queries/handoffs';
+import { listCarriers } from '@/db/queries/trailers';
+import { SECTION_ROLES } from '@/lib/roles';
+import { requireUser } from '@/lib/server/auth';
+import { getTrailerCondition } from '@/lib/server/trailer-condition';
+import { idParamSchema } from '@/lib/validation/handoffs';
+import { HandoffForm } from './_components/handoff-form';
+import { HoldList, HookRefused } from './_components/hook-refused';
+import { TrailerSummary } from './_components/trailer-summary';
+
+export const metadata: Metadata = { title: 'Handoff' };
+
+export default async function HandoffStartPage({ params, searchParams }: PageProps<'/gate/trailers/[id]'>) {
+  const user = await requireUser(SECTION_ROLES.gate);
+  const id = idParamSchema.safeParse((await params).id);
+  if (!id.success) notFound();
+  const condition = await getTrailerCondition(id.data, user.role);
+  if (!condition) notFound();
+  const { trailer } = condition;
+  const asked = (await searchParams).kind;
+  const suggested = trailer.status === 'in_yard' ? 'hook' : 'drop';
+  const kind = asked === 'drop' || asked === 'hook' ? asked : suggested;
+  const holds = await listOpenHolds(trailer.id);
+  const outOfService = holds.filter((h) => h.severity === 'out_of_service');
+  const restricted = holds.filter((h) => h.severity === 'restricted');
+  const carriers = user.role === 'driver' ? [] : await listCarriers();
+
+  return (
+    <div className="mx-auto max-w-xl space-y-4">
+      <TrailerSummary trailer={trailer} kind={kind} suggested={suggested} />
+      {kind === 'hook' && outOfService.length ? (
+        <HookRefused unitNumber={trailer.unitNumber} holds={outOfService} />
+      ) : (
+        <>
+          {restricted.length ? <HoldList title="Restricted" holds={restricted} /> : null}
+          <HandoffForm
+            condition={condition}
+            kind={kind}
+            carriers={carriers}
+            defaults={{ carrierId: user.role === 'driver' ? (user.carrierId ?? '') : '', driverName: user.role === 'driver' ? user.name : '', isDriver: user.role === 'driver', carrierName: user.carrierName }}
+          />
+        </>
+      )}
+    </div>
+  );
+}

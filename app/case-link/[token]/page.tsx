@@ -1,0 +1,47 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { listCaseFindings } from '@/db/queries/case-evidence';
+import { getCase } from '@/db/queries/cases';
+import { verifyCaseLink } from '@/lib/desk/case-link';
+import { isWithinDisputeWindow } from '@/lib/desk/case-state';
+import { effectiveAmountCents, formatCents } from '@/lib/desk/estimate';
+import { itemLabel } from '@/lib/desk/item-labels';
+import { CONDITION_LABELS, formatWhen } from '@/lib/engine';
+import { caseLinkSecret } from '@/lib/server/case-link-secret';
+import { LinkDisputeForm } from './link-dispute-form';
+
+export const metadata: Metadata = { title: 'Damage case', robots: { index: false } };
+
+// Public: the signed token is the permission. It shows the evidence summary of one case to the
+// carrier named in the token, and takes a dispute while the window is open. Photos stay behind
+// sign-in (the carrier's drivers see them on the desk).
+export default async function CaseLinkPage({ params }: PageProps<'/case-link/[token]'>) {
+  const { token } = (await params) as { token: string };
+  const link = verifyCaseLink(decodeURIComponent(token), caseLinkSecret(), new Date());
+  if (!link.ok) notFound();
+  const c = await getCase(link.claims.caseId, { role: 'driver', carrierId: link.claims.carrierId });
+  if (!c) notFound();
+  const findings = await listCaseFindings(c);
+  const isOpen = c.state === 'notified' && isWithinDisputeWindow(c.disputeDeadline, new Date());
+  return (
+    <main className="mx-auto max-w-3xl space-y-4 p-4">
+      <p className="text-gate-lg font-bold text-brand">Hitchmark</p>
+      <h1 className="text-gate-xl font-bold">Damage case: trailer {c.unitNumber}</h1>
+      <p className="text-gate">
+        {c.carrierName} · {c.terminalName} · state <span className="font-bold">{c.state}</span> · estimate <span className="font-bold">{formatCents(effectiveAmountCents(c))}</span>
+        {c.disputeDeadline ? ` · dispute until ${formatWhen(c.disputeDeadline, c.timeZone)}` : ''}
+      </p>
+      <ul className="space-y-2">
+        {findings.map((f) => (
+          <li key={f.id} className="rounded-xl bg-paper p-3">
+            <p className="text-gate font-bold">
+              {itemLabel(f.itemKey)}: {f.previousCondition ? CONDITION_LABELS[f.previousCondition] : 'no earlier record'} → {f.condition ? CONDITION_LABELS[f.condition] : 'not checked'}
+            </p>
+            <p className="text-gate-sm">{f.reason}</p>
+          </li>
+        ))}
+      </ul>
+      {isOpen ? <LinkDisputeForm token={decodeURIComponent(token)} /> : <p className="text-gate">This case takes no dispute now ({c.state}).</p>}
+    </main>
+  );
+}

@@ -1,0 +1,1 @@
+ALTER TABLE "handoff_items" ADD COLUMN "details" jsonb;

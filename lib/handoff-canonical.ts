@@ -1,0 +1,56 @@
+// Which fields of a stored handoff the hash chain covers. The submit service hashes with this,
+// and the desk re-verifies a trailer's chain with the same function, so the two never drift.
+import type { HashableHandoff } from './handoff-hash';
+
+export type HandoffHashRow = {
+  id: string; trailerId: string; terminalId: string; kind: string; level: string; carrierId: string;
+  driverId: string | null; driverName: string; tractorNumber: string; recordedById: string; isLoaded: boolean;
+  sealNumber: string | null; fuelEighths: number | null; isReeferOn: boolean | null; setpointTenthsF: number | null;
+  returnAirTenthsF: number | null; engineHoursTenths: number | null; pretripResult: string | null; pretripAt: Date | null;
+  note: string | null; occurredAt: Date; correctsHandoffId: string | null; verificationCode: string; prevHash: string | null;
+};
+export type HandoffItemHashRow = {
+  itemKey: string; condition: string; treadThirtySeconds: number | null; isHoldingAir: boolean | null; note: string | null;
+  details?: Record<string, boolean | string> | null;
+};
+
+/** The hash input of one handoff from its stored rows and the SHA-256 of its stored photos. */
+export function hashableFromRows(h: HandoffHashRow, items: HandoffItemHashRow[], photoSha256s: string[]): HashableHandoff {
+  return {
+    content: {
+      id: h.id,
+      trailerId: h.trailerId,
+      terminalId: h.terminalId,
+      kind: h.kind,
+      level: h.level,
+      carrierId: h.carrierId,
+      driverId: h.driverId,
+      driverName: h.driverName,
+      tractorNumber: h.tractorNumber,
+      recordedById: h.recordedById,
+      isLoaded: h.isLoaded,
+      sealNumber: h.sealNumber,
+      fuelEighths: h.fuelEighths,
+      isReeferOn: h.isReeferOn,
+      setpointTenthsF: h.setpointTenthsF,
+      returnAirTenthsF: h.returnAirTenthsF,
+      engineHoursTenths: h.engineHoursTenths,
+      pretripResult: h.pretripResult,
+      pretripAt: h.pretripAt ? h.pretripAt.toISOString() : null,
+      note: h.note,
+      occurredAt: h.occurredAt.toISOString(),
+      correctsHandoffId: h.correctsHandoffId,
+      verificationCode: h.verificationCode,
+    },
+    items: items.map((i) => ({
+      itemKey: i.itemKey,
+      condition: i.condition,
+      treadThirtySeconds: i.treadThirtySeconds,
+      isHoldingAir: i.isHoldingAir,
+      note: i.note,
+      details: i.details && Object.keys(i.details).length ? i.details : null,
+    })),
+    photoSha256s,
+    prevHash: h.prevHash,
+  };
+}

@@ -1,0 +1,87 @@
+// No `server-only` marker: the demo seed stores its example photos through this under plain Node.
+import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
+import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
+
+// Object storage for photos. S3_ENDPOINT is where the server reaches storage; S3_PUBLIC_ENDPOINT
+// is what the browser reaches for presigned uploads (the same locally, different behind a proxy).
+// Checksums only when required: the local fake does not honour the SDK's default checksum headers.
+const clients = new Map<string, S3Client>();
+
+function client(endpoint: string | undefined): S3Client {
+  const key = endpoint ?? '';
+  let c = clients.get(key);
+  if (!c) {
+    c = new S3Client({
+      region: process.env.S3_REGION ?? 'us-east-1',
+      endpoint,
+      forcePathStyle: true,
+      requestChecksumCalculation: 'WHEN_REQUIRED',
+      responseChecksumValidation: 'WHEN_REQUIRED',
+      credentials: process.env.S3_ACCESS_KEY_ID
+        ? { accessKeyId: process.env.S3_ACCESS_KEY_ID, secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? '' }
+        : undefined,
+    });
+    clients.set(key, c);
+  }
+  return c;
+}
+
+const bucket = () => process.env.S3_BUCKET ?? 'hitchmark-photos';
+const serverClient = () => client(process.env.S3_ENDPOINT);
+const publicClient = () => client(process.env.S3_PUBLIC_ENDPOINT ?? process.env.S3_ENDPOINT);
+
+/** A URL the browser PUTs the photo to, valid for `seconds`; the Content-Type header must match. */
+export function presignPhotoUpload(objectKey: string, contentType: string, seconds = 600): Promise<string> {
+  return getSignedUrl(publicClient(), new PutObjectCommand({ Bucket: bucket(), Key: objectKey, ContentType: contentType }), { expiresIn: seconds });
+}
+
+/** The object's bytes, or null when it is not there; stops reading past `maxBytes` (returns what it read, longer than max). */
+export async function readObject(objectKey: string, maxBytes: number): Promise<Uint8Array | null> {
+  try {
+    const out = await serverClient().send(new GetObjectCommand({ Bucket: bucket(), Key: objectKey }));
+    if (!out.Body) return null;
+    const reader = out.Body.transformToWebStream().getReader();
+    const chunks: Uint8Array[] = [];
+    let total = 0;
+    for (;;) {
+      const { done, value } = await reader.read();
+      if (done) break;
+      chunks.push(value);
+      total += value.length;
+      if (total > maxBytes) {
+        await reader.cancel();
+        break;
+      }
+    }
+    const bytes = new Uint8Array(total);
+    let at = 0;
+    for (const c of chunks) {
+      bytes.set(c, at);
+      at += c.length;
+    }
+    return bytes;
+  } catch (error) {
+    if ((error as { name?: string }).name === 'NoSuchKey' || (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404) return null;
+    throw error;
+  }
+}
+
+/** A readable stream of the object, for serving a photo through the app. */
+export async function streamObject(objectKey: string): Promise<ReadableStream | null> {
+  try {
+    const out = await serverClient().send(new GetObjectCommand({ Bucket: bucket(), Key: objectKey }));
+    return out.Body ? out.Body.transformToWebStream() : null;
+  } catch (error) {
+    if ((error as { name?: string }).name === 'NoSuchKey') return null;
+    throw error;
+  }
+}
+
+export async function deleteObject(objectKey: string): Promise<void> {
+  await serverClient().send(new DeleteObjectCommand({ Bucket: bucket(), Key: objectKey }));
+}
+
+/** Server-side upload (tests and the seed's demo photos). */
+export async function putObject(objectKey: string, body: Uint8Array, contentType: string): Promise<void> {
+  await serverClient().send(new PutObjectCommand({ Bucket: bucket(), Key: objectKey, Body: body, ContentType: contentType }));
+}

@@ -1,0 +1,103 @@
+import { z } from 'zod';
+
+// One schema for the gate form (client-side feedback), POST /api/handoffs and the seed.
+// The server stays the authority: item keys are checked against the trailer's checklist, and
+// the photo-and-note rule for new or worse damage is enforced after the engine's comparison.
+
+export const CONDITION_VALUES = ['ok', 'minor', 'damaged', 'unsafe', 'missing', 'not_checked'] as const;
+export const conditionSchema = z.enum(CONDITION_VALUES, { error: 'Choose a condition.' });
+
+const optionalText = (max: number, what: string) =>
+  z
+    .string()
+    .trim()
+    .max(max, { error: `${what} is at most ${max} characters.` })
+    .transform((s) => (s === '' ? null : s))
+    .nullable()
+    .optional();
+
+/** What was seen of one checklist item; fields not asked by the item's kind are dropped by the server. */
+export const itemObservationSchema = z.object({
+  condition: conditionSchema,
+  treadThirtySeconds: z
+    .number({ error: 'Tread is a whole number of 32nds of an inch.' })
+    .int({ error: 'Tread is a whole number of 32nds of an inch.' })
+    .min(0, { error: 'Tread cannot be below 0/32 in.' })
+    .max(32, { error: 'Tread above 32/32 in is not a trailer tire.' })
+    .optional(),
+  isHoldingAir: z.boolean().optional(),
+  isEngaged: z.boolean().optional(),
+  isMounted: z.boolean().optional(),
+  isLocking: z.boolean().optional(),
+  isInsulationShowing: z.boolean().optional(),
+  isLeaking: z.boolean().optional(),
+  cleanliness: z.enum(['clean', 'sweep', 'washout']).optional(),
+  note: optionalText(500, 'A note'),
+  photoIds: z.array(z.uuid({ error: 'A photo reference is not valid.' })).max(6, { error: 'At most 6 photos per item.' }).optional(),
+});
+export type ItemObservationInput = z.infer<typeof itemObservationSchema>;
+
+export const itemKeySchema = z.string().regex(/^[a-z0-9_]+(\.[a-z0-9_]+){1,3}$/, { error: 'Unknown checklist item.' });
+
+export const reeferReadingsSchema = z.object({
+  isUnitOn: z.boolean().nullable(),
+  setpointF: z.number({ error: 'Setpoint is a number in °F.' }).min(-40, { error: 'Setpoint is -40 °F or above.' }).max(90, { error: 'Setpoint is 90 °F or below.' }).nullable(),
+  returnAirF: z.number({ error: 'Return air is a number in °F.' }).min(-60, { error: 'Return air is -60 °F or above.' }).max(140, { error: 'Return air is 140 °F or below.' }).nullable(),
+  engineHours: z.number({ error: 'Engine hours is a number.' }).min(0, { error: 'Engine hours cannot be negative.' }).max(200_000, { error: 'Engine hours look too large.' }).nullable(),
+  preTripResult: z.enum(['pass', 'fail', 'not_run'], { error: 'Choose the last pre-trip result.' }),
+  preTripAt: z.iso.datetime({ offset: true, error: 'Give the time of the last pre-trip.' }).nullable(),
+});
+
+export const handoffSubmitSchema = z
+  .object({
+    idempotencyKey: z.string().regex(/^[A-Za-z0-9_-]{16,80}$/, { error: 'The draft key is not valid; start a new draft.' }),
+    trailerId: z.uuid({ error: 'Unknown trailer.' }),
+    kind: z.enum(['drop', 'hook'], { error: 'Choose drop or hook.' }),
+    carrierId: z.uuid({ error: 'Choose the carrier.' }),
+    driverName: z.string().trim().min(2, { error: 'Enter the driver\'s name.' }).max(80, { error: 'The name is at most 80 characters.' }),
+    tractorNumber: z
+      .string()
+      .trim()
+      .toUpperCase()
+      .regex(/^[A-Z0-9-]{1,20}$/, { error: 'Enter the tractor number (letters, digits, dashes).' }),
+    isLoaded: z.boolean({ error: 'Say whether the trailer is loaded or empty.' }),
+    sealNumber: z
+      .string()
+      .trim()
+      .toUpperCase()
+      .regex(/^[A-Z0-9-]{0,30}$/, { error: 'A seal number is letters, digits and dashes.' })
+      .transform((s) => (s === '' ? null : s))
+      .nullable()
+      .optional(),
+    fuelEighths: z.number().int({ error: 'Fuel is read in eighths, 0 to 8.' }).min(0, { error: 'Fuel is read in eighths, 0 to 8.' }).max(8, { error: 'Fuel is read in eighths, 0 to 8.' }).nullable(),
+    reefer: reeferReadingsSchema.nullable(),
+    items: z.record(itemKeySchema, itemObservationSchema).refine((r) => Object.keys(r).length <= 120, { error: 'Too many items.' }),
+    spotId: z.uuid({ error: 'Choose a slot.' }).nullable().optional(),
+    note: optionalText(1000, 'The note'),
+    correctsHandoffId: z.uuid().nullable().optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.reefer && v.reefer.preTripResult !== 'not_run' && !v.reefer.preTripAt) {
+      ctx.addIssue({ code: 'custom', path: ['reefer', 'preTripAt'], message: 'Give the time of the last pre-trip.' });
+    }
+  });
+export type HandoffSubmitInput = z.infer<typeof handoffSubmitSchema>;
+
+/** Verification codes: 8 Crockford base32 characters, shown as XXXX-XXXX. */
+export const verificationCodeSchema = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .transform((s) => s.replace(/[\s-]/g, '').replace(/O/g, '0').replace(/[IL]/g, '1'))
+  .pipe(z.string().regex(/^[0-9A-HJKMNP-TV-Z]{8}$/, { error: 'A verification code is 8 letters and digits, like 7KQ2-M9XD.' }));
+
+export const uploadRequestSchema = z.object({
+  trailerId: z.uuid({ error: 'Unknown trailer.' }),
+  itemKey: itemKeySchema,
+  contentType: z.string().trim().toLowerCase().max(100),
+  byteSize: z.number().int({ error: 'The size is a whole number of bytes.' }).min(1, { error: 'The photo is empty.' }),
+  sha256: z.string().trim().toLowerCase().regex(/^[0-9a-f]{64}$/, { error: 'The checksum must be 64 hex digits (SHA-256).' }),
+});
+export type UploadRequestInput = z.infer<typeof uploadRequestSchema>;
+
+export const idParamSchema = z.uuid({ error: 'Not found.' });

@@ -1,0 +1,95 @@
+import { randomUUID } from 'node:crypto';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { pool } from '@/db';
+import { seed } from '@/db/seed';
+import { handoffSubmitSchema, verificationCodeSchema } from '@/lib/validation/handoffs';
+import { actor, allOk, freshTrailer, submitInput } from './handoff-fixtures';
+
+// The route handler with a signed-in driver, without a running Next server: auth is replaced,
+// everything below it (zod, the submit service, the database) is real.
+const signedIn = vi.hoisted(() => ({ user: null as unknown }));
+vi.mock('@/lib/server/auth', () => ({ apiUser: async () => signedIn.user }));
+vi.mock('next/server', () => ({ after: () => undefined }));
+const { POST } = await import('@/app/api/handoffs/route');
+
+const post = (body: string) => POST(new Request('http://localhost/api/handoffs', { method: 'POST', body, headers: { 'content-type': 'application/json' } }));
+
+describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
+  let carrierId: string;
+  beforeAll(async () => {
+    await seed();
+    const d = await actor('D1001');
+    carrierId = d.carrierId!;
+    signedIn.user = { id: d.id, role: 'driver', carrierId: d.carrierId, terminalId: d.terminalId };
+  });
+  afterAll(async () => {
+    await pool.end();
+  });
+
+  it('a body that is not JSON is a 400', async () => {
+    const res = await post('{"kind": "drop",');
+    expect(res.status).toBe(400);
+    expect(await res.json()).toMatchObject({ code: 'bad_request' });
+  });
+
+  it('missing and wrong fields are a 422 with field messages', async () => {
+    const res = await post(JSON.stringify({ kind: 'park', fuelEighths: 9, items: { 'left_side.skin': { condition: 'shiny' } } }));
+    expect(res.status).toBe(422);
+    const body = await res.json();
+    expect(body.code).toBe('invalid');
+    expect(Object.keys(body.fieldErrors)).toEqual(expect.arrayContaining(['kind', 'fuelEighths', 'trailerId', 'driverName', 'items']));
+  });
+
+  it('bad values of every kind stay 4xx', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const good = submitInput(trailer.id, carrierId, 'drop', allOk(checklist), new Date());
+    const variants: unknown[] = [
+      null, [], 'drop', 42,
+      { ...good, trailerId: 'not-a-uuid' },
+      { ...good, trailerId: randomUUID() }, // unknown trailer → 404
+      { ...good, carrierId: randomUUID() }, // not the driver's own carrier → 422
+      { ...good, idempotencyKey: 'short' },
+      { ...good, tractorNumber: '<script>' },
+      { ...good, reefer: { ...good.reefer, setpointF: 'cold' } },
+      { ...good, reefer: { ...good.reefer, preTripResult: 'pass', preTripAt: null } },
+      { ...good, items: { 'tires.axle1.left_outer': { condition: 'ok', treadThirtySeconds: -3, isHoldingAir: true } } },
+      { ...good, items: { 'not.on.this.trailer': { condition: 'ok' } } },
+      { ...good, items: { 'left_side.skin': { condition: 'ok', photoIds: ['x'] } } },
+    ];
+    for (const v of variants) {
+      const res = await post(JSON.stringify(v));
+      expect(res.status, JSON.stringify(v).slice(0, 80)).toBeGreaterThanOrEqual(400);
+      expect(res.status).toBeLessThan(500);
+      expect(await res.json()).toHaveProperty('message');
+    }
+  });
+
+  it('a good body is 201, and the same body again is 200 with the same handoff', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const body = JSON.stringify(submitInput(trailer.id, carrierId, 'drop', allOk(checklist), new Date()));
+    const first = await post(body);
+    expect(first.status).toBe(201);
+    const again = await post(body);
+    expect(again.status).toBe(200);
+    expect((await again.json()).handoff.id).toBe((await first.json()).handoff.id);
+  });
+});
+
+describe('verification code input', () => {
+  it('reads a code typed with a dash, lower case, and O/I/L misread for 0/1', () => {
+    // Crockford base32 decoding rules (Douglas Crockford, "Base32", crockford.com): O→0, I and L→1
+    expect(verificationCodeSchema.parse(' 7kq2-m9xd ')).toBe('7KQ2M9XD');
+    expect(verificationCodeSchema.parse('O1IL-2345')).toBe('01112345');
+    expect(verificationCodeSchema.safeParse('7KQ2-M9XU').success).toBe(false); // U is not a Crockford symbol
+    expect(verificationCodeSchema.safeParse('7KQ2M9X').success).toBe(false);
+  });
+
+  it('the submit schema turns an empty seal number into null and upper-cases the tractor', () => {
+    const parsed = handoffSubmitSchema.parse({
+      idempotencyKey: 'k'.repeat(20), trailerId: randomUUID(), kind: 'drop', carrierId: randomUUID(), driverName: 'A B',
+      tractorNumber: 'tr-9', isLoaded: false, sealNumber: '', fuelEighths: null, reefer: null, items: {},
+    });
+    expect(parsed.sealNumber).toBeNull();
+    expect(parsed.tractorNumber).toBe('TR-9');
+  });
+});

@@ -1,0 +1,190 @@
+import { and, eq, inArray } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { db, pool } from '@/db';
+import { getPhotoForViewer, getReceipt } from '@/db/queries/handoffs';
+import { seed } from '@/db/seed';
+import { caseEvents, cases, emailOutbox, findings, handoffItems, handoffs, holds, photos, trailers } from '@/db/schema';
+import { hashableFromRows } from '@/lib/handoff-canonical';
+import { HandoffError } from '@/lib/handoff-errors';
+import { handoffContentHash, verifyChain } from '@/lib/handoff-hash';
+import { submitHandoff } from '@/lib/server/handoffs';
+import { actor, allOk, freshTrailer, storedPhoto, submitInput } from './handoff-fixtures';
+
+const HOUR = 3_600_000;
+const T0 = new Date('2026-11-02T15:00:00Z');
+const at = (h: number) => new Date(T0.getTime() + h * HOUR);
+
+async function refusal(p: Promise<unknown>): Promise<HandoffError> {
+  const e = await p.then(() => null, (x: unknown) => x);
+  expect(e).toBeInstanceOf(HandoffError);
+  return e as HandoffError;
+}
+
+describe('handoff submit service (real database)', () => {
+  let d1: Awaited<ReturnType<typeof actor>>;
+  let d2: Awaited<ReturnType<typeof actor>>;
+  beforeAll(async () => {
+    await seed();
+    d1 = await actor('D1001');
+    d2 = await actor('D2001');
+  });
+  afterAll(async () => {
+    await pool.end();
+  });
+
+  it('a retried submit with the same key returns the same handoff and stores one', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const input = submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0));
+    const first = await submitHandoff(input, d1, { now: at(0) });
+    const second = await submitHandoff(input, d1, { now: at(0.1) });
+    expect(first.isReplay).toBe(false);
+    expect(second).toEqual({ ...first, isReplay: true });
+    const rows = await db.select({ id: handoffs.id }).from(handoffs).where(eq(handoffs.trailerId, trailer.id));
+    expect(rows).toHaveLength(1);
+    const [t] = await db.select().from(trailers).where(eq(trailers.id, trailer.id));
+    expect(t.status).toBe('in_yard');
+    expect(t.currentSpotId).not.toBeNull();
+    expect(t.gateInAt?.getTime()).toBe(at(0).getTime());
+    // the receipt e-mail went into the outbox in the same transaction, to the carrier (D1001 has no e-mail)
+    const mail = await db.select().from(emailOutbox).where(eq(emailOutbox.relatedId, first.handoffId));
+    expect(mail).toHaveLength(1);
+    expect(mail[0].toAddress).toBe('claims@bramblecrest.example');
+    expect(mail[0].textBody).toContain(trailer.unitNumber);
+    expect(mail[0].textBody).toContain(`${first.verificationCode.slice(0, 4)}-${first.verificationCode.slice(4)}`);
+  });
+
+  it('refuses a second submit while another one holds the trailer row (55P03 → conflict)', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const client = await pool.connect();
+    try {
+      await client.query('begin');
+      await client.query('select id from trailers where id = $1 for update', [trailer.id]);
+      const e = await refusal(submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) }));
+      expect(e.code).toBe('conflict');
+      expect(e.message).toMatch(/being recorded right now/);
+    } finally {
+      await client.query('rollback');
+      client.release();
+    }
+    expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(0);
+  });
+
+  it('two simultaneous submits for one trailer: one succeeds, the other gets a conflict', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const results = await Promise.allSettled([
+      submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) }),
+      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', allOk(checklist), at(0)), d2, { now: at(0) }),
+    ]);
+    const ok = results.filter((r) => r.status === 'fulfilled');
+    const refused = results.filter((r): r is PromiseRejectedResult => r.status === 'rejected');
+    expect(ok).toHaveLength(1);
+    expect(refused).toHaveLength(1);
+    expect(refused[0].reason).toBeInstanceOf(HandoffError);
+    expect((refused[0].reason as HandoffError).code).toBe('conflict');
+    expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(1);
+  });
+
+  it('a pin not engaged places an out-of-service hold, and a hook of that trailer is refused with the reason', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    // 49 CFR 393.207(b): locking pins must not be disengaged; common practice: any one pin counts
+    items['undercarriage.tandem_pin.left_rear'] = { condition: 'ok', isEngaged: false };
+    const drop = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) });
+    const placed = await db.select().from(holds).where(eq(holds.handoffId, drop.handoffId));
+    expect(placed.map((h) => [h.ruleKey, h.severity])).toEqual([['pin_not_engaged', 'out_of_service']]);
+    const f = await db.select().from(findings).where(and(eq(findings.handoffId, drop.handoffId), eq(findings.kind, 'pin_not_engaged')));
+    expect(f).toHaveLength(1);
+
+    const e = await refusal(submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, { now: at(2) }));
+    expect(e.code).toBe('conflict');
+    expect(e.holds?.map((h) => h.reason)).toEqual(['Tandem locking pin, left rear is not engaged.']);
+    const [t] = await db.select().from(trailers).where(eq(trailers.id, trailer.id));
+    expect(t.status).toBe('in_yard');
+    expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(1);
+  });
+
+  it('new damage after another carrier held the trailer: finding attributed to them, one case, hash chain links', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const h1 = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) });
+    const h2 = await submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(5)), d2, { now: at(5) });
+
+    const damaged = allOk(checklist);
+    damaged['left_side.skin'] = { condition: 'damaged', isInsulationShowing: true, note: 'Torn skin, 30 cm, insulation showing' };
+    // damage without a photo is refused, and nothing is stored
+    const missing = await refusal(submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, { now: at(30) }));
+    expect(missing.code).toBe('invalid');
+    expect(missing.fieldErrors?.['items.left_side.skin']).toEqual(['New or worse damage needs at least one photo.']);
+
+    const photoId = await storedPhoto(trailer.id, d2.id);
+    damaged['left_side.skin'].photoIds = [photoId];
+    const h3 = await submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, { now: at(30) });
+
+    const [f] = await db.select().from(findings).where(and(eq(findings.handoffId, h3.handoffId), eq(findings.itemKey, 'left_side.skin')));
+    expect(f.kind).toBe('new');
+    expect(f.previousCondition).toBe('ok');
+    expect(f.previousHandoffId).toBe(h2.handoffId);
+    expect(f.responsibleCarrierId).toBe(d2.carrierId);
+    expect(f.confidence).toBe('high');
+    const [c] = await db.select().from(cases).where(eq(cases.handoffId, h3.handoffId));
+    expect(c.state).toBe('open');
+    expect(c.proposedCarrierId).toBe(d2.carrierId);
+    expect(f.caseId).toBe(c.id);
+    expect(await db.select().from(caseEvents).where(eq(caseEvents.caseId, c.id))).toMatchObject([{ kind: 'opened', toState: 'open' }]);
+    // insulation showing → restricted, no perishable loads (common practice, engine rule)
+    const hl = await db.select().from(holds).where(eq(holds.handoffId, h3.handoffId));
+    expect(hl.map((h) => [h.ruleKey, h.severity, h.restriction])).toEqual([['insulation_showing', 'restricted', 'no_perishable']]);
+    const [p] = await db.select().from(photos).where(eq(photos.id, photoId));
+    expect(p.handoffId).toBe(h3.handoffId);
+
+    // chain: each handoff names the one before; recomputing from the stored rows gives the stored hashes
+    const ids = [h1.handoffId, h2.handoffId, h3.handoffId];
+    const rows = await db.select().from(handoffs).where(inArray(handoffs.id, ids));
+    rows.sort((a, b) => a.occurredAt.getTime() - b.occurredAt.getTime());
+    expect(rows.map((r) => r.prevHash)).toEqual([null, rows[0].contentHash, rows[1].contentHash]);
+    const links = await Promise.all(rows.map(async (r) => {
+      const it = await db.select().from(handoffItems).where(eq(handoffItems.handoffId, r.id));
+      const ph = await db.select({ sha256: photos.sha256 }).from(photos).where(eq(photos.handoffId, r.id));
+      return { id: r.id, storedHash: r.contentHash, storedPrevHash: r.prevHash, recomputed: hashableFromRows(r, it, ph.map((x) => x.sha256)) };
+    }));
+    expect(verifyChain(links)).toEqual({ ok: true, count: 3 });
+    // a changed pin reading in the middle record would not match its stored hash
+    const tampered = structuredClone(links);
+    tampered[1].recomputed.items = tampered[1].recomputed.items.map((i) =>
+      i.itemKey === 'undercarriage.tandem_pin.left_front' ? { ...i, details: { isEngaged: false } } : i);
+    expect(handoffContentHash(tampered[1].recomputed)).not.toBe(rows[1].contentHash);
+    expect(verifyChain(tampered)).toEqual({ ok: false, brokenAt: rows[1].id, why: 'content_changed' });
+  });
+
+  it('the database refuses to change or delete a stored handoff', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const h = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) });
+    const refused = { cause: expect.objectContaining({ message: expect.stringMatching(/append-only/) }) };
+    await expect(db.update(handoffs).set({ driverName: 'Someone else' }).where(eq(handoffs.id, h.handoffId))).rejects.toMatchObject(refused);
+    await expect(db.delete(handoffItems).where(eq(handoffItems.handoffId, h.handoffId))).rejects.toMatchObject(refused);
+  });
+
+  it('a driver reads only their own carrier\'s receipts and photos; staff read all', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    const photoId = await storedPhoto(trailer.id, d1.id);
+    items['rear.door_left.panel'] = { condition: 'minor', note: 'Scuff on the left door', photoIds: [photoId] };
+    const h = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) });
+    const clerk = await actor('clerk@bramblecrest.example');
+    expect((await getReceipt(h.handoffId, d1))?.unitNumber).toBe(trailer.unitNumber);
+    expect(await getReceipt(h.handoffId, d2)).toBeNull();
+    expect((await getReceipt(h.handoffId, clerk))?.photos.map((p) => p.id)).toEqual([photoId]);
+    expect(await getPhotoForViewer(photoId, d1)).not.toBeNull();
+    expect(await getPhotoForViewer(photoId, d2)).toBeNull();
+    expect(await getPhotoForViewer(photoId, clerk)).not.toBeNull();
+  });
+
+  it('refuses items that are not on the trailer\'s checklist and pins without an answer', async () => {
+    const { trailer, checklist } = await freshTrailer('dry_van');
+    const items = allOk(checklist);
+    items['reefer_unit.housing'] = { condition: 'ok' }; // a dry van has no reefer unit
+    items['undercarriage.tandem_pin.right_front'] = { condition: 'ok' };
+    const e = await refusal(submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) }));
+    expect(e.code).toBe('invalid');
+    expect(Object.keys(e.fieldErrors ?? {}).sort()).toEqual(['items.reefer_unit.housing', 'items.undercarriage.tandem_pin.right_front']);
+  });
+});

@@ -1,0 +1,42 @@
+import { describe, expect, it } from 'vitest';
+import { csvField, reportCsv, summarizeCases, totalsBy } from '@/lib/desk/reports';
+
+const rows = [
+  { month: '2026-10', carrierScac: 'OSFW', state: 'decided', decision: 'share', amountCents: 85_000, chargedCents: 42_500 },
+  { month: '2026-10', carrierScac: 'OSFW', state: 'closed', decision: 'charge', amountCents: 45_000, chargedCents: 45_000 },
+  { month: '2026-10', carrierScac: 'PLRD', state: 'decided', decision: 'waive', amountCents: 12_000, chargedCents: 0 },
+  { month: '2026-11', carrierScac: 'OSFW', state: 'open', decision: null, amountCents: 30_000, chargedCents: null },
+  { month: '2026-11', carrierScac: null, state: 'decided', decision: 'absorb', amountCents: 20_001, chargedCents: 0 },
+];
+
+describe('desk reports', () => {
+  it('splits each estimate into charged, absorbed, waived and open', () => {
+    const lines = summarizeCases(rows);
+    expect(lines.map((l) => `${l.month} ${l.carrier}`)).toEqual(['2026-10 OSFW', '2026-10 PLRD', '2026-11 none', '2026-11 OSFW']);
+    expect(lines[0]).toMatchObject({ cases: 2, estimateCents: 130_000, chargedCents: 87_500, absorbedCents: 42_500 });
+    expect(lines[1]).toMatchObject({ waivedCents: 12_000, chargedCents: 0, absorbedCents: 0 });
+    expect(lines[3]).toMatchObject({ openCents: 30_000 });
+    expect(lines[2]).toMatchObject({ absorbedCents: 20_001 });
+    // every cent of every estimate lands in exactly one bucket
+    for (const l of lines) expect(l.chargedCents + l.absorbedCents + l.waivedCents + l.openCents).toBe(l.estimateCents);
+  });
+
+  it('totals by carrier', () => {
+    const t = totalsBy(summarizeCases(rows), 'carrier');
+    expect(t.find((x) => x.label === 'OSFW')).toMatchObject({ cases: 3, chargedCents: 87_500 });
+  });
+
+  it('writes RFC 4180 CSV: CRLF line ends, quoted fields with commas and doubled quotes', () => {
+    // RFC 4180 §2 rules 2, 6 and 7.
+    expect(csvField('a,b')).toBe('"a,b"');
+    expect(csvField('say "hi"')).toBe('"say ""hi"""');
+    expect(csvField('plain')).toBe('plain');
+    expect(csvField('=SUM(A1)')).toBe("'=SUM(A1)"); // OWASP CSV injection guidance
+    const csv = reportCsv(summarizeCases(rows));
+    const lines = csv.split('\r\n');
+    expect(lines[0]).toBe('month,carrier,cases,estimate_usd,charged_usd,absorbed_usd,waived_usd,open_usd');
+    expect(lines[1]).toBe('2026-10,OSFW,2,1300.00,875.00,425.00,0.00,0.00');
+    expect(lines[3]).toBe('2026-11,none,1,200.01,0.00,200.01,0.00,0.00');
+    expect(csv.endsWith('\r\n')).toBe(true);
+  });
+});
