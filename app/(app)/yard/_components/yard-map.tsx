@@ -12,7 +12,8 @@ function spotCell(spot: BoardSpot, policy: YardPolicy, isDimmed: boolean) {
   if (!t) return <li key={spot.id} data-spot={spot.label} className={`ym-s e${dim}`}><b>{spot.label}</b>free</li>;
   const held = t.holds.some((h) => h.severity === 'out_of_service') ? 'OOS' : t.holds.length ? 'HOLD' : null;
   const low = isLowFuel(t, policy);
-  const off = isReeferOff(t);
+  // an empty reefer normally stands with its unit shut off (common practice); only a loaded one is a concern
+  const off = isReeferOff(t) && t.isLoaded;
   const tone = held ? ' h' : off ? ' o' : low ? ' f' : '';
   return (
     <li key={spot.id} data-spot={spot.label} className={`ym-s${tone}${dim}`}>
@@ -47,7 +48,7 @@ export function YardMap({ board, highlight, policy }: { board: Board; highlight:
           </ul>
         </section>
       ))}
-      <p className="text-gate-sm text-ink-soft">OOS: out of service · HOLD: restricted · FUEL: at or below {policy.lowFuelEighths}/8 · OFF: reefer unit not running</p>
+      <p className="text-gate-sm text-ink-soft">OOS: out of service · HOLD: restricted · FUEL: at or below {policy.lowFuelEighths}/8 · OFF: reefer unit not running on a loaded trailer</p>
     </div>
   );
 }
