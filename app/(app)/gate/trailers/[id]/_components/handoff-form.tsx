@@ -99,20 +99,22 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
   }, [draft, send]);
 
   if (!draft) return <p className="text-gate">Opening the form…</p>;
-  const set = (p: Partial<Draft>) => setDraft({ ...draft, ...p });
-  const setItem = (key: string, v: DraftItem | undefined) => {
-    const items = { ...draft.items };
+  // functional updates: several taps (or one zone-wide "Same as last") may land before the next render
+  const set = (p: Partial<Draft>) => setDraft((prev) => prev && { ...prev, ...p });
+  const setItem = (key: string, v: DraftItem | undefined) => setDraft((prev) => {
+    if (!prev) return prev;
+    const items = { ...prev.items };
     if (v) items[key] = v;
     else delete items[key];
-    setDraft({ ...draft, items });
-  };
+    return { ...prev, items };
+  });
 
   return (
     <form className="space-y-6" noValidate onSubmit={(e) => { e.preventDefault(); void send(draft); }}>
       <Caution title="Your inspection">{CAUTIONS.inspection}</Caution>
       <WhoFields draft={draft} set={set} carriers={carriers} isDriver={defaults.isDriver} carrierName={defaults.carrierName ?? null} errors={errors} />
       {isReefer ? <FuelButtons value={draft.fuelEighths} onChange={(v) => set({ fuelEighths: v })} last={condition.lastReadings?.fuelEighths} /> : null}
-      {isReefer ? <ReeferFields reefer={draft.reefer} set={(p) => set({ reefer: { ...draft.reefer, ...p } })} errors={errors} /> : null}
+      {isReefer ? <ReeferFields reefer={draft.reefer} set={(p) => setDraft((prev) => prev && { ...prev, reefer: { ...prev.reefer, ...p } })} errors={errors} /> : null}
       {checklist.zones.filter((z) => z.key !== 'readings').map((z) => (
         <ZoneSection key={z.key} zone={z} draft={draft} last={last} setItem={setItem} trailerId={trailer.id} fieldErrors={errors} />
       ))}
