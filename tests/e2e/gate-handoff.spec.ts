@@ -116,3 +116,29 @@ test('drop with new damage and a photo, receipt with findings and holds, refused
   await expect(page.getByRole('article', { name: 'Handoff receipt' })).toContainText(UNIT);
   await expect(page.getByRole('article').getByRole('img')).toHaveCount(0);
 });
+
+test('a draft survives a reload, and a drop submitted offline is sent when the connection returns', async ({ page, context }) => {
+  test.setTimeout(90_000);
+  // R53191: another seeded reefer on the road with an ok history (db/seed-history.ts)
+  await signInAs(page, 'driver');
+  const id = await new LabelPage(page).trailerId('R53191');
+  await page.goto(`/gate/trailers/${id}`);
+  const form = new HandoffFormPage(page);
+  await form.fillHeader({ tractor: 'T-5120', loaded: true });
+  await page.getByLabel('Seal number').fill('SL-88123');
+  await form.fillReefer({ fuel: '6/8', setpoint: '-10', returnAir: '-8', engineHours: '9400' });
+  await form.sameAsLastEverywhere();
+
+  await page.reload();
+  await expect(page.getByLabel('Tractor number')).toHaveValue('T-5120');
+  await expect(page.getByLabel('Seal number')).toHaveValue('SL-88123');
+  await expect(page.getByRole('group', { name: 'Fuel in eighths' }).getByRole('button', { name: '6/8' })).toHaveAttribute('aria-pressed', 'true');
+
+  await context.setOffline(true);
+  await form.submit('drop');
+  await expect(page.getByText('No connection: the handoff is saved on this phone')).toBeVisible();
+  await context.setOffline(false);
+  await expect(page).toHaveURL(/\/gate\/receipts\/[0-9a-f-]{36}$/, { timeout: 20_000 });
+  // 6/8 at a drop is short of the policy's 8/8 (common practice: full at every drop and hook)
+  await expect(page.getByRole('region', { name: 'Findings' })).toContainText('Fuel short');
+});
