@@ -27,7 +27,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
               {user.carrierScac ? ` · ${user.carrierScac}` : ''}
             </span>
             <form action={signOutAction}>
-              <button type="submit" className="min-h-tap rounded-lg border-2 border-white px-3 font-bold">
+              <button type="submit" className="min-h-tap whitespace-nowrap rounded-lg border-2 border-white px-3 font-bold">
                 Sign out
               </button>
             </form>

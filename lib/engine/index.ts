@@ -10,7 +10,7 @@ export {
 export { classifyChange, compareInspection, damageFindings, inspectionKindOf } from './compare';
 export type { CompareInput } from './compare';
 export {
-  buildCustodyLegs, currentCustodian, custodianAfter, custodianBefore, custodianKey, custodianName, legsBetweenEvents,
+  buildCustodyLegs, currentCustodian, custodianAfter, custodianBefore, custodianKey, custodianName, legsAlong, legsBetweenEvents,
 } from './custody';
 export { attributeFindings } from './responsibility';
 export type { AttributeInput } from './responsibility';

@@ -1,4 +1,4 @@
-import { appendLeg, custodianKey, custodianName, legsBetweenEvents } from './custody';
+import { custodianKey, custodianName, legsAlong } from './custody';
 import type {
   Attribution, Custodian, CustodyLeg, InspectionEvent, ItemFinding, TimelineEvent,
 } from './types';
@@ -21,10 +21,9 @@ interface Interval {
 }
 
 function intervalFrom(k: number, history: readonly TimelineEvent[], current: InspectionEvent): Interval {
-  const legs: CustodyLeg[] = [];
-  for (let i = k; i < history.length; i++) {
-    for (const l of legsBetweenEvents(history[i], i + 1 < history.length ? history[i + 1] : current)) appendLeg(legs, l);
-  }
+  const span = history.slice(k);
+  span.push(current);
+  const legs = legsAlong(span);
   const seen = new Map<string, Custodian>();
   for (const l of legs) if (!seen.has(custodianKey(l.custodian))) seen.set(custodianKey(l.custodian), l.custodian);
   return { legs, candidates: [...seen.values()] };

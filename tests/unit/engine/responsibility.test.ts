@@ -36,6 +36,22 @@ describe('custody legs', () => {
   });
 });
 
+describe('custody legs, open ends', () => {
+  it('keeps the current terminal leg open after a drop and later walks', () => {
+    const d = drop('2026-11-01T10:00:00Z', northwind);
+    const legs = buildCustodyLegs([d, walk('2026-11-02T10:00:00Z'), move('2026-11-02T11:00:00Z')]);
+    expect(legs).toHaveLength(2);
+    expect(legs[1]).toMatchObject({ custodian: { type: 'terminal' }, fromEventId: d.id, toEventId: null, to: null });
+  });
+
+  it('starts a fresh leg after an unrecorded change instead of merging across it', () => {
+    const t = [hook('2026-11-01T10:00:00Z', northwind), drop('2026-11-02T10:00:00Z', bluefield), hook('2026-11-03T10:00:00Z', corvid)];
+    const legs = buildCustodyLegs(t);
+    expect(legs.map((l) => [l.custodian.type === 'terminal' ? 'terminal' : l.custodian.carrierId, l.isUnrecordedChange]))
+      .toEqual([['terminal', false], ['c-nw', true], ['c-bf', true], ['terminal', false], ['c-cv', false]]);
+  });
+});
+
 describe('attributeFindings', () => {
   it('damage found at a hook is the terminal leg: the pickup report protects the hooking driver', () => {
     const k = drop('2026-11-03T20:05:00Z', northwind, { [HINGE]: { condition: 'ok' } });
