@@ -71,7 +71,7 @@ const sheetColumns = { id: trailers.id, unitNumber: trailers.unitNumber, vin: tr
  * label get one issued (under a row lock, so two sheets printed at once do not issue two).
  * A selection keeps unit-number order; a row keeps slot order.
  */
-export async function listLabelSheet(query: { trailerIds: string[] } | { rowId: string }, actorId: string) {
+export async function prepareLabelSheet(query: { trailerIds: string[] } | { rowId: string }, actorId: string) {
   const base = db.select({ ...sheetColumns, spotOrder: yardSpots.sortOrder }).from(trailers).innerJoin(carriers, eq(carriers.id, trailers.ownerCarrierId));
   const rows =
     'rowId' in query

@@ -1,7 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { LabelPage } from './pages/label-page';
 import { ACCOUNTS, SignInPage, type AccountName } from './pages/sign-in-page';
-import { launchWithCamera, writeLabelVideo } from './support/fake-camera';
+import { code39Image, launchWithCamera, writeImageVideo, writeLabelVideo } from './support/fake-camera';
 
 async function signInAs(page: Page, name: AccountName) {
   await new SignInPage(page).signIn(name);
@@ -9,6 +9,7 @@ async function signInAs(page: Page, name: AccountName) {
 }
 
 test('a driver scans a real label with the camera and lands on that trailer’s handoff start', async ({ page }) => {
+  test.slow(); // launches its own browser with a fake camera
   // the clerk's label page renders the label; its link is what the QR on the trailer encodes
   await signInAs(page, 'clerk');
   const labels = new LabelPage(page);
@@ -22,19 +23,35 @@ test('a driver scans a real label with the camera and lands on that trailer’s 
     const driver = camera.page;
     await signInAs(driver, 'driver');
     await driver.getByRole('button', { name: 'Scan trailer label' }).click();
-    await expect(driver).toHaveURL(new RegExp(`/gate/trailers/${trailerId}$`), { timeout: 15_000 });
+    await expect(driver).toHaveURL(new RegExp(`/gate/trailers/${trailerId}$`), { timeout: 30_000 });
+  } finally {
+    await camera.browser.close();
+  }
+});
+
+test('a driver scans a VIN barcode (Code 39 with the leading I marker) when the label is gone', async ({ page }) => {
+  test.slow(); // launches its own browser with a fake camera
+  await signInAs(page, 'driver');
+  const found = await (await page.request.get('/api/trailers/lookup?unit=R53045')).json();
+  const video = await writeImageVideo(code39Image(`I${found.trailer.vin}`), '.data/e2e-vin-R53045.y4m');
+  const camera = await launchWithCamera(video);
+  try {
+    await signInAs(camera.page, 'driver');
+    await camera.page.getByRole('button', { name: 'Scan trailer label' }).click();
+    await expect(camera.page).toHaveURL(new RegExp(`/gate/trailers/${found.trailer.id}$`), { timeout: 30_000 });
   } finally {
     await camera.browser.close();
   }
 });
 
 test('a code that is not a label shows what was read and offers typing', async () => {
+  test.slow(); // launches its own browser with a fake camera
   const camera = await launchWithCamera(await writeLabelVideo('SLOT B07', '.data/e2e-unknown-code.y4m'));
   try {
     const driver = camera.page;
     await signInAs(driver, 'driver');
     await driver.getByRole('button', { name: 'Scan trailer label' }).click();
-    await expect(driver.getByText('That code is not a Hitchmark label or a VIN barcode.')).toBeVisible({ timeout: 15_000 });
+    await expect(driver.getByText('That code is not a Hitchmark label or a VIN barcode.')).toBeVisible({ timeout: 30_000 });
     await expect(driver.getByText('Read: SLOT B07')).toBeVisible();
     await driver.getByLabel('Or type the unit number or VIN').fill('r53041');
     await driver.getByRole('button', { name: 'Find trailer' }).click();
@@ -111,12 +128,14 @@ test('the lookup API answers each case with the right status and a clear message
   expect((await api.get('/api/trailers/lookup')).status()).toBe(422);
   expect((await api.get(`/api/trailers/lookup?unit=R53001&vin=${trailer.vin}`)).status()).toBe(422);
   expect((await api.get('/api/trailers/lookup?unit=R99999')).status()).toBe(404);
+  // drivers look trailers up but do not print labels
+  expect((await api.get(`/trailers/labels/pdf?ids=${trailer.id}`)).status()).toBe(403);
   const forged = await api.get(`/api/trailers/lookup?token=${'A'.repeat(68)}`);
   expect(forged.status()).toBe(422);
   expect(await forged.json()).toMatchObject({ code: 'invalid', message: 'This label is not a Hitchmark label or it is damaged.' });
 });
 
-test('a revoked label token gets 410 from the lookup API; the PDF prints for clerks only', async ({ page }) => {
+test('a revoked label token gets 410 from the lookup API; a clerk downloads the PDF', async ({ page }) => {
   await signInAs(page, 'clerk');
   const labels = new LabelPage(page);
   const trailerId = await labels.trailerId('R53043');
@@ -132,4 +151,23 @@ test('a revoked label token gets 410 from the lookup API; the PDF prints for cle
   expect(pdf.headers()['content-type']).toBe('application/pdf');
   expect((await pdf.body()).subarray(0, 5).toString()).toBe('%PDF-');
   expect((await page.request.get('/trailers/labels/pdf?ids=R53043')).status()).toBe(422);
+});
+
+test('a label scanned while signed out opens sign-in first, then the trailer', async ({ page, browser, baseURL }) => {
+  await signInAs(page, 'clerk');
+  const labels = new LabelPage(page);
+  const trailerId = await labels.trailerId('R53044');
+  await labels.open(trailerId);
+  const path = new URL(await labels.link()).pathname;
+
+  const context = await browser.newContext({ baseURL });
+  try {
+    const phone = await context.newPage();
+    await phone.goto(path);
+    await expect(phone).toHaveURL(/\/login\?next=%2Fl%2F/);
+    await new SignInPage(phone).fill('driver', ACCOUNTS.driver.id, ACCOUNTS.driver.secret);
+    await expect(phone).toHaveURL(new RegExp(`/gate/trailers/${trailerId}$`));
+  } finally {
+    await context.close();
+  }
 });

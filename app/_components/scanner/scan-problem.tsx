@@ -9,6 +9,10 @@ const CAMERA_HELP: Partial<Record<CameraState, { title: string; text: string }>>
     title: 'No camera found',
     text: 'This device has no camera Hitchmark can use. Type the unit number or VIN below.',
   },
+  insecure: {
+    title: 'Camera needs a secure connection',
+    text: 'Browsers allow the camera only on https addresses. Open Hitchmark by its https address, or type the unit number below.',
+  },
   failed: {
     title: 'The camera did not start',
     text: 'Another app may be using it. Close it and press the scan button again, or type the unit number below.',

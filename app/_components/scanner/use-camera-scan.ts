@@ -3,7 +3,7 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { IScannerControls } from '@zxing/browser';
 
-export type CameraState = 'idle' | 'starting' | 'scanning' | 'denied' | 'no_camera' | 'failed';
+export type CameraState = 'idle' | 'starting' | 'scanning' | 'denied' | 'no_camera' | 'insecure' | 'failed';
 
 function cameraErrorState(error: unknown): CameraState {
   const name = error instanceof Error || error instanceof DOMException ? error.name : '';
@@ -21,6 +21,8 @@ export function useCameraScan(onDecoded: (text: string) => void) {
   const videoRef = useRef<HTMLVideoElement>(null);
   const controlsRef = useRef<IScannerControls | null>(null);
   const onDecodedRef = useRef(onDecoded);
+  // false once stopped or unmounted, so a camera that finishes starting afterwards is stopped at once
+  const wantsCameraRef = useRef(false);
   const [camera, setCamera] = useState<CameraState>('idle');
 
   useEffect(() => {
@@ -28,6 +30,7 @@ export function useCameraScan(onDecoded: (text: string) => void) {
   }, [onDecoded]);
 
   const stop = useCallback(() => {
+    wantsCameraRef.current = false;
     controlsRef.current?.stop();
     controlsRef.current = null;
     setCamera((c) => (c === 'scanning' || c === 'starting' ? 'idle' : c));
@@ -35,32 +38,43 @@ export function useCameraScan(onDecoded: (text: string) => void) {
 
   const start = useCallback(async () => {
     if (!videoRef.current) return;
-    if (typeof navigator === 'undefined' || !navigator.mediaDevices?.getUserMedia) {
-      setCamera('no_camera');
-      return;
-    }
+    if (!window.isSecureContext) return setCamera('insecure');
+    if (!navigator.mediaDevices?.getUserMedia) return setCamera('no_camera');
+    wantsCameraRef.current = true;
     setCamera('starting');
     try {
       const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([import('@zxing/browser'), import('@zxing/library')]);
       const hints = new Map<unknown, unknown>([[DecodeHintType.POSSIBLE_FORMATS, [BarcodeFormat.QR_CODE, BarcodeFormat.CODE_39]]]);
+      if (!wantsCameraRef.current || !videoRef.current) return;
       const reader = new BrowserMultiFormatReader(hints as never, { delayBetweenScanAttempts: 100 });
       let isDone = false;
-      controlsRef.current = await reader.decodeFromVideoDevice(undefined, videoRef.current, (result, _error, controls) => {
+      const controls = await reader.decodeFromVideoDevice(undefined, videoRef.current, (result, _error, controls) => {
         if (!result || isDone) return;
         isDone = true;
+        wantsCameraRef.current = false;
         controls.stop();
         controlsRef.current = null;
         setCamera('idle');
         onDecodedRef.current(result.getText());
       });
-      if (!isDone) setCamera('scanning');
+      if (!wantsCameraRef.current) return controls.stop();
+      if (!isDone) {
+        controlsRef.current = controls;
+        setCamera('scanning');
+      }
     } catch (error) {
       controlsRef.current = null;
       setCamera(cameraErrorState(error));
     }
   }, []);
 
-  useEffect(() => () => controlsRef.current?.stop(), []);
+  useEffect(
+    () => () => {
+      wantsCameraRef.current = false;
+      controlsRef.current?.stop();
+    },
+    [],
+  );
 
   return { videoRef, camera, start, stop };
 }

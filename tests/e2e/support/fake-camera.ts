@@ -52,12 +52,47 @@ export function toI420(image: { data: Uint8Array; width: number; height: number 
   return Buffer.concat([y, u, v]);
 }
 
-/** Writes a one-frame .y4m showing the QR of `text`; returns the absolute path. */
-export async function writeLabelVideo(text: string, file: string, options?: { scale?: number }): Promise<string> {
+// Code 39 (ISO/IEC 16388), the symbology of VIN barcodes: per character nine elements, bar first,
+// 1 = wide. Table transcribed from @zxing/library's Code39Reader; '*' is the start/stop character.
+const CODE39_ALPHABET = '0123456789ABCDEFGHIJKLMNOPQRSTUVWXYZ-. $/+%*';
+const CODE39_PATTERNS = [
+  0x034, 0x121, 0x061, 0x160, 0x031, 0x130, 0x070, 0x025, 0x124, 0x064, 0x109, 0x049, 0x148, 0x019, 0x118,
+  0x058, 0x00d, 0x10c, 0x04c, 0x01c, 0x103, 0x043, 0x142, 0x013, 0x112, 0x052, 0x007, 0x106, 0x046, 0x016,
+  0x181, 0x0c1, 0x1c0, 0x091, 0x190, 0x0d0, 0x085, 0x184, 0x0c4, 0x0a8, 0x0a2, 0x08a, 0x02a, 0x094,
+];
+
+/** A Code 39 barcode of `text` as RGBA: narrow = `narrow` px, wide = 3 × narrow, 10-narrow quiet zones. */
+export function code39Image(text: string, { narrow = 3, height = 200 } = {}) {
+  const widths: { isBar: boolean; units: number }[] = [{ isBar: false, units: 10 }];
+  for (const ch of `*${text}*`) {
+    const i = CODE39_ALPHABET.indexOf(ch);
+    if (i < 0) throw new RangeError(`Code 39 cannot show ${ch}`);
+    for (let e = 0; e < 9; e++) widths.push({ isBar: e % 2 === 0, units: (CODE39_PATTERNS[i] >> (8 - e)) & 1 ? 3 : 1 });
+    widths.push({ isBar: false, units: 1 });
+  }
+  widths.push({ isBar: false, units: 9 });
+  const width = widths.reduce((n, w) => n + w.units * narrow, 0);
+  const data = new Uint8Array(width * height * 4).fill(255);
+  let x = 0;
+  for (const w of widths) {
+    if (w.isBar) for (let y = 0; y < height; y++) data.fill(0, (y * width + x) * 4, (y * width + x + w.units * narrow) * 4);
+    x += w.units * narrow;
+  }
+  for (let i = 3; i < data.length; i += 4) data[i] = 255;
+  return { data, width, height };
+}
+
+/** Writes a one-frame .y4m of an RGBA image centred on white; returns the absolute path. */
+export async function writeImageVideo(image: { data: Uint8Array; width: number; height: number }, file: string): Promise<string> {
   const path = resolve(file);
   const header = Buffer.from(`YUV4MPEG2 W${FRAME.width} H${FRAME.height} F30:1 Ip A1:1 C420jpeg\n`);
-  await writeFile(path, Buffer.concat([header, Buffer.from('FRAME\n'), toI420(await qrImage(text, options))]));
+  await writeFile(path, Buffer.concat([header, Buffer.from('FRAME\n'), toI420(image)]));
   return path;
+}
+
+/** Writes a one-frame .y4m showing the QR of `text` (a label link, a slot code…); returns the absolute path. */
+export async function writeLabelVideo(text: string, file: string, options?: { scale?: number }): Promise<string> {
+  return writeImageVideo(await qrImage(text, options), file);
 }
 
 /** A phone-sized Chromium whose camera shows `file`, with the camera permission granted. */

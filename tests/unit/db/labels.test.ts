@@ -1,7 +1,7 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
-import { getCurrentLabel, getLabelStanding, listLabelSheet, reissueLabel } from '@/db/queries/labels';
+import { getCurrentLabel, getLabelStanding, prepareLabelSheet, reissueLabel } from '@/db/queries/labels';
 import { getTrailerByUnit, getTrailerByVin } from '@/db/queries/trailer-lookup';
 import { auditLog, labels, trailers, users, yardRows, yardSpots } from '@/db/schema';
 import { seed } from '@/db/seed';
@@ -88,8 +88,8 @@ describe('labels and trailer lookup (fresh test database)', () => {
   it('a sheet issues a label for a trailer without a current one, and reuses it the second time', async () => {
     const t = await trailerByUnit('R53030');
     await db.update(labels).set({ revokedAt: new Date() }).where(eq(labels.trailerId, t.id));
-    const [first] = await listLabelSheet({ trailerIds: [t.id] }, clerkId);
-    const [again] = await listLabelSheet({ trailerIds: [t.id] }, clerkId);
+    const [first] = await prepareLabelSheet({ trailerIds: [t.id] }, clerkId);
+    const [again] = await prepareLabelSheet({ trailerIds: [t.id] }, clerkId);
     expect(first.labelId).toBe(again.labelId);
     expect((await getCurrentLabel(t.id))!.id).toBe(first.labelId);
   });
@@ -101,7 +101,7 @@ describe('labels and trailer lookup (fresh test database)', () => {
       .from(trailers)
       .innerJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId))
       .where(eq(yardSpots.rowId, row.id));
-    const sheet = await listLabelSheet({ rowId: row.id }, clerkId);
+    const sheet = await prepareLabelSheet({ rowId: row.id }, clerkId);
     expect(standing.length).toBeGreaterThan(0);
     expect(sheet.map((s) => s.id)).toEqual(standing.sort((a, b) => a.order - b.order).map((s) => s.id));
   });

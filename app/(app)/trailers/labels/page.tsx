@@ -3,7 +3,7 @@ import Link from 'next/link';
 import { ButtonLink } from '@/app/_components/button';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
-import { getRowName, listLabelSheet, listRowsForLabels } from '@/db/queries/labels';
+import { getRowName, prepareLabelSheet, listRowsForLabels } from '@/db/queries/labels';
 import { SECTION_ROLES } from '@/lib/roles';
 import { requireUser } from '@/lib/server/auth';
 import { labelSheetQuerySchema } from '@/lib/validation/labels';
@@ -22,7 +22,7 @@ export default async function LabelsPage({ searchParams }: PageProps<'/trailers/
     return <EmptyState title="Nothing to print">{parsed.error.issues[0]?.message} Choose trailers on the Trailers page, or a row below.</EmptyState>;
   }
   const q = parsed.data;
-  const trailers = await listLabelSheet(q.row ? { rowId: q.row } : { trailerIds: q.ids! }, user.id);
+  const trailers = await prepareLabelSheet(q.row ? { rowId: q.row } : { trailerIds: q.ids! }, user.id);
   const row = q.row ? await getRowName(q.row) : null;
   const title = row ? `Labels for ${row.terminalName}, ${row.name}` : `Labels for ${trailers.length} trailer${trailers.length === 1 ? '' : 's'}`;
   const pdfQuery = q.row ? `row=${q.row}` : `ids=${q.ids!.join(',')}`;
@@ -41,7 +41,11 @@ export default async function LabelsPage({ searchParams }: PageProps<'/trailers/
           </ButtonLink>
         </div>
       </div>
-      {trailers.length === 0 ? <EmptyState title="No trailers here">No trailer stands in this row now.</EmptyState> : <LabelSheet trailers={trailers} />}
+      {trailers.length === 0 ? (
+        <EmptyState title="No trailers here">{row ? 'No trailer stands in this row now.' : 'None of the chosen trailers is known to Hitchmark.'}</EmptyState>
+      ) : (
+        <LabelSheet trailers={trailers} />
+      )}
     </div>
   );
 }

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { ButtonLink } from '@/app/_components/button';
-import { listLabelSheet } from '@/db/queries/labels';
+import { prepareLabelSheet } from '@/db/queries/labels';
 import { SECTION_ROLES } from '@/lib/roles';
 import { requireUser } from '@/lib/server/auth';
 import { LabelSheet } from '../../labels/_components/label-sheet';
@@ -15,7 +15,7 @@ export default async function TrailerLabelPage({ params, searchParams }: PagePro
   const user = await requireUser(SECTION_ROLES.trailers);
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const [trailer] = await listLabelSheet({ trailerIds: [id.data] }, user.id);
+  const [trailer] = await prepareLabelSheet({ trailerIds: [id.data] }, user.id);
   if (!trailer) notFound();
   const wasReissued = (await searchParams).reissued === '1';
   return (
