@@ -1,7 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useCallback, useEffect, useState } from 'react';
+import { useCallback, useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { Button } from '@/app/_components/button';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
@@ -55,7 +55,10 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
   const [refusal, setRefusal] = useState<Refusal | null>(null);
   const [status, setStatus] = useState<'idle' | 'sending' | 'queued'>('idle');
 
+  // one submit at a time: the 'online' event and a re-queued draft must not send twice at once
+  const inFlight = useRef(false);
   const send = useCallback(async (d: StoredDraft) => {
+    if (inFlight.current) return;
     const { body, errors: found } = precheck(d, isReefer, last);
     setErrors(found);
     setRefusal(null);
@@ -70,13 +73,16 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
     }
     setStatus('sending');
     let res: Response;
+    inFlight.current = true;
     try {
       res = await fetch('/api/handoffs', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
     } catch {
+      inFlight.current = false;
       setDraft({ ...d, isQueued: true });
       setStatus('queued');
       return;
     }
+    inFlight.current = false;
     const answer = await res.json().catch(() => ({}));
     if (res.ok) {
       forget();
