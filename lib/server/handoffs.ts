@@ -1,13 +1,12 @@
 // The one way a handoff is recorded: POST /api/handoffs and the demo seed both call submitHandoff.
 // No `server-only` marker: the seed runs this under plain Node.
 import { randomUUID } from 'node:crypto';
-import { and, asc, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
-import { enqueueEmail } from '@/db/queries/outbox';
 import { listTimeline } from '@/db/queries/timeline';
 import {
   auditLog, caseEvents, cases, carriers, findings, handoffItems, handoffs, holds, photos, policies, terminals, trailers, users,
-  yardRows, yardSpots,
+  yardSpots,
 } from '@/db/schema';
 import { blocksHook, buildChecklist, makePolicy, type EnginePolicy, type HandoffEvent } from '@/lib/engine';
 import { hashableFromRows } from '@/lib/handoff-canonical';
@@ -15,10 +14,11 @@ import { HandoffError, isLockNotAvailable, isUniqueViolation } from '@/lib/hando
 import { evaluateHandoff } from '@/lib/handoff-evaluation';
 import { handoffContentHash } from '@/lib/handoff-hash';
 import { damageEvidenceErrors, normalizeItems } from '@/lib/handoff-items';
-import { receiptSubject, receiptText } from '@/lib/receipt';
 import type { Role } from '@/lib/roles';
 import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
 import { newVerificationCode } from '@/lib/verification-code';
+import { enqueueReceiptEmail } from './handoff-receipt-mail';
+import { chooseSpot } from './handoff-slots';
 
 export type HandoffActor = { id: string; role: Role; carrierId: string | null; terminalId: string | null };
 export type SubmitResult = { handoffId: string; verificationCode: string; isReplay: boolean };
@@ -45,34 +45,6 @@ function replay(row: NonNullable<Awaited<ReturnType<typeof findByKey>>>, input: 
     throw new HandoffError('conflict', 'This draft key was already used for another handoff. Start a new draft.');
   }
   return { handoffId: row.id, verificationCode: row.code, isReplay: true };
-}
-
-async function firstFreeSlot(tx: Tx, terminalId: string): Promise<string | null> {
-  const [row] = await tx
-    .select({ id: yardSpots.id })
-    .from(yardSpots)
-    .leftJoin(yardRows, eq(yardRows.id, yardSpots.rowId))
-    .leftJoin(trailers, eq(trailers.currentSpotId, yardSpots.id))
-    .where(and(eq(yardSpots.terminalId, terminalId), eq(yardSpots.kind, 'slot'), isNull(yardSpots.retiredAt), isNull(trailers.id)))
-    .orderBy(asc(yardRows.sortOrder), asc(yardSpots.sortOrder))
-    .limit(1);
-  return row?.id ?? null;
-}
-
-async function chooseSpot(tx: Tx, terminalId: string, wanted: string | null | undefined): Promise<string> {
-  if (!wanted) {
-    const free = await firstFreeSlot(tx, terminalId);
-    if (!free) throw new HandoffError('conflict', 'The yard has no free slot. Ask the clerk where to drop.');
-    return free;
-  }
-  const [spot] = await tx
-    .select({ id: yardSpots.id, taken: trailers.id })
-    .from(yardSpots)
-    .leftJoin(trailers, eq(trailers.currentSpotId, yardSpots.id))
-    .where(and(eq(yardSpots.id, wanted), eq(yardSpots.terminalId, terminalId), isNull(yardSpots.retiredAt)));
-  if (!spot) throw new HandoffError('invalid', 'That slot is not in this yard.', { spotId: ['Choose a slot of this yard.'] });
-  if (spot.taken) throw new HandoffError('conflict', 'That slot is taken. Choose another slot.', { spotId: ['That slot is taken.'] });
-  return spot.id;
 }
 
 /**
@@ -244,16 +216,14 @@ async function record(
   if (opts.sendReceipt !== false) {
     const [driver] = row.driverId ? await tx.select({ email: users.email }).from(users).where(eq(users.id, row.driverId)) : [];
     const [spot] = spotId ? await tx.select({ label: yardSpots.label }).from(yardSpots).where(eq(yardSpots.id, spotId)) : [];
-    const allOpen = [...openHolds.map((h) => ({ severity: h.severity, restriction: h.restriction, reason: h.reason })), ...newHolds];
-    const view = {
+    await enqueueReceiptEmail(tx, driver?.email ?? carrier.contactEmail, {
       handoffId: id, unitNumber: trailer.unitNumber, kind: input.kind, occurredAt: now, terminalName: terminal.name,
       timeZone: terminal.timeZone, carrierName: carrier.name, driverName: input.driverName, tractorNumber: input.tractorNumber,
       isLoaded: input.isLoaded, sealNumber: row.sealNumber, fuelEighths: row.fuelEighths, spotLabel: spot?.label ?? null,
-      verificationCode: row.verificationCode, contentHash, findings: ev.rows, holds: allOpen, photos: photoRows.map((p) => ({ id: p.id, itemKey: null })),
-    };
-    const base = opts.appUrl ?? process.env.APP_URL ?? 'http://localhost:3000';
-    await enqueueEmail({ to: driver?.email ?? carrier.contactEmail, subject: receiptSubject(view), text: receiptText(view, `${base}/verify`),
-      relatedType: 'handoff', relatedId: id }, tx);
+      verificationCode: row.verificationCode, contentHash, findings: ev.rows,
+      holds: [...openHolds.map((h) => ({ severity: h.severity, restriction: h.restriction, reason: h.reason })), ...newHolds],
+      photos: photoRows.map((p) => ({ id: p.id, itemKey: null })),
+    }, opts.appUrl);
   }
   return { handoffId: id, verificationCode: row.verificationCode, isReplay: false };
 }

@@ -1,9 +1,10 @@
-import { and, eq, inArray } from 'drizzle-orm';
+import { and, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
+import { checkTrailerChain } from '@/db/queries/handoff-chain';
 import { getPhotoForViewer, getReceipt } from '@/db/queries/handoffs';
 import { seed } from '@/db/seed';
-import { caseEvents, cases, emailOutbox, findings, handoffItems, handoffs, holds, photos, trailers } from '@/db/schema';
+import { carriers, caseEvents, cases, emailOutbox, findings, handoffItems, handoffs, holds, photos, trailers } from '@/db/schema';
 import { hashableFromRows } from '@/lib/handoff-canonical';
 import { HandoffError } from '@/lib/handoff-errors';
 import { handoffContentHash, verifyChain } from '@/lib/handoff-hash';
@@ -186,5 +187,23 @@ describe('handoff submit service (real database)', () => {
     const e = await refusal(submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) }));
     expect(e.code).toBe('invalid');
     expect(Object.keys(e.fieldErrors ?? {}).sort()).toEqual(['items.reefer_unit.housing', 'items.undercarriage.tandem_pin.right_front']);
+  });
+
+  it('the seeded history went through the submit service: outside trips, cases, holds, and intact chains', async () => {
+    const outsideTrips = await db.select({ n: sql<number>`count(*)::int` }).from(handoffs)
+      .innerJoin(carriers, eq(carriers.id, handoffs.carrierId)).where(and(eq(carriers.isHomeCarrier, false), sql`${handoffs.idempotencyKey} like 'seed-%'`));
+    expect(outsideTrips[0].n).toBeGreaterThan(10);
+    const seededCases = await db.select({ proposed: cases.proposedCarrierId, home: carriers.isHomeCarrier }).from(cases)
+      .innerJoin(handoffs, eq(handoffs.id, cases.handoffId)).leftJoin(carriers, eq(carriers.id, cases.proposedCarrierId))
+      .where(sql`${handoffs.idempotencyKey} like 'seed-%'`);
+    // every seeded damage trip was an outside carrier's hook and drop, so the case proposes that carrier
+    expect(seededCases.length).toBeGreaterThan(3);
+    expect(seededCases.every((c) => c.home === false)).toBe(true);
+    const rules = await db.selectDistinct({ rule: holds.ruleKey }).from(holds).innerJoin(handoffs, eq(handoffs.id, holds.handoffId))
+      .where(sql`${handoffs.idempotencyKey} like 'seed-%'`);
+    expect(rules.map((r) => r.rule)).toEqual(expect.arrayContaining(['pin_not_engaged', 'spare_unusable']));
+    const withHistory = await db.selectDistinct({ id: handoffs.trailerId }).from(handoffs).where(isNotNull(handoffs.prevHash)).limit(25);
+    expect(withHistory.length).toBeGreaterThan(10);
+    for (const t of withHistory) expect((await checkTrailerChain(t.id)).ok).toBe(true);
   });
 });

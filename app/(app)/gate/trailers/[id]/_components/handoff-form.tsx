@@ -1,7 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useCallback, useEffect, useState } from 'react';
+import { useCallback, useEffect, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { Button } from '@/app/_components/button';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
@@ -55,7 +55,10 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
   const [refusal, setRefusal] = useState<Refusal | null>(null);
   const [status, setStatus] = useState<'idle' | 'sending' | 'queued'>('idle');
 
+  // one submit at a time: the 'online' event and a re-queued draft must not send twice at once
+  const inFlight = useRef(false);
   const send = useCallback(async (d: StoredDraft) => {
+    if (inFlight.current) return;
     const { body, errors: found } = precheck(d, isReefer, last);
     setErrors(found);
     setRefusal(null);
@@ -70,13 +73,16 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
     }
     setStatus('sending');
     let res: Response;
+    inFlight.current = true;
     try {
       res = await fetch('/api/handoffs', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify(body) });
     } catch {
+      inFlight.current = false;
       setDraft({ ...d, isQueued: true });
       setStatus('queued');
       return;
     }
+    inFlight.current = false;
     const answer = await res.json().catch(() => ({}));
     if (res.ok) {
       forget();
@@ -99,20 +105,22 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
   }, [draft, send]);
 
   if (!draft) return <p className="text-gate">Opening the form…</p>;
-  const set = (p: Partial<Draft>) => setDraft({ ...draft, ...p });
-  const setItem = (key: string, v: DraftItem | undefined) => {
-    const items = { ...draft.items };
+  // functional updates: several taps (or one zone-wide "Same as last") may land before the next render
+  const set = (p: Partial<Draft>) => setDraft((prev) => prev && { ...prev, ...p });
+  const setItem = (key: string, v: DraftItem | undefined) => setDraft((prev) => {
+    if (!prev) return prev;
+    const items = { ...prev.items };
     if (v) items[key] = v;
     else delete items[key];
-    setDraft({ ...draft, items });
-  };
+    return { ...prev, items };
+  });
 
   return (
     <form className="space-y-6" noValidate onSubmit={(e) => { e.preventDefault(); void send(draft); }}>
       <Caution title="Your inspection">{CAUTIONS.inspection}</Caution>
       <WhoFields draft={draft} set={set} carriers={carriers} isDriver={defaults.isDriver} carrierName={defaults.carrierName ?? null} errors={errors} />
       {isReefer ? <FuelButtons value={draft.fuelEighths} onChange={(v) => set({ fuelEighths: v })} last={condition.lastReadings?.fuelEighths} /> : null}
-      {isReefer ? <ReeferFields reefer={draft.reefer} set={(p) => set({ reefer: { ...draft.reefer, ...p } })} errors={errors} /> : null}
+      {isReefer ? <ReeferFields reefer={draft.reefer} set={(p) => setDraft((prev) => prev && { ...prev, reefer: { ...prev.reefer, ...p } })} errors={errors} /> : null}
       {checklist.zones.filter((z) => z.key !== 'readings').map((z) => (
         <ZoneSection key={z.key} zone={z} draft={draft} last={last} setItem={setItem} trailerId={trailer.id} fieldErrors={errors} />
       ))}
