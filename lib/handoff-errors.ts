@@ -10,6 +10,8 @@ export class HandoffError extends Error {
     readonly fieldErrors?: Record<string, string[]>,
     /** Open holds that refused a hook, shown with their reasons and cautions. */
     readonly holds?: Pick<Hold, 'reason' | 'severity' | 'caution'>[],
+    /** Holds the refused record itself found: placed on the trailer even though the handoff is not stored. */
+    readonly holdsToPlace?: Hold[],
   ) {
     super(message);
     this.name = 'HandoffError';

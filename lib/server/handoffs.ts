@@ -8,7 +8,7 @@ import {
   auditLog, caseEvents, cases, carriers, findings, handoffItems, handoffs, holds, photos, policies, terminals, trailers, users,
   yardSpots,
 } from '@/db/schema';
-import { blocksHook, buildChecklist, makePolicy, type EnginePolicy, type HandoffEvent } from '@/lib/engine';
+import { blocksHook, buildChecklist, makePolicy, type EnginePolicy, type HandoffEvent, type Hold } from '@/lib/engine';
 import { hashableFromRows } from '@/lib/handoff-canonical';
 import { HandoffError, isLockNotAvailable, isUniqueViolation } from '@/lib/handoff-errors';
 import { evaluateHandoff } from '@/lib/handoff-evaluation';
@@ -73,9 +73,30 @@ export async function submitHandoff(
     if (error instanceof HandoffError && error.holds && input.kind === 'hook') {
       await recordAuditRow({ actorId: actor.id, action: 'handoff.hook_refused', entityType: 'trailer', entityId: input.trailerId,
         detail: { reasons: error.holds.map((h) => h.reason), items: input.items } });
+      if (error.holdsToPlace?.length) await placeRefusedHookHolds(input.trailerId, actor.id, error.holdsToPlace, now);
     }
     throw error;
   }
+}
+
+/**
+ * A hook refused because the driver's own pickup report found an out-of-service defect: the
+ * handoff is not stored (custody stays with the terminal), but the defect must keep the trailer
+ * in the yard for the next driver too, so its holds are placed anyway.
+ */
+async function placeRefusedHookHolds(trailerId: string, actorId: string, found: Hold[], now: Date) {
+  await db.transaction(async (tx) => {
+    await tx.select({ id: trailers.id }).from(trailers).where(eq(trailers.id, trailerId)).for('update');
+    const open = await tx.select({ ruleKey: holds.ruleKey, itemKey: holds.itemKey }).from(holds)
+      .where(and(eq(holds.trailerId, trailerId), isNull(holds.releasedAt)));
+    const already = new Set(open.map((h) => `${h.ruleKey}|${h.itemKey ?? ''}`));
+    const fresh = found.filter((h) => !already.has(`${h.ruleKey}|${h.itemKey ?? ''}`));
+    if (!fresh.length) return;
+    await tx.insert(holds).values(fresh.map((h) => ({
+      trailerId, handoffId: null, severity: h.severity, restriction: h.restriction, ruleKey: h.ruleKey,
+      itemKey: h.itemKey, reason: `${h.reason} (found at a refused hook)`, source: h.source, placedById: actorId, placedAt: now,
+    })));
+  });
 }
 
 async function record(
@@ -140,8 +161,8 @@ async function record(
   const ev = evaluateHandoff({ checklist, history, current: event, policy, now, timeZone: terminal.timeZone, terminalName: terminal.name });
 
   if (input.kind === 'hook' && blocksHook(ev.holds)) {
-    throw new HandoffError('conflict', `What you recorded puts trailer ${trailer.unitNumber} out of service: it may not leave the gate. Tell the terminal clerk.`,
-      undefined, ev.holds.filter((h) => h.severity === 'out_of_service'));
+    throw new HandoffError('conflict', `What you recorded puts trailer ${trailer.unitNumber} out of service: it may not leave the gate. The trailer is now on hold; tell the terminal clerk.`,
+      undefined, ev.holds.filter((h) => h.severity === 'out_of_service'), ev.holds);
   }
   const evidence = damageEvidenceErrors(ev.damageKeys, items.rows, items.photoIds);
   if (Object.keys(evidence).length) throw new HandoffError('invalid', 'New or worse damage needs a photo and a note.', evidence);

@@ -104,6 +104,22 @@ describe('handoff submit service (real database)', () => {
     expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(1);
   });
 
+  it('a hook whose own pickup report finds a pin not engaged is refused, and the trailer is held for the next driver', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) });
+    const items = allOk(checklist);
+    // 49 CFR 393.207(b): locking pins must not be disengaged; 49 CFR 396.7: not operated likely to break down
+    items['undercarriage.tandem_pin.right_front'] = { condition: 'ok', isEngaged: false };
+    const e = await refusal(submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', items, at(1)), d2, { now: at(1) }));
+    expect(e.code).toBe('conflict');
+    const placed = await db.select().from(holds).where(and(eq(holds.trailerId, trailer.id), sql`${holds.releasedAt} is null`));
+    expect(placed.map((h) => [h.ruleKey, h.severity, h.handoffId])).toEqual([['pin_not_engaged', 'out_of_service', null]]);
+    // the next driver's hook is refused by that stored hold, even with a clean report
+    const next = await refusal(submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, { now: at(2) }));
+    expect(next.message).toMatch(/out of service/);
+    expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(1);
+  });
+
   it('new damage after another carrier held the trailer: finding attributed to them, one case, hash chain links', async () => {
     const { trailer, checklist } = await freshTrailer();
     const h1 = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) });
