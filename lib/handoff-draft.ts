@@ -1,6 +1,7 @@
 // The gate form's draft: what is kept in localStorage, how it becomes the submit body, and the
 // immediate (client-side) comparison with the last record. The server's comparison is the authority.
 import { classifyChange, type ChecklistItem, type FindingKind } from './engine';
+import { isChargeableDamage } from './damage';
 import type { LastSeen } from './last-condition';
 import type { HandoffSubmitInput, ItemObservationInput } from './validation/handoffs';
 
@@ -59,7 +60,8 @@ export function itemChange(current: DraftItem | undefined, last: LastSeen | unde
   return classifyChange(current?.condition ?? 'not_checked', last?.observation.condition ?? null);
 }
 
-export const needsEvidence = (k: FindingKind) => k === 'new' || k === 'worse';
+/** New or worse damage past cosmetic needs a photo and a note (the server applies the same rule). */
+export const needsEvidence = (k: FindingKind, current: DraftItem | undefined) => isChargeableDamage(k, current?.condition);
 
 /** "Same as last": the last observation's condition and kind fields, without its note or photos. */
 export function sameAsLast(item: ChecklistItem, last: LastSeen | undefined): DraftItem | null {

@@ -5,6 +5,7 @@ import {
   type Attribution, type Checklist, type EnginePolicy, type FuelAssessment, type HandoffEvent, type Hold,
   type ItemFinding, type TimelineEvent,
 } from './engine';
+import { isChargeableDamage } from './damage';
 
 export type FindingRow = {
   itemKey: string;
@@ -51,7 +52,7 @@ function attributionRow(f: ItemFinding, a: Attribution | undefined, terminalName
       ?? (f.finding === 'repaired'
         ? `${f.label}: was ${f.previous}, now ${f.current}: repaired since the last inspection.`
         : `${f.label}: ${f.finding}.`),
-    isDamage: f.finding === 'new' || f.finding === 'worse',
+    isDamage: isChargeableDamage(f.finding, f.current),
   };
 }
 
@@ -95,7 +96,7 @@ export function evaluateHandoff(input: {
     if (h.ruleKey === 'pin_not_engaged' || h.ruleKey === 'spare_unusable') rows.push(ruleRow(h.itemKey ?? '', h.ruleKey, h.reason));
   }
 
-  const damage = damageFindings(compared);
+  const damage = damageFindings(compared).filter((f) => isChargeableDamage(f.finding, f.current));
   const damageKeys = damage.map((f) => f.itemKey);
   const parties = new Set(damage.map((f) => {
     const r = byKey.get(f.itemKey)?.responsible;

@@ -29,10 +29,10 @@ describe('gate form draft', () => {
 
   it('flags new and worse damage for evidence, not unchanged or repaired items', () => {
     const last = (condition: 'ok' | 'minor' | 'damaged') => ({ observation: { condition }, at: t(1).toISOString(), eventType: 'drop' as const, by: 'drop by X' });
-    expect(needsEvidence(itemChange({ condition: 'damaged' }, last('ok')))).toBe(true);
-    expect(needsEvidence(itemChange({ condition: 'damaged' }, last('minor')))).toBe(true);
-    expect(needsEvidence(itemChange({ condition: 'damaged' }, last('damaged')))).toBe(false);
-    expect(needsEvidence(itemChange({ condition: 'ok' }, last('damaged')))).toBe(false);
+    expect(needsEvidence(itemChange({ condition: 'damaged' }, last('ok')), { condition: 'damaged' })).toBe(true);
+    expect(needsEvidence(itemChange({ condition: 'damaged' }, last('minor')), { condition: 'damaged' })).toBe(true);
+    expect(needsEvidence(itemChange({ condition: 'damaged' }, last('damaged')), { condition: 'damaged' })).toBe(false);
+    expect(needsEvidence(itemChange({ condition: 'ok' }, last('damaged')), { condition: 'ok' })).toBe(false);
     // no earlier record: a first record, not "new" (nothing to compare with)
     expect(itemChange({ condition: 'damaged' }, undefined)).toBe('first_record');
   });
@@ -51,5 +51,15 @@ describe('last known condition', () => {
     expect(last['interior.floor'].observation.note).toBeUndefined();
     expect(last['rear.header']).toBeUndefined();
     expect(lastKnownCondition(checklist, timeline, true)['left_side.skin'].by).toBe('hook by Lev Marchetti, Osterlind Freightways');
+  });
+});
+
+describe('which changes need a photo and a note', () => {
+  // PRODUCT.md: `minor` is cosmetic and acceptable; common practice: small scratches are acceptable
+  it('a new cosmetic mark (ok → minor) needs no evidence; ok → damaged and minor → unsafe do', () => {
+    expect(needsEvidence('new', { condition: 'minor' })).toBe(false);
+    expect(needsEvidence('new', { condition: 'damaged' })).toBe(true);
+    expect(needsEvidence('worse', { condition: 'unsafe' })).toBe(true);
+    expect(needsEvidence('unchanged', { condition: 'damaged' })).toBe(false);
   });
 });

@@ -36,7 +36,7 @@ function precheck(d: Draft, isReefer: boolean, last: TrailerCondition['last']) {
     }
   }
   for (const [key, it] of Object.entries(d.items)) {
-    if (needsEvidence(itemChange(it, last[key])) && (!it.photos?.length || !it.note?.trim())) {
+    if (needsEvidence(itemChange(it, last[key]), it) && (!it.photos?.length || !it.note?.trim())) {
       (errors[`items.${key}`] ??= []).push('New or worse damage needs a photo and a note.');
     }
   }

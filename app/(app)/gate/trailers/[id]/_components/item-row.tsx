@@ -37,7 +37,7 @@ export function ItemRow({ item, value, last, onChange, trailerId, errors }: {
 }) {
   const change = itemChange(value, last);
   const isChanged = value && last && change !== 'unchanged' && change !== 'not_checked';
-  const evidence = needsEvidence(change);
+  const evidence = needsEvidence(change, value);
   const set = (patch: Partial<DraftItem>) => onChange({ ...(value ?? { condition: 'ok' }), ...patch } as DraftItem);
   return (
     <li className={`space-y-2 rounded-lg border-2 p-3 ${evidence ? 'border-danger' : value ? 'border-ok' : 'border-paper-line'}`} aria-label={item.label}>
