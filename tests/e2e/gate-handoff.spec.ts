@@ -31,7 +31,7 @@ test('drop with new damage and a photo, receipt with findings and holds, refused
   const labels = new LabelPage(page);
   const trailerId = await labels.trailerId(UNIT);
   await labels.open(trailerId);
-  const video = await writeLabelVideo(await labels.link(), `.data/e2e-label-${UNIT}.y4m`, { scale: 10 });
+  const video = await writeLabelVideo(await labels.link(), `.data/e2e-label-${UNIT}.y4m`, { scale: 6 });
 
   const camera = await launchWithCamera(video);
   let code = '';

@@ -1,7 +1,7 @@
 import { expect, test, type Page } from '@playwright/test';
 import { LabelPage } from './pages/label-page';
 import { ACCOUNTS, SignInPage, type AccountName } from './pages/sign-in-page';
-import { code39Image, launchWithCamera, writeImageVideo, writeLabelVideo } from './support/fake-camera';
+import { code39Image, launchWithCamera, WIDE_FRAME, writeImageVideo, writeLabelVideo } from './support/fake-camera';
 
 async function signInAs(page: Page, name: AccountName) {
   await new SignInPage(page).signIn(name);
@@ -33,7 +33,7 @@ test('a driver scans a VIN barcode (Code 39 with the leading I marker) when the 
   test.slow(); // launches its own browser with a fake camera
   await signInAs(page, 'driver');
   const found = await (await page.request.get('/api/trailers/lookup?unit=R53045')).json();
-  const video = await writeImageVideo(code39Image(`I${found.trailer.vin}`), '.data/e2e-vin-R53045.y4m');
+  const video = await writeImageVideo(code39Image(`I${found.trailer.vin}`), '.data/e2e-vin-R53045.y4m', WIDE_FRAME);
   const camera = await launchWithCamera(video);
   try {
     await signInAs(camera.page, 'driver');

@@ -8,17 +8,22 @@ import { PNG } from 'pngjs';
 import QRCode from 'qrcode';
 import { baseURL, chromiumArgs } from '../../../playwright.config';
 
-export const FRAME = { width: 1280, height: 720 };
+// 640×480 is the size Chromium captures at when the page asks for no resolution: a frame of that size reaches
+// the decoder unscaled, so QR modules stay whole pixels (scaled frames gave fractional modules and missed reads).
+export const FRAME = { width: 640, height: 480 };
 
 /** The QR of `text` as RGBA at `scale` pixels per module (whole pixels: the decoder misreads fractions). */
-export async function qrImage(text: string, { scale = 8, level = 'Q' as 'L' | 'M' | 'Q' | 'H' } = {}) {
+export async function qrImage(text: string, { scale = 6, level = 'Q' as 'L' | 'M' | 'Q' | 'H' } = {}) {
   const png = PNG.sync.read(await QRCode.toBuffer(text, { errorCorrectionLevel: level, margin: 4, scale }));
   return { data: png.data, width: png.width, height: png.height };
 }
 
-/** RGBA centred on a white 1280×720 frame → I420 planes, BT.601 limited range (Y 16–235, Cb/Cr 16–240). */
-export function toI420(image: { data: Uint8Array; width: number; height: number }): Buffer {
-  const { width: W, height: H } = FRAME;
+/** A frame wide enough for a 17-character Code 39 barcode (1-D codes survive rescaling; QR modules may not). */
+export const WIDE_FRAME = { width: 1280, height: 720 };
+
+/** RGBA centred on a white frame → I420 planes, BT.601 limited range (Y 16–235, Cb/Cr 16–240). */
+export function toI420(image: { data: Uint8Array; width: number; height: number }, frame = FRAME): Buffer {
+  const { width: W, height: H } = frame;
   if (image.width > W || image.height > H) throw new RangeError('image larger than the camera frame');
   const left = Math.floor((W - image.width) / 2);
   const top = Math.floor((H - image.height) / 2);
@@ -83,10 +88,12 @@ export function code39Image(text: string, { narrow = 3, height = 200 } = {}) {
 }
 
 /** Writes a one-frame .y4m of an RGBA image centred on white; returns the absolute path. */
-export async function writeImageVideo(image: { data: Uint8Array; width: number; height: number }, file: string): Promise<string> {
+export async function writeImageVideo(
+  image: { data: Uint8Array; width: number; height: number }, file: string, frame = FRAME,
+): Promise<string> {
   const path = resolve(file);
-  const header = Buffer.from(`YUV4MPEG2 W${FRAME.width} H${FRAME.height} F30:1 Ip A1:1 C420jpeg\n`);
-  await writeFile(path, Buffer.concat([header, Buffer.from('FRAME\n'), toI420(image)]));
+  const header = Buffer.from(`YUV4MPEG2 W${frame.width} H${frame.height} F30:1 Ip A1:1 C420jpeg\n`);
+  await writeFile(path, Buffer.concat([header, Buffer.from('FRAME\n'), toI420(image, frame)]));
   return path;
 }
 
