@@ -13,24 +13,11 @@ import { priceNewCases, runCaseCommand } from './queries/case-commands';
 import { db } from './index';
 import { caseEvents, cases, handoffs, photos, trailers, users } from './schema';
 
+import { allOkObservations } from '../lib/all-ok';
+
 const DAY = 86_400_000;
 
-function okItems(checklist: Checklist): Record<string, ItemObservationInput> {
-  const out: Record<string, ItemObservationInput> = {};
-  for (const i of checklist.items) {
-    if (i.kind === 'reading') continue;
-    const o: ItemObservationInput = { condition: 'ok' };
-    if (i.kind === 'pin') o.isEngaged = true;
-    if (i.kind === 'spare') Object.assign(o, { isMounted: true, isHoldingAir: true });
-    if (i.kind === 'tire') Object.assign(o, { treadThirtySeconds: 10, isHoldingAir: true });
-    if (i.kind === 'hinge') o.isLocking = true;
-    if (i.kind === 'skin') o.isInsulationShowing = false;
-    if (i.kind === 'leak') o.isLeaking = false;
-    if (i.kind === 'cleanliness') o.cleanliness = 'clean';
-    out[i.key] = o;
-  }
-  return out;
-}
+const okItems = (checklist: Checklist) => allOkObservations(checklist);
 
 const DAMAGE: { itemKey: string; condition: 'damaged'; note: string; isInsulationShowing?: boolean }[] = [
   { itemKey: 'left_side.skin', condition: 'damaged', note: 'Skin torn about 40 cm behind the landing gear, insulation showing', isInsulationShowing: true },

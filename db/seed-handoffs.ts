@@ -15,24 +15,11 @@ import { photos, trailers, users } from './schema';
 
 const HOUR = 3_600_000;
 type TrailerRow = typeof trailers.$inferSelect;
+import { allOkObservations } from '../lib/all-ok';
+
 type Driver = HandoffActor & { name: string; driverNumber: string };
 
-function allOk(checklist: Checklist): Record<string, ItemObservationInput> {
-  const out: Record<string, ItemObservationInput> = {};
-  for (const i of checklist.items) {
-    if (i.kind === 'reading') continue;
-    const o: ItemObservationInput = { condition: 'ok' };
-    if (i.kind === 'pin') o.isEngaged = true;
-    if (i.kind === 'spare') Object.assign(o, { isMounted: true, isHoldingAir: true });
-    if (i.kind === 'tire') Object.assign(o, { treadThirtySeconds: 8 + (i.key.length % 5), isHoldingAir: true });
-    if (i.kind === 'hinge') o.isLocking = true;
-    if (i.kind === 'skin') o.isInsulationShowing = false;
-    if (i.kind === 'leak') o.isLeaking = false;
-    if (i.kind === 'cleanliness') o.cleanliness = 'clean';
-    out[i.key] = o;
-  }
-  return out;
-}
+const allOk = (checklist: Checklist) => allOkObservations(checklist, (key) => 8 + (key.length % 5));
 
 const DAMAGE: { key: string; obs: ItemObservationInput }[] = [
   { key: 'left_side.skin', obs: { condition: 'damaged', isInsulationShowing: true, note: 'Skin torn about 40 cm behind the landing gear; insulation showing.' } },

@@ -1,3 +1,4 @@
+import { allOkObservations } from '@/lib/all-ok';
 // Helpers for the handoff database tests: a fresh trailer per test, the demo actors, a full
 // inspection with every item ok. Not a test file (no .test.ts).
 import { randomBytes, randomUUID } from 'node:crypto';
@@ -32,18 +33,7 @@ export async function freshTrailer(kind: 'reefer' | 'dry_van' = 'reefer') {
 }
 
 /** Every inspectable item ok, with the fields its kind requires (pins engaged, spare usable, 10/32 in tread). */
-export function allOk(checklist: Checklist): Record<string, ItemObservationInput> {
-  const out: Record<string, ItemObservationInput> = {};
-  for (const i of checklist.items) {
-    if (i.kind === 'reading') continue;
-    const o: ItemObservationInput = { condition: 'ok' };
-    if (i.kind === 'pin') o.isEngaged = true;
-    if (i.kind === 'spare') Object.assign(o, { isMounted: true, isHoldingAir: true });
-    if (i.kind === 'tire') Object.assign(o, { treadThirtySeconds: 10, isHoldingAir: true });
-    out[i.key] = o;
-  }
-  return out;
-}
+export const allOk = (checklist: Checklist) => allOkObservations(checklist);
 
 export function submitInput(
   trailerId: string, carrierId: string, kind: 'drop' | 'hook', items: Record<string, ItemObservationInput>, at: Date,
