@@ -8,7 +8,7 @@ import { decisionEmail, notifyEmail, type CaseEmailFacts } from '@/lib/desk/case
 import { applyCaseCommand, type CaseCommand, type CaseState } from '@/lib/desk/case-state';
 import { effectiveAmountCents, estimateCase, formatCents } from '@/lib/desk/estimate';
 import { itemLabel } from '@/lib/desk/item-labels';
-import { CONDITION_LABELS } from '@/lib/engine';
+import { CONDITION_LABELS, type Condition } from '@/lib/engine';
 import { caseVisibleTo, type CaseViewer } from './case-visibility';
 
 export type CaseActor = CaseViewer & { id: string | null };
@@ -105,6 +105,22 @@ export async function runCaseCommand(input: { caseId: string; command: CaseComma
  * Prices open cases the gate opened with no estimate yet (estimate 0, no override, no 'estimated'
  * event): the rate card's most specific rate per damage finding. Idempotent.
  */
+type RateRow = { itemPattern: string; condition: Condition; amountCents: number };
+
+/** Prices one open case from the rate card, once (an `estimated` event marks it done). Runs in the caller's transaction. */
+export async function priceCase(tx: Tx, id: string, now: Date, rates?: RateRow[]): Promise<boolean> {
+  const done = await tx.select({ id: caseEvents.id }).from(caseEvents).where(and(eq(caseEvents.caseId, id), eq(caseEvents.kind, 'estimated'))).limit(1);
+  if (done.length) return false;
+  const card = rates ?? (await tx.select({ itemPattern: rateCard.itemPattern, condition: rateCard.condition, amountCents: rateCard.amountCents }).from(rateCard));
+  const fs = await tx.select({ itemKey: findings.itemKey, condition: findings.condition }).from(findings).where(eq(findings.caseId, id));
+  const estimate = estimateCase(fs, card);
+  await tx.update(cases).set({ estimateCents: estimate.totalCents, updatedAt: now }).where(and(eq(cases.id, id), eq(cases.estimateCents, 0)));
+  const missing = estimate.unpricedItemKeys.length ? `; no rate for ${estimate.unpricedItemKeys.map(itemLabel).join(', ')}` : '';
+  await tx.insert(caseEvents).values({ caseId: id, kind: 'estimated', fromState: 'open', toState: 'open', note: `Rate card: ${formatCents(estimate.totalCents)} for ${fs.length} item(s)${missing}`, createdAt: now });
+  return true;
+}
+
+/** Prices open cases still at 0 that have no estimate yet (the gate prices new cases itself; this catches older ones). */
 export async function priceNewCases(now = new Date(), caseIds?: string[]) {
   const pending = await db
     .select({ id: cases.id })
@@ -114,16 +130,7 @@ export async function priceNewCases(now = new Date(), caseIds?: string[]) {
   const rates = await db.select({ itemPattern: rateCard.itemPattern, condition: rateCard.condition, amountCents: rateCard.amountCents }).from(rateCard);
   let priced = 0;
   for (const { id } of pending) {
-    await db.transaction(async (tx) => {
-      const done = await tx.select({ id: caseEvents.id }).from(caseEvents).where(and(eq(caseEvents.caseId, id), eq(caseEvents.kind, 'estimated'))).limit(1);
-      if (done.length) return;
-      const fs = await tx.select({ itemKey: findings.itemKey, condition: findings.condition }).from(findings).where(eq(findings.caseId, id));
-      const estimate = estimateCase(fs, rates);
-      await tx.update(cases).set({ estimateCents: estimate.totalCents, updatedAt: now }).where(and(eq(cases.id, id), eq(cases.estimateCents, 0)));
-      const missing = estimate.unpricedItemKeys.length ? `; no rate for ${estimate.unpricedItemKeys.map(itemLabel).join(', ')}` : '';
-      await tx.insert(caseEvents).values({ caseId: id, kind: 'estimated', fromState: 'open', toState: 'open', note: `Rate card: ${formatCents(estimate.totalCents)} for ${fs.length} item(s)${missing}`, createdAt: now });
-      priced++;
-    });
+    if (await db.transaction((tx) => priceCase(tx, id, now, rates))) priced++;
   }
   return priced;
 }

@@ -3,6 +3,7 @@
 import { randomUUID } from 'node:crypto';
 import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
+import { priceCase } from '@/db/queries/case-commands';
 import { listTimeline } from '@/db/queries/timeline';
 import {
   auditLog, caseEvents, cases, carriers, findings, handoffItems, handoffs, holds, photos, policies, terminals, trailers, users,
@@ -216,6 +217,8 @@ async function record(
       candidates: f.candidates, reason: f.reason, caseId: f.isDamage ? caseId : null,
     })));
   }
+  // the repair estimate from the rate card, in the same transaction as the case
+  if (caseId) await priceCase(tx, caseId, now);
   const already = new Set(openHolds.map((h) => `${h.ruleKey}|${h.itemKey ?? ''}`));
   const newHolds = ev.holds.filter((h) => !already.has(`${h.ruleKey}|${h.itemKey ?? ''}`));
   if (newHolds.length) {

@@ -2,7 +2,6 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { z } from 'zod';
 import { EmptyState } from '@/app/_components/empty-state';
-import { priceNewCases } from '@/db/queries/case-commands';
 import { listCaseCarriers, listCases } from '@/db/queries/cases';
 import { formatCents } from '@/lib/desk/estimate';
 import { formatWhen } from '@/lib/engine';
@@ -22,7 +21,6 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
   const parsed = caseQueueQuerySchema.safeParse(raw);
   const errors = parsed.success ? {} : (z.flattenError(parsed.error).fieldErrors as Record<string, string[]>);
   const isStaff = user.role !== 'driver';
-  if (isStaff) await priceNewCases();
   const now = new Date();
   const [rows, carriers] = await Promise.all([
     parsed.success ? listCases(user, { ...parsed.data, now }) : Promise.resolve([]),

@@ -40,7 +40,8 @@ describe('desk over submitted handoffs', () => {
 
     const [row] = await db.select().from(cases).where(eq(cases.handoffId, handoffId));
     expect(row.proposedCarrierId).toBe(driver.carrierId);
-    expect(await priceNewCases(t2, [row.id])).toBe(1);
+    // priced by the submit itself, in the case's own transaction: nothing is left to price afterwards
+    expect(await priceNewCases(t2, [row.id])).toBe(0);
     const priced = await getCase(row.id, { role: 'driver', carrierId: driver.carrierId });
     // seed rate card: left_side damaged = 85,000 cents (invented demo figure in db/seed.ts)
     expect(priced?.estimateCents).toBe(85_000);

@@ -146,7 +146,9 @@ describe('handoff submit service (real database)', () => {
     expect(c.state).toBe('open');
     expect(c.proposedCarrierId).toBe(d2.carrierId);
     expect(f.caseId).toBe(c.id);
-    expect(await db.select().from(caseEvents).where(eq(caseEvents.caseId, c.id))).toMatchObject([{ kind: 'opened', toState: 'open' }]);
+    const events = await db.select().from(caseEvents).where(eq(caseEvents.caseId, c.id)).orderBy(caseEvents.createdAt);
+    expect(events.map((e) => e.kind).sort()).toEqual(['estimated', 'opened']);
+    expect(c.estimateCents).toBeGreaterThan(0);
     // insulation showing → restricted, no perishable loads (common practice, engine rule)
     const hl = await db.select().from(holds).where(eq(holds.handoffId, h3.handoffId));
     expect(hl.map((h) => [h.ruleKey, h.severity, h.restriction])).toEqual([['insulation_showing', 'restricted', 'no_perishable']]);

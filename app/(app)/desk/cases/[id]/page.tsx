@@ -3,7 +3,6 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
-import { priceNewCases } from '@/db/queries/case-commands';
 import { getCaseEvidence, listCustodyEvents } from '@/db/queries/case-evidence';
 import { getCase, listCaseEvents } from '@/db/queries/cases';
 import { isWithinDisputeWindow } from '@/lib/desk/case-state';
@@ -25,7 +24,6 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
   const user = await requireUser(SECTION_ROLES.desk);
   const { id } = (await params) as { id: string };
   if (!z.uuid().safeParse(id).success) notFound();
-  if (user.role !== 'driver') await priceNewCases(new Date(), [id]);
   const c = await getCase(id, user);
   if (!c) notFound();
   const [evidence, events] = await Promise.all([getCaseEvidence(c), listCaseEvents(c.id)]);
