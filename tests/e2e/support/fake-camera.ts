@@ -6,6 +6,7 @@ import { resolve } from 'node:path';
 import { chromium, devices, type Browser, type BrowserContext, type Page } from '@playwright/test';
 import { PNG } from 'pngjs';
 import QRCode from 'qrcode';
+import { labelQrOptions } from '../../../lib/labels/qr';
 import { baseURL, chromiumArgs } from '../../../playwright.config';
 
 // 640×480 is the size Chromium captures at when the page asks for no resolution: a frame of that size reaches
@@ -13,8 +14,9 @@ import { baseURL, chromiumArgs } from '../../../playwright.config';
 export const FRAME = { width: 640, height: 480 };
 
 /** The QR of `text` as RGBA at `scale` pixels per module (whole pixels: the decoder misreads fractions). */
-export async function qrImage(text: string, { scale = 6, level = 'Q' as 'L' | 'M' | 'Q' | 'H' } = {}) {
-  const png = PNG.sync.read(await QRCode.toBuffer(text, { errorCorrectionLevel: level, margin: 4, scale }));
+export async function qrImage(text: string, { scale = 6 } = {}) {
+  // encoded exactly as the app prints labels (level Q, the mask chosen for the scanner)
+  const png = PNG.sync.read(await QRCode.toBuffer(text, { ...labelQrOptions(text), margin: 4, scale }));
   return { data: png.data, width: png.width, height: png.height };
 }
 
