@@ -5,7 +5,7 @@
 // (@zxing/library, the one @zxing/browser runs on the phone) fails on a few percent of clean
 // symbols with the encoder's own choice, whatever the module size, so each label keeps the first
 // mask whose rendering that decoder reads back. Every rendering (sheet SVG, PDF) uses it.
-import { BinaryBitmap, HybridBinarizer, QRCodeReader, RGBLuminanceSource } from '@zxing/library';
+import * as zxingModule from '@zxing/library';
 import QRCode from 'qrcode';
 
 export const LABEL_QR_LEVEL = 'Q' as const;
@@ -13,6 +13,11 @@ export const LABEL_QR_LEVEL = 'Q' as const;
 export const LABEL_QR_MARGIN = 4;
 
 type Mask = 0 | 1 | 2 | 3 | 4 | 5 | 6 | 7;
+
+// @zxing/library is CommonJS to Node: under Node's own ES module loader (Playwright's test files)
+// its classes sit on `default`; bundlers and vitest give them as named exports.
+const zxing = (zxingModule as unknown as { default?: typeof zxingModule }).default ?? zxingModule;
+const { BinaryBitmap, HybridBinarizer, QRCodeReader, RGBLuminanceSource } = zxing;
 
 /** Whether the scanner's decoder reads `link` back from the symbol drawn with `mask` (4 px modules). */
 export function scannerReadsBack(link: string, mask?: Mask): boolean {
