@@ -4,7 +4,8 @@ import type {
 
 type ItemDef = [key: string, label: string, kind: ItemKind, reading?: ReadingField];
 
-const ZONE_LABELS: Record<ZoneKey, string> = {
+/** Display names of the checklist zones (the gate form, the desk's trailer diagram). */
+export const ZONE_LABELS: Record<ZoneKey, string> = {
   nose: 'Nose',
   reefer_unit: 'Refrigeration unit',
   left_side: 'Left side',

@@ -1,17 +1,10 @@
 // Hitchmark's own drawing of a reefer trailer, nose to the left, seen from above and from its left
 // side, with the zones that have damage in this case filled in.
+import { ZONE_LABELS } from '@/lib/engine';
+
 type Props = { damagedZones: string[]; isReefer: boolean; axles: number };
 
-const ZONE_NAMES: Record<string, string> = {
-  nose: 'Nose',
-  reefer_unit: 'Refrigeration unit',
-  left_side: 'Left side',
-  right_side: 'Right side',
-  undercarriage: 'Undercarriage',
-  tires: 'Tires and wheels',
-  rear: 'Rear doors',
-  interior: 'Interior',
-};
+const ZONE_NAMES: Record<string, string> = ZONE_LABELS;
 
 export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
   const hit = new Set(damagedZones);
