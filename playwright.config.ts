@@ -29,9 +29,7 @@ export default defineConfig({
     trace: 'retain-on-failure',
     launchOptions: { executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium', args: chromiumArgs },
   },
-  projects: [
-    { name: 'phone', use: { ...devices['Pixel 7'], browserName: 'chromium' } },
-  ],
+  projects: [{ name: 'phone', use: { ...devices['Pixel 7'], browserName: 'chromium' } }],
   webServer: {
     command: `node_modules/.bin/next start -p ${port}`,
     url: `${baseURL}/api/health`,

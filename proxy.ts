@@ -7,7 +7,8 @@ const PUBLIC_PREFIXES = ['/login', '/verify', '/api/verify', '/api/health', '/ca
 
 export function proxy(request: NextRequest) {
   const { pathname, search } = request.nextUrl;
-  if (PUBLIC_PREFIXES.some((p) => pathname === p.replace(/\/$/, '') || pathname.startsWith(p))) return NextResponse.next();
+  if (PUBLIC_PREFIXES.some((p) => pathname === p.replace(/\/$/, '') || pathname.startsWith(p)))
+    return NextResponse.next();
   if (request.cookies.has(SESSION_COOKIE)) return NextResponse.next();
   if (pathname.startsWith('/api/')) {
     return NextResponse.json({ code: 'unauthenticated', message: 'Sign in first.' }, { status: 401 });

@@ -8,14 +8,26 @@ import { seedHandoffs, type HandoffPlan } from './seed-handoffs';
 
 const HOUR = 3_600_000;
 
-export async function seedHistory({ terminalIds }: { terminalIds: Record<string, string>; carrierIds: Record<string, string> }) {
-  const placed = await db.select({ id: trailers.id }).from(trailers).where(isNotNull(trailers.currentSpotId)).limit(1);
+export async function seedHistory({
+  terminalIds,
+}: {
+  terminalIds: Record<string, string>;
+  carrierIds: Record<string, string>;
+}) {
+  const placed = await db
+    .select({ id: trailers.id })
+    .from(trailers)
+    .where(isNotNull(trailers.currentSpotId))
+    .limit(1);
   if (placed.length) return;
   const all = await db.select().from(trailers).orderBy(asc(trailers.unitNumber));
   const now = Date.now();
   const plans: HandoffPlan[] = [];
   let next = 0;
-  for (const [code, share] of [['RVB', 130], ['HMS', 50]] as const) {
+  for (const [code, share] of [
+    ['RVB', 130],
+    ['HMS', 50],
+  ] as const) {
     const spots = await db
       .select({ id: yardSpots.id })
       .from(yardSpots)
@@ -27,7 +39,14 @@ export async function seedHistory({ terminalIds }: { terminalIds: Record<string,
       const dwellHours = 2 + ((next * 37) % 139);
       if (next % 6 === 0) {
         // dropped through Hitchmark: the drop picks a free slot after the direct placements below
-        plans.push({ trailer: t, terminalId: terminalIds[code], endsInYard: true, finalAt: new Date(now - dwellHours * HOUR), cycles: 1 + (next % 2), index: next });
+        plans.push({
+          trailer: t,
+          terminalId: terminalIds[code],
+          endsInYard: true,
+          finalAt: new Date(now - dwellHours * HOUR),
+          cycles: 1 + (next % 2),
+          index: next,
+        });
         continue;
       }
       await db
@@ -48,7 +67,14 @@ export async function seedHistory({ terminalIds }: { terminalIds: Record<string,
   }
   // a fifth of the trailers on the road were hooked through Hitchmark, outside carriers' units among them
   for (let k = next; k < all.length; k += 5) {
-    plans.push({ trailer: all[k], terminalId: terminalIds[k % 2 ? 'HMS' : 'RVB'], endsInYard: false, finalAt: new Date(now - (5 + (k % 90)) * HOUR), cycles: 1 + (k % 3), index: k });
+    plans.push({
+      trailer: all[k],
+      terminalId: terminalIds[k % 2 ? 'HMS' : 'RVB'],
+      endsInYard: false,
+      finalAt: new Date(now - (5 + (k % 90)) * HOUR),
+      cycles: 1 + (k % 3),
+      index: k,
+    });
   }
   await seedHandoffs(plans);
 }

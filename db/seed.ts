@@ -6,28 +6,82 @@ import { and, eq } from 'drizzle-orm';
 import { computeVinCheckDigit } from '../lib/engine/identity';
 import { defaultPolicy } from '../lib/engine/policy';
 import { db, pool } from './index';
-import { carriers, labels, policies, rateCard, terminals, trailers, users, yardRows, yardSpots } from './schema';
+import {
+  carriers,
+  labels,
+  policies,
+  rateCard,
+  terminals,
+  trailers,
+  users,
+  yardRows,
+  yardSpots,
+} from './schema';
 import { seedDesk } from './seed-desk';
 import { seedHistory } from './seed-history';
 
 export const DEMO_ACCOUNTS = [
-  { role: 'admin', name: 'Morgan Achterberg', email: 'admin@bramblecrest.example', secret: 'hitchmark-admin' },
-  { role: 'clerk', name: 'Priya Venkataraman-Holt', email: 'clerk@bramblecrest.example', secret: 'hitchmark-clerk' },
-  { role: 'jockey', name: 'Tobias Quenneville', email: 'jockey@bramblecrest.example', secret: 'hitchmark-jockey' },
+  {
+    role: 'admin',
+    name: 'Morgan Achterberg',
+    email: 'admin@bramblecrest.example',
+    secret: 'hitchmark-admin',
+  },
+  {
+    role: 'clerk',
+    name: 'Priya Venkataraman-Holt',
+    email: 'clerk@bramblecrest.example',
+    secret: 'hitchmark-clerk',
+  },
+  {
+    role: 'jockey',
+    name: 'Tobias Quenneville',
+    email: 'jockey@bramblecrest.example',
+    secret: 'hitchmark-jockey',
+  },
   { role: 'driver', name: 'Dana Okonkwo-Reyes', driverNumber: 'D1001', secret: '4321', carrier: 'BRCL' },
   { role: 'driver', name: 'Lev Marchetti', driverNumber: 'D2001', secret: '2468', carrier: 'OSFW' },
 ] as const;
 
 const CARRIERS = [
-  { scac: 'BRCL', name: 'Bramblecrest Cold Lines', contactEmail: 'claims@bramblecrest.example', isHomeCarrier: true },
-  { scac: 'OSFW', name: 'Osterlind Freightways', contactEmail: 'equipment@osterlind.example', isHomeCarrier: false },
-  { scac: 'PLRD', name: 'Pellucid Road Carriers', contactEmail: 'safety@pellucid-road.example', isHomeCarrier: false },
+  {
+    scac: 'BRCL',
+    name: 'Bramblecrest Cold Lines',
+    contactEmail: 'claims@bramblecrest.example',
+    isHomeCarrier: true,
+  },
+  {
+    scac: 'OSFW',
+    name: 'Osterlind Freightways',
+    contactEmail: 'equipment@osterlind.example',
+    isHomeCarrier: false,
+  },
+  {
+    scac: 'PLRD',
+    name: 'Pellucid Road Carriers',
+    contactEmail: 'safety@pellucid-road.example',
+    isHomeCarrier: false,
+  },
   { scac: 'VNTA', name: 'Vantorra Haulage', contactEmail: 'dispatch@vantorra.example', isHomeCarrier: false },
 ];
 
 const TERMINALS = [
-  { code: 'RVB', name: 'Riverbend terminal', timeZone: 'America/Chicago', rows: ['A', 'B', 'C', 'D', 'E', 'F'], slotsPerRow: 24, doors: 12 },
-  { code: 'HMS', name: 'High Mesa terminal', timeZone: 'America/Denver', rows: ['A', 'B', 'C', 'D'], slotsPerRow: 16, doors: 8 },
+  {
+    code: 'RVB',
+    name: 'Riverbend terminal',
+    timeZone: 'America/Chicago',
+    rows: ['A', 'B', 'C', 'D', 'E', 'F'],
+    slotsPerRow: 24,
+    doors: 12,
+  },
+  {
+    code: 'HMS',
+    name: 'High Mesa terminal',
+    timeZone: 'America/Denver',
+    rows: ['A', 'B', 'C', 'D'],
+    slotsPerRow: 16,
+    doors: 8,
+  },
 ];
 
 const EXTRA_DRIVERS = [
@@ -41,7 +95,11 @@ const EXTRA_DRIVERS = [
 const EXTRA_DRIVER_PIN = '1357';
 
 /** Repair prices, in cents (invented demo figures, not a market survey). */
-const RATES: { itemPattern: string; condition: 'minor' | 'damaged' | 'unsafe' | 'missing'; amountCents: number }[] = [
+const RATES: {
+  itemPattern: string;
+  condition: 'minor' | 'damaged' | 'unsafe' | 'missing';
+  amountCents: number;
+}[] = [
   { itemPattern: 'side', condition: 'damaged', amountCents: 85_000 },
   { itemPattern: 'side', condition: 'unsafe', amountCents: 160_000 },
   // item keys are left_side.* / right_side.*: rates apply to dot-separated key prefixes (lib/desk/estimate.ts)
@@ -77,7 +135,10 @@ export function demoVin(serial: number, yearCode: string): string {
   return vin.join('');
 }
 
-async function upsertBy<T extends Record<string, unknown>>(insert: () => Promise<T[]>, find: () => Promise<T[]>): Promise<T> {
+async function upsertBy<T extends Record<string, unknown>>(
+  insert: () => Promise<T[]>,
+  find: () => Promise<T[]>,
+): Promise<T> {
   const [row] = await insert();
   if (row) return row;
   const [existing] = await find();
@@ -100,18 +161,35 @@ export async function seed() {
   const terminalIds: Record<string, string> = {};
   for (const t of TERMINALS) {
     const row = await upsertBy(
-      () => db.insert(terminals).values({ code: t.code, name: t.name, timeZone: t.timeZone }).onConflictDoNothing().returning({ id: terminals.id }),
+      () =>
+        db
+          .insert(terminals)
+          .values({ code: t.code, name: t.name, timeZone: t.timeZone })
+          .onConflictDoNothing()
+          .returning({ id: terminals.id }),
       () => db.select({ id: terminals.id }).from(terminals).where(eq(terminals.code, t.code)),
     );
     terminalIds[t.code] = row.id;
     await db
       .insert(policies)
-      .values({ terminalId: row.id, data: { ...defaultPolicy, freeTimeHours: 48, disputeWindowDays: 14, lowFuelEighths: 4 } })
+      .values({
+        terminalId: row.id,
+        data: { ...defaultPolicy, freeTimeHours: 48, disputeWindowDays: 14, lowFuelEighths: 4 },
+      })
       .onConflictDoNothing();
     for (const [i, name] of t.rows.entries()) {
       const r = await upsertBy(
-        () => db.insert(yardRows).values({ terminalId: row.id, name: `Row ${name}`, sortOrder: i }).onConflictDoNothing().returning({ id: yardRows.id }),
-        () => db.select({ id: yardRows.id }).from(yardRows).where(and(eq(yardRows.terminalId, row.id), eq(yardRows.name, `Row ${name}`))),
+        () =>
+          db
+            .insert(yardRows)
+            .values({ terminalId: row.id, name: `Row ${name}`, sortOrder: i })
+            .onConflictDoNothing()
+            .returning({ id: yardRows.id }),
+        () =>
+          db
+            .select({ id: yardRows.id })
+            .from(yardRows)
+            .where(and(eq(yardRows.terminalId, row.id), eq(yardRows.name, `Row ${name}`))),
       );
       const slots = Array.from({ length: t.slotsPerRow }, (_, s) => ({
         terminalId: row.id,
@@ -149,7 +227,14 @@ export async function seed() {
   for (const d of EXTRA_DRIVERS) {
     await db
       .insert(users)
-      .values({ name: d.name, driverNumber: d.driverNumber, role: 'driver', carrierId: carrierIds[d.carrier], homeTerminalId: home, secretHash: await hash(EXTRA_DRIVER_PIN) })
+      .values({
+        name: d.name,
+        driverNumber: d.driverNumber,
+        role: 'driver',
+        carrierId: carrierIds[d.carrier],
+        homeTerminalId: home,
+        secretHash: await hash(EXTRA_DRIVER_PIN),
+      })
       .onConflictDoNothing();
   }
 

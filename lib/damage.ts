@@ -5,7 +5,10 @@ import { severityOf, type Condition, type FindingKind } from './engine';
 
 const MINOR = severityOf('minor') ?? 1;
 
-export function isChargeableDamage(kind: FindingKind | string, current: Condition | null | undefined): boolean {
+export function isChargeableDamage(
+  kind: FindingKind | string,
+  current: Condition | null | undefined,
+): boolean {
   if (kind !== 'new' && kind !== 'worse') return false;
   const s = current ? severityOf(current) : null;
   return s !== null && s > MINOR;

@@ -3,19 +3,46 @@
 import type { HashableHandoff } from './handoff-hash';
 
 export type HandoffHashRow = {
-  id: string; trailerId: string; terminalId: string; kind: string; level: string; carrierId: string;
-  driverId: string | null; driverName: string; tractorNumber: string; recordedById: string; isLoaded: boolean;
-  sealNumber: string | null; fuelEighths: number | null; isReeferOn: boolean | null; setpointTenthsF: number | null;
-  returnAirTenthsF: number | null; engineHoursTenths: number | null; pretripResult: string | null; pretripAt: Date | null;
-  note: string | null; occurredAt: Date; correctsHandoffId: string | null; verificationCode: string; prevHash: string | null;
+  id: string;
+  trailerId: string;
+  terminalId: string;
+  kind: string;
+  level: string;
+  carrierId: string;
+  driverId: string | null;
+  driverName: string;
+  tractorNumber: string;
+  recordedById: string;
+  isLoaded: boolean;
+  sealNumber: string | null;
+  fuelEighths: number | null;
+  isReeferOn: boolean | null;
+  setpointTenthsF: number | null;
+  returnAirTenthsF: number | null;
+  engineHoursTenths: number | null;
+  pretripResult: string | null;
+  pretripAt: Date | null;
+  note: string | null;
+  occurredAt: Date;
+  correctsHandoffId: string | null;
+  verificationCode: string;
+  prevHash: string | null;
 };
 export type HandoffItemHashRow = {
-  itemKey: string; condition: string; treadThirtySeconds: number | null; isHoldingAir: boolean | null; note: string | null;
+  itemKey: string;
+  condition: string;
+  treadThirtySeconds: number | null;
+  isHoldingAir: boolean | null;
+  note: string | null;
   details?: Record<string, boolean | string> | null;
 };
 
 /** The hash input of one handoff from its stored rows and the SHA-256 of its stored photos. */
-export function hashableFromRows(h: HandoffHashRow, items: HandoffItemHashRow[], photoSha256s: string[]): HashableHandoff {
+export function hashableFromRows(
+  h: HandoffHashRow,
+  items: HandoffItemHashRow[],
+  photoSha256s: string[],
+): HashableHandoff {
   return {
     content: {
       id: h.id,

@@ -18,17 +18,43 @@ export type Draft = {
   isLoaded: boolean | null;
   sealNumber: string;
   fuelEighths: number | null;
-  reefer: { isUnitOn: boolean | null; setpointF: string; returnAirF: string; engineHours: string; preTripResult: 'pass' | 'fail' | 'not_run' | null; preTripAt: string };
+  reefer: {
+    isUnitOn: boolean | null;
+    setpointF: string;
+    returnAirF: string;
+    engineHours: string;
+    preTripResult: 'pass' | 'fail' | 'not_run' | null;
+    preTripAt: string;
+  };
   items: Record<string, DraftItem>;
   spotId: string | null;
   note: string;
 };
 
-export function newDraft(init: { idempotencyKey: string; trailerId: string; kind: 'drop' | 'hook'; carrierId: string; driverName: string }): Draft {
+export function newDraft(init: {
+  idempotencyKey: string;
+  trailerId: string;
+  kind: 'drop' | 'hook';
+  carrierId: string;
+  driverName: string;
+}): Draft {
   return {
-    ...init, tractorNumber: '', isLoaded: null, sealNumber: '', fuelEighths: null,
-    reefer: { isUnitOn: null, setpointF: '', returnAirF: '', engineHours: '', preTripResult: null, preTripAt: '' },
-    items: {}, spotId: null, note: '',
+    ...init,
+    tractorNumber: '',
+    isLoaded: null,
+    sealNumber: '',
+    fuelEighths: null,
+    reefer: {
+      isUnitOn: null,
+      setpointF: '',
+      returnAirF: '',
+      engineHours: '',
+      preTripResult: null,
+      preTripAt: '',
+    },
+    items: {},
+    spotId: null,
+    note: '',
   };
 }
 
@@ -43,15 +69,28 @@ export function draftToInput(d: Draft, isReefer: boolean): unknown {
     items[key] = { ...rest, ...(photos?.length ? { photoIds: photos.map((p) => p.id) } : {}) };
   }
   return {
-    idempotencyKey: d.idempotencyKey, trailerId: d.trailerId, kind: d.kind, carrierId: d.carrierId,
-    driverName: d.driverName, tractorNumber: d.tractorNumber, isLoaded: d.isLoaded ?? undefined,
-    sealNumber: d.sealNumber, fuelEighths: isReefer ? d.fuelEighths : null,
-    reefer: isReefer ? {
-      isUnitOn: d.reefer.isUnitOn, setpointF: num(d.reefer.setpointF), returnAirF: num(d.reefer.returnAirF),
-      engineHours: num(d.reefer.engineHours), preTripResult: d.reefer.preTripResult ?? undefined,
-      preTripAt: d.reefer.preTripAt ? new Date(d.reefer.preTripAt).toISOString() : null,
-    } : null,
-    items, spotId: d.spotId, note: d.note,
+    idempotencyKey: d.idempotencyKey,
+    trailerId: d.trailerId,
+    kind: d.kind,
+    carrierId: d.carrierId,
+    driverName: d.driverName,
+    tractorNumber: d.tractorNumber,
+    isLoaded: d.isLoaded ?? undefined,
+    sealNumber: d.sealNumber,
+    fuelEighths: isReefer ? d.fuelEighths : null,
+    reefer: isReefer
+      ? {
+          isUnitOn: d.reefer.isUnitOn,
+          setpointF: num(d.reefer.setpointF),
+          returnAirF: num(d.reefer.returnAirF),
+          engineHours: num(d.reefer.engineHours),
+          preTripResult: d.reefer.preTripResult ?? undefined,
+          preTripAt: d.reefer.preTripAt ? new Date(d.reefer.preTripAt).toISOString() : null,
+        }
+      : null,
+    items,
+    spotId: d.spotId,
+    note: d.note,
   };
 }
 
@@ -61,7 +100,8 @@ export function itemChange(current: DraftItem | undefined, last: LastSeen | unde
 }
 
 /** New or worse damage past cosmetic needs a photo and a note (the server applies the same rule). */
-export const needsEvidence = (k: FindingKind, current: DraftItem | undefined) => isChargeableDamage(k, current?.condition);
+export const needsEvidence = (k: FindingKind, current: DraftItem | undefined) =>
+  isChargeableDamage(k, current?.condition);
 
 /** "Same as last": the last observation's condition and kind fields, without its note or photos. */
 export function sameAsLast(item: ChecklistItem, last: LastSeen | undefined): DraftItem | null {

@@ -31,7 +31,8 @@ export function isLockNotAvailable(error: unknown): boolean {
 export function isUniqueViolation(error: unknown, constraint?: string): boolean {
   for (let e: unknown = error, depth = 0; e && depth < 4; depth++) {
     const pg = e as { code?: string; constraint?: string };
-    if (typeof e === 'object' && pg.code === '23505' && (!constraint || pg.constraint === constraint)) return true;
+    if (typeof e === 'object' && pg.code === '23505' && (!constraint || pg.constraint === constraint))
+      return true;
     e = (e as { cause?: unknown }).cause;
   }
   return false;

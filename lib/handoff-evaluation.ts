@@ -1,9 +1,19 @@
 // What the engine says about one handoff, shaped for storage: finding rows, holds, and whether
 // a case opens. Pure: the submit service loads the inputs and writes the output.
 import {
-  assessFuel, attributeFindings, compareInspection, damageFindings, evaluateHolds,
-  type Attribution, type Checklist, type EnginePolicy, type FuelAssessment, type HandoffEvent, type Hold,
-  type ItemFinding, type TimelineEvent,
+  assessFuel,
+  attributeFindings,
+  compareInspection,
+  damageFindings,
+  evaluateHolds,
+  type Attribution,
+  type Checklist,
+  type EnginePolicy,
+  type FuelAssessment,
+  type HandoffEvent,
+  type Hold,
+  type ItemFinding,
+  type TimelineEvent,
 } from './engine';
 import { isChargeableDamage } from './damage';
 
@@ -45,11 +55,16 @@ function attributionRow(f: ItemFinding, a: Attribution | undefined, terminalName
     previousCondition: f.previous,
     previousEventId: f.previousEventId,
     responsibleCarrierId: responsible?.type === 'carrier' ? responsible.carrierId : null,
-    responsibleParty: responsible ? (responsible.type === 'carrier' ? responsible.carrierName : terminalName) : null,
+    responsibleParty: responsible
+      ? responsible.type === 'carrier'
+        ? responsible.carrierName
+        : terminalName
+      : null,
     confidence: a ? (a.confidence ?? 'none') : null,
     candidates: a ? a.candidates : null,
-    reason: a?.reason
-      ?? (f.finding === 'repaired'
+    reason:
+      a?.reason ??
+      (f.finding === 'repaired'
         ? `${f.label}: was ${f.previous}, now ${f.current}: repaired since the last inspection.`
         : `${f.label}: ${f.finding}.`),
     isDamage: isChargeableDamage(f.finding, f.current),
@@ -58,21 +73,38 @@ function attributionRow(f: ItemFinding, a: Attribution | undefined, terminalName
 
 function ruleRow(itemKey: string, kind: string, reason: string): FindingRow {
   return {
-    itemKey, kind, condition: null, previousCondition: null, previousEventId: null, responsibleCarrierId: null,
-    responsibleParty: null, confidence: null, candidates: null, reason, isDamage: false,
+    itemKey,
+    kind,
+    condition: null,
+    previousCondition: null,
+    previousEventId: null,
+    responsibleCarrierId: null,
+    responsibleParty: null,
+    confidence: null,
+    candidates: null,
+    reason,
+    isDamage: false,
   };
 }
 
 /** Runs compare, attribution, fuel and hold rules on `current` against `history` (oldest first, without current). */
 export function evaluateHandoff(input: {
-  checklist: Checklist; history: readonly TimelineEvent[]; current: HandoffEvent; policy: EnginePolicy;
-  now: Date; timeZone: string; terminalName: string;
+  checklist: Checklist;
+  history: readonly TimelineEvent[];
+  current: HandoffEvent;
+  policy: EnginePolicy;
+  now: Date;
+  timeZone: string;
+  terminalName: string;
 }): Evaluation {
   const { checklist, history, current, policy, now, timeZone, terminalName } = input;
   const compared = compareInspection({ checklist, history, current });
   const attributions = attributeFindings({ history, current, findings: compared, timeZone, terminalName });
   const byKey = new Map(attributions.map((a) => [a.itemKey, a]));
-  const fuel = checklist.spec.kind === 'reefer' ? assessFuel({ trailer: checklist.spec, history, current, policy }) : null;
+  const fuel =
+    checklist.spec.kind === 'reefer'
+      ? assessFuel({ trailer: checklist.spec, history, current, policy })
+      : null;
   const holds = evaluateHolds({ checklist, event: current, now, policy });
 
   const rows: FindingRow[] = [];
@@ -83,25 +115,38 @@ export function evaluateHandoff(input: {
     }
   }
   if (fuel?.isShort) {
-    rows.push(ruleRow('readings.fuel', 'fuel_short',
-      `Fuel ${frac(fuel.eighths)} (${gal(fuel.gallons)} of ${fuel.tankGallons} gal); policy asks ${frac(fuel.requiredEighths ?? 8)} `
-      + `at a ${current.type}: ${frac(fuel.shortfallEighths)} short (${gal(fuel.shortfallGallons)}).`));
+    rows.push(
+      ruleRow(
+        'readings.fuel',
+        'fuel_short',
+        `Fuel ${frac(fuel.eighths)} (${gal(fuel.gallons)} of ${fuel.tankGallons} gal); policy asks ${frac(fuel.requiredEighths ?? 8)} ` +
+          `at a ${current.type}: ${frac(fuel.shortfallEighths)} short (${gal(fuel.shortfallGallons)}).`,
+      ),
+    );
   }
   if (fuel?.isPossibleLeakOrTheft) {
-    rows.push(ruleRow('readings.fuel', 'fuel_unexplained_drop',
-      `Fuel fell ${gal(fuel.dropGallons ?? 0)} since the last reading; ${fuel.engineHoursRun} engine hours explain `
-      + `${gal(fuel.expectedBurnGallons ?? 0)}. Possible leak or theft: check the tank.`));
+    rows.push(
+      ruleRow(
+        'readings.fuel',
+        'fuel_unexplained_drop',
+        `Fuel fell ${gal(fuel.dropGallons ?? 0)} since the last reading; ${fuel.engineHoursRun} engine hours explain ` +
+          `${gal(fuel.expectedBurnGallons ?? 0)}. Possible leak or theft: check the tank.`,
+      ),
+    );
   }
   for (const h of holds) {
-    if (h.ruleKey === 'pin_not_engaged' || h.ruleKey === 'spare_unusable') rows.push(ruleRow(h.itemKey ?? '', h.ruleKey, h.reason));
+    if (h.ruleKey === 'pin_not_engaged' || h.ruleKey === 'spare_unusable')
+      rows.push(ruleRow(h.itemKey ?? '', h.ruleKey, h.reason));
   }
 
   const damage = damageFindings(compared).filter((f) => isChargeableDamage(f.finding, f.current));
   const damageKeys = damage.map((f) => f.itemKey);
-  const parties = new Set(damage.map((f) => {
-    const r = byKey.get(f.itemKey)?.responsible;
-    return r?.type === 'carrier' && byKey.get(f.itemKey)?.status === 'single' ? r.carrierId : '';
-  }));
+  const parties = new Set(
+    damage.map((f) => {
+      const r = byKey.get(f.itemKey)?.responsible;
+      return r?.type === 'carrier' && byKey.get(f.itemKey)?.status === 'single' ? r.carrierId : '';
+    }),
+  );
   const [only] = [...parties];
   const proposedCarrierId = parties.size === 1 && only ? only : null;
   return { compared, attributions, fuel, holds, rows, damageKeys, proposedCarrierId };

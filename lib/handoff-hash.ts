@@ -7,7 +7,11 @@ import { createHash } from 'node:crypto';
 export type HashableHandoff = {
   content: Record<string, string | number | boolean | null>;
   items: {
-    itemKey: string; condition: string; treadThirtySeconds: number | null; isHoldingAir: boolean | null; note: string | null;
+    itemKey: string;
+    condition: string;
+    treadThirtySeconds: number | null;
+    isHoldingAir: boolean | null;
+    note: string | null;
     /** Other observation fields (pins, spare, hinges, skin, leaks); absent keys leave older hashes unchanged. */
     details?: Record<string, boolean | string> | null;
   }[];
@@ -37,15 +41,23 @@ export function handoffContentHash(h: HashableHandoff): string {
   return sha256Hex(canonicalJson({ content: h.content, items, photoSha256s: photos, prevHash: h.prevHash }));
 }
 
-export type ChainLink = { id: string; storedHash: string; storedPrevHash: string | null; recomputed: HashableHandoff };
-export type ChainCheck = { ok: true; count: number } | { ok: false; brokenAt: string; why: 'content_changed' | 'link_broken' };
+export type ChainLink = {
+  id: string;
+  storedHash: string;
+  storedPrevHash: string | null;
+  recomputed: HashableHandoff;
+};
+export type ChainCheck =
+  { ok: true; count: number } | { ok: false; brokenAt: string; why: 'content_changed' | 'link_broken' };
 
 /** Verifies a trailer's chain, oldest first: each stored hash matches its content and points at the one before. */
 export function verifyChain(links: ChainLink[]): ChainCheck {
   let prev: string | null = null;
   for (const link of links) {
-    if (link.storedPrevHash !== prev || link.recomputed.prevHash !== prev) return { ok: false, brokenAt: link.id, why: 'link_broken' };
-    if (handoffContentHash(link.recomputed) !== link.storedHash) return { ok: false, brokenAt: link.id, why: 'content_changed' };
+    if (link.storedPrevHash !== prev || link.recomputed.prevHash !== prev)
+      return { ok: false, brokenAt: link.id, why: 'link_broken' };
+    if (handoffContentHash(link.recomputed) !== link.storedHash)
+      return { ok: false, brokenAt: link.id, why: 'content_changed' };
     prev = link.storedHash;
   }
   return { ok: true, count: links.length };

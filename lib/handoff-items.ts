@@ -3,11 +3,22 @@ import { OBSERVATION_FIELDS, type Checklist, type ItemObservation, type ItemObse
 import type { ItemObservationInput } from './validation/handoffs';
 
 export type ItemRowInput = {
-  itemKey: string; condition: Exclude<ItemObservation['condition'], 'not_checked'>; treadThirtySeconds: number | null;
-  isHoldingAir: boolean | null; note: string | null; details: Record<string, boolean | string> | null;
+  itemKey: string;
+  condition: Exclude<ItemObservation['condition'], 'not_checked'>;
+  treadThirtySeconds: number | null;
+  isHoldingAir: boolean | null;
+  note: string | null;
+  details: Record<string, boolean | string> | null;
 };
 
-const DETAIL_FIELDS = ['isEngaged', 'isMounted', 'isLocking', 'isInsulationShowing', 'isLeaking', 'cleanliness'] as const;
+const DETAIL_FIELDS = [
+  'isEngaged',
+  'isMounted',
+  'isLocking',
+  'isInsulationShowing',
+  'isLeaking',
+  'cleanliness',
+] as const;
 
 const REQUIRED: Partial<Record<string, { field: keyof ItemObservation; message: string }[]>> = {
   pin: [{ field: 'isEngaged', message: 'Say whether this pin is engaged.' }],
@@ -35,7 +46,7 @@ export function normalizeItems(checklist: Checklist, items: Record<string, ItemO
   for (const [key, o] of Object.entries(items)) {
     const item = byKey.get(key);
     if (!item) {
-      fieldErrors[`items.${key}`] = ['This item is not on this trailer\'s checklist.'];
+      fieldErrors[`items.${key}`] = ["This item is not on this trailer's checklist."];
       continue;
     }
     if (o.condition === 'not_checked') continue;
@@ -64,7 +75,11 @@ export function normalizeItems(checklist: Checklist, items: Record<string, ItemO
 }
 
 /** New or worse damage needs a note and at least one photo. */
-export function damageEvidenceErrors(damageKeys: string[], rows: ItemRowInput[], photoIds: Map<string, string[]>) {
+export function damageEvidenceErrors(
+  damageKeys: string[],
+  rows: ItemRowInput[],
+  photoIds: Map<string, string[]>,
+) {
   const errors: Record<string, string[]> = {};
   for (const key of damageKeys) {
     const row = rows.find((r) => r.itemKey === key);

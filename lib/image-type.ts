@@ -9,7 +9,8 @@ export function isAllowedImageType(t: string): t is ImageType {
   return (ALLOWED_IMAGE_TYPES as readonly string[]).includes(t);
 }
 
-const starts = (b: Uint8Array, sig: number[], at = 0) => b.length >= at + sig.length && sig.every((v, i) => b[at + i] === v);
+const starts = (b: Uint8Array, sig: number[], at = 0) =>
+  b.length >= at + sig.length && sig.every((v, i) => b[at + i] === v);
 
 /**
  * JPEG: SOI marker FF D8 then a marker FF; PNG: the 8-byte signature 89 50 4E 47 0D 0A 1A 0A;
@@ -18,6 +19,7 @@ const starts = (b: Uint8Array, sig: number[], at = 0) => b.length >= at + sig.le
 export function sniffImageType(bytes: Uint8Array): ImageType | null {
   if (starts(bytes, [0xff, 0xd8, 0xff])) return 'image/jpeg';
   if (starts(bytes, [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])) return 'image/png';
-  if (starts(bytes, [0x52, 0x49, 0x46, 0x46]) && starts(bytes, [0x57, 0x45, 0x42, 0x50], 8)) return 'image/webp';
+  if (starts(bytes, [0x52, 0x49, 0x46, 0x46]) && starts(bytes, [0x57, 0x45, 0x42, 0x50], 8))
+    return 'image/webp';
   return null;
 }

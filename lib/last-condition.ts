@@ -10,7 +10,11 @@ export type LastSeen = {
 };
 
 /** Per item, the latest drop, hook or walk that inspected it (not_checked never counts). Timeline oldest first. */
-export function lastKnownCondition(checklist: Checklist, timeline: readonly TimelineEvent[], showDriverNames: boolean) {
+export function lastKnownCondition(
+  checklist: Checklist,
+  timeline: readonly TimelineEvent[],
+  showDriverNames: boolean,
+) {
   const out: Record<string, LastSeen> = {};
   const keys = checklist.items.filter((i) => i.kind !== 'reading').map((i) => i.key);
   for (let i = timeline.length - 1; i >= 0; i--) {
@@ -20,9 +24,10 @@ export function lastKnownCondition(checklist: Checklist, timeline: readonly Time
       if (out[key]) continue;
       const o = e.items[key];
       if (!o || o.condition === 'not_checked') continue;
-      const by = e.type === 'walk'
-        ? `yard walk${showDriverNames && e.jockeyName ? ` by ${e.jockeyName}` : ''}`
-        : `${e.type} by ${showDriverNames && e.party.driverName ? `${e.party.driverName}, ` : ''}${e.party.carrierName}`;
+      const by =
+        e.type === 'walk'
+          ? `yard walk${showDriverNames && e.jockeyName ? ` by ${e.jockeyName}` : ''}`
+          : `${e.type} by ${showDriverNames && e.party.driverName ? `${e.party.driverName}, ` : ''}${e.party.carrierName}`;
       const { photoIds: _p, note: _n, ...observation } = o;
       out[key] = { observation, at: e.at.toISOString(), eventType: e.type, by };
     }
@@ -36,7 +41,12 @@ export function lastReadings(timeline: readonly TimelineEvent[]) {
   for (let i = timeline.length - 1; i >= 0; i--) {
     const e = timeline[i];
     if (e.type === 'drop' || e.type === 'hook') {
-      return { at: e.at.toISOString(), fuelEighths: e.fuelEighths ?? null, isUnitOn: e.reefer?.isUnitOn ?? null, setpointF: e.reefer?.setpointF ?? null };
+      return {
+        at: e.at.toISOString(),
+        fuelEighths: e.fuelEighths ?? null,
+        isUnitOn: e.reefer?.isUnitOn ?? null,
+        setpointF: e.reefer?.setpointF ?? null,
+      };
     }
   }
   return null;

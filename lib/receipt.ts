@@ -65,13 +65,18 @@ export function receiptText(v: ReceiptView, verifyUrl: string): string {
     `${v.isLoaded ? 'Loaded' : 'Empty'}${v.sealNumber ? `, seal ${v.sealNumber}` : ''}${v.fuelEighths !== null ? `; fuel ${v.fuelEighths}/8` : ''}${v.spotLabel ? `; slot ${v.spotLabel}` : ''}`,
     ``,
     `Findings (${v.findings.length}):`,
-    ...(v.findings.length ? v.findings.map((f) => `- ${FINDING_WORDS[f.kind] ?? f.kind}: ${f.reason}`) : ['- none: no change from the last record']),
+    ...(v.findings.length
+      ? v.findings.map((f) => `- ${FINDING_WORDS[f.kind] ?? f.kind}: ${f.reason}`)
+      : ['- none: no change from the last record']),
     ``,
     `Holds (${v.holds.length}):`,
     ...(v.holds.length ? v.holds.map((h) => `- ${holdTitle(h)}. ${h.reason}`) : ['- none']),
   ];
   if (v.holds.some((h) => h.severity === 'out_of_service')) {
-    lines.push('', 'An out-of-service trailer is not moved on a public road until a qualified technician has repaired it.');
+    lines.push(
+      '',
+      'An out-of-service trailer is not moved on a public road until a qualified technician has repaired it.',
+    );
   }
   lines.push(
     '',

@@ -27,26 +27,57 @@ const fx = await import('../tests/support/yard-fixture');
 const terminalId = await fx.ensureTerminal(db, 'BEN');
 const spotIds: string[] = [];
 for (let r = 0; r < ROWS; r++) {
-  const { spots } = await fx.createRowWithSlots(db, terminalId, `Row ${String(r + 1).padStart(2, '0')}`, SLOTS_PER_ROW, r);
+  const { spots } = await fx.createRowWithSlots(
+    db,
+    terminalId,
+    `Row ${String(r + 1).padStart(2, '0')}`,
+    SLOTS_PER_ROW,
+    r,
+  );
   spotIds.push(...spots.map((s) => s.id));
 }
 for (let i = 0; i < OCCUPIED; i += 500) {
-  await fx.placeTrailers(db, terminalId, fx.uniqueTag(), spotIds.slice(i, Math.min(i + 500, OCCUPIED)), { fuelEighths: i % 8 });
+  await fx.placeTrailers(db, terminalId, fx.uniqueTag(), spotIds.slice(i, Math.min(i + 500, OCCUPIED)), {
+    fuelEighths: i % 8,
+  });
 }
-await db.insert(users).values({ name: 'Bench jockey', role: 'jockey', email: JOCKEY.email, secretHash: await hash(JOCKEY.password, 10), homeTerminalId: terminalId });
+await db
+  .insert(users)
+  .values({
+    name: 'Bench jockey',
+    role: 'jockey',
+    email: JOCKEY.email,
+    secretHash: await hash(JOCKEY.password, 10),
+    homeTerminalId: terminalId,
+  });
 await pool.end();
 
-const server = spawn('node_modules/.bin/next', ['start', '-p', String(PORT)], { env: process.env, stdio: 'ignore' });
+const server = spawn('node_modules/.bin/next', ['start', '-p', String(PORT)], {
+  env: process.env,
+  stdio: 'ignore',
+});
 const base = `http://localhost:${PORT}`;
 try {
   for (let i = 0; ; i++) {
-    try { if ((await fetch(`${base}/api/health`)).ok) break; } catch { /* not up yet */ }
+    try {
+      if ((await fetch(`${base}/api/health`)).ok) break;
+    } catch {
+      /* not up yet */
+    }
     if (i > 120) throw new Error('next start did not come up; run `next build` first');
     await new Promise((r) => setTimeout(r, 500));
   }
   const browser = await chromium.launch({
     executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+    ],
   });
   const page = await (await browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
   await page.goto(`${base}/login`);
@@ -63,21 +94,29 @@ try {
     await page.goto(`${base}/yard`, { waitUntil: 'commit' });
     // performance.now() counts from this document's navigation start
     const handle = await page.waitForFunction(
-      (n) => document.querySelectorAll('#yard-map li').length >= n ? performance.now() : false,
-      total, { polling: 'raf', timeout: 30_000 },
+      (n) => (document.querySelectorAll('#yard-map li').length >= n ? performance.now() : false),
+      total,
+      { polling: 'raf', timeout: 30_000 },
     );
     const ms = (await handle.jsonValue()) as number;
     const nav = await page.evaluate(() => {
       const e = performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming;
       return { firstByte: e.responseStart, lastByte: e.responseEnd, bytes: e.transferSize };
     });
-    if (run > 0) { times.push(ms); parts.push(nav); } // run 0 warms the server and the browser cache
+    if (run > 0) {
+      times.push(ms);
+      parts.push(nav);
+    } // run 0 warms the server and the browser cache
   }
   // the floor on this machine right now: a small yard page in the same browser
   const floor: number[] = [];
   for (let i = 0; i < 5; i++) {
     await page.goto(`${base}/yard/tasks`, { waitUntil: 'commit' });
-    const h = await page.waitForFunction(() => document.querySelector('h1') ? performance.now() : false, null, { polling: 'raf' });
+    const h = await page.waitForFunction(
+      () => (document.querySelector('h1') ? performance.now() : false),
+      null,
+      { polling: 'raf' },
+    );
     floor.push((await h.jsonValue()) as number);
   }
   const api: number[] = [];
@@ -91,11 +130,19 @@ try {
   const median = times[Math.floor(times.length / 2)];
   const worst = times[times.length - 1];
   console.log(`board render, ${total} slots (${OCCUPIED} occupied), ${times.length} runs after one warm-up`);
-  console.log(`  median ${median.toFixed(0)} ms · best ${times[0].toFixed(0)} ms · worst ${worst.toFixed(0)} ms`);
+  console.log(
+    `  median ${median.toFixed(0)} ms · best ${times[0].toFixed(0)} ms · worst ${worst.toFixed(0)} ms`,
+  );
   const mid = (xs: number[]) => xs.sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-  console.log(`  median first byte ${mid(parts.map((p) => p.firstByte)).toFixed(0)} ms · last byte ${mid(parts.map((p) => p.lastByte)).toFixed(0)} ms · ${(mid(parts.map((p) => p.bytes)) / 1024).toFixed(0)} KiB`);
-  console.log(`  /api/yard/board (same data as JSON) median ${mid(api).toFixed(0)} ms · small page /yard/tasks median ${mid(floor).toFixed(0)} ms`);
-  console.log(`  median / 1 s target = ${(median / TARGET_MS).toFixed(2)} · worst / target = ${(worst / TARGET_MS).toFixed(2)} · ${worst < TARGET_MS ? 'under' : 'OVER'} the target`);
+  console.log(
+    `  median first byte ${mid(parts.map((p) => p.firstByte)).toFixed(0)} ms · last byte ${mid(parts.map((p) => p.lastByte)).toFixed(0)} ms · ${(mid(parts.map((p) => p.bytes)) / 1024).toFixed(0)} KiB`,
+  );
+  console.log(
+    `  /api/yard/board (same data as JSON) median ${mid(api).toFixed(0)} ms · small page /yard/tasks median ${mid(floor).toFixed(0)} ms`,
+  );
+  console.log(
+    `  median / 1 s target = ${(median / TARGET_MS).toFixed(2)} · worst / target = ${(worst / TARGET_MS).toFixed(2)} · ${worst < TARGET_MS ? 'under' : 'OVER'} the target`,
+  );
 } finally {
   server.kill('SIGTERM');
 }

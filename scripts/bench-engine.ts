@@ -4,12 +4,21 @@
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
 import { attributeFindings, buildChecklist, compareInspection, reconcileWalk } from '../lib/engine';
-import type { BoardSlot, HandoffEvent, ItemObservations, Party, TimelineEvent, WalkScan } from '../lib/engine';
+import type {
+  BoardSlot,
+  HandoffEvent,
+  ItemObservations,
+  Party,
+  TimelineEvent,
+  WalkScan,
+} from '../lib/engine';
 
 const checklist = buildChecklist({ kind: 'reefer', hingesPerDoor: 4, axles: 2, tireLayout: 'dual' });
 const keys = checklist.items.filter((i) => i.kind !== 'reading').map((i) => i.key);
 const carriers: Party[] = Array.from({ length: 12 }, (_, i) => ({
-  carrierId: `c${i}`, carrierName: `Bench Carrier ${i}`, driverName: `Driver ${i}`,
+  carrierId: `c${i}`,
+  carrierName: `Bench Carrier ${i}`,
+  driverName: `Driver ${i}`,
 }));
 // Worst case for the interval: this item is inspected only at the very first handoff.
 const RARE = 'interior.air_chute'; // the last key, so walks (keys[i % (length − 1)]) never cover it
@@ -33,9 +42,22 @@ function history(n: number): TimelineEvent[] {
     const phase = i % 4;
     const items = allOk(i === 0 ? null : RARE);
     if (phase === 0) out.push({ type: 'drop', id: `e${i}`, at, party, items, fuelEighths: 8 });
-    else if (phase === 1) out.push({ type: 'walk', id: `e${i}`, at, items: { [keys[i % (keys.length - 1)]]: { condition: 'ok' } } });
+    else if (phase === 1)
+      out.push({
+        type: 'walk',
+        id: `e${i}`,
+        at,
+        items: { [keys[i % (keys.length - 1)]]: { condition: 'ok' } },
+      });
     else if (phase === 2) out.push({ type: 'move', id: `e${i}`, at });
-    else out.push({ type: 'hook', id: `e${i}`, at, party: carriers[(Math.floor(i / 4) + 1) % carriers.length], items });
+    else
+      out.push({
+        type: 'hook',
+        id: `e${i}`,
+        at,
+        party: carriers[(Math.floor(i / 4) + 1) % carriers.length],
+        items,
+      });
   }
   return out;
 }
@@ -62,7 +84,11 @@ function board(n: number): { board: BoardSlot[]; scans: WalkScan[]; rowIds: stri
     if (r < 14) scans.push({ slotId: `S${i}`, trailerId: i % 10 === 9 ? null : `T${i}`, code: `U${i}` });
     else if (r === 14) scans.push({ slotId: `S${i}`, trailerId: `T${i - 1}`, code: `U${i - 1}` });
     else if (r === 15) scans.push({ slotId: `S${i}`, trailerId: null, code: `X${i}` });
-    else if (r === 16) scans.push({ slotId: `S${i}`, trailerId: `T${i}`, code: `U${i}` }, { slotId: `S${i}`, trailerId: `T${i}`, code: `U${i}` });
+    else if (r === 16)
+      scans.push(
+        { slotId: `S${i}`, trailerId: `T${i}`, code: `U${i}` },
+        { slotId: `S${i}`, trailerId: `T${i}`, code: `U${i}` },
+      );
   }
   return { board: b, scans, rowIds: [...rows] };
 }
@@ -71,7 +97,10 @@ function board(n: number): { board: BoardSlot[]; scans: WalkScan[]; rowIds: stri
 setFlagsFromString('--expose-gc');
 const gc = runInNewContext('gc') as () => void;
 
-interface Timing { median: number; min: number }
+interface Timing {
+  median: number;
+  min: number;
+}
 
 function time(fn: () => unknown, runs = 31): Timing {
   for (let i = 0; i < 5; i++) fn();
@@ -103,12 +132,16 @@ function report(name: string, base: number, f: (n: number) => () => unknown): vo
   console.log(`  ${base}: median ${t1.median.toFixed(2)} ms, min ${t1.min.toFixed(2)} ms (${verdict})`);
   console.log(`  ${base * 2}: median ${t2.median.toFixed(2)} ms, min ${t2.min.toFixed(2)} ms`);
   console.log(`  ${base * 4}: median ${t4.median.toFixed(2)} ms, min ${t4.min.toFixed(2)} ms`);
-  console.log(`  linearity (min times): t(2x)/t(1x) ${(t2.min / t1.min).toFixed(2)} (linear 2), `
-    + `t(4x)/t(1x) ${(t4.min / t1.min).toFixed(2)} (linear 4, quadratic 16)`);
+  console.log(
+    `  linearity (min times): t(2x)/t(1x) ${(t2.min / t1.min).toFixed(2)} (linear 2), ` +
+      `t(4x)/t(1x) ${(t4.min / t1.min).toFixed(2)} (linear 4, quadratic 16)`,
+  );
 }
 
 const attributions = compareAndAttribute(10_000)() as ReturnType<typeof attributeFindings>;
-console.log(`sanity: ${attributions.length} attributions; ${attributions.map((a) => `${a.itemKey}=${a.status}`).join(', ')}`);
+console.log(
+  `sanity: ${attributions.length} attributions; ${attributions.map((a) => `${a.itemKey}=${a.status}`).join(', ')}`,
+);
 report('compare + attribute, handoffs in history', 10_000, compareAndAttribute);
 report('reconcile walk, slots', 5_000, (n) => {
   const b = board(n);

@@ -3,12 +3,26 @@
 import { chromium, devices } from '@playwright/test';
 
 const base = process.env.APP_URL ?? 'http://localhost:3000';
-const args = ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'];
+const args = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--no-first-run',
+  '--disable-quic',
+];
 const out = process.env.SHOTS_DIR ?? 'docs/screenshots';
 const only = process.argv[2];
 
-const browser = await chromium.launch({ executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium', args });
-for (const [suffix, options] of [['', { ...devices['Pixel 7'] }], ['-desktop', { viewport: { width: 1366, height: 900 } }]] as const) {
+const browser = await chromium.launch({
+  executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
+  args,
+});
+for (const [suffix, options] of [
+  ['', { ...devices['Pixel 7'] }],
+  ['-desktop', { viewport: { width: 1366, height: 900 } }],
+] as const) {
   const page = await (await browser.newContext({ ...options, baseURL: base })).newPage();
   await page.goto('/login');
   await page.getByRole('tab', { name: 'Terminal staff' }).click();

@@ -27,7 +27,15 @@ const s3 = new S3rver({
 });
 await s3.run();
 
-type Message = { id: number; to: string[]; from: string; subject: string; text: string; html: string; date: string };
+type Message = {
+  id: number;
+  to: string[];
+  from: string;
+  subject: string;
+  text: string;
+  html: string;
+  date: string;
+};
 const inbox: Message[] = [];
 let nextId = 1;
 
@@ -71,8 +79,13 @@ const inboxServer = http.createServer((req, res) => {
     const rows = inbox
       .slice()
       .reverse()
-      .map((m) => `<li><b>${escape(m.subject)}</b> to ${escape(m.to.join(', '))}<pre>${escape(m.text)}</pre></li>`);
-    res.end(`<!doctype html><title>Hitchmark local inbox</title><h1>Local inbox (${inbox.length})</h1><ul>${rows.join('')}</ul>`);
+      .map(
+        (m) =>
+          `<li><b>${escape(m.subject)}</b> to ${escape(m.to.join(', '))}<pre>${escape(m.text)}</pre></li>`,
+      );
+    res.end(
+      `<!doctype html><title>Hitchmark local inbox</title><h1>Local inbox (${inbox.length})</h1><ul>${rows.join('')}</ul>`,
+    );
   }
 });
 inboxServer.listen(fakes.mailHttpPort, '127.0.0.1');

@@ -16,7 +16,10 @@ async function signIn(page: Page) {
   await page.waitForURL(/\/yard$/);
 }
 
-const browser = await chromium.launch({ executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium', args: chromiumArgs });
+const browser = await chromium.launch({
+  executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
+  args: chromiumArgs,
+});
 try {
   const phone = await (await browser.newContext({ ...devices['Pixel 7'] })).newPage();
   await signIn(phone);

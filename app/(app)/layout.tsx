@@ -9,10 +9,16 @@ const SECTIONS: Section[] = ['gate', 'yard', 'desk', 'trailers', 'admin'];
 // The signed-in shell. Not a security check: every page and action checks for itself.
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const user = await requireUser();
-  const links = SECTIONS.filter((s) => canOpen(user.role, s)).map((s) => ({ href: `/${s}`, label: SECTION_LABELS[s] }));
+  const links = SECTIONS.filter((s) => canOpen(user.role, s)).map((s) => ({
+    href: `/${s}`,
+    label: SECTION_LABELS[s],
+  }));
   return (
     <div className="min-h-screen">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper focus:p-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper focus:p-2"
+      >
         Skip to content
       </a>
       <header className="no-print bg-brand text-white">
@@ -27,7 +33,10 @@ export default async function AppLayout({ children }: { children: React.ReactNod
               {user.carrierScac ? ` · ${user.carrierScac}` : ''}
             </span>
             <form action={signOutAction}>
-              <button type="submit" className="min-h-tap whitespace-nowrap rounded-lg border-2 border-white px-3 font-bold">
+              <button
+                type="submit"
+                className="min-h-tap whitespace-nowrap rounded-lg border-2 border-white px-3 font-bold"
+              >
                 Sign out
               </button>
             </form>

@@ -4,7 +4,12 @@ import bcrypt from 'bcryptjs';
 import { redirect } from 'next/navigation';
 import { z } from 'zod';
 import { recordAudit } from '@/db/queries/audit';
-import { clearFailedSignIns, getUserForDriverSignIn, getUserForStaffSignIn, recordFailedSignIn } from '@/db/queries/users';
+import {
+  clearFailedSignIns,
+  getUserForDriverSignIn,
+  getUserForStaffSignIn,
+  recordFailedSignIn,
+} from '@/db/queries/users';
 import { homeFor } from '@/lib/roles';
 import { getSession } from '@/lib/server/session';
 import { lockAfterFailure, secondsLocked } from '@/lib/sign-in-throttle';
@@ -32,14 +37,25 @@ export async function signInAction(_prev: SignInState, formData: FormData): Prom
     return { ok: false, method, fieldErrors: flat.fieldErrors, formError: flat.formErrors[0], values };
   }
   const input = parsed.data;
-  const user = input.method === 'staff' ? await getUserForStaffSignIn(input.email) : await getUserForDriverSignIn(input.driverNumber);
+  const user =
+    input.method === 'staff'
+      ? await getUserForStaffSignIn(input.email)
+      : await getUserForDriverSignIn(input.driverNumber);
   const secret = input.method === 'staff' ? input.password : input.pin;
-  const wrong = input.method === 'staff' ? 'That e-mail and password do not match.' : 'That driver number and PIN do not match.';
+  const wrong =
+    input.method === 'staff'
+      ? 'That e-mail and password do not match.'
+      : 'That driver number and PIN do not match.';
 
   const now = new Date();
   const lockedFor = user ? secondsLocked(user.lockedUntil, now) : 0;
   if (lockedFor > 0) {
-    return { ok: false, method, formError: `Too many failed attempts. Try again in ${lockedFor} seconds.`, values };
+    return {
+      ok: false,
+      method,
+      formError: `Too many failed attempts. Try again in ${lockedFor} seconds.`,
+      values,
+    };
   }
   const matches = await bcrypt.compare(secret, user?.secretHash ?? DUMMY_HASH);
   if (!user || !matches || !user.isActive) {

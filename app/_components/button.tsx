@@ -7,12 +7,21 @@ const styles: Record<Variant, string> = {
   secondary: 'border-2 border-brand bg-paper text-brand hover:bg-brand-light',
   danger: 'bg-danger text-white hover:opacity-90',
 };
-const base = 'inline-flex min-h-tap items-center justify-center gap-2 rounded-lg px-5 text-gate font-bold disabled:cursor-not-allowed';
+const base =
+  'inline-flex min-h-tap items-center justify-center gap-2 rounded-lg px-5 text-gate font-bold disabled:cursor-not-allowed';
 
-export function Button({ variant = 'primary', className = '', ...props }: ComponentProps<'button'> & { variant?: Variant }) {
+export function Button({
+  variant = 'primary',
+  className = '',
+  ...props
+}: ComponentProps<'button'> & { variant?: Variant }) {
   return <button {...props} className={`${base} ${styles[variant]} ${className}`} />;
 }
 
-export function ButtonLink({ variant = 'primary', className = '', ...props }: ComponentProps<typeof Link> & { variant?: Variant }) {
+export function ButtonLink({
+  variant = 'primary',
+  className = '',
+  ...props
+}: ComponentProps<typeof Link> & { variant?: Variant }) {
   return <Link {...props} className={`${base} ${styles[variant]} ${className}`} />;
 }

@@ -11,7 +11,11 @@ export const CAUTIONS = {
 
 export function Caution({ children, title = 'Caution' }: { children: React.ReactNode; title?: string }) {
   return (
-    <aside role="note" aria-label={title} className="rounded-lg border-l-8 border-warn bg-warn-bg p-3 text-gate text-ink">
+    <aside
+      role="note"
+      aria-label={title}
+      className="rounded-lg border-l-8 border-warn bg-warn-bg p-3 text-gate text-ink"
+    >
       <p className="font-bold">⚠ {title}</p>
       <div className="mt-1">{children}</div>
     </aside>

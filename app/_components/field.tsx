@@ -11,7 +11,8 @@ export function Field({
 }: ComponentProps<'input'> & { label: string; name: string; error?: string[]; hint?: string }) {
   const errorId = `${name}-error`;
   const hintId = `${name}-hint`;
-  const describedBy = [hint ? hintId : null, error?.length ? errorId : null].filter(Boolean).join(' ') || undefined;
+  const describedBy =
+    [hint ? hintId : null, error?.length ? errorId : null].filter(Boolean).join(' ') || undefined;
   return (
     <div className={className}>
       <label htmlFor={input.id ?? name} className="block text-gate font-bold">
@@ -46,7 +47,11 @@ export function FieldError({ id, messages }: { id: string; messages?: string[] }
 export function FormError({ message }: { message?: string | null }) {
   return (
     <div aria-live="polite" role="status">
-      {message ? <p className="rounded-lg border-2 border-danger bg-danger-bg p-3 text-gate font-bold text-danger">{message}</p> : null}
+      {message ? (
+        <p className="rounded-lg border-2 border-danger bg-danger-bg p-3 text-gate font-bold text-danger">
+          {message}
+        </p>
+      ) : null}
     </div>
   );
 }

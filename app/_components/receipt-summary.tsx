@@ -10,20 +10,50 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
     <article className="space-y-4" aria-label="Handoff receipt">
       <div className="rounded-lg border-4 border-brand p-3 text-center">
         <p className="text-gate-sm font-bold">Verification code</p>
-        <p className="font-mono text-[2.5rem] font-bold leading-tight tracking-widest" data-testid="verification-code">{formatVerificationCode(r.verificationCode)}</p>
+        <p
+          className="font-mono text-[2.5rem] font-bold leading-tight tracking-widest"
+          data-testid="verification-code"
+        >
+          {formatVerificationCode(r.verificationCode)}
+        </p>
       </div>
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-gate">
-        <dt className="font-bold">Trailer</dt><dd>{r.unitNumber}</dd>
-        <dt className="font-bold">Handoff</dt><dd>{r.kind === 'drop' ? 'Drop (gate in)' : 'Hook (gate out)'}, {r.terminalName}</dd>
-        <dt className="font-bold">When</dt><dd>{formatWhen(r.occurredAt, r.timeZone)}</dd>
-        <dt className="font-bold">Carrier</dt><dd>{r.carrierName}</dd>
-        <dt className="font-bold">Driver</dt><dd>{r.driverName}, tractor {r.tractorNumber}</dd>
-        <dt className="font-bold">Load</dt><dd>{r.isLoaded ? 'Loaded' : 'Empty'}{r.sealNumber ? `, seal ${r.sealNumber}` : ''}</dd>
-        {r.fuelEighths !== null ? (<><dt className="font-bold">Fuel</dt><dd>{r.fuelEighths}/8</dd></>) : null}
-        {r.spotLabel ? (<><dt className="font-bold">Slot</dt><dd>{r.spotLabel}</dd></>) : null}
+        <dt className="font-bold">Trailer</dt>
+        <dd>{r.unitNumber}</dd>
+        <dt className="font-bold">Handoff</dt>
+        <dd>
+          {r.kind === 'drop' ? 'Drop (gate in)' : 'Hook (gate out)'}, {r.terminalName}
+        </dd>
+        <dt className="font-bold">When</dt>
+        <dd>{formatWhen(r.occurredAt, r.timeZone)}</dd>
+        <dt className="font-bold">Carrier</dt>
+        <dd>{r.carrierName}</dd>
+        <dt className="font-bold">Driver</dt>
+        <dd>
+          {r.driverName}, tractor {r.tractorNumber}
+        </dd>
+        <dt className="font-bold">Load</dt>
+        <dd>
+          {r.isLoaded ? 'Loaded' : 'Empty'}
+          {r.sealNumber ? `, seal ${r.sealNumber}` : ''}
+        </dd>
+        {r.fuelEighths !== null ? (
+          <>
+            <dt className="font-bold">Fuel</dt>
+            <dd>{r.fuelEighths}/8</dd>
+          </>
+        ) : null}
+        {r.spotLabel ? (
+          <>
+            <dt className="font-bold">Slot</dt>
+            <dd>{r.spotLabel}</dd>
+          </>
+        ) : null}
       </dl>
       <section aria-labelledby="findings-title">
-        <h2 id="findings-title" className="text-gate-xl font-bold">Findings</h2>
+        <h2 id="findings-title" className="text-gate-xl font-bold">
+          Findings
+        </h2>
         {r.findings.length ? (
           <ul className="mt-1 space-y-2">
             {r.findings.map((f) => (
@@ -32,28 +62,51 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
               </li>
             ))}
           </ul>
-        ) : <p className="text-gate">No change from the last record.</p>}
+        ) : (
+          <p className="text-gate">No change from the last record.</p>
+        )}
       </section>
       <section aria-labelledby="holds-title">
-        <h2 id="holds-title" className="text-gate-xl font-bold">Holds</h2>
+        <h2 id="holds-title" className="text-gate-xl font-bold">
+          Holds
+        </h2>
         {r.holds.length ? (
           <ul className="mt-1 space-y-2">
             {r.holds.map((h) => (
-              <li key={h.reason} className={`rounded-lg border-2 p-2 text-gate ${h.severity === 'out_of_service' ? 'border-danger bg-danger-bg text-danger' : 'border-hold bg-hold-bg text-hold'}`}>
+              <li
+                key={h.reason}
+                className={`rounded-lg border-2 p-2 text-gate ${h.severity === 'out_of_service' ? 'border-danger bg-danger-bg text-danger' : 'border-hold bg-hold-bg text-hold'}`}
+              >
                 <span className="font-bold">{holdTitle(h)}.</span> {h.reason}
               </li>
             ))}
           </ul>
-        ) : <p className="text-gate">None.</p>}
-        {isOutOfService ? <div className="mt-2"><Caution title="Out of service">{CAUTIONS.outOfService}</Caution></div> : null}
+        ) : (
+          <p className="text-gate">None.</p>
+        )}
+        {isOutOfService ? (
+          <div className="mt-2">
+            <Caution title="Out of service">{CAUTIONS.outOfService}</Caution>
+          </div>
+        ) : null}
       </section>
       <section aria-labelledby="photos-title">
-        <h2 id="photos-title" className="text-gate-xl font-bold">Photos ({r.photos.length})</h2>
+        <h2 id="photos-title" className="text-gate-xl font-bold">
+          Photos ({r.photos.length})
+        </h2>
         {showPhotos && r.photos.length ? (
           <ul className="mt-1 flex flex-wrap gap-2">
             {r.photos.map((p) => (
               // eslint-disable-next-line @next/next/no-img-element
-              <li key={p.id}><a href={`/api/photos/${p.id}`}><img src={`/api/photos/${p.id}`} alt={`Photo${p.itemKey ? ` of ${p.itemKey}` : ''}`} className="h-24 w-24 rounded border-2 border-paper-line object-cover" /></a></li>
+              <li key={p.id}>
+                <a href={`/api/photos/${p.id}`}>
+                  <img
+                    src={`/api/photos/${p.id}`}
+                    alt={`Photo${p.itemKey ? ` of ${p.itemKey}` : ''}`}
+                    className="h-24 w-24 rounded border-2 border-paper-line object-cover"
+                  />
+                </a>
+              </li>
             ))}
           </ul>
         ) : null}

@@ -10,14 +10,28 @@ import { linkDisputeSchema } from '@/lib/validation/desk';
 import type { CaseActionState } from '../(app)/desk/actions';
 
 /** A dispute sent from the e-mailed link: no account; the signed token names the case and the carrier. */
-export async function disputeByLinkAction(_prev: CaseActionState, formData: FormData): Promise<CaseActionState> {
+export async function disputeByLinkAction(
+  _prev: CaseActionState,
+  formData: FormData,
+): Promise<CaseActionState> {
   const parsed = linkDisputeSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) {
     const flat = z.flattenError(parsed.error);
-    return { ok: false, fieldErrors: flat.fieldErrors, formError: flat.formErrors[0] ?? 'Some fields need attention.' };
+    return {
+      ok: false,
+      fieldErrors: flat.fieldErrors,
+      formError: flat.formErrors[0] ?? 'Some fields need attention.',
+    };
   }
   const link = verifyCaseLink(parsed.data.token, caseLinkSecret(), new Date());
-  if (!link.ok) return { ok: false, formError: link.error === 'expired' ? 'This link has expired: the dispute window is over.' : 'This link is not valid.' };
+  if (!link.ok)
+    return {
+      ok: false,
+      formError:
+        link.error === 'expired'
+          ? 'This link has expired: the dispute window is over.'
+          : 'This link is not valid.',
+    };
   const result = await runCaseCommand({
     caseId: link.claims.caseId,
     command: { kind: 'dispute', note: `Via the e-mailed link: ${parsed.data.note}` },

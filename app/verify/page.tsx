@@ -12,20 +12,40 @@ export default async function VerifyPage({ searchParams }: PageProps<'/verify'>)
   const typed = typeof raw === 'string' ? raw : '';
   const parsed = typed ? verificationCodeSchema.safeParse(typed) : null;
   const receipt = parsed?.success ? await getReceiptByCode(parsed.data) : null;
-  const error = parsed && !parsed.success ? parsed.error.issues[0].message : parsed?.success && !receipt ? 'No receipt has this code. Check the code on the receipt.' : null;
+  const error =
+    parsed && !parsed.success
+      ? parsed.error.issues[0].message
+      : parsed?.success && !receipt
+        ? 'No receipt has this code. Check the code on the receipt.'
+        : null;
   return (
     <main className="mx-auto max-w-xl space-y-4 p-3">
       <h1 className="text-gate-xl font-bold">Verify a Hitchmark receipt</h1>
       <form method="get" className="space-y-2">
-        <label htmlFor="code" className="block text-gate font-bold">Verification code</label>
-        <input id="code" name="code" defaultValue={typed} autoCapitalize="characters" autoComplete="off" aria-describedby="code-error"
-          className="block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 font-mono text-gate-lg uppercase" />
-        <p id="code-error" aria-live="polite" className="min-h-6 text-gate-sm font-bold text-danger">{error ?? ''}</p>
-        <Button type="submit" className="w-full">Check</Button>
+        <label htmlFor="code" className="block text-gate font-bold">
+          Verification code
+        </label>
+        <input
+          id="code"
+          name="code"
+          defaultValue={typed}
+          autoCapitalize="characters"
+          autoComplete="off"
+          aria-describedby="code-error"
+          className="block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 font-mono text-gate-lg uppercase"
+        />
+        <p id="code-error" aria-live="polite" className="min-h-6 text-gate-sm font-bold text-danger">
+          {error ?? ''}
+        </p>
+        <Button type="submit" className="w-full">
+          Check
+        </Button>
       </form>
       {receipt ? (
         <>
-          <p role="status" className="rounded-lg bg-ok-bg p-3 text-gate font-bold text-ok">This receipt is genuine: Hitchmark holds this record.</p>
+          <p role="status" className="rounded-lg bg-ok-bg p-3 text-gate font-bold text-ok">
+            This receipt is genuine: Hitchmark holds this record.
+          </p>
           <ReceiptSummary receipt={receipt} showPhotos={false} />
         </>
       ) : null}

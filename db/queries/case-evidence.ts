@@ -1,7 +1,17 @@
 import 'server-only';
 import { and, asc, eq, gte, inArray, isNull, lte, ne, or } from 'drizzle-orm';
 import { db } from '@/db';
-import { carriers, findings, handoffItems, handoffs, photos, walkScans, yardMoves, yardSpots, yardWalks } from '@/db/schema';
+import {
+  carriers,
+  findings,
+  handoffItems,
+  handoffs,
+  photos,
+  walkScans,
+  yardMoves,
+  yardSpots,
+  yardWalks,
+} from '@/db/schema';
 
 /** Damage findings of a case: those linked to it, or (older rows) the new/worse findings of its handoff. */
 export async function listCaseFindings(c: { id: string; handoffId: string }) {
@@ -21,7 +31,16 @@ export async function listCaseFindings(c: { id: string; handoffId: string }) {
     })
     .from(findings)
     .leftJoin(carriers, eq(carriers.id, findings.responsibleCarrierId))
-    .where(or(eq(findings.caseId, c.id), and(isNull(findings.caseId), eq(findings.handoffId, c.handoffId), inArray(findings.kind, ['new', 'worse']))))
+    .where(
+      or(
+        eq(findings.caseId, c.id),
+        and(
+          isNull(findings.caseId),
+          eq(findings.handoffId, c.handoffId),
+          inArray(findings.kind, ['new', 'worse']),
+        ),
+      ),
+    )
     .orderBy(asc(findings.itemKey));
 }
 export type CaseFinding = Awaited<ReturnType<typeof listCaseFindings>>[number];
@@ -40,17 +59,38 @@ const handoffHeader = {
 /** The before and after records of every item of a case: handoff headers, item rows and stored photos. */
 export async function getCaseEvidence(c: { id: string; handoffId: string }) {
   const caseFindings = await listCaseFindings(c);
-  const handoffIds = [...new Set([c.handoffId, ...caseFindings.map((f) => f.previousHandoffId).filter((x): x is string => !!x)])];
+  const handoffIds = [
+    ...new Set([
+      c.handoffId,
+      ...caseFindings.map((f) => f.previousHandoffId).filter((x): x is string => !!x),
+    ]),
+  ];
   const itemKeys = caseFindings.map((f) => f.itemKey);
   if (itemKeys.length === 0) return { findings: caseFindings, handoffs: [], items: [], photos: [] };
   const [headers, items, pics] = await Promise.all([
-    db.select(handoffHeader).from(handoffs).innerJoin(carriers, eq(carriers.id, handoffs.carrierId)).where(inArray(handoffs.id, handoffIds)),
     db
-      .select({ handoffId: handoffItems.handoffId, itemKey: handoffItems.itemKey, condition: handoffItems.condition, note: handoffItems.note, treadThirtySeconds: handoffItems.treadThirtySeconds, isHoldingAir: handoffItems.isHoldingAir })
+      .select(handoffHeader)
+      .from(handoffs)
+      .innerJoin(carriers, eq(carriers.id, handoffs.carrierId))
+      .where(inArray(handoffs.id, handoffIds)),
+    db
+      .select({
+        handoffId: handoffItems.handoffId,
+        itemKey: handoffItems.itemKey,
+        condition: handoffItems.condition,
+        note: handoffItems.note,
+        treadThirtySeconds: handoffItems.treadThirtySeconds,
+        isHoldingAir: handoffItems.isHoldingAir,
+      })
       .from(handoffItems)
       .where(and(inArray(handoffItems.handoffId, handoffIds), inArray(handoffItems.itemKey, itemKeys))),
     db
-      .select({ id: photos.id, handoffId: photos.handoffId, itemKey: photos.itemKey, contentType: photos.contentType })
+      .select({
+        id: photos.id,
+        handoffId: photos.handoffId,
+        itemKey: photos.itemKey,
+        contentType: photos.contentType,
+      })
       .from(photos)
       .where(and(inArray(photos.handoffId, handoffIds), ne(photos.status, 'rejected')))
       .orderBy(asc(photos.createdAt)),
@@ -66,27 +106,46 @@ export async function listCustodyEvents(trailerId: string, from: Date, to: Date)
       .select(handoffHeader)
       .from(handoffs)
       .innerJoin(carriers, eq(carriers.id, handoffs.carrierId))
-      .where(and(eq(handoffs.trailerId, trailerId), gte(handoffs.occurredAt, from), lte(handoffs.occurredAt, to))),
+      .where(
+        and(eq(handoffs.trailerId, trailerId), gte(handoffs.occurredAt, from), lte(handoffs.occurredAt, to)),
+      ),
     db
       .select({ id: yardMoves.id, movedAt: yardMoves.movedAt, toSpot: yardSpots.label })
       .from(yardMoves)
       .innerJoin(yardSpots, eq(yardSpots.id, yardMoves.toSpotId))
-      .where(and(eq(yardMoves.trailerId, trailerId), gte(yardMoves.movedAt, from), lte(yardMoves.movedAt, to))),
+      .where(
+        and(eq(yardMoves.trailerId, trailerId), gte(yardMoves.movedAt, from), lte(yardMoves.movedAt, to)),
+      ),
     db
       .select({ id: walkScans.id, scannedAt: walkScans.scannedAt, walkId: yardWalks.id })
       .from(walkScans)
       .innerJoin(yardWalks, eq(yardWalks.id, walkScans.walkId))
-      .where(and(eq(walkScans.trailerId, trailerId), gte(walkScans.scannedAt, from), lte(walkScans.scannedAt, to))),
+      .where(
+        and(eq(walkScans.trailerId, trailerId), gte(walkScans.scannedAt, from), lte(walkScans.scannedAt, to)),
+      ),
   ]);
   const events = [
     ...hs.map((h) => ({
       id: h.id,
       at: h.occurredAt,
       kind: h.kind,
-      text: h.kind === 'drop' ? `Dropped by ${h.driverName} (${h.carrierScac}); custody passes to the terminal` : `Hooked by ${h.driverName} (${h.carrierScac}); custody passes to ${h.carrierName}`,
+      text:
+        h.kind === 'drop'
+          ? `Dropped by ${h.driverName} (${h.carrierScac}); custody passes to the terminal`
+          : `Hooked by ${h.driverName} (${h.carrierScac}); custody passes to ${h.carrierName}`,
     })),
-    ...moves.map((m) => ({ id: m.id, at: m.movedAt, kind: 'move' as const, text: `Yard move to ${m.toSpot}; custody stays with the terminal` })),
-    ...scans.map((s) => ({ id: s.id, at: s.scannedAt, kind: 'walk' as const, text: 'Seen on a yard walk (quick check)' })),
+    ...moves.map((m) => ({
+      id: m.id,
+      at: m.movedAt,
+      kind: 'move' as const,
+      text: `Yard move to ${m.toSpot}; custody stays with the terminal`,
+    })),
+    ...scans.map((s) => ({
+      id: s.id,
+      at: s.scannedAt,
+      kind: 'walk' as const,
+      text: 'Seen on a yard walk (quick check)',
+    })),
   ];
   return events.sort((a, b) => a.at.getTime() - b.at.getTime());
 }

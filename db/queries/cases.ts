@@ -10,13 +10,18 @@ export { caseVisibleTo, type CaseViewer } from './case-visibility';
 const amount = sql<number>`coalesce(${cases.overrideCents}, ${cases.estimateCents})`;
 
 /** The desk queue, filtered and sorted; already limited to what the viewer may see. */
-export async function listCases(viewer: CaseViewer, q: Partial<CaseQueueQuery> & { now?: Date; limit?: number }) {
+export async function listCases(
+  viewer: CaseViewer,
+  q: Partial<CaseQueueQuery> & { now?: Date; limit?: number },
+) {
   const now = q.now ?? new Date();
   const where = and(
     caseVisibleTo(viewer),
     q.state ? eq(cases.state, q.state) : undefined,
     q.carrier ? eq(cases.proposedCarrierId, q.carrier) : undefined,
-    q.olderThanDays ? lte(cases.openedAt, new Date(now.getTime() - Number(q.olderThanDays) * 86_400_000)) : undefined,
+    q.olderThanDays
+      ? lte(cases.openedAt, new Date(now.getTime() - Number(q.olderThanDays) * 86_400_000))
+      : undefined,
     q.minAmount !== undefined ? gte(amount, q.minAmount) : undefined,
     q.maxAmount !== undefined ? lte(amount, q.maxAmount) : undefined,
   );
@@ -93,13 +98,29 @@ const actors = aliasedTable(users, 'actors');
 
 /** A case's history, oldest first, each event with the ids of photos attached to it (a dispute's evidence). */
 export async function listCaseEvents(caseId: string) {
-  const [events, pics] = await Promise.all([listEventRows(caseId), db.select({ id: photos.id, caseEventId: photos.caseEventId }).from(photos).innerJoin(caseEvents, eq(caseEvents.id, photos.caseEventId)).where(and(eq(caseEvents.caseId, caseId), eq(photos.status, 'stored')))]);
+  const [events, pics] = await Promise.all([
+    listEventRows(caseId),
+    db
+      .select({ id: photos.id, caseEventId: photos.caseEventId })
+      .from(photos)
+      .innerJoin(caseEvents, eq(caseEvents.id, photos.caseEventId))
+      .where(and(eq(caseEvents.caseId, caseId), eq(photos.status, 'stored'))),
+  ]);
   return events.map((e) => ({ ...e, photoIds: pics.filter((p) => p.caseEventId === e.id).map((p) => p.id) }));
 }
 
 function listEventRows(caseId: string) {
   return db
-    .select({ id: caseEvents.id, kind: caseEvents.kind, fromState: caseEvents.fromState, toState: caseEvents.toState, note: caseEvents.note, createdAt: caseEvents.createdAt, actorName: actors.name, actorRole: actors.role })
+    .select({
+      id: caseEvents.id,
+      kind: caseEvents.kind,
+      fromState: caseEvents.fromState,
+      toState: caseEvents.toState,
+      note: caseEvents.note,
+      createdAt: caseEvents.createdAt,
+      actorName: actors.name,
+      actorRole: actors.role,
+    })
     .from(caseEvents)
     .leftJoin(actors, eq(actors.id, caseEvents.actorId))
     .where(eq(caseEvents.caseId, caseId))
@@ -107,5 +128,8 @@ function listEventRows(caseId: string) {
 }
 
 export async function listCaseCarriers() {
-  return db.select({ id: carriers.id, scac: carriers.scac, name: carriers.name }).from(carriers).orderBy(asc(carriers.scac));
+  return db
+    .select({ id: carriers.id, scac: carriers.scac, name: carriers.name })
+    .from(carriers)
+    .orderBy(asc(carriers.scac));
 }

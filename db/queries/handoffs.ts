@@ -10,17 +10,31 @@ export type Viewer = { id: string; role: Role; carrierId: string | null };
 /** Drivers see their own carrier's handoffs only; jockeys, clerks and admins see all. */
 function handoffVisibleTo(viewer: Viewer): SQL | undefined {
   if (viewer.role !== 'driver') return undefined;
-  return viewer.carrierId ? eq(handoffs.carrierId, viewer.carrierId) : eq(handoffs.id, '00000000-0000-0000-0000-000000000000');
+  return viewer.carrierId
+    ? eq(handoffs.carrierId, viewer.carrierId)
+    : eq(handoffs.id, '00000000-0000-0000-0000-000000000000');
 }
 
 async function receiptWhere(where: SQL | undefined): Promise<ReceiptView | null> {
   const [h] = await db
     .select({
-      id: handoffs.id, trailerId: handoffs.trailerId, kind: handoffs.kind, occurredAt: handoffs.occurredAt,
-      driverName: handoffs.driverName, tractorNumber: handoffs.tractorNumber, isLoaded: handoffs.isLoaded,
-      sealNumber: handoffs.sealNumber, fuelEighths: handoffs.fuelEighths, verificationCode: handoffs.verificationCode,
-      contentHash: handoffs.contentHash, unitNumber: trailers.unitNumber, gateInAt: trailers.gateInAt,
-      spotLabel: yardSpots.label, terminalName: terminals.name, timeZone: terminals.timeZone, carrierName: carriers.name,
+      id: handoffs.id,
+      trailerId: handoffs.trailerId,
+      kind: handoffs.kind,
+      occurredAt: handoffs.occurredAt,
+      driverName: handoffs.driverName,
+      tractorNumber: handoffs.tractorNumber,
+      isLoaded: handoffs.isLoaded,
+      sealNumber: handoffs.sealNumber,
+      fuelEighths: handoffs.fuelEighths,
+      verificationCode: handoffs.verificationCode,
+      contentHash: handoffs.contentHash,
+      unitNumber: trailers.unitNumber,
+      gateInAt: trailers.gateInAt,
+      spotLabel: yardSpots.label,
+      terminalName: terminals.name,
+      timeZone: terminals.timeZone,
+      carrierName: carriers.name,
     })
     .from(handoffs)
     .innerJoin(trailers, eq(trailers.id, handoffs.trailerId))
@@ -31,23 +45,50 @@ async function receiptWhere(where: SQL | undefined): Promise<ReceiptView | null>
     .limit(1);
   if (!h) return null;
   const [f, hl, p] = await Promise.all([
-    db.select({ kind: findings.kind, itemKey: findings.itemKey, reason: findings.reason }).from(findings)
-      .where(eq(findings.handoffId, h.id)).orderBy(asc(findings.createdAt), asc(findings.itemKey)),
+    db
+      .select({ kind: findings.kind, itemKey: findings.itemKey, reason: findings.reason })
+      .from(findings)
+      .where(eq(findings.handoffId, h.id))
+      .orderBy(asc(findings.createdAt), asc(findings.itemKey)),
     // every hold open at the moment of the handoff: the ones it placed and the ones already there
-    db.select({ severity: holds.severity, restriction: holds.restriction, reason: holds.reason }).from(holds)
-      .where(and(eq(holds.trailerId, h.trailerId), lte(holds.placedAt, h.occurredAt), or(isNull(holds.releasedAt), gt(holds.releasedAt, h.occurredAt))))
+    db
+      .select({ severity: holds.severity, restriction: holds.restriction, reason: holds.reason })
+      .from(holds)
+      .where(
+        and(
+          eq(holds.trailerId, h.trailerId),
+          lte(holds.placedAt, h.occurredAt),
+          or(isNull(holds.releasedAt), gt(holds.releasedAt, h.occurredAt)),
+        ),
+      )
       .orderBy(asc(holds.severity), asc(holds.placedAt)),
-    db.select({ id: photos.id, itemKey: photos.itemKey }).from(photos)
-      .where(and(eq(photos.handoffId, h.id), eq(photos.status, 'stored'))).orderBy(asc(photos.createdAt)),
+    db
+      .select({ id: photos.id, itemKey: photos.itemKey })
+      .from(photos)
+      .where(and(eq(photos.handoffId, h.id), eq(photos.status, 'stored')))
+      .orderBy(asc(photos.createdAt)),
   ]);
   // the slot shows only while the trailer is still on the stay this drop began
   const isSameStay = h.kind === 'drop' && h.gateInAt?.getTime() === h.occurredAt.getTime();
   return {
-    handoffId: h.id, unitNumber: h.unitNumber, kind: h.kind, occurredAt: h.occurredAt, terminalName: h.terminalName,
-    timeZone: h.timeZone, carrierName: h.carrierName, driverName: h.driverName, tractorNumber: h.tractorNumber,
-    isLoaded: h.isLoaded, sealNumber: h.sealNumber, fuelEighths: h.fuelEighths, spotLabel: isSameStay ? h.spotLabel : null,
-    verificationCode: h.verificationCode, contentHash: h.contentHash, findings: f,
-    holds: hl.map((x) => ({ ...x, severity: x.severity })), photos: p,
+    handoffId: h.id,
+    unitNumber: h.unitNumber,
+    kind: h.kind,
+    occurredAt: h.occurredAt,
+    terminalName: h.terminalName,
+    timeZone: h.timeZone,
+    carrierName: h.carrierName,
+    driverName: h.driverName,
+    tractorNumber: h.tractorNumber,
+    isLoaded: h.isLoaded,
+    sealNumber: h.sealNumber,
+    fuelEighths: h.fuelEighths,
+    spotLabel: isSameStay ? h.spotLabel : null,
+    verificationCode: h.verificationCode,
+    contentHash: h.contentHash,
+    findings: f,
+    holds: hl.map((x) => ({ ...x, severity: x.severity })),
+    photos: p,
   };
 }
 
@@ -71,11 +112,15 @@ export async function getPhotoForViewer(photoId: string, viewer: Viewer) {
     .select({ objectKey: photos.objectKey, contentType: photos.contentType, byteSize: photos.byteSize })
     .from(photos)
     .leftJoin(handoffs, eq(handoffs.id, photos.handoffId))
-    .where(and(
-      eq(photos.id, photoId),
-      eq(photos.status, 'stored'),
-      visible ? or(eq(photos.uploadedById, viewer.id), and(visible, eq(photos.handoffId, handoffs.id))) : undefined,
-    ))
+    .where(
+      and(
+        eq(photos.id, photoId),
+        eq(photos.status, 'stored'),
+        visible
+          ? or(eq(photos.uploadedById, viewer.id), and(visible, eq(photos.handoffId, handoffs.id)))
+          : undefined,
+      ),
+    )
     .limit(1);
   return row ?? null;
 }
@@ -83,7 +128,13 @@ export async function getPhotoForViewer(photoId: string, viewer: Viewer) {
 /** Open holds of a trailer, out-of-service first (the start page and the hook refusal). */
 export function listOpenHolds(trailerId: string) {
   return db
-    .select({ id: holds.id, severity: holds.severity, restriction: holds.restriction, reason: holds.reason, placedAt: holds.placedAt })
+    .select({
+      id: holds.id,
+      severity: holds.severity,
+      restriction: holds.restriction,
+      reason: holds.reason,
+      placedAt: holds.placedAt,
+    })
     .from(holds)
     .where(and(eq(holds.trailerId, trailerId), isNull(holds.releasedAt)))
     .orderBy(asc(holds.severity), asc(holds.placedAt));

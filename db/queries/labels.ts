@@ -20,7 +20,11 @@ export async function issueLabel(trailerId: string, issuedById: string | null, t
  */
 export async function reissueLabel(trailerId: string, actorId: string) {
   return db.transaction(async (tx) => {
-    const locked = await tx.select({ id: trailers.id }).from(trailers).where(eq(trailers.id, trailerId)).for('update');
+    const locked = await tx
+      .select({ id: trailers.id })
+      .from(trailers)
+      .where(eq(trailers.id, trailerId))
+      .for('update');
     if (locked.length === 0) return null;
     const now = new Date();
     const revoked = await tx
@@ -30,7 +34,13 @@ export async function reissueLabel(trailerId: string, actorId: string) {
       .returning({ id: labels.id });
     const label = await issueLabel(trailerId, actorId, tx);
     await recordAudit(
-      { actorId, action: 'label.reissue', entityType: 'trailer', entityId: trailerId, detail: { labelId: label.id, revokedLabelIds: revoked.map((r) => r.id) } },
+      {
+        actorId,
+        action: 'label.reissue',
+        entityType: 'trailer',
+        entityId: trailerId,
+        detail: { labelId: label.id, revokedLabelIds: revoked.map((r) => r.id) },
+      },
       tx,
     );
     return { label, revokedLabelIds: revoked.map((r) => r.id) };
@@ -54,7 +64,12 @@ export async function getCurrentLabel(trailerId: string, tx?: Tx) {
  */
 export async function getLabelStanding(labelId: string) {
   const [row] = await db
-    .select({ id: labels.id, trailerId: labels.trailerId, issuedAt: labels.issuedAt, revokedAt: labels.revokedAt })
+    .select({
+      id: labels.id,
+      trailerId: labels.trailerId,
+      issuedAt: labels.issuedAt,
+      revokedAt: labels.revokedAt,
+    })
     .from(labels)
     .where(eq(labels.id, labelId))
     .limit(1);
@@ -64,23 +79,45 @@ export async function getLabelStanding(labelId: string) {
   return { ...row, isCurrent, replacedAt: isCurrent ? null : (row.revokedAt ?? current?.issuedAt ?? null) };
 }
 
-const sheetColumns = { id: trailers.id, unitNumber: trailers.unitNumber, vin: trailers.vin, ownerScac: carriers.scac };
+const sheetColumns = {
+  id: trailers.id,
+  unitNumber: trailers.unitNumber,
+  vin: trailers.vin,
+  ownerScac: carriers.scac,
+};
 
 /**
  * The trailers a label sheet prints, each with its current label id; trailers without a current
  * label get one issued (under a row lock, so two sheets printed at once do not issue two).
  * A selection keeps unit-number order; a row keeps slot order.
  */
-export async function prepareLabelSheet(query: { trailerIds: string[] } | { rowId: string }, actorId: string) {
-  const base = db.select({ ...sheetColumns, spotOrder: yardSpots.sortOrder }).from(trailers).innerJoin(carriers, eq(carriers.id, trailers.ownerCarrierId));
+export async function prepareLabelSheet(
+  query: { trailerIds: string[] } | { rowId: string },
+  actorId: string,
+) {
+  const base = db
+    .select({ ...sheetColumns, spotOrder: yardSpots.sortOrder })
+    .from(trailers)
+    .innerJoin(carriers, eq(carriers.id, trailers.ownerCarrierId));
   const rows =
     'rowId' in query
-      ? await base.innerJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId)).where(eq(yardSpots.rowId, query.rowId)).orderBy(asc(yardSpots.sortOrder))
-      : await base.leftJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId)).where(inArray(trailers.id, query.trailerIds)).orderBy(asc(trailers.unitNumber));
+      ? await base
+          .innerJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId))
+          .where(eq(yardSpots.rowId, query.rowId))
+          .orderBy(asc(yardSpots.sortOrder))
+      : await base
+          .leftJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId))
+          .where(inArray(trailers.id, query.trailerIds))
+          .orderBy(asc(trailers.unitNumber));
   if (rows.length === 0) return [];
   const labelIds = await db.transaction(async (tx) => {
     const ids = rows.map((r) => r.id);
-    await tx.select({ id: trailers.id }).from(trailers).where(inArray(trailers.id, ids)).orderBy(asc(trailers.id)).for('update');
+    await tx
+      .select({ id: trailers.id })
+      .from(trailers)
+      .where(inArray(trailers.id, ids))
+      .orderBy(asc(trailers.id))
+      .for('update');
     const found = new Map<string, string>();
     for (const id of ids) {
       const current = (await getCurrentLabel(id, tx)) ?? (await issueLabel(id, actorId, tx));
@@ -94,7 +131,12 @@ export async function prepareLabelSheet(query: { trailerIds: string[] } | { rowI
 /** Yard rows with how many trailers stand in each, for choosing a row to print. */
 export async function listRowsForLabels() {
   return db
-    .select({ id: yardRows.id, name: yardRows.name, terminalName: terminals.name, trailerCount: sql<number>`count(${trailers.id})::int` })
+    .select({
+      id: yardRows.id,
+      name: yardRows.name,
+      terminalName: terminals.name,
+      trailerCount: sql<number>`count(${trailers.id})::int`,
+    })
     .from(yardRows)
     .innerJoin(terminals, eq(terminals.id, yardRows.terminalId))
     .leftJoin(yardSpots, eq(yardSpots.rowId, yardRows.id))

@@ -51,13 +51,24 @@ export async function markEmailSent(tx: Tx, id: string, now: Date) {
 export async function markEmailFailed(tx: Tx, id: string, attempts: number, error: string, now: Date) {
   await tx
     .update(emailOutbox)
-    .set({ attempts: attempts + 1, lastError: error.slice(0, 500), nextAttemptAt: nextAttemptAt(attempts + 1, now) })
+    .set({
+      attempts: attempts + 1,
+      lastError: error.slice(0, 500),
+      nextAttemptAt: nextAttemptAt(attempts + 1, now),
+    })
     .where(eq(emailOutbox.id, id));
 }
 
 export async function listEmailsFor(relatedType: string, relatedId: string) {
   return db
-    .select({ id: emailOutbox.id, to: emailOutbox.toAddress, subject: emailOutbox.subject, status: emailOutbox.status, attempts: emailOutbox.attempts, sentAt: emailOutbox.sentAt })
+    .select({
+      id: emailOutbox.id,
+      to: emailOutbox.toAddress,
+      subject: emailOutbox.subject,
+      status: emailOutbox.status,
+      attempts: emailOutbox.attempts,
+      sentAt: emailOutbox.sentAt,
+    })
     .from(emailOutbox)
     .where(and(eq(emailOutbox.relatedType, relatedType), eq(emailOutbox.relatedId, relatedId)))
     .orderBy(asc(emailOutbox.createdAt));

@@ -9,7 +9,9 @@ type HandoffRow = typeof handoffs.$inferSelect;
 type ItemRow = typeof handoffItems.$inferSelect;
 
 /** One stored handoff item back into the engine's observation (details carry the kind-specific fields). */
-export function observationFromRow(row: Pick<ItemRow, 'condition' | 'treadThirtySeconds' | 'isHoldingAir' | 'note' | 'details'>): ItemObservation {
+export function observationFromRow(
+  row: Pick<ItemRow, 'condition' | 'treadThirtySeconds' | 'isHoldingAir' | 'note' | 'details'>,
+): ItemObservation {
   const o: ItemObservation = { condition: row.condition, ...(row.details ?? {}) } as ItemObservation;
   if (row.treadThirtySeconds !== null) o.treadThirtySeconds = row.treadThirtySeconds;
   if (row.isHoldingAir !== null) o.isHoldingAir = row.isHoldingAir;
@@ -26,7 +28,12 @@ export function handoffEventFromRow(h: HandoffRow, carrierName: string, items: I
     type: h.kind,
     id: h.id,
     at: h.occurredAt,
-    party: { carrierId: h.carrierId, carrierName, ...(h.driverId ? { driverId: h.driverId } : {}), driverName: h.driverName },
+    party: {
+      carrierId: h.carrierId,
+      carrierName,
+      ...(h.driverId ? { driverId: h.driverId } : {}),
+      driverName: h.driverName,
+    },
     items: observed,
     fuelEighths: h.fuelEighths,
     reefer: {
@@ -34,9 +41,10 @@ export function handoffEventFromRow(h: HandoffRow, carrierName: string, items: I
       setpointF: tenths(h.setpointTenthsF),
       returnAirF: tenths(h.returnAirTenthsF),
       engineHours: tenths(h.engineHoursTenths),
-      preTrip: h.pretripAt && (h.pretripResult === 'pass' || h.pretripResult === 'fail')
-        ? { result: h.pretripResult === 'pass' ? 'passed' : 'failed', at: h.pretripAt }
-        : null,
+      preTrip:
+        h.pretripAt && (h.pretripResult === 'pass' || h.pretripResult === 'fail')
+          ? { result: h.pretripResult === 'pass' ? 'passed' : 'failed', at: h.pretripAt }
+          : null,
     },
     isLoaded: h.isLoaded,
     sealNumber: h.sealNumber,
@@ -58,7 +66,13 @@ export async function listTimeline(trailerId: string, q: Db | Tx = db): Promise<
     .where(eq(handoffs.trailerId, trailerId))
     .orderBy(asc(handoffs.occurredAt), asc(handoffs.createdAt));
   const moves = await q
-    .select({ id: yardMoves.id, at: yardMoves.movedAt, from: yardMoves.fromSpotId, to: yardMoves.toSpotId, jockeyName: users.name })
+    .select({
+      id: yardMoves.id,
+      at: yardMoves.movedAt,
+      from: yardMoves.fromSpotId,
+      to: yardMoves.toSpotId,
+      jockeyName: users.name,
+    })
     .from(yardMoves)
     .innerJoin(users, eq(users.id, yardMoves.movedById))
     .where(eq(yardMoves.trailerId, trailerId));
@@ -70,7 +84,9 @@ export async function listTimeline(trailerId: string, q: Db | Tx = db): Promise<
     .where(eq(walkScans.trailerId, trailerId));
 
   const ids = hRows.map((r) => r.h.id);
-  const itemRows = ids.length ? await q.select().from(handoffItems).where(inArray(handoffItems.handoffId, ids)) : [];
+  const itemRows = ids.length
+    ? await q.select().from(handoffItems).where(inArray(handoffItems.handoffId, ids))
+    : [];
   const itemsBy = new Map<string, ItemRow[]>();
   for (const i of itemRows) itemsBy.set(i.handoffId, [...(itemsBy.get(i.handoffId) ?? []), i]);
   const corrected = new Set(hRows.map((r) => r.h.correctsHandoffId).filter((v): v is string => v !== null));
@@ -81,7 +97,14 @@ export async function listTimeline(trailerId: string, q: Db | Tx = db): Promise<
     events.push(handoffEventFromRow(r.h, r.carrierName, itemsBy.get(r.h.id) ?? []));
   }
   for (const m of moves) {
-    events.push({ type: 'move', id: m.id, at: m.at, jockeyName: m.jockeyName, fromSlotId: m.from, toSlotId: m.to });
+    events.push({
+      type: 'move',
+      id: m.id,
+      at: m.at,
+      jockeyName: m.jockeyName,
+      fromSlotId: m.from,
+      toSlotId: m.to,
+    });
   }
   for (const { s, jockeyName } of scans) {
     events.push({
@@ -91,7 +114,10 @@ export async function listTimeline(trailerId: string, q: Db | Tx = db): Promise<
       jockeyName,
       items: {},
       fuelEighths: s.fuelEighths,
-      reefer: { isUnitOn: s.isUnitRunning, setpointF: s.setpointTenthsF === null ? null : s.setpointTenthsF / 10 },
+      reefer: {
+        isUnitOn: s.isUnitRunning,
+        setpointF: s.setpointTenthsF === null ? null : s.setpointTenthsF / 10,
+      },
     });
   }
   // stable: equal times keep handoffs before moves before walks, as pushed

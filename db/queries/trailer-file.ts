@@ -1,13 +1,38 @@
 import 'server-only';
 import { aliasedTable, asc, desc, eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
-import { carriers, cases, findings, handoffItems, handoffs, holds, photos, terminals, trailers, users, walkScans, yardMoves, yardSpots, yardWalks } from '@/db/schema';
+import {
+  carriers,
+  cases,
+  findings,
+  handoffItems,
+  handoffs,
+  holds,
+  photos,
+  terminals,
+  trailers,
+  users,
+  walkScans,
+  yardMoves,
+  yardSpots,
+  yardWalks,
+} from '@/db/schema';
 import { checkTrailerChain } from '@/lib/desk/chain';
 import type { FileRows } from '@/lib/desk/trailer-file';
 
 export async function getTrailerHeader(id: string) {
   const [row] = await db
-    .select({ id: trailers.id, unitNumber: trailers.unitNumber, vin: trailers.vin, kind: trailers.kind, status: trailers.status, ownerScac: carriers.scac, terminalName: terminals.name, timeZone: terminals.timeZone, spotLabel: yardSpots.label })
+    .select({
+      id: trailers.id,
+      unitNumber: trailers.unitNumber,
+      vin: trailers.vin,
+      kind: trailers.kind,
+      status: trailers.status,
+      ownerScac: carriers.scac,
+      terminalName: terminals.name,
+      timeZone: terminals.timeZone,
+      spotLabel: yardSpots.label,
+    })
     .from(trailers)
     .innerJoin(carriers, eq(carriers.id, trailers.ownerCarrierId))
     .leftJoin(terminals, eq(terminals.id, trailers.currentTerminalId))
@@ -23,28 +48,138 @@ const people = aliasedTable(users, 'people');
 /** Every record about one trailer, for the trailer file (staff only: the page checks the role). */
 export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
   const [hs, moves, walks, fs, hls, cs, ps] = await Promise.all([
-    db.select({ id: handoffs.id, kind: handoffs.kind, occurredAt: handoffs.occurredAt, driverName: handoffs.driverName, carrierScac: carriers.scac, level: handoffs.level, verificationCode: handoffs.verificationCode }).from(handoffs).innerJoin(carriers, eq(carriers.id, handoffs.carrierId)).where(eq(handoffs.trailerId, trailerId)),
-    db.select({ id: yardMoves.id, movedAt: yardMoves.movedAt, fromSpot: fromSpots.label, toSpot: yardSpots.label, jockeyName: people.name }).from(yardMoves).innerJoin(yardSpots, eq(yardSpots.id, yardMoves.toSpotId)).leftJoin(fromSpots, eq(fromSpots.id, yardMoves.fromSpotId)).leftJoin(people, eq(people.id, yardMoves.movedById)).where(eq(yardMoves.trailerId, trailerId)),
-    db.select({ id: walkScans.id, scannedAt: walkScans.scannedAt, spot: yardSpots.label, jockeyName: people.name }).from(walkScans).innerJoin(yardWalks, eq(yardWalks.id, walkScans.walkId)).leftJoin(yardSpots, eq(yardSpots.id, walkScans.spotId)).leftJoin(people, eq(people.id, yardWalks.startedById)).where(eq(walkScans.trailerId, trailerId)),
+    db
+      .select({
+        id: handoffs.id,
+        kind: handoffs.kind,
+        occurredAt: handoffs.occurredAt,
+        driverName: handoffs.driverName,
+        carrierScac: carriers.scac,
+        level: handoffs.level,
+        verificationCode: handoffs.verificationCode,
+      })
+      .from(handoffs)
+      .innerJoin(carriers, eq(carriers.id, handoffs.carrierId))
+      .where(eq(handoffs.trailerId, trailerId)),
+    db
+      .select({
+        id: yardMoves.id,
+        movedAt: yardMoves.movedAt,
+        fromSpot: fromSpots.label,
+        toSpot: yardSpots.label,
+        jockeyName: people.name,
+      })
+      .from(yardMoves)
+      .innerJoin(yardSpots, eq(yardSpots.id, yardMoves.toSpotId))
+      .leftJoin(fromSpots, eq(fromSpots.id, yardMoves.fromSpotId))
+      .leftJoin(people, eq(people.id, yardMoves.movedById))
+      .where(eq(yardMoves.trailerId, trailerId)),
+    db
+      .select({
+        id: walkScans.id,
+        scannedAt: walkScans.scannedAt,
+        spot: yardSpots.label,
+        jockeyName: people.name,
+      })
+      .from(walkScans)
+      .innerJoin(yardWalks, eq(yardWalks.id, walkScans.walkId))
+      .leftJoin(yardSpots, eq(yardSpots.id, walkScans.spotId))
+      .leftJoin(people, eq(people.id, yardWalks.startedById))
+      .where(eq(walkScans.trailerId, trailerId)),
     // findings and photos are dated by the handoff they belong to (their own rows are written at submit)
-    db.select({ id: findings.id, createdAt: sql<Date>`coalesce(${handoffs.occurredAt}, ${findings.createdAt})`.mapWith(findings.createdAt), itemKey: findings.itemKey, kind: findings.kind, condition: findings.condition, reason: findings.reason }).from(findings).leftJoin(handoffs, eq(handoffs.id, findings.handoffId)).where(eq(findings.trailerId, trailerId)),
-    db.select({ id: holds.id, placedAt: holds.placedAt, severity: holds.severity, reason: holds.reason, releasedAt: holds.releasedAt, repairedBy: holds.repairedBy, repairNote: holds.repairNote, releasedByName: people.name }).from(holds).leftJoin(people, eq(people.id, holds.releasedById)).where(eq(holds.trailerId, trailerId)),
-    db.select({ id: cases.id, openedAt: cases.openedAt, state: cases.state, amountCents: sql<number>`coalesce(${cases.overrideCents}, ${cases.estimateCents})`, carrierScac: carriers.scac }).from(cases).leftJoin(carriers, eq(carriers.id, cases.proposedCarrierId)).where(eq(cases.trailerId, trailerId)),
-    db.select({ id: photos.id, createdAt: sql<Date>`coalesce(${handoffs.occurredAt}, ${photos.createdAt})`.mapWith(photos.createdAt), itemKey: photos.itemKey, handoffId: photos.handoffId }).from(photos).leftJoin(handoffs, eq(handoffs.id, photos.handoffId)).where(eq(photos.trailerId, trailerId)).orderBy(desc(photos.createdAt)),
+    db
+      .select({
+        id: findings.id,
+        createdAt: sql<Date>`coalesce(${handoffs.occurredAt}, ${findings.createdAt})`.mapWith(
+          findings.createdAt,
+        ),
+        itemKey: findings.itemKey,
+        kind: findings.kind,
+        condition: findings.condition,
+        reason: findings.reason,
+      })
+      .from(findings)
+      .leftJoin(handoffs, eq(handoffs.id, findings.handoffId))
+      .where(eq(findings.trailerId, trailerId)),
+    db
+      .select({
+        id: holds.id,
+        placedAt: holds.placedAt,
+        severity: holds.severity,
+        reason: holds.reason,
+        releasedAt: holds.releasedAt,
+        repairedBy: holds.repairedBy,
+        repairNote: holds.repairNote,
+        releasedByName: people.name,
+      })
+      .from(holds)
+      .leftJoin(people, eq(people.id, holds.releasedById))
+      .where(eq(holds.trailerId, trailerId)),
+    db
+      .select({
+        id: cases.id,
+        openedAt: cases.openedAt,
+        state: cases.state,
+        amountCents: sql<number>`coalesce(${cases.overrideCents}, ${cases.estimateCents})`,
+        carrierScac: carriers.scac,
+      })
+      .from(cases)
+      .leftJoin(carriers, eq(carriers.id, cases.proposedCarrierId))
+      .where(eq(cases.trailerId, trailerId)),
+    db
+      .select({
+        id: photos.id,
+        createdAt: sql<Date>`coalesce(${handoffs.occurredAt}, ${photos.createdAt})`.mapWith(photos.createdAt),
+        itemKey: photos.itemKey,
+        handoffId: photos.handoffId,
+      })
+      .from(photos)
+      .leftJoin(handoffs, eq(handoffs.id, photos.handoffId))
+      .where(eq(photos.trailerId, trailerId))
+      .orderBy(desc(photos.createdAt)),
   ]);
   return { handoffs: hs, moves, walks, findings: fs, holds: hls, cases: cs, photos: ps };
 }
 
 export async function listOpenHolds(trailerId: string) {
-  return db.select({ id: holds.id, severity: holds.severity, reason: holds.reason, placedAt: holds.placedAt, releasedAt: holds.releasedAt }).from(holds).where(eq(holds.trailerId, trailerId)).orderBy(asc(holds.placedAt));
+  return db
+    .select({
+      id: holds.id,
+      severity: holds.severity,
+      reason: holds.reason,
+      placedAt: holds.placedAt,
+      releasedAt: holds.releasedAt,
+    })
+    .from(holds)
+    .where(eq(holds.trailerId, trailerId))
+    .orderBy(asc(holds.placedAt));
 }
 
 /** Re-verifies the trailer's hash chain from the rows as they are in the database now (oldest first, as the submit service links them). */
 export async function checkHandoffChain(trailerId: string) {
-  const rows = await db.select().from(handoffs).where(eq(handoffs.trailerId, trailerId)).orderBy(asc(handoffs.occurredAt), asc(handoffs.createdAt));
+  const rows = await db
+    .select()
+    .from(handoffs)
+    .where(eq(handoffs.trailerId, trailerId))
+    .orderBy(asc(handoffs.occurredAt), asc(handoffs.createdAt));
   const [items, pics] = await Promise.all([
-    db.select({ handoffId: handoffItems.handoffId, itemKey: handoffItems.itemKey, condition: handoffItems.condition, treadThirtySeconds: handoffItems.treadThirtySeconds, isHoldingAir: handoffItems.isHoldingAir, note: handoffItems.note, details: handoffItems.details }).from(handoffItems).innerJoin(handoffs, eq(handoffs.id, handoffItems.handoffId)).where(eq(handoffs.trailerId, trailerId)),
-    db.select({ handoffId: photos.handoffId, sha256: photos.sha256, status: photos.status }).from(photos).where(eq(photos.trailerId, trailerId)),
+    db
+      .select({
+        handoffId: handoffItems.handoffId,
+        itemKey: handoffItems.itemKey,
+        condition: handoffItems.condition,
+        treadThirtySeconds: handoffItems.treadThirtySeconds,
+        isHoldingAir: handoffItems.isHoldingAir,
+        note: handoffItems.note,
+        details: handoffItems.details,
+      })
+      .from(handoffItems)
+      .innerJoin(handoffs, eq(handoffs.id, handoffItems.handoffId))
+      .where(eq(handoffs.trailerId, trailerId)),
+    db
+      .select({ handoffId: photos.handoffId, sha256: photos.sha256, status: photos.status })
+      .from(photos)
+      .where(eq(photos.trailerId, trailerId)),
   ]);
   const check = checkTrailerChain(
     rows.map((row) => ({

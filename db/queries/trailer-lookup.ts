@@ -6,7 +6,14 @@ import { carriers, trailers } from '@/db/schema';
 /** What a scan or a typed lookup answers: enough to start a handoff, nothing private. */
 async function findOne(where: SQL) {
   const [row] = await db
-    .select({ id: trailers.id, unitNumber: trailers.unitNumber, vin: trailers.vin, kind: trailers.kind, ownerScac: carriers.scac, status: trailers.status })
+    .select({
+      id: trailers.id,
+      unitNumber: trailers.unitNumber,
+      vin: trailers.vin,
+      kind: trailers.kind,
+      ownerScac: carriers.scac,
+      status: trailers.status,
+    })
     .from(trailers)
     .innerJoin(carriers, eq(carriers.id, trailers.ownerCarrierId))
     .where(where)
@@ -17,6 +24,7 @@ export type LookedUpTrailer = NonNullable<Awaited<ReturnType<typeof findOne>>>;
 
 export const getTrailerById = (id: string) => findOne(eq(trailers.id, id));
 /** Unit numbers match without regard to case (typed on a phone). */
-export const getTrailerByUnit = (unit: string) => findOne(sql`upper(${trailers.unitNumber}) = ${unit.toUpperCase()}`);
+export const getTrailerByUnit = (unit: string) =>
+  findOne(sql`upper(${trailers.unitNumber}) = ${unit.toUpperCase()}`);
 /** Expects a VIN already normalised (upper case, 17 characters). */
 export const getTrailerByVin = (vin: string) => findOne(eq(trailers.vin, vin));

@@ -4,7 +4,15 @@ import { db } from '@/db';
 import { carriers, terminals, trailers, yardSpots } from '@/db/schema';
 
 /** Trailers matching a unit number, VIN or plate fragment, with owner and where they stand. */
-export async function listTrailers({ q, limit = 50, offset = 0 }: { q?: string; limit?: number; offset?: number }) {
+export async function listTrailers({
+  q,
+  limit = 50,
+  offset = 0,
+}: {
+  q?: string;
+  limit?: number;
+  offset?: number;
+}) {
   const pattern = q ? `%${q.replace(/[%_\\]/g, (c) => `\\${c}`)}%` : null;
   return db
     .select({
@@ -21,7 +29,15 @@ export async function listTrailers({ q, limit = 50, offset = 0 }: { q?: string; 
     .innerJoin(carriers, eq(carriers.id, trailers.ownerCarrierId))
     .leftJoin(terminals, eq(terminals.id, trailers.currentTerminalId))
     .leftJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId))
-    .where(pattern ? or(ilike(trailers.unitNumber, pattern), ilike(trailers.vin, pattern), ilike(trailers.plate, pattern)) : undefined)
+    .where(
+      pattern
+        ? or(
+            ilike(trailers.unitNumber, pattern),
+            ilike(trailers.vin, pattern),
+            ilike(trailers.plate, pattern),
+          )
+        : undefined,
+    )
     .orderBy(asc(trailers.unitNumber))
     .limit(limit)
     .offset(offset);
@@ -39,10 +55,21 @@ export async function countTrailersByStatus(terminalId?: string | null) {
 export async function getTrailerForGate(id: string) {
   const [row] = await db
     .select({
-      id: trailers.id, unitNumber: trailers.unitNumber, vin: trailers.vin, kind: trailers.kind, status: trailers.status,
-      hingesPerDoor: trailers.hingesPerDoor, axleCount: trailers.axleCount, tireLayout: trailers.tireLayout,
-      fuelTankGallons: trailers.fuelTankGallons, isLoaded: trailers.isLoaded, fuelEighths: trailers.fuelEighths,
-      ownerName: carriers.name, ownerScac: carriers.scac, terminalName: terminals.name, spotLabel: yardSpots.label,
+      id: trailers.id,
+      unitNumber: trailers.unitNumber,
+      vin: trailers.vin,
+      kind: trailers.kind,
+      status: trailers.status,
+      hingesPerDoor: trailers.hingesPerDoor,
+      axleCount: trailers.axleCount,
+      tireLayout: trailers.tireLayout,
+      fuelTankGallons: trailers.fuelTankGallons,
+      isLoaded: trailers.isLoaded,
+      fuelEighths: trailers.fuelEighths,
+      ownerName: carriers.name,
+      ownerScac: carriers.scac,
+      terminalName: terminals.name,
+      spotLabel: yardSpots.label,
       gateInAt: trailers.gateInAt,
     })
     .from(trailers)
@@ -56,5 +83,8 @@ export async function getTrailerForGate(id: string) {
 
 /** Carriers for the clerk's carrier picker. */
 export function listCarriers() {
-  return db.select({ id: carriers.id, name: carriers.name, scac: carriers.scac }).from(carriers).orderBy(asc(carriers.name));
+  return db
+    .select({ id: carriers.id, name: carriers.name, scac: carriers.scac })
+    .from(carriers)
+    .orderBy(asc(carriers.name));
 }

@@ -21,7 +21,11 @@ export async function getUserForStaffSignIn(email: string) {
 }
 
 export async function getUserForDriverSignIn(driverNumber: string) {
-  const [row] = await db.select(signInColumns).from(users).where(eq(users.driverNumber, driverNumber)).limit(1);
+  const [row] = await db
+    .select(signInColumns)
+    .from(users)
+    .where(eq(users.driverNumber, driverNumber))
+    .limit(1);
   return row ?? null;
 }
 

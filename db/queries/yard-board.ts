@@ -15,13 +15,26 @@ export async function getBoard(terminalId: string, now = new Date()): Promise<Bo
     .limit(1);
   if (!terminal) return null;
   const [rows, spots, openHolds] = await Promise.all([
-    db.select({ id: yardRows.id, name: yardRows.name }).from(yardRows).where(eq(yardRows.terminalId, terminalId)).orderBy(asc(yardRows.sortOrder), asc(yardRows.name)),
+    db
+      .select({ id: yardRows.id, name: yardRows.name })
+      .from(yardRows)
+      .where(eq(yardRows.terminalId, terminalId))
+      .orderBy(asc(yardRows.sortOrder), asc(yardRows.name)),
     db
       .select({
-        id: yardSpots.id, label: yardSpots.label, kind: yardSpots.kind, rowId: yardSpots.rowId,
-        trailerId: trailers.id, unitNumber: trailers.unitNumber, trailerKind: trailers.kind, isLoaded: trailers.isLoaded,
-        isReeferOn: trailers.isReeferOn, setpointTenthsF: trailers.setpointTenthsF, fuelEighths: trailers.fuelEighths,
-        gateInAt: trailers.gateInAt, lastSeenAt: trailers.lastSeenAt,
+        id: yardSpots.id,
+        label: yardSpots.label,
+        kind: yardSpots.kind,
+        rowId: yardSpots.rowId,
+        trailerId: trailers.id,
+        unitNumber: trailers.unitNumber,
+        trailerKind: trailers.kind,
+        isLoaded: trailers.isLoaded,
+        isReeferOn: trailers.isReeferOn,
+        setpointTenthsF: trailers.setpointTenthsF,
+        fuelEighths: trailers.fuelEighths,
+        gateInAt: trailers.gateInAt,
+        lastSeenAt: trailers.lastSeenAt,
         rowOrder: yardRows.sortOrder,
       })
       .from(yardSpots)
@@ -33,7 +46,13 @@ export async function getBoard(terminalId: string, now = new Date()): Promise<Bo
       .select({ trailerId: holds.trailerId, severity: holds.severity, reason: holds.reason })
       .from(holds)
       .innerJoin(trailers, eq(trailers.id, holds.trailerId))
-      .where(and(eq(trailers.currentTerminalId, terminalId), eq(trailers.status, 'in_yard'), isNull(holds.releasedAt))),
+      .where(
+        and(
+          eq(trailers.currentTerminalId, terminalId),
+          eq(trailers.status, 'in_yard'),
+          isNull(holds.releasedAt),
+        ),
+      ),
   ]);
   const holdsOf = new Map<string, BoardHold[]>();
   for (const h of openHolds) {
@@ -49,17 +68,17 @@ export async function getBoard(terminalId: string, now = new Date()): Promise<Bo
     order,
     trailer: s.trailerId
       ? {
-        id: s.trailerId,
-        unitNumber: s.unitNumber!,
-        kind: s.trailerKind!,
-        isLoaded: s.isLoaded!,
-        isReeferOn: s.isReeferOn,
-        setpointTenthsF: s.setpointTenthsF,
-        fuelEighths: s.fuelEighths,
-        gateInAt: s.gateInAt?.toISOString() ?? null,
-        lastSeenAt: s.lastSeenAt?.toISOString() ?? null,
-        holds: holdsOf.get(s.trailerId) ?? [],
-      }
+          id: s.trailerId,
+          unitNumber: s.unitNumber!,
+          kind: s.trailerKind!,
+          isLoaded: s.isLoaded!,
+          isReeferOn: s.isReeferOn,
+          setpointTenthsF: s.setpointTenthsF,
+          fuelEighths: s.fuelEighths,
+          gateInAt: s.gateInAt?.toISOString() ?? null,
+          lastSeenAt: s.lastSeenAt?.toISOString() ?? null,
+          holds: holdsOf.get(s.trailerId) ?? [],
+        }
       : null,
   }));
   return {

@@ -15,7 +15,10 @@ export async function findTrailerIdByScan(text: string, tx: Tx | typeof db = db)
     const label = await resolveLabelToken(target.token);
     return label.ok ? label.trailerId : null;
   }
-  const where = target.kind === 'vin' ? eq(trailers.vin, target.vin) : sql`upper(${trailers.unitNumber}) = ${target.unitNumber}`;
+  const where =
+    target.kind === 'vin'
+      ? eq(trailers.vin, target.vin)
+      : sql`upper(${trailers.unitNumber}) = ${target.unitNumber}`;
   const [row] = await tx.select({ id: trailers.id }).from(trailers).where(where).limit(1);
   return row?.id ?? null;
 }

@@ -6,7 +6,14 @@ import { refuse, type Refusal } from '@/lib/yard/result';
 import { recordAudit } from './audit';
 
 export type MoveResult =
-  | { ok: true; moveId: string; unitNumber: string; fromLabel: string | null; toLabel: string; isOutOfService: boolean }
+  | {
+      ok: true;
+      moveId: string;
+      unitNumber: string;
+      fromLabel: string | null;
+      toLabel: string;
+      isOutOfService: boolean;
+    }
   | Refusal;
 
 /**
@@ -16,24 +23,51 @@ export type MoveResult =
  */
 export async function moveTrailerInTx(
   tx: Tx,
-  { terminalId, actorId, trailerId, toSpotId, reason }: { terminalId: string; actorId: string; trailerId: string; toSpotId: string; reason: string },
+  {
+    terminalId,
+    actorId,
+    trailerId,
+    toSpotId,
+    reason,
+  }: { terminalId: string; actorId: string; trailerId: string; toSpotId: string; reason: string },
 ): Promise<MoveResult> {
   const [trailer] = await tx
-    .select({ id: trailers.id, unitNumber: trailers.unitNumber, status: trailers.status, terminalId: trailers.currentTerminalId, spotId: trailers.currentSpotId })
-    .from(trailers).where(eq(trailers.id, trailerId)).for('update');
+    .select({
+      id: trailers.id,
+      unitNumber: trailers.unitNumber,
+      status: trailers.status,
+      terminalId: trailers.currentTerminalId,
+      spotId: trailers.currentSpotId,
+    })
+    .from(trailers)
+    .where(eq(trailers.id, trailerId))
+    .for('update');
   if (!trailer || trailer.terminalId !== terminalId || trailer.status !== 'in_yard') {
-    return refuse('not_found', `${trailer?.unitNumber ?? 'That trailer'} is not in this terminal's yard.`, 'unit');
+    return refuse(
+      'not_found',
+      `${trailer?.unitNumber ?? 'That trailer'} is not in this terminal's yard.`,
+      'unit',
+    );
   }
   const [target] = await tx
     .select({ id: yardSpots.id, label: yardSpots.label, retiredAt: yardSpots.retiredAt })
-    .from(yardSpots).where(and(eq(yardSpots.id, toSpotId), eq(yardSpots.terminalId, terminalId))).for('update');
+    .from(yardSpots)
+    .where(and(eq(yardSpots.id, toSpotId), eq(yardSpots.terminalId, terminalId)))
+    .for('update');
   if (!target || target.retiredAt) return refuse('not_found', 'No such slot or door in this yard.', 'target');
-  if (trailer.spotId === target.id) return refuse('invalid', `${trailer.unitNumber} is already in ${target.label}.`, 'target');
+  if (trailer.spotId === target.id)
+    return refuse('invalid', `${trailer.unitNumber} is already in ${target.label}.`, 'target');
   const [occupant] = await tx
     .select({ unitNumber: trailers.unitNumber })
-    .from(trailers).where(eq(trailers.currentSpotId, target.id)).for('update');
+    .from(trailers)
+    .where(eq(trailers.currentSpotId, target.id))
+    .for('update');
   if (occupant) {
-    return refuse('conflict', `${target.label} is occupied by ${occupant.unitNumber}. Move ${occupant.unitNumber} out first or choose another spot.`, 'target');
+    return refuse(
+      'conflict',
+      `${target.label} is occupied by ${occupant.unitNumber}. Move ${occupant.unitNumber} out first or choose another spot.`,
+      'target',
+    );
   }
   const [from] = trailer.spotId
     ? await tx.select({ label: yardSpots.label }).from(yardSpots).where(eq(yardSpots.id, trailer.spotId))
@@ -42,15 +76,43 @@ export async function moveTrailerInTx(
     .insert(yardMoves)
     .values({ trailerId, terminalId, fromSpotId: trailer.spotId, toSpotId: target.id, movedById: actorId })
     .returning({ id: yardMoves.id });
-  await tx.update(trailers).set({ currentSpotId: target.id, lastSeenAt: new Date() }).where(eq(trailers.id, trailerId));
+  await tx
+    .update(trailers)
+    .set({ currentSpotId: target.id, lastSeenAt: new Date() })
+    .where(eq(trailers.id, trailerId));
   const oos = await tx
     .select({ id: holds.id })
-    .from(holds).where(and(eq(holds.trailerId, trailerId), isNull(holds.releasedAt), eq(holds.severity, 'out_of_service'))).limit(1);
-  await recordAudit({ actorId, action: 'yard.move', entityType: 'trailer', entityId: trailerId, detail: { moveId: move.id, from: from?.label ?? null, to: target.label, reason } }, tx);
-  return { ok: true, moveId: move.id, unitNumber: trailer.unitNumber, fromLabel: from?.label ?? null, toLabel: target.label, isOutOfService: oos.length > 0 };
+    .from(holds)
+    .where(
+      and(eq(holds.trailerId, trailerId), isNull(holds.releasedAt), eq(holds.severity, 'out_of_service')),
+    )
+    .limit(1);
+  await recordAudit(
+    {
+      actorId,
+      action: 'yard.move',
+      entityType: 'trailer',
+      entityId: trailerId,
+      detail: { moveId: move.id, from: from?.label ?? null, to: target.label, reason },
+    },
+    tx,
+  );
+  return {
+    ok: true,
+    moveId: move.id,
+    unitNumber: trailer.unitNumber,
+    fromLabel: from?.label ?? null,
+    toLabel: target.label,
+    isOutOfService: oos.length > 0,
+  };
 }
 
-export async function moveTrailer(input: { terminalId: string; actorId: string; trailerId: string; toSpotId: string }): Promise<MoveResult> {
+export async function moveTrailer(input: {
+  terminalId: string;
+  actorId: string;
+  trailerId: string;
+  toSpotId: string;
+}): Promise<MoveResult> {
   return db.transaction((tx) => moveTrailerInTx(tx, { ...input, reason: 'jockey move' }));
 }
 

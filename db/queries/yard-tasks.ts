@@ -8,7 +8,14 @@ import { recordAudit } from './audit';
 /** Open yard tasks of one terminal, oldest first, with the trailer and where it stands. */
 export async function listOpenTasks(terminalId: string) {
   return db
-    .select({ id: yardTasks.id, kind: yardTasks.kind, note: yardTasks.note, createdAt: yardTasks.createdAt, unitNumber: trailers.unitNumber, spotLabel: yardSpots.label })
+    .select({
+      id: yardTasks.id,
+      kind: yardTasks.kind,
+      note: yardTasks.note,
+      createdAt: yardTasks.createdAt,
+      unitNumber: trailers.unitNumber,
+      spotLabel: yardSpots.label,
+    })
     .from(yardTasks)
     .innerJoin(trailers, eq(trailers.id, yardTasks.trailerId))
     .leftJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId))
@@ -16,8 +23,14 @@ export async function listOpenTasks(terminalId: string) {
     .orderBy(asc(yardTasks.createdAt), asc(trailers.unitNumber));
 }
 
-export async function clearTask(terminalId: string, actorId: string, id: string): Promise<{ ok: true } | Refusal> {
-  const [task] = await db.update(yardTasks).set({ clearedAt: new Date(), clearedById: actorId })
+export async function clearTask(
+  terminalId: string,
+  actorId: string,
+  id: string,
+): Promise<{ ok: true } | Refusal> {
+  const [task] = await db
+    .update(yardTasks)
+    .set({ clearedAt: new Date(), clearedById: actorId })
     .where(and(eq(yardTasks.id, id), eq(yardTasks.terminalId, terminalId), isNull(yardTasks.clearedAt)))
     .returning({ id: yardTasks.id });
   if (!task) return refuse('not_found', 'No open task with that id in this yard.');

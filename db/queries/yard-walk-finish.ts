@@ -16,10 +16,17 @@ const DOORS = 'doors';
  * `wrong_slot`, not `unknown`) against the scans in order, stores one outcome per trailer,
  * the counts as the summary, and yard tasks from the quick checks. A second call is a no-op.
  */
-export async function finishWalk(walkId: string, terminalId: string, actorId: string): Promise<{ ok: true; summary: Record<string, number> } | Refusal> {
+export async function finishWalk(
+  walkId: string,
+  terminalId: string,
+  actorId: string,
+): Promise<{ ok: true; summary: Record<string, number> } | Refusal> {
   return db.transaction(async (tx) => {
-    const [walk] = await tx.select({ status: yardWalks.status, rowIds: yardWalks.rowIds, summary: yardWalks.summary })
-      .from(yardWalks).where(and(eq(yardWalks.id, walkId), eq(yardWalks.terminalId, terminalId))).for('update');
+    const [walk] = await tx
+      .select({ status: yardWalks.status, rowIds: yardWalks.rowIds, summary: yardWalks.summary })
+      .from(yardWalks)
+      .where(and(eq(yardWalks.id, walkId), eq(yardWalks.terminalId, terminalId)))
+      .for('update');
     if (!walk) return refuse('not_found', 'No such walk in this yard.');
     if (walk.status === 'finished') return { ok: true as const, summary: walk.summary ?? {} };
 
@@ -29,15 +36,30 @@ export async function finishWalk(walkId: string, terminalId: string, actorId: st
       .leftJoin(trailers, and(eq(trailers.currentSpotId, yardSpots.id), eq(trailers.status, 'in_yard')))
       .where(and(eq(yardSpots.terminalId, terminalId), isNull(yardSpots.retiredAt)));
     const scans = await tx
-      .select({ id: walkScans.id, spotId: walkScans.spotId, trailerId: walkScans.trailerId, code: walkScans.scannedText,
-        fuelEighths: walkScans.fuelEighths, isUnitRunning: walkScans.isUnitRunning, setpointTenthsF: walkScans.setpointTenthsF,
-        areDoorsClosed: walkScans.areDoorsClosed, isSealPresent: walkScans.isSealPresent,
-        kind: trailers.kind, isLoaded: trailers.isLoaded })
-      .from(walkScans).leftJoin(trailers, eq(trailers.id, walkScans.trailerId))
-      .where(eq(walkScans.walkId, walkId)).orderBy(asc(walkScans.seq));
+      .select({
+        id: walkScans.id,
+        spotId: walkScans.spotId,
+        trailerId: walkScans.trailerId,
+        code: walkScans.scannedText,
+        fuelEighths: walkScans.fuelEighths,
+        isUnitRunning: walkScans.isUnitRunning,
+        setpointTenthsF: walkScans.setpointTenthsF,
+        areDoorsClosed: walkScans.areDoorsClosed,
+        isSealPresent: walkScans.isSealPresent,
+        kind: trailers.kind,
+        isLoaded: trailers.isLoaded,
+      })
+      .from(walkScans)
+      .leftJoin(trailers, eq(trailers.id, walkScans.trailerId))
+      .where(eq(walkScans.walkId, walkId))
+      .orderBy(asc(walkScans.seq));
 
     const result = reconcileWalk({
-      board: board.map((b) => ({ slotId: b.slotId, rowId: b.rowId ?? DOORS, expectedTrailerId: b.expectedTrailerId })),
+      board: board.map((b) => ({
+        slotId: b.slotId,
+        rowId: b.rowId ?? DOORS,
+        expectedTrailerId: b.expectedTrailerId,
+      })),
       rowIds: walk.rowIds,
       scans: scans.map((s) => ({ slotId: s.spotId!, trailerId: s.trailerId, code: s.code })),
     });
@@ -47,14 +69,25 @@ export async function finishWalk(walkId: string, terminalId: string, actorId: st
       spotId: t.foundSlotIds[0] ?? null,
       expectedSpotId: t.expectedSlotId,
       trailerId: t.isKnownTrailer ? t.trailerId : null,
-      scannedText: t.isKnownTrailer ? scans.find((s) => s.trailerId === t.trailerId)?.code ?? null : t.trailerId,
+      scannedText: t.isKnownTrailer
+        ? (scans.find((s) => s.trailerId === t.trailerId)?.code ?? null)
+        : t.trailerId,
     }));
     if (outcomes.length) await tx.insert(walkOutcomes).values(outcomes);
-    const summary = { ...result.summary.trailers, scans: result.summary.scans, repeatScans: result.summary.repeatScans };
+    const summary = {
+      ...result.summary.trailers,
+      scans: result.summary.scans,
+      repeatScans: result.summary.repeatScans,
+    };
 
-    const [policy] = await tx.select({ data: policies.data }).from(policies).where(eq(policies.terminalId, terminalId));
+    const [policy] = await tx
+      .select({ data: policies.data })
+      .from(policies)
+      .where(eq(policies.terminalId, terminalId));
     const yardPolicy = yardPolicyOf(policy?.data);
-    const open = await tx.select({ trailerId: yardTasks.trailerId, kind: yardTasks.kind }).from(yardTasks)
+    const open = await tx
+      .select({ trailerId: yardTasks.trailerId, kind: yardTasks.kind })
+      .from(yardTasks)
       .where(and(eq(yardTasks.terminalId, terminalId), isNull(yardTasks.clearedAt)));
     const seen = new Set(open.map((o) => `${o.trailerId}:${o.kind}`));
     const tasks = [];
@@ -69,8 +102,20 @@ export async function finishWalk(walkId: string, terminalId: string, actorId: st
       }
     }
     if (tasks.length) await tx.insert(yardTasks).values(tasks);
-    await tx.update(yardWalks).set({ status: 'finished', finishedAt: new Date(), summary }).where(eq(yardWalks.id, walkId));
-    await recordAudit({ actorId, action: 'yard.walk_finished', entityType: 'yard_walk', entityId: walkId, detail: { summary, tasks: tasks.length } }, tx);
+    await tx
+      .update(yardWalks)
+      .set({ status: 'finished', finishedAt: new Date(), summary })
+      .where(eq(yardWalks.id, walkId));
+    await recordAudit(
+      {
+        actorId,
+        action: 'yard.walk_finished',
+        entityType: 'yard_walk',
+        entityId: walkId,
+        detail: { summary, tasks: tasks.length },
+      },
+      tx,
+    );
     return { ok: true as const, summary };
   });
 }

@@ -11,16 +11,28 @@ export const trailerStatusEnum = pgEnum('trailer_status', ['in_yard', 'on_road',
 export const spotKindEnum = pgEnum('spot_kind', ['slot', 'door']);
 export const handoffKindEnum = pgEnum('handoff_kind', ['drop', 'hook']);
 export const inspectionLevelEnum = pgEnum('inspection_level', ['full', 'quick']);
-export const conditionEnum = pgEnum('item_condition', ['ok', 'minor', 'damaged', 'unsafe', 'missing', 'not_checked']);
+export const conditionEnum = pgEnum('item_condition', [
+  'ok',
+  'minor',
+  'damaged',
+  'unsafe',
+  'missing',
+  'not_checked',
+]);
 export const pretripEnum = pgEnum('pretrip_result', ['pass', 'fail', 'not_run']);
 export const photoStatusEnum = pgEnum('photo_status', ['pending', 'stored', 'rejected']);
 export const confidenceEnum = pgEnum('confidence', ['high', 'medium', 'none']);
 export const holdSeverityEnum = pgEnum('hold_severity', ['out_of_service', 'restricted']);
 export const walkStatusEnum = pgEnum('walk_status', ['in_progress', 'finished']);
-export const walkOutcomeEnum = pgEnum('walk_outcome', ['matched', 'wrong_slot', 'missing', 'unknown', 'duplicate']);
+export const walkOutcomeEnum = pgEnum('walk_outcome', [
+  'matched',
+  'wrong_slot',
+  'missing',
+  'unknown',
+  'duplicate',
+]);
 export const walkResolutionEnum = pgEnum('walk_resolution', ['accepted', 'marked_gone', 'investigating']);
 export const taskKindEnum = pgEnum('yard_task_kind', ['low_fuel', 'unit_off', 'doors_open', 'seal_missing']);
 export const caseStateEnum = pgEnum('case_state', ['open', 'notified', 'disputed', 'decided', 'closed']);
 export const decisionEnum = pgEnum('case_decision', ['charge', 'share', 'absorb', 'waive']);
 export const outboxStatusEnum = pgEnum('outbox_status', ['pending', 'sent', 'failed']);
-

@@ -1,5 +1,14 @@
 import { boolean, index, integer, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { at, createdAt, id, roleEnum, spotKindEnum, tireLayoutEnum, trailerKindEnum, trailerStatusEnum } from './common';
+import {
+  at,
+  createdAt,
+  id,
+  roleEnum,
+  spotKindEnum,
+  tireLayoutEnum,
+  trailerKindEnum,
+  trailerStatusEnum,
+} from './common';
 
 export const terminals = pgTable('terminals', {
   id: id(),
@@ -13,7 +22,9 @@ export const yardRows = pgTable(
   'yard_rows',
   {
     id: id(),
-    terminalId: uuid('terminal_id').notNull().references(() => terminals.id),
+    terminalId: uuid('terminal_id')
+      .notNull()
+      .references(() => terminals.id),
     name: text('name').notNull(),
     sortOrder: integer('sort_order').notNull().default(0),
     createdAt: createdAt(),
@@ -26,7 +37,9 @@ export const yardSpots = pgTable(
   'yard_spots',
   {
     id: id(),
-    terminalId: uuid('terminal_id').notNull().references(() => terminals.id),
+    terminalId: uuid('terminal_id')
+      .notNull()
+      .references(() => terminals.id),
     rowId: uuid('row_id').references(() => yardRows.id),
     kind: spotKindEnum('kind').notNull(),
     label: text('label').notNull(),
@@ -34,7 +47,10 @@ export const yardSpots = pgTable(
     retiredAt: at('retired_at'),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex('yard_spots_terminal_label').on(t.terminalId, t.label), index('yard_spots_row').on(t.rowId)],
+  (t) => [
+    uniqueIndex('yard_spots_terminal_label').on(t.terminalId, t.label),
+    index('yard_spots_row').on(t.rowId),
+  ],
 );
 
 export const carriers = pgTable('carriers', {
@@ -74,7 +90,9 @@ export const trailers = pgTable(
     plate: text('plate').notNull(),
     plateState: text('plate_state').notNull(),
     kind: trailerKindEnum('kind').notNull(),
-    ownerCarrierId: uuid('owner_carrier_id').notNull().references(() => carriers.id),
+    ownerCarrierId: uuid('owner_carrier_id')
+      .notNull()
+      .references(() => carriers.id),
     fuelTankGallons: integer('fuel_tank_gallons').notNull().default(50),
     hingesPerDoor: integer('hinges_per_door').notNull().default(4),
     axleCount: integer('axle_count').notNull().default(2),
@@ -96,4 +114,3 @@ export const trailers = pgTable(
     index('trailers_owner').on(t.ownerCarrierId),
   ],
 );
-

@@ -8,9 +8,16 @@ export const cases = pgTable(
   'cases',
   {
     id: id(),
-    handoffId: uuid('handoff_id').notNull().unique().references(() => handoffs.id),
-    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
-    terminalId: uuid('terminal_id').notNull().references(() => terminals.id),
+    handoffId: uuid('handoff_id')
+      .notNull()
+      .unique()
+      .references(() => handoffs.id),
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
+    terminalId: uuid('terminal_id')
+      .notNull()
+      .references(() => terminals.id),
     proposedCarrierId: uuid('proposed_carrier_id').references(() => carriers.id),
     state: caseStateEnum('state').notNull().default('open'),
     estimateCents: integer('estimate_cents').notNull().default(0),
@@ -31,7 +38,9 @@ export const caseEvents = pgTable(
   'case_events',
   {
     id: id(),
-    caseId: uuid('case_id').notNull().references(() => cases.id),
+    caseId: uuid('case_id')
+      .notNull()
+      .references(() => cases.id),
     kind: text('kind').notNull(),
     fromState: caseStateEnum('from_state'),
     toState: caseStateEnum('to_state'),
@@ -57,7 +66,9 @@ export const rateCard = pgTable(
 
 /** Terminal policy (fuel rules, pre-trip age, free time, dispute window) as the engine's policy data. */
 export const policies = pgTable('policies', {
-  terminalId: uuid('terminal_id').primaryKey().references(() => terminals.id),
+  terminalId: uuid('terminal_id')
+    .primaryKey()
+    .references(() => terminals.id),
   data: jsonb('data').$type<Record<string, unknown>>().notNull(),
   updatedAt: at('updated_at').notNull().defaultNow(),
   createdAt: createdAt(),

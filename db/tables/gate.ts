@@ -18,7 +18,9 @@ export const labels = pgTable(
   'labels',
   {
     id: id(),
-    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
     issuedById: uuid('issued_by_id').references(() => users.id),
     issuedAt: at('issued_at').notNull().defaultNow(),
     revokedAt: at('revoked_at'),
@@ -32,15 +34,23 @@ export const handoffs = pgTable(
   'handoffs',
   {
     id: id(),
-    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
-    terminalId: uuid('terminal_id').notNull().references(() => terminals.id),
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
+    terminalId: uuid('terminal_id')
+      .notNull()
+      .references(() => terminals.id),
     kind: handoffKindEnum('kind').notNull(),
     level: inspectionLevelEnum('level').notNull().default('full'),
-    carrierId: uuid('carrier_id').notNull().references(() => carriers.id),
+    carrierId: uuid('carrier_id')
+      .notNull()
+      .references(() => carriers.id),
     driverId: uuid('driver_id').references(() => users.id),
     driverName: text('driver_name').notNull(),
     tractorNumber: text('tractor_number').notNull(),
-    recordedById: uuid('recorded_by_id').notNull().references(() => users.id),
+    recordedById: uuid('recorded_by_id')
+      .notNull()
+      .references(() => users.id),
     isLoaded: boolean('is_loaded').notNull(),
     sealNumber: text('seal_number'),
     fuelEighths: integer('fuel_eighths'),
@@ -70,7 +80,9 @@ export const handoffItems = pgTable(
   'handoff_items',
   {
     id: id(),
-    handoffId: uuid('handoff_id').notNull().references(() => handoffs.id),
+    handoffId: uuid('handoff_id')
+      .notNull()
+      .references(() => handoffs.id),
     itemKey: text('item_key').notNull(),
     condition: conditionEnum('condition').notNull(),
     treadThirtySeconds: integer('tread_thirty_seconds'),
@@ -80,7 +92,10 @@ export const handoffItems = pgTable(
     note: text('note'),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex('handoff_items_handoff_item').on(t.handoffId, t.itemKey), index('handoff_items_item').on(t.itemKey)],
+  (t) => [
+    uniqueIndex('handoff_items_handoff_item').on(t.handoffId, t.itemKey),
+    index('handoff_items_item').on(t.itemKey),
+  ],
 );
 
 export const photos = pgTable(
@@ -88,8 +103,12 @@ export const photos = pgTable(
   {
     id: id(),
     objectKey: text('object_key').notNull().unique(),
-    uploadedById: uuid('uploaded_by_id').notNull().references(() => users.id),
-    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    uploadedById: uuid('uploaded_by_id')
+      .notNull()
+      .references(() => users.id),
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
     handoffId: uuid('handoff_id').references(() => handoffs.id),
     caseEventId: uuid('case_event_id'),
     itemKey: text('item_key'),
@@ -109,7 +128,9 @@ export const findings = pgTable(
     id: id(),
     handoffId: uuid('handoff_id').references(() => handoffs.id),
     walkId: uuid('walk_id'),
-    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
     itemKey: text('item_key').notNull(),
     kind: text('kind').notNull(),
     condition: conditionEnum('condition'),
@@ -123,7 +144,11 @@ export const findings = pgTable(
     caseId: uuid('case_id'),
     createdAt: createdAt(),
   },
-  (t) => [index('findings_handoff').on(t.handoffId), index('findings_trailer').on(t.trailerId), index('findings_case').on(t.caseId)],
+  (t) => [
+    index('findings_handoff').on(t.handoffId),
+    index('findings_trailer').on(t.trailerId),
+    index('findings_case').on(t.caseId),
+  ],
 );
 
 /** A hold on a trailer: `out_of_service` blocks a hook; `restricted` names what is not allowed. */
@@ -131,7 +156,9 @@ export const holds = pgTable(
   'holds',
   {
     id: id(),
-    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
     handoffId: uuid('handoff_id').references(() => handoffs.id),
     walkId: uuid('walk_id'),
     severity: holdSeverityEnum('severity').notNull(),

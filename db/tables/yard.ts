@@ -1,5 +1,13 @@
 import { boolean, index, integer, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
-import { at, createdAt, id, taskKindEnum, walkOutcomeEnum, walkResolutionEnum, walkStatusEnum } from './common';
+import {
+  at,
+  createdAt,
+  id,
+  taskKindEnum,
+  walkOutcomeEnum,
+  walkResolutionEnum,
+  walkStatusEnum,
+} from './common';
 import { terminals, trailers, users, yardSpots } from './core';
 
 /** A jockey's move of a trailer inside the yard; custody stays with the terminal. */
@@ -7,11 +15,19 @@ export const yardMoves = pgTable(
   'yard_moves',
   {
     id: id(),
-    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
-    terminalId: uuid('terminal_id').notNull().references(() => terminals.id),
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
+    terminalId: uuid('terminal_id')
+      .notNull()
+      .references(() => terminals.id),
     fromSpotId: uuid('from_spot_id').references(() => yardSpots.id),
-    toSpotId: uuid('to_spot_id').notNull().references(() => yardSpots.id),
-    movedById: uuid('moved_by_id').notNull().references(() => users.id),
+    toSpotId: uuid('to_spot_id')
+      .notNull()
+      .references(() => yardSpots.id),
+    movedById: uuid('moved_by_id')
+      .notNull()
+      .references(() => users.id),
     movedAt: at('moved_at').notNull().defaultNow(),
     createdAt: createdAt(),
   },
@@ -22,8 +38,12 @@ export const yardWalks = pgTable(
   'yard_walks',
   {
     id: id(),
-    terminalId: uuid('terminal_id').notNull().references(() => terminals.id),
-    startedById: uuid('started_by_id').notNull().references(() => users.id),
+    terminalId: uuid('terminal_id')
+      .notNull()
+      .references(() => terminals.id),
+    startedById: uuid('started_by_id')
+      .notNull()
+      .references(() => users.id),
     rowIds: jsonb('row_ids').$type<string[]>().notNull(),
     status: walkStatusEnum('status').notNull().default('in_progress'),
     startedAt: at('started_at').notNull().defaultNow(),
@@ -39,7 +59,9 @@ export const walkScans = pgTable(
   'walk_scans',
   {
     id: id(),
-    walkId: uuid('walk_id').notNull().references(() => yardWalks.id),
+    walkId: uuid('walk_id')
+      .notNull()
+      .references(() => yardWalks.id),
     seq: integer('seq').notNull(),
     clientKey: text('client_key').notNull().unique(),
     scannedText: text('scanned_text').notNull(),
@@ -53,7 +75,10 @@ export const walkScans = pgTable(
     scannedAt: at('scanned_at').notNull(),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex('walk_scans_walk_seq').on(t.walkId, t.seq), index('walk_scans_trailer').on(t.trailerId)],
+  (t) => [
+    uniqueIndex('walk_scans_walk_seq').on(t.walkId, t.seq),
+    index('walk_scans_trailer').on(t.trailerId),
+  ],
 );
 
 /** The reconciliation of a finished walk, one row per slot or trailer, and what the clerk did about it. */
@@ -61,7 +86,9 @@ export const walkOutcomes = pgTable(
   'walk_outcomes',
   {
     id: id(),
-    walkId: uuid('walk_id').notNull().references(() => yardWalks.id),
+    walkId: uuid('walk_id')
+      .notNull()
+      .references(() => yardWalks.id),
     outcome: walkOutcomeEnum('outcome').notNull(),
     spotId: uuid('spot_id').references(() => yardSpots.id),
     expectedSpotId: uuid('expected_spot_id').references(() => yardSpots.id),
@@ -79,8 +106,12 @@ export const yardTasks = pgTable(
   'yard_tasks',
   {
     id: id(),
-    terminalId: uuid('terminal_id').notNull().references(() => terminals.id),
-    trailerId: uuid('trailer_id').notNull().references(() => trailers.id),
+    terminalId: uuid('terminal_id')
+      .notNull()
+      .references(() => terminals.id),
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
     walkId: uuid('walk_id').references(() => yardWalks.id),
     kind: taskKindEnum('kind').notNull(),
     note: text('note'),

@@ -21,7 +21,11 @@ const DECISION_WORDS: Record<Decision, string> = {
 };
 
 function itemLines(f: CaseEmailFacts) {
-  return f.items.map((i) => `- ${i.label}: ${i.before ?? 'no earlier record'} → ${i.after ?? 'not checked'}\n  ${i.reason}`).join('\n');
+  return f.items
+    .map(
+      (i) => `- ${i.label}: ${i.before ?? 'no earlier record'} → ${i.after ?? 'not checked'}\n  ${i.reason}`,
+    )
+    .join('\n');
 }
 
 export function notifyEmail(f: CaseEmailFacts, deadline: Date, link: string) {

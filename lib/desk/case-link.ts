@@ -5,7 +5,8 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
 
 export type CaseLinkClaims = { caseId: string; carrierId: string; expiresAt: Date };
-export type CaseLinkCheck = { ok: true; claims: CaseLinkClaims } | { ok: false; error: 'malformed' | 'bad_signature' | 'expired' };
+export type CaseLinkCheck =
+  { ok: true; claims: CaseLinkClaims } | { ok: false; error: 'malformed' | 'bad_signature' | 'expired' };
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
@@ -21,13 +22,16 @@ export function signCaseLink(claims: CaseLinkClaims, secret: string): string {
 /** Never throws on a bad token. */
 export function verifyCaseLink(token: string, secret: string, now: Date): CaseLinkCheck {
   const [body, signature, extra] = token.split('.');
-  if (!body || !signature || extra !== undefined || token.length > 300) return { ok: false, error: 'malformed' };
+  if (!body || !signature || extra !== undefined || token.length > 300)
+    return { ok: false, error: 'malformed' };
   const payload = Buffer.from(body, 'base64url').toString('utf8');
   const [caseId, carrierId, exp] = payload.split('.');
-  if (!UUID.test(caseId ?? '') || !UUID.test(carrierId ?? '') || !/^\d{1,12}$/.test(exp ?? '')) return { ok: false, error: 'malformed' };
+  if (!UUID.test(caseId ?? '') || !UUID.test(carrierId ?? '') || !/^\d{1,12}$/.test(exp ?? ''))
+    return { ok: false, error: 'malformed' };
   const expected = Buffer.from(mac(payload, secret));
   const given = Buffer.from(signature);
-  if (expected.length !== given.length || !timingSafeEqual(expected, given)) return { ok: false, error: 'bad_signature' };
+  if (expected.length !== given.length || !timingSafeEqual(expected, given))
+    return { ok: false, error: 'bad_signature' };
   const expiresAt = new Date(Number(exp) * 1000);
   if (now.getTime() > expiresAt.getTime()) return { ok: false, error: 'expired' };
   return { ok: true, claims: { caseId, carrierId, expiresAt } };

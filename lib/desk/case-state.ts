@@ -31,7 +31,12 @@ export type CaseCommand =
 
 export type TransitionContext = { now: Date; disputeWindowDays: number; timeZone: string };
 
-export type CaseEventDraft = { kind: CaseCommand['kind']; fromState: CaseState; toState: CaseState; note: string | null };
+export type CaseEventDraft = {
+  kind: CaseCommand['kind'];
+  fromState: CaseState;
+  toState: CaseState;
+  note: string | null;
+};
 export type TransitionResult =
   | { ok: true; toState: CaseState; event: CaseEventDraft; disputeDeadline?: Date }
   | { ok: false; reason: string };
@@ -51,7 +56,11 @@ export function isWithinDisputeWindow(deadline: Date | null, now: Date): boolean
 
 const refuse = (reason: string): TransitionResult => ({ ok: false, reason });
 
-export function applyCaseCommand(c: CaseSnapshot, cmd: CaseCommand, ctx: TransitionContext): TransitionResult {
+export function applyCaseCommand(
+  c: CaseSnapshot,
+  cmd: CaseCommand,
+  ctx: TransitionContext,
+): TransitionResult {
   const from = c.state;
   const done = (toState: CaseState, note: string | null, disputeDeadline?: Date): TransitionResult => ({
     ok: true,
@@ -62,12 +71,19 @@ export function applyCaseCommand(c: CaseSnapshot, cmd: CaseCommand, ctx: Transit
   switch (cmd.kind) {
     case 'notify':
       if (from !== 'open') return refuse(`A case that is ${from} cannot be notified again.`);
-      if (!c.hasProposedCarrier) return refuse('No carrier is proposed for this case, so there is nobody to notify.');
+      if (!c.hasProposedCarrier)
+        return refuse('No carrier is proposed for this case, so there is nobody to notify.');
       if (c.amountCents <= 0) return refuse('Set an estimate before notifying the carrier.');
       return done('notified', null, disputeDeadlineFrom(ctx.now, ctx.disputeWindowDays, ctx.timeZone));
     case 'dispute':
-      if (from !== 'notified') return refuse(from === 'disputed' ? 'This case is already disputed.' : `A case that is ${from} cannot be disputed.`);
-      if (!isWithinDisputeWindow(c.disputeDeadline, ctx.now)) return refuse('The dispute window for this case has closed.');
+      if (from !== 'notified')
+        return refuse(
+          from === 'disputed'
+            ? 'This case is already disputed.'
+            : `A case that is ${from} cannot be disputed.`,
+        );
+      if (!isWithinDisputeWindow(c.disputeDeadline, ctx.now))
+        return refuse('The dispute window for this case has closed.');
       if (!cmd.note.trim()) return refuse('Say why you dispute the case.');
       return done('disputed', cmd.note.trim());
     case 'decide':
@@ -76,8 +92,10 @@ export function applyCaseCommand(c: CaseSnapshot, cmd: CaseCommand, ctx: Transit
       if (from !== 'decided') return refuse('Only a decided case can be closed.');
       return done('closed', cmd.note?.trim() || null);
     case 'override':
-      if (from === 'decided' || from === 'closed') return refuse('The estimate cannot change after the decision.');
-      if (!Number.isSafeInteger(cmd.overrideCents) || cmd.overrideCents < 0) return refuse('The amount must be whole cents, zero or more.');
+      if (from === 'decided' || from === 'closed')
+        return refuse('The estimate cannot change after the decision.');
+      if (!Number.isSafeInteger(cmd.overrideCents) || cmd.overrideCents < 0)
+        return refuse('The amount must be whole cents, zero or more.');
       if (!cmd.reason.trim()) return refuse('Give a reason for changing the estimate.');
       return done(from, cmd.reason.trim());
   }
@@ -94,8 +112,10 @@ function decide(
     return refuse('Notify the carrier before charging them, so they can dispute.');
   }
   if (!cmd.reason.trim()) return refuse('Give a reason for the decision.');
-  if (!Number.isSafeInteger(chargedCents) || chargedCents < 0) return refuse('The amount must be whole cents, zero or more.');
-  if ((decision === 'absorb' || decision === 'waive') && chargedCents !== 0) return refuse(`Nothing is charged when you ${decision}.`);
+  if (!Number.isSafeInteger(chargedCents) || chargedCents < 0)
+    return refuse('The amount must be whole cents, zero or more.');
+  if ((decision === 'absorb' || decision === 'waive') && chargedCents !== 0)
+    return refuse(`Nothing is charged when you ${decision}.`);
   if (decision === 'charge' && chargedCents <= 0) return refuse('Enter the amount to charge.');
   if (decision === 'share' && (chargedCents <= 0 || chargedCents >= c.amountCents)) {
     return refuse('A shared charge is more than zero and less than the estimate.');

@@ -3,7 +3,11 @@
 import { hashableFromRows, type HandoffHashRow, type HandoffItemHashRow } from '@/lib/handoff-canonical';
 import { verifyChain, type ChainCheck } from '@/lib/handoff-hash';
 
-export type StoredHandoff = { row: HandoffHashRow & { contentHash: string }; items: HandoffItemHashRow[]; photoSha256s: string[] };
+export type StoredHandoff = {
+  row: HandoffHashRow & { contentHash: string };
+  items: HandoffItemHashRow[];
+  photoSha256s: string[];
+};
 
 /** Verifies a trailer's handoffs, given oldest first (the order the chain was written in). */
 export function checkTrailerChain(handoffs: StoredHandoff[]): ChainCheck {

@@ -5,7 +5,12 @@
 
 export type RateRow = { itemPattern: string; condition: string; amountCents: number };
 export type EstimateFinding = { itemKey: string; condition: string | null };
-export type EstimateLine = { itemKey: string; condition: string | null; pattern: string | null; amountCents: number };
+export type EstimateLine = {
+  itemKey: string;
+  condition: string | null;
+  pattern: string | null;
+  amountCents: number;
+};
 export type Estimate = { lines: EstimateLine[]; totalCents: number; unpricedItemKeys: string[] };
 
 export function patternApplies(pattern: string, itemKey: string): boolean {
@@ -25,8 +30,14 @@ export function findRate(rates: RateRow[], itemKey: string, condition: string | 
 export function estimateCase(findings: EstimateFinding[], rates: RateRow[]): Estimate {
   const lines = findings.map((f): EstimateLine => {
     const rate = findRate(rates, f.itemKey, f.condition);
-    if (rate && !Number.isSafeInteger(rate.amountCents)) throw new Error(`rate ${rate.itemPattern} is not whole cents`);
-    return { itemKey: f.itemKey, condition: f.condition, pattern: rate?.itemPattern ?? null, amountCents: rate?.amountCents ?? 0 };
+    if (rate && !Number.isSafeInteger(rate.amountCents))
+      throw new Error(`rate ${rate.itemPattern} is not whole cents`);
+    return {
+      itemKey: f.itemKey,
+      condition: f.condition,
+      pattern: rate?.itemPattern ?? null,
+      amountCents: rate?.amountCents ?? 0,
+    };
   });
   return {
     lines,

@@ -3,14 +3,46 @@ import { formatCents } from './estimate';
 import { itemLabel } from './item-labels';
 
 export type FileKind = 'handoff' | 'move' | 'walk' | 'finding' | 'hold' | 'case' | 'photo';
-export type FileEntry = { id: string; kind: FileKind; at: Date; title: string; detail: string | null; href?: string; tone?: 'danger' | 'ok' | 'hold' };
+export type FileEntry = {
+  id: string;
+  kind: FileKind;
+  at: Date;
+  title: string;
+  detail: string | null;
+  href?: string;
+  tone?: 'danger' | 'ok' | 'hold';
+};
 
 export type FileRows = {
-  handoffs: { id: string; kind: 'drop' | 'hook'; occurredAt: Date; driverName: string; carrierScac: string; level: string; verificationCode: string }[];
+  handoffs: {
+    id: string;
+    kind: 'drop' | 'hook';
+    occurredAt: Date;
+    driverName: string;
+    carrierScac: string;
+    level: string;
+    verificationCode: string;
+  }[];
   moves: { id: string; movedAt: Date; fromSpot: string | null; toSpot: string; jockeyName: string | null }[];
   walks: { id: string; scannedAt: Date; spot: string | null; jockeyName: string | null }[];
-  findings: { id: string; createdAt: Date; itemKey: string; kind: string; condition: string | null; reason: string }[];
-  holds: { id: string; placedAt: Date; severity: string; reason: string; releasedAt: Date | null; repairedBy: string | null; repairNote: string | null; releasedByName: string | null }[];
+  findings: {
+    id: string;
+    createdAt: Date;
+    itemKey: string;
+    kind: string;
+    condition: string | null;
+    reason: string;
+  }[];
+  holds: {
+    id: string;
+    placedAt: Date;
+    severity: string;
+    reason: string;
+    releasedAt: Date | null;
+    repairedBy: string | null;
+    repairNote: string | null;
+    releasedByName: string | null;
+  }[];
   cases: { id: string; openedAt: Date; state: string; amountCents: number; carrierScac: string | null }[];
   photos: { id: string; createdAt: Date; itemKey: string | null; handoffId: string | null }[];
 };
@@ -26,19 +58,70 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
       title: `${h.kind === 'drop' ? 'Drop' : 'Hook'} by ${h.driverName} (${h.carrierScac})`,
       detail: `${h.level === 'full' ? 'Full inspection' : 'Quick check'} · receipt ${h.verificationCode}`,
     })),
-    ...rows.moves.map((m): FileEntry => ({ id: m.id, kind: 'move', at: m.movedAt, title: `Moved ${m.fromSpot ? `from ${m.fromSpot} ` : ''}to ${m.toSpot}`, detail: m.jockeyName ? `by ${m.jockeyName}` : null })),
-    ...rows.walks.map((w): FileEntry => ({ id: w.id, kind: 'walk', at: w.scannedAt, title: `Seen on a yard walk${w.spot ? ` in ${w.spot}` : ''}`, detail: w.jockeyName ? `by ${w.jockeyName}` : null })),
+    ...rows.moves.map((m): FileEntry => ({
+      id: m.id,
+      kind: 'move',
+      at: m.movedAt,
+      title: `Moved ${m.fromSpot ? `from ${m.fromSpot} ` : ''}to ${m.toSpot}`,
+      detail: m.jockeyName ? `by ${m.jockeyName}` : null,
+    })),
+    ...rows.walks.map((w): FileEntry => ({
+      id: w.id,
+      kind: 'walk',
+      at: w.scannedAt,
+      title: `Seen on a yard walk${w.spot ? ` in ${w.spot}` : ''}`,
+      detail: w.jockeyName ? `by ${w.jockeyName}` : null,
+    })),
     ...rows.findings
-      .filter((f) => SHOWN_FINDINGS.has(f.kind) || !['unchanged', 'first_record', 'not_checked'].includes(f.kind))
-      .map((f): FileEntry => ({ id: f.id, kind: 'finding', at: f.createdAt, title: `${f.kind === 'repaired' ? 'Repaired' : f.kind === 'worse' ? 'Worse' : f.kind === 'new' ? 'New damage' : f.kind}: ${itemLabel(f.itemKey)}${f.condition ? ` (${f.condition})` : ''}`, detail: f.reason, tone: f.kind === 'repaired' ? 'ok' : 'danger' })),
+      .filter(
+        (f) => SHOWN_FINDINGS.has(f.kind) || !['unchanged', 'first_record', 'not_checked'].includes(f.kind),
+      )
+      .map((f): FileEntry => ({
+        id: f.id,
+        kind: 'finding',
+        at: f.createdAt,
+        title: `${f.kind === 'repaired' ? 'Repaired' : f.kind === 'worse' ? 'Worse' : f.kind === 'new' ? 'New damage' : f.kind}: ${itemLabel(f.itemKey)}${f.condition ? ` (${f.condition})` : ''}`,
+        detail: f.reason,
+        tone: f.kind === 'repaired' ? 'ok' : 'danger',
+      })),
     ...rows.holds.flatMap((h): FileEntry[] => {
-      const placed: FileEntry = { id: h.id, kind: 'hold', at: h.placedAt, title: `Hold placed: ${h.severity === 'out_of_service' ? 'out of service' : 'restricted'}`, detail: h.reason, tone: 'hold' };
+      const placed: FileEntry = {
+        id: h.id,
+        kind: 'hold',
+        at: h.placedAt,
+        title: `Hold placed: ${h.severity === 'out_of_service' ? 'out of service' : 'restricted'}`,
+        detail: h.reason,
+        tone: 'hold',
+      };
       if (!h.releasedAt) return [placed];
-      const released: FileEntry = { id: `${h.id}:released`, kind: 'hold', at: h.releasedAt, title: `Hold released after repair by ${h.repairedBy ?? 'unknown'}`, detail: `${h.repairNote ?? ''}${h.releasedByName ? ` · recorded by ${h.releasedByName}` : ''}`, tone: 'ok' };
+      const released: FileEntry = {
+        id: `${h.id}:released`,
+        kind: 'hold',
+        at: h.releasedAt,
+        title: `Hold released after repair by ${h.repairedBy ?? 'unknown'}`,
+        detail: `${h.repairNote ?? ''}${h.releasedByName ? ` · recorded by ${h.releasedByName}` : ''}`,
+        tone: 'ok',
+      };
       return [placed, released];
     }),
-    ...rows.cases.map((c): FileEntry => ({ id: c.id, kind: 'case', at: c.openedAt, title: `Damage case ${c.state}${c.carrierScac ? ` · ${c.carrierScac}` : ''}`, detail: `Estimate ${formatCents(c.amountCents)}`, href: `/desk/cases/${c.id}` })),
-    ...rows.photos.map((p): FileEntry => ({ id: p.id, kind: 'photo', at: p.createdAt, title: `Photo${p.itemKey ? ` of ${itemLabel(p.itemKey)}` : ''}`, detail: null, href: `/api/photos/${p.id}` })),
+    ...rows.cases.map((c): FileEntry => ({
+      id: c.id,
+      kind: 'case',
+      at: c.openedAt,
+      title: `Damage case ${c.state}${c.carrierScac ? ` · ${c.carrierScac}` : ''}`,
+      detail: `Estimate ${formatCents(c.amountCents)}`,
+      href: `/desk/cases/${c.id}`,
+    })),
+    ...rows.photos.map((p): FileEntry => ({
+      id: p.id,
+      kind: 'photo',
+      at: p.createdAt,
+      title: `Photo${p.itemKey ? ` of ${itemLabel(p.itemKey)}` : ''}`,
+      detail: null,
+      href: `/api/photos/${p.id}`,
+    })),
   ];
-  return entries.filter((e) => !kind || e.kind === kind).sort((a, b) => b.at.getTime() - a.at.getTime() || a.id.localeCompare(b.id));
+  return entries
+    .filter((e) => !kind || e.kind === kind)
+    .sort((a, b) => b.at.getTime() - a.at.getTime() || a.id.localeCompare(b.id));
 }

@@ -1,5 +1,12 @@
 import type {
-  Checklist, ChecklistItem, ChecklistZone, ItemKind, ItemObservation, ReadingField, TrailerSpec, ZoneKey,
+  Checklist,
+  ChecklistItem,
+  ChecklistZone,
+  ItemKind,
+  ItemObservation,
+  ReadingField,
+  TrailerSpec,
+  ZoneKey,
 } from './types';
 
 type ItemDef = [key: string, label: string, kind: ItemKind, reading?: ReadingField];
@@ -76,10 +83,15 @@ function undercarriage(spec: TrailerSpec): ItemDef[] {
 }
 
 const DUAL_POSITIONS = [
-  ['left_outer', 'left outer'], ['left_inner', 'left inner'],
-  ['right_inner', 'right inner'], ['right_outer', 'right outer'],
+  ['left_outer', 'left outer'],
+  ['left_inner', 'left inner'],
+  ['right_inner', 'right inner'],
+  ['right_outer', 'right outer'],
 ] as const;
-const SINGLE_POSITIONS = [['left', 'left'], ['right', 'right']] as const;
+const SINGLE_POSITIONS = [
+  ['left', 'left'],
+  ['right', 'right'],
+] as const;
 
 function tires(spec: TrailerSpec): ItemDef[] {
   const positions = spec.tireLayout === 'dual' ? DUAL_POSITIONS : SINGLE_POSITIONS;
@@ -94,7 +106,10 @@ function tires(spec: TrailerSpec): ItemDef[] {
 
 function rear(spec: TrailerSpec): ItemDef[] {
   const items: ItemDef[] = [];
-  for (const [door, name] of [['door_left', 'Left door'], ['door_right', 'Right door']] as const) {
+  for (const [door, name] of [
+    ['door_left', 'Left door'],
+    ['door_right', 'Right door'],
+  ] as const) {
     items.push([`rear.${door}.panel`, `${name} panel`, 'condition']);
     for (let h = 1; h <= spec.hingesPerDoor; h++) {
       items.push([`rear.${door}.hinge_${h}`, `${name} hinge ${h} (from top)`, 'hinge']);
@@ -123,7 +138,10 @@ function interior(spec: TrailerSpec): ItemDef[] {
     ['interior.roof', 'Roof (inside)', 'condition'],
   ];
   if (spec.kind === 'reefer') {
-    items.push(['interior.bulkhead', 'Bulkhead', 'condition'], ['interior.air_chute', 'Air chute', 'condition']);
+    items.push(
+      ['interior.bulkhead', 'Bulkhead', 'condition'],
+      ['interior.air_chute', 'Air chute', 'condition'],
+    );
   }
   return items;
 }
@@ -164,7 +182,8 @@ export function buildChecklist(spec: TrailerSpec): Checklist {
     key: zone,
     label: ZONE_LABELS[zone],
     items: items.map(([key, label, kind, reading]): ChecklistItem =>
-      reading ? { key, label, zone, kind, reading } : { key, label, zone, kind }),
+      reading ? { key, label, zone, kind, reading } : { key, label, zone, kind },
+    ),
   }));
   return { spec, zones, items: zones.flatMap((z) => z.items) };
 }

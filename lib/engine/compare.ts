@@ -1,7 +1,13 @@
 import { inspectableItems } from './checklist';
 import { isInspected, severityOf } from './conditions';
 import type {
-  Checklist, Condition, FindingKind, InspectionEvent, InspectionKind, ItemFinding, TimelineEvent,
+  Checklist,
+  Condition,
+  FindingKind,
+  InspectionEvent,
+  InspectionKind,
+  ItemFinding,
+  TimelineEvent,
 } from './types';
 
 /**

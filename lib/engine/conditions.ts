@@ -1,7 +1,14 @@
 import type { Condition } from './types';
 
 /** All conditions, in severity order, then `not_checked` (which has no severity). */
-export const CONDITIONS: readonly Condition[] = ['ok', 'minor', 'damaged', 'unsafe', 'missing', 'not_checked'];
+export const CONDITIONS: readonly Condition[] = [
+  'ok',
+  'minor',
+  'damaged',
+  'unsafe',
+  'missing',
+  'not_checked',
+];
 
 const SEVERITY: Record<Exclude<Condition, 'not_checked'>, number> = {
   ok: 0,

@@ -43,7 +43,12 @@ export function custodianName(c: Custodian, terminalName = 'the terminal'): stri
   return c.type === 'terminal' ? terminalName : c.carrierName;
 }
 
-function leg(c: Custodian, from: TimelineEvent | null, to: TimelineEvent | null, unrecorded: boolean): CustodyLeg {
+function leg(
+  c: Custodian,
+  from: TimelineEvent | null,
+  to: TimelineEvent | null,
+  unrecorded: boolean,
+): CustodyLeg {
   return {
     custodian: c,
     fromEventId: from?.id ?? null,
@@ -100,7 +105,11 @@ export function buildCustodyLegs(timeline: readonly TimelineEvent[]): CustodyLeg
   const last = timeline[timeline.length - 1];
   const legs = [leg(custodianBefore(first), null, first, false), ...legsAlong(timeline)];
   const tail = legs[legs.length - 1];
-  if (legs.length > 1 && !tail.isUnrecordedChange && custodianKey(tail.custodian) === custodianKey(custodianAfter(last))) {
+  if (
+    legs.length > 1 &&
+    !tail.isUnrecordedChange &&
+    custodianKey(tail.custodian) === custodianKey(custodianAfter(last))
+  ) {
     tail.toEventId = null;
     tail.to = null;
   } else {

@@ -44,14 +44,21 @@ export function assessFuel({ trailer, history, current, policy }: FuelInput): Fu
   const tank = trailer.fuelTankGallons ?? policy.defaultTankGallons;
   const eighths = current.fuelEighths;
   const gallons = eighthsToGallons(eighths, tank);
-  const required = current.type === 'drop' ? policy.requiredFuelEighthsAtDrop
-    : current.type === 'hook' ? policy.requiredFuelEighthsAtHook : null;
+  const required =
+    current.type === 'drop'
+      ? policy.requiredFuelEighthsAtDrop
+      : current.type === 'hook'
+        ? policy.requiredFuelEighthsAtHook
+        : null;
   const shortfallEighths = required === null ? 0 : Math.max(0, required - eighths);
 
   let prev: (InspectionEvent & { fuelEighths: number }) | null = null;
   for (let i = history.length - 1; i >= 0; i--) {
     const e = history[i];
-    if (isReading(e)) { prev = e; break; }
+    if (isReading(e)) {
+      prev = e;
+      break;
+    }
   }
 
   let dropGallons: number | null = null;

@@ -5,12 +5,25 @@
  */
 export { buildChecklist, inspectableItems, OBSERVATION_FIELDS, ZONE_LABELS } from './checklist';
 export {
-  CONDITION_LABELS, CONDITIONS, compareSeverity, isCondition, isInspected, severityOf, worstCondition,
+  CONDITION_LABELS,
+  CONDITIONS,
+  compareSeverity,
+  isCondition,
+  isInspected,
+  severityOf,
+  worstCondition,
 } from './conditions';
 export { classifyChange, compareInspection, damageFindings, inspectionKindOf } from './compare';
 export type { CompareInput } from './compare';
 export {
-  buildCustodyLegs, currentCustodian, custodianAfter, custodianBefore, custodianKey, custodianName, legsAlong, legsBetweenEvents,
+  buildCustodyLegs,
+  currentCustodian,
+  custodianAfter,
+  custodianBefore,
+  custodianKey,
+  custodianName,
+  legsAlong,
+  legsBetweenEvents,
 } from './custody';
 export { attributeFindings } from './responsibility';
 export type { AttributeInput } from './responsibility';
@@ -22,8 +35,14 @@ export { reconcileWalk } from './reconcile';
 export type { ReconcileInput } from './reconcile';
 export { defaultPolicy, defaultPolicySources, makePolicy } from './policy';
 export {
-  celsiusToFahrenheit, fahrenheitToCelsius, gallonsToLitres, LITRES_PER_US_GALLON, litresToGallons,
-  MILLIMETRES_PER_INCH, roundTo, thirtySecondsToMillimetres,
+  celsiusToFahrenheit,
+  fahrenheitToCelsius,
+  gallonsToLitres,
+  LITRES_PER_US_GALLON,
+  litresToGallons,
+  MILLIMETRES_PER_INCH,
+  roundTo,
+  thirtySecondsToMillimetres,
 } from './units';
 export { formatWhen } from './wording';
 export * from './identity';

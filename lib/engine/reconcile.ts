@@ -1,5 +1,11 @@
 import type {
-  BoardSlot, ReconcileResult, SlotResult, SlotWalkStatus, TrailerResult, TrailerWalkStatus, WalkScan,
+  BoardSlot,
+  ReconcileResult,
+  SlotResult,
+  SlotWalkStatus,
+  TrailerResult,
+  TrailerWalkStatus,
+  WalkScan,
 } from './types';
 
 export interface ReconcileInput {
@@ -51,19 +57,34 @@ export function reconcileWalk({ board, rowIds, scans }: ReconcileInput): Reconci
       entry = { key, isKnown: scan.trailerId !== null, slots: [] };
       seen.set(key, entry);
     }
-    if (entry.slots.includes(scan.slotId)) { repeatScans++; continue; }
+    if (entry.slots.includes(scan.slotId)) {
+      repeatScans++;
+      continue;
+    }
     entry.slots.push(scan.slotId);
     const list = foundInSlot.get(scan.slotId);
-    if (list) list.push(key); else foundInSlot.set(scan.slotId, [key]);
+    if (list) list.push(key);
+    else foundInSlot.set(scan.slotId, [key]);
   }
 
   const trailers: TrailerResult[] = [];
   for (const e of seen.values()) {
-    const expected = e.isKnown ? expectedSlotOf.get(e.key) ?? null : null;
-    const status: TrailerWalkStatus = e.slots.length > 1 ? 'duplicate'
-      : expected === null ? 'unknown'
-        : expected === e.slots[0] ? 'matched' : 'wrong_slot';
-    trailers.push({ trailerId: e.key, isKnownTrailer: e.isKnown, status, expectedSlotId: expected, foundSlotIds: e.slots });
+    const expected = e.isKnown ? (expectedSlotOf.get(e.key) ?? null) : null;
+    const status: TrailerWalkStatus =
+      e.slots.length > 1
+        ? 'duplicate'
+        : expected === null
+          ? 'unknown'
+          : expected === e.slots[0]
+            ? 'matched'
+            : 'wrong_slot';
+    trailers.push({
+      trailerId: e.key,
+      isKnownTrailer: e.isKnown,
+      status,
+      expectedSlotId: expected,
+      foundSlotIds: e.slots,
+    });
   }
 
   const slots: SlotResult[] = [];
@@ -77,7 +98,13 @@ export function reconcileWalk({ board, rowIds, scans }: ReconcileInput): Reconci
     else status = found.length === 0 ? 'missing' : 'wrong_trailer';
     slots.push({ slotId: s.slotId, rowId: s.rowId, expectedTrailerId: exp, found, status });
     if (exp !== null && !seen.has(exp)) {
-      trailers.push({ trailerId: exp, isKnownTrailer: true, status: 'missing', expectedSlotId: s.slotId, foundSlotIds: [] });
+      trailers.push({
+        trailerId: exp,
+        isKnownTrailer: true,
+        status: 'missing',
+        expectedSlotId: s.slotId,
+        foundSlotIds: [],
+      });
     }
   }
   // Scans in slots outside the walked rows or off the board still show up.
@@ -85,7 +112,8 @@ export function reconcileWalk({ board, rowIds, scans }: ReconcileInput): Reconci
     const s = slotById.get(slotId);
     if (s && rows.has(s.rowId)) continue;
     const exp = s?.expectedTrailerId ?? null;
-    const status: SlotWalkStatus = exp === null ? 'unexpected' : found.includes(exp) ? 'matched' : 'wrong_trailer';
+    const status: SlotWalkStatus =
+      exp === null ? 'unexpected' : found.includes(exp) ? 'matched' : 'wrong_trailer';
     slots.push({ slotId, rowId: s?.rowId ?? null, expectedTrailerId: exp, found, status });
   }
 
@@ -93,5 +121,9 @@ export function reconcileWalk({ board, rowIds, scans }: ReconcileInput): Reconci
   for (const s of slots) slotCounts[s.status]++;
   const trailerCounts = zeroCounts(TRAILER_STATUSES);
   for (const t of trailers) trailerCounts[t.status]++;
-  return { slots, trailers, summary: { slots: slotCounts, trailers: trailerCounts, scans: scans.length, repeatScans } };
+  return {
+    slots,
+    trailers,
+    summary: { slots: slotCounts, trailers: trailerCounts, scans: scans.length, repeatScans },
+  };
 }

@@ -1,6 +1,11 @@
 import { custodianKey, custodianName, legsAlong } from './custody';
 import type {
-  Attribution, Custodian, CustodyLeg, InspectionEvent, ItemFinding, TimelineEvent,
+  Attribution,
+  Custodian,
+  CustodyLeg,
+  InspectionEvent,
+  ItemFinding,
+  TimelineEvent,
 } from './types';
 import { conditionWords, describeEvent, listWords } from './wording';
 
@@ -25,7 +30,8 @@ function intervalFrom(k: number, history: readonly TimelineEvent[], current: Ins
   span.push(current);
   const legs = legsAlong(span);
   const seen = new Map<string, Custodian>();
-  for (const l of legs) if (!seen.has(custodianKey(l.custodian))) seen.set(custodianKey(l.custodian), l.custodian);
+  for (const l of legs)
+    if (!seen.has(custodianKey(l.custodian))) seen.set(custodianKey(l.custodian), l.custodian);
   return { legs, candidates: [...seen.values()] };
 }
 
@@ -45,16 +51,26 @@ export function attributeFindings(input: AttributeInput): Attribution[] {
   const now = describeEvent(current, timeZone);
 
   for (const f of findings) {
-    const isDamage = f.finding === 'new' || f.finding === 'worse'
-      || (f.finding === 'first_record' && f.current !== 'ok');
+    const isDamage =
+      f.finding === 'new' || f.finding === 'worse' || (f.finding === 'first_record' && f.current !== 'ok');
     if (!isDamage) continue;
-    const base = { itemKey: f.itemKey, finding: f.finding as Attribution['finding'], currentEventId: current.id };
+    const base = {
+      itemKey: f.itemKey,
+      finding: f.finding as Attribution['finding'],
+      currentEventId: current.id,
+    };
     if (f.previousIndex === null || f.previous === null) {
       out.push({
-        ...base, status: 'none', responsible: null, candidates: [], confidence: null, legs: [],
+        ...base,
+        status: 'none',
+        responsible: null,
+        candidates: [],
+        confidence: null,
+        legs: [],
         previousEventId: null,
-        reason: `${f.label}: found ${conditionWords(f.current)} at ${now}; no earlier inspection of this item `
-          + 'is on record, so it cannot be attributed to anyone.',
+        reason:
+          `${f.label}: found ${conditionWords(f.current)} at ${now}; no earlier inspection of this item ` +
+          'is on record, so it cannot be attributed to anyone.',
       });
       continue;
     }
@@ -65,20 +81,28 @@ export function attributeFindings(input: AttributeInput): Attribution[] {
       cache.set(k, interval);
     }
     const before = history[k] as InspectionEvent;
-    const head = `${f.label}: inspected ${conditionWords(f.previous)} at ${describeEvent(before, timeZone)}; `
-      + `found ${conditionWords(f.current)} at ${now}; `;
+    const head =
+      `${f.label}: inspected ${conditionWords(f.previous)} at ${describeEvent(before, timeZone)}; ` +
+      `found ${conditionWords(f.current)} at ${now}; `;
     const names = interval.candidates.map((c) => custodianName(c, terminal));
 
     if (interval.candidates.length === 1) {
       const quick = f.previousInspection === 'quick' || current.type === 'walk';
       let reason = `${head}only ${names[0]} held the trailer between.`;
       if (current.type === 'hook') {
-        reason += ' A hook is the driver\'s pickup report, so this is not charged to the hooking driver.';
+        reason += " A hook is the driver's pickup report, so this is not charged to the hooking driver.";
       }
-      if (quick) reason += ' One of the two inspections was a quick yard-walk check, so confidence is medium.';
+      if (quick)
+        reason += ' One of the two inspections was a quick yard-walk check, so confidence is medium.';
       out.push({
-        ...base, status: 'single', responsible: interval.candidates[0], candidates: interval.candidates,
-        confidence: quick ? 'medium' : 'high', legs: interval.legs, previousEventId: before.id, reason,
+        ...base,
+        status: 'single',
+        responsible: interval.candidates[0],
+        candidates: interval.candidates,
+        confidence: quick ? 'medium' : 'high',
+        legs: interval.legs,
+        previousEventId: before.id,
+        reason,
       });
       continue;
     }
@@ -86,10 +110,16 @@ export function attributeFindings(input: AttributeInput): Attribution[] {
       ? ' Custody changed hands at least once without a Hitchmark handoff.'
       : '';
     out.push({
-      ...base, status: 'several', responsible: null, candidates: interval.candidates, confidence: null,
-      legs: interval.legs, previousEventId: before.id,
-      reason: `${head}${listWords(names)} held the trailer between, so no single party is responsible; `
-        + `the clerk decides.${gap}`,
+      ...base,
+      status: 'several',
+      responsible: null,
+      candidates: interval.candidates,
+      confidence: null,
+      legs: interval.legs,
+      previousEventId: before.id,
+      reason:
+        `${head}${listWords(names)} held the trailer between, so no single party is responsible; ` +
+        `the clerk decides.${gap}`,
     });
   }
   return out;

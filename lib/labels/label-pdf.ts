@@ -26,12 +26,32 @@ function fitSize(font: PDFFont, text: string, maxWidth: number, largest: number)
   return width <= maxWidth ? largest : Math.floor((largest * maxWidth) / width);
 }
 
-function drawLabel(page: PDFPage, label: PrintableLabel, x0: number, y0: number, bold: PDFFont, mono: PDFFont) {
-  page.drawRectangle({ x: x0 + 8, y: y0 + 8, width: CELL.width - 16, height: CELL.height - 16, borderColor: rgb(0.75, 0.75, 0.75), borderWidth: 0.75 });
+function drawLabel(
+  page: PDFPage,
+  label: PrintableLabel,
+  x0: number,
+  y0: number,
+  bold: PDFFont,
+  mono: PDFFont,
+) {
+  page.drawRectangle({
+    x: x0 + 8,
+    y: y0 + 8,
+    width: CELL.width - 16,
+    height: CELL.height - 16,
+    borderColor: rgb(0.75, 0.75, 0.75),
+    borderWidth: 0.75,
+  });
   const centre = x0 + CELL.width / 2;
   const unitSize = fitSize(bold, label.unitNumber, CELL.width - 48, 64);
   const unitWidth = bold.widthOfTextAtSize(label.unitNumber, unitSize);
-  page.drawText(label.unitNumber, { x: centre - unitWidth / 2, y: y0 + CELL.height - 30 - unitSize * 0.75, size: unitSize, font: bold, color: INK });
+  page.drawText(label.unitNumber, {
+    x: centre - unitWidth / 2,
+    y: y0 + CELL.height - 30 - unitSize * 0.75,
+    size: unitSize,
+    font: bold,
+    color: INK,
+  });
 
   const qr = labelQrModules(label.link);
   const m = pdfModulePoints(qr.size);
@@ -43,18 +63,39 @@ function drawLabel(page: PDFPage, label: PrintableLabel, x0: number, y0: number,
   for (let r = 0; r < qr.size; r++) {
     for (let c = 0; c < qr.size; c++) {
       if (!qr.isDark(r, c)) continue;
-      page.drawRectangle({ x: qx + (c + LABEL_QR_MARGIN) * m, y: qy + side - (r + 1 + LABEL_QR_MARGIN) * m, width: m, height: m, color: INK });
+      page.drawRectangle({
+        x: qx + (c + LABEL_QR_MARGIN) * m,
+        y: qy + side - (r + 1 + LABEL_QR_MARGIN) * m,
+        width: m,
+        height: m,
+        color: INK,
+      });
     }
   }
   const small = `VIN ${label.vin}   Owner ${label.ownerScac}`;
   const smallSize = fitSize(mono, small, CELL.width - 40, 9);
-  page.drawText(small, { x: centre - mono.widthOfTextAtSize(small, smallSize) / 2, y: y0 + 38, size: smallSize, font: mono, color: INK });
+  page.drawText(small, {
+    x: centre - mono.widthOfTextAtSize(small, smallSize) / 2,
+    y: y0 + 38,
+    size: smallSize,
+    font: mono,
+    color: INK,
+  });
   const foot = 'Hitchmark trailer label - scan at the gate';
-  page.drawText(foot, { x: centre - mono.widthOfTextAtSize(foot, 7) / 2, y: y0 + 24, size: 7, font: mono, color: rgb(0.3, 0.3, 0.3) });
+  page.drawText(foot, {
+    x: centre - mono.widthOfTextAtSize(foot, 7) / 2,
+    y: y0 + 24,
+    size: 7,
+    font: mono,
+    color: rgb(0.3, 0.3, 0.3),
+  });
 }
 
 /** Builds the PDF; labels fill pages left to right, top to bottom. */
-export async function buildLabelPdf(labels: PrintableLabel[], title = 'Hitchmark trailer labels'): Promise<Uint8Array> {
+export async function buildLabelPdf(
+  labels: PrintableLabel[],
+  title = 'Hitchmark trailer labels',
+): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
   doc.setTitle(title);
   doc.setCreator('Hitchmark');

@@ -21,7 +21,10 @@ const { BinaryBitmap, HybridBinarizer, QRCodeReader, RGBLuminanceSource } = zxin
 
 /** Whether the scanner's decoder reads `link` back from the symbol drawn with `mask` (4 px modules). */
 export function scannerReadsBack(link: string, mask?: Mask): boolean {
-  const qr = QRCode.create(link, { errorCorrectionLevel: LABEL_QR_LEVEL, ...(mask === undefined ? {} : { maskPattern: mask }) });
+  const qr = QRCode.create(link, {
+    errorCorrectionLevel: LABEL_QR_LEVEL,
+    ...(mask === undefined ? {} : { maskPattern: mask }),
+  });
   const { size, data } = qr.modules;
   const px = 4;
   const n = (size + 2 * LABEL_QR_MARGIN) * px;
@@ -29,11 +32,20 @@ export function scannerReadsBack(link: string, mask?: Mask): boolean {
   for (let r = 0; r < size; r++) {
     for (let c = 0; c < size; c++) {
       if (data[r * size + c] !== 1) continue;
-      for (let dy = 0; dy < px; dy++) lum.fill(0, ((r + LABEL_QR_MARGIN) * px + dy) * n + (c + LABEL_QR_MARGIN) * px, ((r + LABEL_QR_MARGIN) * px + dy) * n + (c + LABEL_QR_MARGIN + 1) * px);
+      for (let dy = 0; dy < px; dy++)
+        lum.fill(
+          0,
+          ((r + LABEL_QR_MARGIN) * px + dy) * n + (c + LABEL_QR_MARGIN) * px,
+          ((r + LABEL_QR_MARGIN) * px + dy) * n + (c + LABEL_QR_MARGIN + 1) * px,
+        );
     }
   }
   try {
-    return new QRCodeReader().decode(new BinaryBitmap(new HybridBinarizer(new RGBLuminanceSource(lum, n, n)))).getText() === link;
+    return (
+      new QRCodeReader()
+        .decode(new BinaryBitmap(new HybridBinarizer(new RGBLuminanceSource(lum, n, n))))
+        .getText() === link
+    );
   } catch {
     return false;
   }
@@ -42,10 +54,14 @@ export function scannerReadsBack(link: string, mask?: Mask): boolean {
 const masks = new Map<string, Mask | undefined>();
 
 /** The encoder options for a label link: level Q and a mask the scanner is known to read. */
-export function labelQrOptions(link: string): { errorCorrectionLevel: typeof LABEL_QR_LEVEL; maskPattern?: Mask } {
+export function labelQrOptions(link: string): {
+  errorCorrectionLevel: typeof LABEL_QR_LEVEL;
+  maskPattern?: Mask;
+} {
   if (!masks.has(link)) {
     let chosen: Mask | undefined;
-    if (!scannerReadsBack(link)) chosen = ([0, 1, 2, 3, 4, 5, 6, 7] as Mask[]).find((m) => scannerReadsBack(link, m));
+    if (!scannerReadsBack(link))
+      chosen = ([0, 1, 2, 3, 4, 5, 6, 7] as Mask[]).find((m) => scannerReadsBack(link, m));
     if (masks.size > 5_000) masks.clear();
     masks.set(link, chosen);
   }
@@ -59,7 +75,11 @@ export function labelQrSvg(link: string): Promise<string> {
 }
 
 /** The QR modules (dark = true), row by row, without the quiet zone; for drawing at an integer module size. */
-export function labelQrModules(link: string): { size: number; version: number; isDark: (row: number, col: number) => boolean } {
+export function labelQrModules(link: string): {
+  size: number;
+  version: number;
+  isDark: (row: number, col: number) => boolean;
+} {
   const qr = QRCode.create(link, labelQrOptions(link));
   const { size, data } = qr.modules;
   return { size, version: qr.version, isDark: (row, col) => data[row * size + col] === 1 };

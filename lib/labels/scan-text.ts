@@ -33,9 +33,7 @@ export function normalizeScannedVin(raw: string): string {
 }
 
 export type ScannedCode =
-  | { kind: 'token'; token: string }
-  | { kind: 'vin'; vin: string }
-  | { kind: 'unknown'; text: string };
+  { kind: 'token'; token: string } | { kind: 'vin'; vin: string } | { kind: 'unknown'; text: string };
 
 /** Classifies decoded text: a label link, a VIN (17 characters, maybe with the `I` marker), or unknown. */
 export function classifyScan(text: string): ScannedCode {

@@ -30,7 +30,9 @@ export function invalid(error: z.ZodError, message = 'Some fields need attention
 }
 
 /** Reads a JSON body; a body that is not JSON is a 400, never a 500. */
-export async function readJson(request: Request): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
+export async function readJson(
+  request: Request,
+): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
   try {
     return { ok: true, body: await request.json() };
   } catch {

@@ -6,5 +6,14 @@ import { receiptSubject, receiptText, type ReceiptView } from '@/lib/receipt';
 
 export async function enqueueReceiptEmail(tx: Tx, to: string, view: ReceiptView, appUrl?: string) {
   const base = appUrl ?? process.env.APP_URL ?? 'http://localhost:3000';
-  await enqueueEmail({ to, subject: receiptSubject(view), text: receiptText(view, `${base}/verify`), relatedType: 'handoff', relatedId: view.handoffId }, tx);
+  await enqueueEmail(
+    {
+      to,
+      subject: receiptSubject(view),
+      text: receiptText(view, `${base}/verify`),
+      relatedType: 'handoff',
+      relatedId: view.handoffId,
+    },
+    tx,
+  );
 }

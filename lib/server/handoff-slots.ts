@@ -11,14 +11,25 @@ async function firstFreeSlot(tx: Tx, terminalId: string): Promise<string | null>
     .from(yardSpots)
     .leftJoin(yardRows, eq(yardRows.id, yardSpots.rowId))
     .leftJoin(trailers, eq(trailers.currentSpotId, yardSpots.id))
-    .where(and(eq(yardSpots.terminalId, terminalId), eq(yardSpots.kind, 'slot'), isNull(yardSpots.retiredAt), isNull(trailers.id)))
+    .where(
+      and(
+        eq(yardSpots.terminalId, terminalId),
+        eq(yardSpots.kind, 'slot'),
+        isNull(yardSpots.retiredAt),
+        isNull(trailers.id),
+      ),
+    )
     .orderBy(asc(yardRows.sortOrder), asc(yardSpots.sortOrder))
     .limit(1);
   return row?.id ?? null;
 }
 
 /** The chosen slot, checked free and in this terminal, or the first free one (row order, then slot order). */
-export async function chooseSpot(tx: Tx, terminalId: string, wanted: string | null | undefined): Promise<string> {
+export async function chooseSpot(
+  tx: Tx,
+  terminalId: string,
+  wanted: string | null | undefined,
+): Promise<string> {
   if (!wanted) {
     const free = await firstFreeSlot(tx, terminalId);
     if (!free) throw new HandoffError('conflict', 'The yard has no free slot. Ask the clerk where to drop.');
@@ -29,7 +40,13 @@ export async function chooseSpot(tx: Tx, terminalId: string, wanted: string | nu
     .from(yardSpots)
     .leftJoin(trailers, eq(trailers.currentSpotId, yardSpots.id))
     .where(and(eq(yardSpots.id, wanted), eq(yardSpots.terminalId, terminalId), isNull(yardSpots.retiredAt)));
-  if (!spot) throw new HandoffError('invalid', 'That slot is not in this yard.', { spotId: ['Choose a slot of this yard.'] });
-  if (spot.taken) throw new HandoffError('conflict', 'That slot is taken. Choose another slot.', { spotId: ['That slot is taken.'] });
+  if (!spot)
+    throw new HandoffError('invalid', 'That slot is not in this yard.', {
+      spotId: ['Choose a slot of this yard.'],
+    });
+  if (spot.taken)
+    throw new HandoffError('conflict', 'That slot is taken. Choose another slot.', {
+      spotId: ['That slot is taken.'],
+    });
   return spot.id;
 }

@@ -2,7 +2,8 @@ import 'server-only';
 import { getLabelStanding } from '@/db/queries/labels';
 import { signLabelToken, verifyLabelToken } from '@/lib/engine/identity/label-token';
 
-const MISSING_SECRET = 'LABEL_SECRET is not set. scripts/env.sh sets it for local runs; production must set it (32+ characters).';
+const MISSING_SECRET =
+  'LABEL_SECRET is not set. scripts/env.sh sets it for local runs; production must set it (32+ characters).';
 
 /** The label signing secret, read in this one place. Missing in production is a clear startup-time error. */
 export function labelSecret(): string {

@@ -12,7 +12,9 @@ function getTransporter(): Transporter {
     host: process.env.SMTP_HOST ?? '127.0.0.1',
     port: Number(process.env.SMTP_PORT ?? 2525),
     secure: process.env.SMTP_SECURE === '1',
-    auth: process.env.SMTP_USER ? { user: process.env.SMTP_USER, pass: process.env.SMTP_PASSWORD ?? '' } : undefined,
+    auth: process.env.SMTP_USER
+      ? { user: process.env.SMTP_USER, pass: process.env.SMTP_PASSWORD ?? '' }
+      : undefined,
     // the local fake speaks plain SMTP on loopback; a real server is expected to offer TLS
     ignoreTLS: process.env.SMTP_HOST === undefined || process.env.SMTP_HOST === '127.0.0.1',
     connectionTimeout: 5_000,
@@ -39,7 +41,13 @@ export async function deliverDueEmails(now = new Date()): Promise<{ sent: number
         await markEmailSent(tx, email.id, now);
         sent++;
       } catch (error) {
-        await markEmailFailed(tx, email.id, email.attempts, error instanceof Error ? error.message : String(error), now);
+        await markEmailFailed(
+          tx,
+          email.id,
+          email.attempts,
+          error instanceof Error ? error.message : String(error),
+          now,
+        );
         failed++;
       }
     }

@@ -3,7 +3,12 @@ import { getIronSession, type SessionOptions } from 'iron-session';
 import { cookies } from 'next/headers';
 import type { Role } from '@/lib/roles';
 
-export type SessionData = { userId?: string; role?: Role; carrierId?: string | null; terminalId?: string | null };
+export type SessionData = {
+  userId?: string;
+  role?: Role;
+  carrierId?: string | null;
+  terminalId?: string | null;
+};
 
 export const SESSION_COOKIE = 'hm_session';
 const DEV_SECRET = 'hitchmark-local-development-secret-not-for-production';

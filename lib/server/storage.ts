@@ -18,7 +18,10 @@ function client(endpoint: string | undefined): S3Client {
       requestChecksumCalculation: 'WHEN_REQUIRED',
       responseChecksumValidation: 'WHEN_REQUIRED',
       credentials: process.env.S3_ACCESS_KEY_ID
-        ? { accessKeyId: process.env.S3_ACCESS_KEY_ID, secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? '' }
+        ? {
+            accessKeyId: process.env.S3_ACCESS_KEY_ID,
+            secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? '',
+          }
         : undefined,
     });
     clients.set(key, c);
@@ -32,7 +35,11 @@ const publicClient = () => client(process.env.S3_PUBLIC_ENDPOINT ?? process.env.
 
 /** A URL the browser PUTs the photo to, valid for `seconds`; the Content-Type header must match. */
 export function presignPhotoUpload(objectKey: string, contentType: string, seconds = 600): Promise<string> {
-  return getSignedUrl(publicClient(), new PutObjectCommand({ Bucket: bucket(), Key: objectKey, ContentType: contentType }), { expiresIn: seconds });
+  return getSignedUrl(
+    publicClient(),
+    new PutObjectCommand({ Bucket: bucket(), Key: objectKey, ContentType: contentType }),
+    { expiresIn: seconds },
+  );
 }
 
 /** The object's bytes, or null when it is not there; stops reading past `maxBytes` (returns what it read, longer than max). */
@@ -61,7 +68,11 @@ export async function readObject(objectKey: string, maxBytes: number): Promise<U
     }
     return bytes;
   } catch (error) {
-    if ((error as { name?: string }).name === 'NoSuchKey' || (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404) return null;
+    if (
+      (error as { name?: string }).name === 'NoSuchKey' ||
+      (error as { $metadata?: { httpStatusCode?: number } }).$metadata?.httpStatusCode === 404
+    )
+      return null;
     throw error;
   }
 }
@@ -83,5 +94,7 @@ export async function deleteObject(objectKey: string): Promise<void> {
 
 /** Server-side upload (tests and the seed's demo photos). */
 export async function putObject(objectKey: string, body: Uint8Array, contentType: string): Promise<void> {
-  await serverClient().send(new PutObjectCommand({ Bucket: bucket(), Key: objectKey, Body: body, ContentType: contentType }));
+  await serverClient().send(
+    new PutObjectCommand({ Bucket: bucket(), Key: objectKey, Body: body, ContentType: contentType }),
+  );
 }

@@ -10,8 +10,11 @@ export async function getTrailerCondition(trailerId: string, role: Role) {
   const trailer = await getTrailerForGate(trailerId);
   if (!trailer) return null;
   const checklist = buildChecklist({
-    kind: trailer.kind, hingesPerDoor: trailer.hingesPerDoor === 5 ? 5 : 4, axles: trailer.axleCount,
-    tireLayout: trailer.tireLayout, fuelTankGallons: trailer.fuelTankGallons || undefined,
+    kind: trailer.kind,
+    hingesPerDoor: trailer.hingesPerDoor === 5 ? 5 : 4,
+    axles: trailer.axleCount,
+    tireLayout: trailer.tireLayout,
+    fuelTankGallons: trailer.fuelTankGallons || undefined,
   });
   const timeline = await listTimeline(trailerId);
   return {

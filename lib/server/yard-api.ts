@@ -7,4 +7,5 @@ export function refusalResponse(r: Refusal) {
   return apiError(r.code, r.message, r.field ? { [r.field]: [r.message] } : undefined);
 }
 
-export const noTerminal = () => apiError('not_found', 'Your account has no home terminal; ask an admin to set one.');
+export const noTerminal = () =>
+  apiError('not_found', 'Your account has no home terminal; ask an admin to set one.');

@@ -9,7 +9,10 @@ export const dollarsSchema = z
   .transform((text, ctx) => {
     const cents = parseDollarsToCents(text);
     if (cents === null || cents > 100_000_000) {
-      ctx.addIssue({ code: 'custom', message: 'Enter an amount in dollars, like 425.00 (at most two decimals).' });
+      ctx.addIssue({
+        code: 'custom',
+        message: 'Enter an amount in dollars, like 425.00 (at most two decimals).',
+      });
       return z.NEVER;
     }
     return cents;
@@ -36,34 +39,71 @@ export const CASE_AGES = ['7', '30', '90'] as const;
 
 /** The desk queue's query string: every filter optional; a bad value is a field error, not a crash. */
 export const caseQueueQuerySchema = z.object({
-  state: z.preprocess(blankToUndefined, z.enum(CASE_STATES, { error: 'Choose a state from the list.' }).optional()),
+  state: z.preprocess(
+    blankToUndefined,
+    z.enum(CASE_STATES, { error: 'Choose a state from the list.' }).optional(),
+  ),
   carrier: z.preprocess(blankToUndefined, z.uuid({ error: 'Choose a carrier from the list.' }).optional()),
-  olderThanDays: z.preprocess(blankToUndefined, z.enum(CASE_AGES, { error: 'Choose an age from the list.' }).optional()),
+  olderThanDays: z.preprocess(
+    blankToUndefined,
+    z.enum(CASE_AGES, { error: 'Choose an age from the list.' }).optional(),
+  ),
   minAmount: z.preprocess(blankToUndefined, optionalDollars),
   maxAmount: z.preprocess(blankToUndefined, optionalDollars),
-  sort: z.preprocess(blankToUndefined, z.enum(CASE_SORTS, { error: 'Choose a sort order from the list.' }).default('oldest')),
+  sort: z.preprocess(
+    blankToUndefined,
+    z.enum(CASE_SORTS, { error: 'Choose a sort order from the list.' }).default('oldest'),
+  ),
 });
 export type CaseQueueQuery = z.infer<typeof caseQueueQuerySchema>;
 
-const reasonSchema = z.string({ error: 'Give a reason.' }).trim().min(3, { error: 'Give a reason (a few words at least).' }).max(2000);
+const reasonSchema = z
+  .string({ error: 'Give a reason.' })
+  .trim()
+  .min(3, { error: 'Give a reason (a few words at least).' })
+  .max(2000);
 const caseIdSchema = z.uuid({ error: 'This case does not exist.' });
 
 export const notifyCaseSchema = z.object({ caseId: caseIdSchema });
-export const closeCaseSchema = z.object({ caseId: caseIdSchema, note: z.string().trim().max(2000).optional() });
+export const closeCaseSchema = z.object({
+  caseId: caseIdSchema,
+  note: z.string().trim().max(2000).optional(),
+});
 /** Photo ids from the form, comma separated (uploaded first through /api/uploads). */
 const photoIdsSchema = z
   .string()
   .optional()
-  .transform((v) => (v ? v.split(',').map((x) => x.trim()).filter(Boolean) : []))
-  .pipe(z.array(z.uuid({ error: 'A photo reference is not valid; take the photo again.' })).max(6, { error: 'At most 6 photos.' }));
+  .transform((v) =>
+    v
+      ? v
+          .split(',')
+          .map((x) => x.trim())
+          .filter(Boolean)
+      : [],
+  )
+  .pipe(
+    z
+      .array(z.uuid({ error: 'A photo reference is not valid; take the photo again.' }))
+      .max(6, { error: 'At most 6 photos.' }),
+  );
 
 export const disputeCaseSchema = z.object({
   caseId: caseIdSchema,
   photoIds: photoIdsSchema,
-  note: z.string({ error: 'Say why you dispute the case.' }).trim().min(10, { error: 'Say why you dispute the case (10 characters at least).' }).max(4000),
+  note: z
+    .string({ error: 'Say why you dispute the case.' })
+    .trim()
+    .min(10, { error: 'Say why you dispute the case (10 characters at least).' })
+    .max(4000),
 });
-export const linkDisputeSchema = disputeCaseSchema.omit({ caseId: true, photoIds: true }).extend({ token: z.string().min(10).max(300) });
-export const overrideEstimateSchema = z.object({ caseId: caseIdSchema, amount: dollarsSchema, reason: reasonSchema });
+export const linkDisputeSchema = disputeCaseSchema
+  .omit({ caseId: true, photoIds: true })
+  .extend({ token: z.string().min(10).max(300) });
+export const overrideEstimateSchema = z.object({
+  caseId: caseIdSchema,
+  amount: dollarsSchema,
+  reason: reasonSchema,
+});
 export const decideCaseSchema = z
   .object({
     caseId: caseIdSchema,
@@ -71,7 +111,10 @@ export const decideCaseSchema = z
     amount: z.preprocess(blankToUndefined, optionalDollars),
     reason: reasonSchema,
   })
-  .transform((v) => ({ ...v, chargedCents: v.decision === 'absorb' || v.decision === 'waive' ? 0 : (v.amount ?? 0) }));
+  .transform((v) => ({
+    ...v,
+    chargedCents: v.decision === 'absorb' || v.decision === 'waive' ? 0 : (v.amount ?? 0),
+  }));
 export type DecideCaseInput = z.infer<typeof decideCaseSchema>;
 
 export const RATE_CONDITIONS = ['minor', 'damaged', 'unsafe', 'missing'] as const;
@@ -79,20 +122,33 @@ export const itemPatternSchema = z
   .string({ error: 'Enter an item key or prefix.' })
   .trim()
   .toLowerCase()
-  .regex(/^[a-z0-9_]+(\.[a-z0-9_]+)*$/, { error: 'Use a checklist key or prefix, like rear.door_left or tires.' })
+  .regex(/^[a-z0-9_]+(\.[a-z0-9_]+)*$/, {
+    error: 'Use a checklist key or prefix, like rear.door_left or tires.',
+  })
   .max(120);
 export const addRateSchema = z.object({
   itemPattern: itemPatternSchema,
   condition: z.enum(RATE_CONDITIONS, { error: 'Choose a condition.' }),
   amount: dollarsSchema,
 });
-export const changeRateSchema = z.object({ id: z.uuid({ error: 'This rate does not exist.' }), amount: dollarsSchema });
+export const changeRateSchema = z.object({
+  id: z.uuid({ error: 'This rate does not exist.' }),
+  amount: dollarsSchema,
+});
 
 export const releaseHoldSchema = z.object({
   holdId: z.uuid({ error: 'This hold does not exist.' }),
   trailerId: z.uuid(),
-  repairedBy: z.string({ error: 'Who repaired it?' }).trim().min(2, { error: 'Who repaired it? (name or shop)' }).max(200),
-  repairNote: z.string({ error: 'What was repaired?' }).trim().min(5, { error: 'Say what was repaired.' }).max(2000),
+  repairedBy: z
+    .string({ error: 'Who repaired it?' })
+    .trim()
+    .min(2, { error: 'Who repaired it? (name or shop)' })
+    .max(200),
+  repairNote: z
+    .string({ error: 'What was repaired?' })
+    .trim()
+    .min(5, { error: 'Say what was repaired.' })
+    .max(2000),
   repairedAt: z
     .string({ error: 'When was it repaired?' })
     .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, { error: 'Enter the date and time of the repair.' }),
@@ -100,9 +156,15 @@ export const releaseHoldSchema = z.object({
 
 export const TRAILER_FILE_KINDS = ['handoff', 'move', 'walk', 'finding', 'hold', 'case', 'photo'] as const;
 export const trailerFileQuerySchema = z.object({
-  kind: z.preprocess(blankToUndefined, z.enum(TRAILER_FILE_KINDS, { error: 'Choose a kind from the list.' }).optional()),
+  kind: z.preprocess(
+    blankToUndefined,
+    z.enum(TRAILER_FILE_KINDS, { error: 'Choose a kind from the list.' }).optional(),
+  ),
 });
 
 export const reportQuerySchema = z.object({
-  months: z.preprocess(blankToUndefined, z.coerce.number({ error: 'months must be a number' }).int().min(1).max(36).default(12)),
+  months: z.preprocess(
+    blankToUndefined,
+    z.coerce.number({ error: 'months must be a number' }).int().min(1).max(36).default(12),
+  ),
 });

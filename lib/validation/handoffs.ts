@@ -33,28 +33,51 @@ export const itemObservationSchema = z.object({
   isLeaking: z.boolean().optional(),
   cleanliness: z.enum(['clean', 'sweep', 'washout']).optional(),
   note: optionalText(500, 'A note'),
-  photoIds: z.array(z.uuid({ error: 'A photo reference is not valid.' })).max(6, { error: 'At most 6 photos per item.' }).optional(),
+  photoIds: z
+    .array(z.uuid({ error: 'A photo reference is not valid.' }))
+    .max(6, { error: 'At most 6 photos per item.' })
+    .optional(),
 });
 export type ItemObservationInput = z.infer<typeof itemObservationSchema>;
 
-export const itemKeySchema = z.string().regex(/^[a-z0-9_]+(\.[a-z0-9_]+){1,3}$/, { error: 'Unknown checklist item.' });
+export const itemKeySchema = z
+  .string()
+  .regex(/^[a-z0-9_]+(\.[a-z0-9_]+){1,3}$/, { error: 'Unknown checklist item.' });
 
 export const reeferReadingsSchema = z.object({
   isUnitOn: z.boolean().nullable(),
-  setpointF: z.number({ error: 'Setpoint is a number in °F.' }).min(-40, { error: 'Setpoint is -40 °F or above.' }).max(90, { error: 'Setpoint is 90 °F or below.' }).nullable(),
-  returnAirF: z.number({ error: 'Return air is a number in °F.' }).min(-60, { error: 'Return air is -60 °F or above.' }).max(140, { error: 'Return air is 140 °F or below.' }).nullable(),
-  engineHours: z.number({ error: 'Engine hours is a number.' }).min(0, { error: 'Engine hours cannot be negative.' }).max(200_000, { error: 'Engine hours look too large.' }).nullable(),
+  setpointF: z
+    .number({ error: 'Setpoint is a number in °F.' })
+    .min(-40, { error: 'Setpoint is -40 °F or above.' })
+    .max(90, { error: 'Setpoint is 90 °F or below.' })
+    .nullable(),
+  returnAirF: z
+    .number({ error: 'Return air is a number in °F.' })
+    .min(-60, { error: 'Return air is -60 °F or above.' })
+    .max(140, { error: 'Return air is 140 °F or below.' })
+    .nullable(),
+  engineHours: z
+    .number({ error: 'Engine hours is a number.' })
+    .min(0, { error: 'Engine hours cannot be negative.' })
+    .max(200_000, { error: 'Engine hours look too large.' })
+    .nullable(),
   preTripResult: z.enum(['pass', 'fail', 'not_run'], { error: 'Choose the last pre-trip result.' }),
   preTripAt: z.iso.datetime({ offset: true, error: 'Give the time of the last pre-trip.' }).nullable(),
 });
 
 export const handoffSubmitSchema = z
   .object({
-    idempotencyKey: z.string().regex(/^[A-Za-z0-9_-]{16,80}$/, { error: 'The draft key is not valid; start a new draft.' }),
+    idempotencyKey: z
+      .string()
+      .regex(/^[A-Za-z0-9_-]{16,80}$/, { error: 'The draft key is not valid; start a new draft.' }),
     trailerId: z.uuid({ error: 'Unknown trailer.' }),
     kind: z.enum(['drop', 'hook'], { error: 'Choose drop or hook.' }),
     carrierId: z.uuid({ error: 'Choose the carrier.' }),
-    driverName: z.string().trim().min(2, { error: 'Enter the driver\'s name.' }).max(80, { error: 'The name is at most 80 characters.' }),
+    driverName: z
+      .string()
+      .trim()
+      .min(2, { error: "Enter the driver's name." })
+      .max(80, { error: 'The name is at most 80 characters.' }),
     tractorNumber: z
       .string()
       .trim()
@@ -69,16 +92,27 @@ export const handoffSubmitSchema = z
       .transform((s) => (s === '' ? null : s))
       .nullable()
       .optional(),
-    fuelEighths: z.number().int({ error: 'Fuel is read in eighths, 0 to 8.' }).min(0, { error: 'Fuel is read in eighths, 0 to 8.' }).max(8, { error: 'Fuel is read in eighths, 0 to 8.' }).nullable(),
+    fuelEighths: z
+      .number()
+      .int({ error: 'Fuel is read in eighths, 0 to 8.' })
+      .min(0, { error: 'Fuel is read in eighths, 0 to 8.' })
+      .max(8, { error: 'Fuel is read in eighths, 0 to 8.' })
+      .nullable(),
     reefer: reeferReadingsSchema.nullable(),
-    items: z.record(itemKeySchema, itemObservationSchema).refine((r) => Object.keys(r).length <= 120, { error: 'Too many items.' }),
+    items: z
+      .record(itemKeySchema, itemObservationSchema)
+      .refine((r) => Object.keys(r).length <= 120, { error: 'Too many items.' }),
     spotId: z.uuid({ error: 'Choose a slot.' }).nullable().optional(),
     note: optionalText(1000, 'The note'),
     correctsHandoffId: z.uuid().nullable().optional(),
   })
   .superRefine((v, ctx) => {
     if (v.reefer && v.reefer.preTripResult !== 'not_run' && !v.reefer.preTripAt) {
-      ctx.addIssue({ code: 'custom', path: ['reefer', 'preTripAt'], message: 'Give the time of the last pre-trip.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['reefer', 'preTripAt'],
+        message: 'Give the time of the last pre-trip.',
+      });
     }
   });
 export type HandoffSubmitInput = z.infer<typeof handoffSubmitSchema>;
@@ -89,14 +123,27 @@ export const verificationCodeSchema = z
   .trim()
   .toUpperCase()
   .transform((s) => s.replace(/[\s-]/g, '').replace(/O/g, '0').replace(/[IL]/g, '1'))
-  .pipe(z.string().regex(/^[0-9A-HJKMNP-TV-Z]{8}$/, { error: 'A verification code is 8 letters and digits, like 7KQ2-M9XD.' }));
+  .pipe(
+    z
+      .string()
+      .regex(/^[0-9A-HJKMNP-TV-Z]{8}$/, {
+        error: 'A verification code is 8 letters and digits, like 7KQ2-M9XD.',
+      }),
+  );
 
 export const uploadRequestSchema = z.object({
   trailerId: z.uuid({ error: 'Unknown trailer.' }),
   itemKey: itemKeySchema,
   contentType: z.string().trim().toLowerCase().max(100),
-  byteSize: z.number().int({ error: 'The size is a whole number of bytes.' }).min(1, { error: 'The photo is empty.' }),
-  sha256: z.string().trim().toLowerCase().regex(/^[0-9a-f]{64}$/, { error: 'The checksum must be 64 hex digits (SHA-256).' }),
+  byteSize: z
+    .number()
+    .int({ error: 'The size is a whole number of bytes.' })
+    .min(1, { error: 'The photo is empty.' }),
+  sha256: z
+    .string()
+    .trim()
+    .toLowerCase()
+    .regex(/^[0-9a-f]{64}$/, { error: 'The checksum must be 64 hex digits (SHA-256).' }),
 });
 export type UploadRequestInput = z.infer<typeof uploadRequestSchema>;
 

@@ -5,7 +5,8 @@ import { LABEL_TOKEN_PATTERN, normalizeScannedVin } from '@/lib/labels/scan-text
 const VIN_MESSAGES: Record<VinError, string> = {
   length: 'A VIN has 17 characters.',
   characters: 'A VIN has only digits and capital letters, never I, O or Q.',
-  check_digit: 'This VIN does not add up: its check digit (9th character) is wrong. Check it, or type the unit number.',
+  check_digit:
+    'This VIN does not add up: its check digit (9th character) is wrong. Check it, or type the unit number.',
 };
 
 export const unitNumberSchema = z
@@ -32,7 +33,11 @@ export const labelTokenSchema = z
 
 /** GET /api/trailers/lookup: exactly one of token, unit or vin. */
 export const trailerLookupSchema = z
-  .object({ token: labelTokenSchema.optional(), unit: unitNumberSchema.optional(), vin: scannedVinSchema.optional() })
+  .object({
+    token: labelTokenSchema.optional(),
+    unit: unitNumberSchema.optional(),
+    vin: scannedVinSchema.optional(),
+  })
   .refine((q) => [q.token, q.unit, q.vin].filter((v) => v !== undefined).length === 1, {
     error: 'Look up by exactly one of: token, unit or vin.',
   });
@@ -41,13 +46,25 @@ export type TrailerLookupInput = z.infer<typeof trailerLookupSchema>;
 const uuid = z.uuid({ error: 'That is not a trailer or row id.' });
 const idList = z
   .union([z.string(), z.array(z.string())])
-  .transform((v) => (Array.isArray(v) ? v : [v]).flatMap((s) => s.split(',')).map((s) => s.trim()).filter(Boolean))
-  .pipe(z.array(uuid).min(1, { error: 'Choose at least one trailer.' }).max(200, { error: 'Print at most 200 labels at a time.' }));
+  .transform((v) =>
+    (Array.isArray(v) ? v : [v])
+      .flatMap((s) => s.split(','))
+      .map((s) => s.trim())
+      .filter(Boolean),
+  )
+  .pipe(
+    z
+      .array(uuid)
+      .min(1, { error: 'Choose at least one trailer.' })
+      .max(200, { error: 'Print at most 200 labels at a time.' }),
+  );
 
 /** Which labels a sheet or PDF prints: a selection of trailers (`ids`, repeated or comma-separated) or a yard row. */
 export const labelSheetQuerySchema = z
   .object({ ids: idList.optional(), row: uuid.optional() })
-  .refine((q) => (q.ids === undefined) !== (q.row === undefined), { error: 'Choose trailers or one row, not both.' });
+  .refine((q) => (q.ids === undefined) !== (q.row === undefined), {
+    error: 'Choose trailers or one row, not both.',
+  });
 export type LabelSheetQuery = z.infer<typeof labelSheetQuerySchema>;
 
 export const reissueLabelSchema = z.object({ trailerId: uuid });

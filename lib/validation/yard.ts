@@ -6,7 +6,12 @@ const uuid = z.uuid('Not a valid id.');
 const label = z.string().trim().min(1, 'Enter a name.').max(40, 'At most 40 characters.');
 
 export const boardQuerySchema = z.object({
-  filter: z.preprocess((v) => (typeof v === 'string' && v ? v.split(',') : []), z.array(z.enum(BOARD_FILTERS as [string, ...string[]]))).default([]),
+  filter: z
+    .preprocess(
+      (v) => (typeof v === 'string' && v ? v.split(',') : []),
+      z.array(z.enum(BOARD_FILTERS as [string, ...string[]])),
+    )
+    .default([]),
   sort: z.enum(SORT_KEYS as [string, ...string[]]).default('slot'),
   dir: z.enum(['asc', 'desc']).default('asc'),
 });
@@ -19,11 +24,16 @@ export type MoveInput = z.infer<typeof moveSchema>;
 
 export const createRowSchema = z.object({ name: label });
 export const renameSchema = z.object({ id: uuid, name: label });
-export const createSpotSchema = z.object({
-  kind: z.enum(['slot', 'door']),
-  rowId: z.union([uuid, z.literal('')]).optional(),
-  label: label,
-}).refine((v) => v.kind === 'door' || !!v.rowId, { message: 'A slot belongs to a row: choose one.', path: ['rowId'] });
+export const createSpotSchema = z
+  .object({
+    kind: z.enum(['slot', 'door']),
+    rowId: z.union([uuid, z.literal('')]).optional(),
+    label: label,
+  })
+  .refine((v) => v.kind === 'door' || !!v.rowId, {
+    message: 'A slot belongs to a row: choose one.',
+    path: ['rowId'],
+  });
 export const retireSpotSchema = z.object({ id: uuid });
 
 export const startWalkSchema = z.object({ rowIds: z.array(uuid).min(1, 'Choose at least one row.').max(50) });
@@ -36,7 +46,13 @@ export const walkScanSchema = z.object({
   scannedAt: z.iso.datetime({ offset: true }),
   isUnitRunning: optionalBool,
   setpointTenthsF: z.number().int().min(-400).max(900).nullable().default(null),
-  fuelEighths: z.number().int().min(0, 'Fuel is 0–8 eighths.').max(8, 'Fuel is 0–8 eighths.').nullable().default(null),
+  fuelEighths: z
+    .number()
+    .int()
+    .min(0, 'Fuel is 0–8 eighths.')
+    .max(8, 'Fuel is 0–8 eighths.')
+    .nullable()
+    .default(null),
   areDoorsClosed: optionalBool,
   isSealPresent: optionalBool,
 });

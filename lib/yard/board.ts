@@ -46,10 +46,14 @@ export function isOverFreeTime(t: BoardTrailer, policy: YardPolicy, now: Date): 
 
 export function matchesFilter(t: BoardTrailer, filter: BoardFilter, policy: YardPolicy, now: Date): boolean {
   switch (filter) {
-    case 'held': return t.holds.length > 0;
-    case 'low_fuel': return isLowFuel(t, policy);
-    case 'reefer_off': return isReeferOff(t);
-    case 'over_free_time': return isOverFreeTime(t, policy, now);
+    case 'held':
+      return t.holds.length > 0;
+    case 'low_fuel':
+      return isLowFuel(t, policy);
+    case 'reefer_off':
+      return isReeferOff(t);
+    case 'over_free_time':
+      return isOverFreeTime(t, policy, now);
   }
 }
 
@@ -62,7 +66,12 @@ export function tableRows(board: Board): TableRow[] {
 }
 
 /** Rows passing every chosen filter (no filter: all rows). */
-export function filterRows(rows: TableRow[], filters: readonly BoardFilter[], policy: YardPolicy, now: Date): TableRow[] {
+export function filterRows(
+  rows: TableRow[],
+  filters: readonly BoardFilter[],
+  policy: YardPolicy,
+  now: Date,
+): TableRow[] {
   if (filters.length === 0) return rows;
   return rows.filter((r) => filters.every((f) => matchesFilter(r.trailer, f, policy, now)));
 }

@@ -6,7 +6,11 @@ import type { YardPolicy } from './types';
 export const DEFAULT_YARD_POLICY: YardPolicy = { freeTimeHours: 48, lowFuelEighths: 4 };
 
 const yardPolicySchema = z.object({
-  freeTimeHours: z.number().positive().max(24 * 365).catch(DEFAULT_YARD_POLICY.freeTimeHours),
+  freeTimeHours: z
+    .number()
+    .positive()
+    .max(24 * 365)
+    .catch(DEFAULT_YARD_POLICY.freeTimeHours),
   lowFuelEighths: z.number().int().min(0).max(8).catch(DEFAULT_YARD_POLICY.lowFuelEighths),
 });
 

@@ -14,16 +14,17 @@ export interface QueuedScan extends QuickChecks {
 }
 
 export type SendOutcome =
-  | { kind: 'sent'; result?: string }
-  | { kind: 'rejected'; error: string }
-  | { kind: 'offline' };
+  { kind: 'sent'; result?: string } | { kind: 'rejected'; error: string } | { kind: 'offline' };
 
 /**
  * Sends pending scans oldest first, one at a time, so the server sees them in scan order.
  * Stops at the first network failure (the rest wait for the next try); a rejected scan is kept
  * with its error so nothing typed is lost. Returns the new queue; the input is not changed.
  */
-export async function flushQueue(queue: readonly QueuedScan[], send: (scan: QueuedScan) => Promise<SendOutcome>): Promise<QueuedScan[]> {
+export async function flushQueue(
+  queue: readonly QueuedScan[],
+  send: (scan: QueuedScan) => Promise<SendOutcome>,
+): Promise<QueuedScan[]> {
   const next = queue.map((q) => ({ ...q }));
   for (const item of next) {
     if (item.state !== 'pending') continue;

@@ -5,7 +5,8 @@ import { classifyScan } from '@/lib/labels/scan-text';
  * failing both, a unit number. Label links and VINs are read the way the scanner reads them
  * (lib/labels/scan-text); the token's signature is checked on the server.
  */
-export type ScanTarget = { kind: 'label'; token: string } | { kind: 'vin'; vin: string } | { kind: 'unit'; unitNumber: string };
+export type ScanTarget =
+  { kind: 'label'; token: string } | { kind: 'vin'; vin: string } | { kind: 'unit'; unitNumber: string };
 
 export function classifyScanText(raw: string): ScanTarget {
   const code = classifyScan(raw);

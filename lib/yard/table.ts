@@ -5,7 +5,16 @@ import type { BoardTrailer, TableRow } from './types';
 
 export type SortKey = 'unit' | 'slot' | 'load' | 'reefer' | 'fuel' | 'holds' | 'dwell' | 'lastSeen';
 export type SortDir = 'asc' | 'desc';
-export const SORT_KEYS: readonly SortKey[] = ['unit', 'slot', 'load', 'reefer', 'fuel', 'holds', 'dwell', 'lastSeen'];
+export const SORT_KEYS: readonly SortKey[] = [
+  'unit',
+  'slot',
+  'load',
+  'reefer',
+  'fuel',
+  'holds',
+  'dwell',
+  'lastSeen',
+];
 
 /** Table columns in order; the CSV export uses the same headers and cells. */
 export const COLUMNS: readonly { key: SortKey | 'gateIn'; header: string }[] = [
@@ -40,7 +49,9 @@ export function fuelText(t: BoardTrailer): string {
 
 export function holdsText(t: BoardTrailer): string {
   if (t.holds.length === 0) return 'None';
-  return t.holds.map((h) => `${h.severity === 'out_of_service' ? 'Out of service' : 'Restricted'}: ${h.reason}`).join('; ');
+  return t.holds
+    .map((h) => `${h.severity === 'out_of_service' ? 'Out of service' : 'Restricted'}: ${h.reason}`)
+    .join('; ');
 }
 
 /** The cells of one table row as text, in COLUMNS order. */
@@ -67,14 +78,22 @@ function holdRank(t: BoardTrailer): number {
 function sortValue(row: TableRow, key: SortKey, now: Date): number | string | null {
   const t = row.trailer;
   switch (key) {
-    case 'unit': return t.unitNumber;
-    case 'slot': return row.spotOrder;
-    case 'load': return t.isLoaded ? 1 : 0;
-    case 'reefer': return t.kind !== 'reefer' || t.isReeferOn === null ? null : t.isReeferOn ? 1 : 0;
-    case 'fuel': return t.kind === 'reefer' ? t.fuelEighths : null;
-    case 'holds': return holdRank(t);
-    case 'dwell': return dwellMinutes(t.gateInAt, now);
-    case 'lastSeen': return t.lastSeenAt === null ? null : Date.parse(t.lastSeenAt);
+    case 'unit':
+      return t.unitNumber;
+    case 'slot':
+      return row.spotOrder;
+    case 'load':
+      return t.isLoaded ? 1 : 0;
+    case 'reefer':
+      return t.kind !== 'reefer' || t.isReeferOn === null ? null : t.isReeferOn ? 1 : 0;
+    case 'fuel':
+      return t.kind === 'reefer' ? t.fuelEighths : null;
+    case 'holds':
+      return holdRank(t);
+    case 'dwell':
+      return dwellMinutes(t.gateInAt, now);
+    case 'lastSeen':
+      return t.lastSeenAt === null ? null : Date.parse(t.lastSeenAt);
   }
 }
 
@@ -88,7 +107,10 @@ export function sortRows(rows: TableRow[], key: SortKey, dir: SortDir, now: Date
         if (a.v === b.v) return a.row.spotOrder - b.row.spotOrder;
         return a.v === null ? 1 : -1;
       }
-      const c = typeof a.v === 'string' ? a.v.localeCompare(b.v as string, 'en', { numeric: true }) : a.v - (b.v as number);
+      const c =
+        typeof a.v === 'string'
+          ? a.v.localeCompare(b.v as string, 'en', { numeric: true })
+          : a.v - (b.v as number);
       return c !== 0 ? sign * c : a.row.spotOrder - b.row.spotOrder;
     })
     .map((x) => x.row);

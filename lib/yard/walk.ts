@@ -12,7 +12,7 @@ export function suggestNextSpot(spots: readonly WalkSpot[], lastSpotId: string |
   if (spots.length === 0) return null;
   if (lastSpotId === null) return spots[0];
   const i = spots.findIndex((s) => s.id === lastSpotId);
-  return i === -1 ? spots[0] : spots[i + 1] ?? null;
+  return i === -1 ? spots[0] : (spots[i + 1] ?? null);
 }
 
 export interface QuickChecks {
@@ -69,12 +69,16 @@ export function tasksForScan(
 ): { kind: TaskKind; note: string }[] {
   const tasks: { kind: TaskKind; note: string }[] = [];
   if (trailer.kind === 'reefer' && scan.fuelEighths !== null && scan.fuelEighths <= policy.lowFuelEighths) {
-    tasks.push({ kind: 'low_fuel', note: `Fuel read ${scan.fuelEighths}/8 (policy: at or below ${policy.lowFuelEighths}/8).` });
+    tasks.push({
+      kind: 'low_fuel',
+      note: `Fuel read ${scan.fuelEighths}/8 (policy: at or below ${policy.lowFuelEighths}/8).`,
+    });
   }
   if (trailer.kind === 'reefer' && trailer.isLoaded && scan.isUnitRunning === false) {
     tasks.push({ kind: 'unit_off', note: 'Loaded reefer found with the unit not running.' });
   }
   if (scan.areDoorsClosed === false) tasks.push({ kind: 'doors_open', note: 'Doors found open.' });
-  if (trailer.isLoaded && scan.isSealPresent === false) tasks.push({ kind: 'seal_missing', note: 'Loaded trailer found without a seal.' });
+  if (trailer.isLoaded && scan.isSealPresent === false)
+    tasks.push({ kind: 'seal_missing', note: 'Loaded trailer found without a seal.' });
   return tasks;
 }

@@ -12,11 +12,14 @@ type Mail = { to: string[]; subject: string; text: string };
 async function mailTo(address: string, subject: RegExp): Promise<Mail> {
   let found: Mail | undefined;
   await expect
-    .poll(async () => {
-      const all = (await (await fetch(inbox)).json()) as Mail[];
-      found = all.find((m) => m.to.includes(address) && subject.test(m.subject));
-      return !!found;
-    }, { timeout: 20_000 })
+    .poll(
+      async () => {
+        const all = (await (await fetch(inbox)).json()) as Mail[];
+        found = all.find((m) => m.to.includes(address) && subject.test(m.subject));
+        return !!found;
+      },
+      { timeout: 20_000 },
+    )
     .toBe(true);
   return found!;
 }
@@ -29,7 +32,10 @@ async function signedIn(browser: Browser, name: AccountName, baseURL: string) {
   return page;
 }
 
-test('a damage case from drop to shared decision, with e-mails through the outbox', async ({ browser, baseURL }) => {
+test('a damage case from drop to shared decision, with e-mails through the outbox', async ({
+  browser,
+  baseURL,
+}) => {
   test.setTimeout(120_000);
   await fetch(inbox, { method: 'DELETE' });
 
@@ -38,12 +44,25 @@ test('a damage case from drop to shared decision, with e-mails through the outbo
   const { trailer, carrierId: osfw } = await untouchedTrailer('OSFW');
   const ok = allOkItems(trailer);
   await submitHandoff(driver.request, trailer.id, osfw, 'drop', ok);
-  const beforePhoto = await uploadPhoto(driver.request, trailer.id, 'left_side.skin', solidPng([40, 160, 60]));
-  await submitHandoff(driver.request, trailer.id, osfw, 'hook', { ...ok, 'left_side.skin': { ...ok['left_side.skin'], photoIds: [beforePhoto] } });
+  const beforePhoto = await uploadPhoto(
+    driver.request,
+    trailer.id,
+    'left_side.skin',
+    solidPng([40, 160, 60]),
+  );
+  await submitHandoff(driver.request, trailer.id, osfw, 'hook', {
+    ...ok,
+    'left_side.skin': { ...ok['left_side.skin'], photoIds: [beforePhoto] },
+  });
   const afterPhoto = await uploadPhoto(driver.request, trailer.id, 'left_side.skin', solidPng([200, 30, 30]));
   await submitHandoff(driver.request, trailer.id, osfw, 'drop', {
     ...ok,
-    'left_side.skin': { condition: 'damaged', isInsulationShowing: false, note: 'Skin torn behind the landing gear', photoIds: [afterPhoto] },
+    'left_side.skin': {
+      condition: 'damaged',
+      isInsulationShowing: false,
+      note: 'Skin torn behind the landing gear',
+      photoIds: [afterPhoto],
+    },
   });
 
   // The clerk opens the case: both photos side by side, conditions, and the engine's reason.
@@ -63,7 +82,10 @@ test('a damage case from drop to shared decision, with e-mails through the outbo
   await expect(clerk.getByText('Estimate $850.00 from the rate card')).toBeVisible();
 
   await desk.submit('Notify the carrier', 'Notify carrier', 'notified');
-  const notice = await mailTo('equipment@osterlind.example', new RegExp(`Damage case for trailer ${trailer.unitNumber}`));
+  const notice = await mailTo(
+    'equipment@osterlind.example',
+    new RegExp(`Damage case for trailer ${trailer.unitNumber}`),
+  );
   expect(notice.text).toContain('Left side skin: ok → damaged (needs repair)');
   expect(notice.text).toContain('Repair estimate: $850.00.');
   const link = /(http\S+\/case-link\/\S+)/.exec(notice.text)?.[1];
@@ -73,13 +95,18 @@ test('a damage case from drop to shared decision, with e-mails through the outbo
   const anon = await browser.newContext();
   const linkPage = await anon.newPage();
   await linkPage.goto(link!.replace(/^http:\/\/localhost:\d+/, baseURL!));
-  await expect(linkPage.getByRole('heading', { name: `Damage case: trailer ${trailer.unitNumber}` })).toBeVisible();
+  await expect(
+    linkPage.getByRole('heading', { name: `Damage case: trailer ${trailer.unitNumber}` }),
+  ).toBeVisible();
   await anon.close();
 
   // The carrier's driver disputes from the desk.
   const mine = new DeskCasePage(driver);
   await mine.openFromQueue(trailer.unitNumber);
-  await mine.form('Dispute this case').getByLabel('Why is this damage not yours?').fill('The skin was already torn when I hooked it; see my pickup photo.');
+  await mine
+    .form('Dispute this case')
+    .getByLabel('Why is this damage not yours?')
+    .fill('The skin was already torn when I hooked it; see my pickup photo.');
   await mine.submit('Dispute this case', 'Send dispute', 'disputed');
 
   // The clerk decides a shared charge.
@@ -92,7 +119,10 @@ test('a damage case from drop to shared decision, with e-mails through the outbo
   await desk.submit('Decide', 'Record decision', 'decided');
   await expect(clerk.getByText(/decided: share, charged \$425\.00/)).toBeVisible();
 
-  const decision = await mailTo('equipment@osterlind.example', new RegExp(`Decision on the damage case for trailer ${trailer.unitNumber}`));
+  const decision = await mailTo(
+    'equipment@osterlind.example',
+    new RegExp(`Decision on the damage case for trailer ${trailer.unitNumber}`),
+  );
   expect(decision.text).toContain('Charged to your company: $425.00.');
   expect(decision.text).toContain('shared');
   await driver.context().close();
@@ -105,7 +135,9 @@ test('reports CSV: clerks get RFC 4180 CSV, bad input a 422, drivers a 403', asy
   expect(csv.status()).toBe(200);
   expect(csv.headers()['content-type']).toContain('text/csv');
   const text = await csv.text();
-  expect(text.split('\r\n')[0]).toBe('month,carrier,cases,estimate_usd,charged_usd,absorbed_usd,waived_usd,open_usd');
+  expect(text.split('\r\n')[0]).toBe(
+    'month,carrier,cases,estimate_usd,charged_usd,absorbed_usd,waived_usd,open_usd',
+  );
   expect(text.split('\r\n').length).toBeGreaterThan(2); // the seed's cases are in it
   const bad = await clerk.request.get('/api/desk/reports.csv?months=banana');
   expect(bad.status()).toBe(422);

@@ -22,7 +22,9 @@ function smallPng(): Buffer {
   return PNG.sync.write(png);
 }
 
-test('drop with new damage and a photo, receipt with findings and holds, refused hook, receipt e-mail', async ({ page }) => {
+test('drop with new damage and a photo, receipt with findings and holds, refused hook, receipt e-mail', async ({
+  page,
+}) => {
   test.setTimeout(240_000); // launches its own browser with a fake camera
   await fetch(MAIL, { method: 'DELETE' });
 
@@ -54,8 +56,12 @@ test('drop with new damage and a photo, receipt with findings and holds, refused
     await form.choose('Left side skin: condition', 'Damaged', skin);
     await expect(skin.getByText('New or worse damage: add a photo and a note.')).toBeVisible();
     await form.choose('Insulation showing?', 'Yes, showing', skin);
-    await skin.getByLabel('Note: what do you see?').fill('Skin torn about 30 cm above the rear tandem; insulation showing.');
-    await skin.getByLabel('Photo of Left side skin').setInputFiles({ name: 'skin.png', mimeType: 'image/png', buffer: smallPng() });
+    await skin
+      .getByLabel('Note: what do you see?')
+      .fill('Skin torn about 30 cm above the rear tandem; insulation showing.');
+    await skin
+      .getByLabel('Photo of Left side skin')
+      .setInputFiles({ name: 'skin.png', mimeType: 'image/png', buffer: smallPng() });
     await expect(skin.getByRole('img', { name: 'Photo of Left side skin' })).toBeVisible({ timeout: 15_000 });
     await expect(skin.getByLabel('Left side skin: last record and now')).toContainText('New damage');
 
@@ -72,7 +78,9 @@ test('drop with new damage and a photo, receipt with findings and holds, refused
     await expect(findings).toContainText('New damage: Left side skin');
     await expect(findings).toContainText('Locking pin not engaged');
     const holds = driver.getByRole('region', { name: 'Holds' });
-    await expect(holds).toContainText('Out of service: may not leave the gate. Tandem locking pin, left rear is not engaged.');
+    await expect(holds).toContainText(
+      'Out of service: may not leave the gate. Tandem locking pin, left rear is not engaged.',
+    );
     await expect(holds).toContainText('Restricted: no perishable loads');
     // the thumbnail is really served (photo storage and permission check)
     const thumb = driver.getByRole('region', { name: /Photos/ }).getByRole('img');
@@ -82,7 +90,9 @@ test('drop with new damage and a photo, receipt with findings and holds, refused
     expect(code).toMatch(/^[0-9A-HJKMNP-TV-Z]{4}-[0-9A-HJKMNP-TV-Z]{4}$/);
     if (shots) await driver.screenshot({ path: 'docs/screenshots/gate-receipt.png', fullPage: true });
   } catch (error) {
-    await camera.page.screenshot({ path: '.data/test-results/gate-handoff-camera-failure.png', fullPage: true }).catch(() => undefined);
+    await camera.page
+      .screenshot({ path: '.data/test-results/gate-handoff-camera-failure.png', fullPage: true })
+      .catch(() => undefined);
     throw error;
   } finally {
     await camera.browser.close();
@@ -93,18 +103,25 @@ test('drop with new damage and a photo, receipt with findings and holds, refused
   await signInAs(page, 'outsideDriver');
   await page.goto(`/gate/trailers/${trailerId}`);
   await expect(page.getByText('Hook refused')).toBeVisible();
-  await expect(page.getByRole('region', { name: 'Why' })).toContainText('Tandem locking pin, left rear is not engaged.');
+  await expect(page.getByRole('region', { name: 'Why' })).toContainText(
+    'Tandem locking pin, left rear is not engaged.',
+  );
   await expect(page.getByRole('note', { name: 'Out of service' })).toContainText('qualified technician');
   await expect(page.getByRole('button', { name: 'Record the hook' })).toHaveCount(0);
   if (shots) await page.screenshot({ path: 'docs/screenshots/gate-refused.png', fullPage: true });
 
   // the receipt e-mail reached the local inbox, to the carrier (D1001 has no e-mail address)
   let mail: { to: string[]; subject: string; text: string } | undefined;
-  await expect.poll(async () => {
-    const list = (await (await fetch(MAIL)).json()) as { to: string[]; subject: string; text: string }[];
-    mail = list.find((m) => m.subject.includes(UNIT));
-    return Boolean(mail);
-  }, { timeout: 20_000 }).toBe(true);
+  await expect
+    .poll(
+      async () => {
+        const list = (await (await fetch(MAIL)).json()) as { to: string[]; subject: string; text: string }[];
+        mail = list.find((m) => m.subject.includes(UNIT));
+        return Boolean(mail);
+      },
+      { timeout: 20_000 },
+    )
+    .toBe(true);
   expect(mail!.to).toEqual(['claims@bramblecrest.example']);
   expect(mail!.text).toContain(`Trailer: ${UNIT}`);
   expect(mail!.text).toContain(`Verification code: ${code}`);
@@ -118,7 +135,10 @@ test('drop with new damage and a photo, receipt with findings and holds, refused
   await expect(page.getByRole('article').getByRole('img')).toHaveCount(0);
 });
 
-test('a draft survives a reload, and a drop submitted offline is sent when the connection returns', async ({ page, context }) => {
+test('a draft survives a reload, and a drop submitted offline is sent when the connection returns', async ({
+  page,
+  context,
+}) => {
   test.setTimeout(90_000);
   // R53191: another seeded reefer on the road with an ok history (db/seed-history.ts)
   await signInAs(page, 'driver');
@@ -133,7 +153,9 @@ test('a draft survives a reload, and a drop submitted offline is sent when the c
   await page.reload();
   await expect(page.getByLabel('Tractor number')).toHaveValue('T-5120');
   await expect(page.getByLabel('Seal number')).toHaveValue('SL-88123');
-  await expect(page.getByRole('group', { name: 'Fuel in eighths' }).getByRole('button', { name: '6/8' })).toHaveAttribute('aria-pressed', 'true');
+  await expect(
+    page.getByRole('group', { name: 'Fuel in eighths' }).getByRole('button', { name: '6/8' }),
+  ).toHaveAttribute('aria-pressed', 'true');
 
   await context.setOffline(true);
   await form.submit('drop');

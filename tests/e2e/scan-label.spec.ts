@@ -1,14 +1,22 @@
 import { expect, test, type Page } from '@playwright/test';
 import { LabelPage } from './pages/label-page';
 import { ACCOUNTS, SignInPage, type AccountName } from './pages/sign-in-page';
-import { code39Image, launchWithCamera, WIDE_FRAME, writeImageVideo, writeLabelVideo } from './support/fake-camera';
+import {
+  code39Image,
+  launchWithCamera,
+  WIDE_FRAME,
+  writeImageVideo,
+  writeLabelVideo,
+} from './support/fake-camera';
 
 async function signInAs(page: Page, name: AccountName) {
   await new SignInPage(page).signIn(name);
   await expect(page).toHaveURL(new RegExp(`${ACCOUNTS[name].home}$`));
 }
 
-test('a driver scans a real label with the camera and lands on that trailer’s handoff start', async ({ page }) => {
+test('a driver scans a real label with the camera and lands on that trailer’s handoff start', async ({
+  page,
+}) => {
   test.slow(); // launches its own browser with a fake camera
   // the clerk's label page renders the label; its link is what the QR on the trailer encodes
   await signInAs(page, 'clerk');
@@ -29,16 +37,24 @@ test('a driver scans a real label with the camera and lands on that trailer’s 
   }
 });
 
-test('a driver scans a VIN barcode (Code 39 with the leading I marker) when the label is gone', async ({ page }) => {
+test('a driver scans a VIN barcode (Code 39 with the leading I marker) when the label is gone', async ({
+  page,
+}) => {
   test.slow(); // launches its own browser with a fake camera
   await signInAs(page, 'driver');
   const found = await (await page.request.get('/api/trailers/lookup?unit=R53045')).json();
-  const video = await writeImageVideo(code39Image(`I${found.trailer.vin}`), '.data/e2e-vin-R53045.y4m', WIDE_FRAME);
+  const video = await writeImageVideo(
+    code39Image(`I${found.trailer.vin}`),
+    '.data/e2e-vin-R53045.y4m',
+    WIDE_FRAME,
+  );
   const camera = await launchWithCamera(video);
   try {
     await signInAs(camera.page, 'driver');
     await camera.page.getByRole('button', { name: 'Scan trailer label' }).click();
-    await expect(camera.page).toHaveURL(new RegExp(`/gate/trailers/${found.trailer.id}$`), { timeout: 30_000 });
+    await expect(camera.page).toHaveURL(new RegExp(`/gate/trailers/${found.trailer.id}$`), {
+      timeout: 30_000,
+    });
   } finally {
     await camera.browser.close();
   }
@@ -51,7 +67,9 @@ test('a code that is not a label shows what was read and offers typing', async (
     const driver = camera.page;
     await signInAs(driver, 'driver');
     await driver.getByRole('button', { name: 'Scan trailer label' }).click();
-    await expect(driver.getByText('That code is not a Hitchmark label or a VIN barcode.')).toBeVisible({ timeout: 30_000 });
+    await expect(driver.getByText('That code is not a Hitchmark label or a VIN barcode.')).toBeVisible({
+      timeout: 30_000,
+    });
     await expect(driver.getByText('Read: SLOT B07')).toBeVisible();
     await driver.getByLabel('Or type the unit number or VIN').fill('r53041');
     await driver.getByRole('button', { name: 'Find trailer' }).click();
@@ -66,7 +84,8 @@ test('with no camera the gate says so and the typed lookup still works', async (
   const scannerChunks: string[] = [];
   page.on('response', async (response) => {
     if (!response.url().endsWith('.js')) return;
-    if ((await response.text().catch(() => '')).includes('tryPlayVideoTimeout')) scannerChunks.push(response.url());
+    if ((await response.text().catch(() => '')).includes('tryPlayVideoTimeout'))
+      scannerChunks.push(response.url());
   });
   await signInAs(page, 'driver');
   await expect(page.getByRole('button', { name: 'Scan trailer label' })).toBeVisible();
@@ -92,7 +111,9 @@ test('a re-issued label’s old link says it was replaced; a forged link is refu
   expect(newLink).not.toBe(oldLink);
 
   await page.goto(new URL(oldLink).pathname);
-  await expect(page.getByText(/^This label was replaced on \d{1,2} \w{3} \d{4}; use the new label\.$/)).toBeVisible();
+  await expect(
+    page.getByText(/^This label was replaced on \d{1,2} \w{3} \d{4}; use the new label\.$/),
+  ).toBeVisible();
 
   const token = new URL(newLink).pathname.slice(3);
   const forged = token.slice(0, 20) + (token[20] === 'A' ? 'B' : 'A') + token.slice(21);
@@ -106,7 +127,10 @@ test('a re-issued label’s old link says it was replaced; a forged link is refu
   await expect(page).toHaveURL(new RegExp(`/gate/trailers/${trailerId}$`));
 });
 
-test('the lookup API answers each case with the right status and a clear message', async ({ page, request }) => {
+test('the lookup API answers each case with the right status and a clear message', async ({
+  page,
+  request,
+}) => {
   expect((await request.get('/api/trailers/lookup?unit=R53001')).status()).toBe(401);
   await signInAs(page, 'driver');
   const api = page.request;
@@ -132,7 +156,10 @@ test('the lookup API answers each case with the right status and a clear message
   expect((await api.get(`/trailers/labels/pdf?ids=${trailer.id}`)).status()).toBe(403);
   const forged = await api.get(`/api/trailers/lookup?token=${'A'.repeat(68)}`);
   expect(forged.status()).toBe(422);
-  expect(await forged.json()).toMatchObject({ code: 'invalid', message: 'This label is not a Hitchmark label or it is damaged.' });
+  expect(await forged.json()).toMatchObject({
+    code: 'invalid',
+    message: 'This label is not a Hitchmark label or it is damaged.',
+  });
 });
 
 test('a revoked label token gets 410 from the lookup API; a clerk downloads the PDF', async ({ page }) => {
@@ -153,7 +180,11 @@ test('a revoked label token gets 410 from the lookup API; a clerk downloads the 
   expect((await page.request.get('/trailers/labels/pdf?ids=R53043')).status()).toBe(422);
 });
 
-test('a label scanned while signed out opens sign-in first, then the trailer', async ({ page, browser, baseURL }) => {
+test('a label scanned while signed out opens sign-in first, then the trailer', async ({
+  page,
+  browser,
+  baseURL,
+}) => {
   await signInAs(page, 'clerk');
   const labels = new LabelPage(page);
   const trailerId = await labels.trailerId('R53044');

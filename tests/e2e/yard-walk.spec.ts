@@ -9,7 +9,10 @@ test.afterAll(async () => {
   await pool.end();
 });
 
-test('a jockey walks a row: one missing, one in the wrong slot, one unknown label; accepting the correction updates the board', async ({ page, context }) => {
+test('a jockey walks a row: one missing, one in the wrong slot, one unknown label; accepting the correction updates the board', async ({
+  page,
+  context,
+}) => {
   test.setTimeout(90_000); // two browsers: this phone and a second one with a fake camera
   // board: slot 1 = unit 1, slot 2 = unit 2, slot 3 = unit 3, slot 4 empty
   const { rowName, tag, slots, units, trailerIds } = await walkRowFixture();
@@ -31,7 +34,9 @@ test('a jockey walks a row: one missing, one in the wrong slot, one unknown labe
   await expect(walk.scans().filter({ hasText: 'Waiting to send' })).toHaveCount(1);
   await expect(page.getByRole('button', { name: /send waiting scans first/ })).toBeDisabled();
   await context.setOffline(false);
-  await expect(walk.scans().filter({ hasText: `${slots[1]}: NOLABEL${tag} (unknown) · Sent` })).toHaveCount(1);
+  await expect(walk.scans().filter({ hasText: `${slots[1]}: NOLABEL${tag} (unknown) · Sent` })).toHaveCount(
+    1,
+  );
 
   // unit 3 stands in slot 4, not slot 3; unit 2 is nowhere. Unit 3's label is read by a second
   // phone's camera (fake camera fed the label's QR code) on the same walk.
@@ -59,8 +64,12 @@ test('a jockey walks a row: one missing, one in the wrong slot, one unknown labe
   await expect(walk.count('missing')).toHaveText('1');
   await expect(walk.count('unknown')).toHaveText('1');
   await expect(walk.count('duplicate')).toHaveText('0');
-  await expect(page.getByRole('region', { name: 'Wrong slot' })).toContainText(`${units[2]}: board says ${slots[2]}, seen in ${slots[3]}`);
-  await expect(page.getByRole('region', { name: 'Missing' })).toContainText(`${units[1]}: expected in ${slots[1]}, not found`);
+  await expect(page.getByRole('region', { name: 'Wrong slot' })).toContainText(
+    `${units[2]}: board says ${slots[2]}, seen in ${slots[3]}`,
+  );
+  await expect(page.getByRole('region', { name: 'Missing' })).toContainText(
+    `${units[1]}: expected in ${slots[1]}, not found`,
+  );
   await expect(page.getByRole('region', { name: 'Unknown' })).toContainText(`NOLABEL${tag}`);
 
   await page.getByRole('button', { name: `Accept: move to ${slots[3]}` }).click();
@@ -76,7 +85,9 @@ test('a jockey walks a row: one missing, one in the wrong slot, one unknown labe
   await expect(map.locator(`[data-spot="${slots[2]}"]`)).toContainText('free');
 });
 
-test('a move into an occupied slot is refused naming the occupant; the board shows a good move', async ({ page }) => {
+test('a move into an occupied slot is refused naming the occupant; the board shows a good move', async ({
+  page,
+}) => {
   const { slots, units } = await walkRowFixture();
   await new SignInPage(page).signIn('jockey');
   await expect(page).toHaveURL(/\/yard$/);
@@ -87,7 +98,9 @@ test('a move into an occupied slot is refused naming the occupant; the board sho
   await expect(page.getByText(`${slots[1]} is occupied by ${units[1]}`)).toBeVisible();
   await page.getByLabel('To slot or door').fill(slots[3]);
   await page.getByRole('button', { name: 'Record move' }).click();
-  await expect(page.getByRole('status').filter({ hasText: `Moved ${units[0]} from ${slots[0]} to ${slots[3]}.` })).toBeVisible();
+  await expect(
+    page.getByRole('status').filter({ hasText: `Moved ${units[0]} from ${slots[0]} to ${slots[3]}.` }),
+  ).toBeVisible();
   await page.goto('/yard');
   await expect(page.getByTestId('yard-map').locator(`[data-spot="${slots[3]}"]`)).toContainText(units[0]);
 });
@@ -102,14 +115,21 @@ test('the CSV export carries the table columns and rows; bad input gets a clear 
   const lines = (await csv.text()).split('\r\n');
   expect(lines[0]).toBe('Unit,Slot,Loaded/empty,Reefer,Fuel,Holds,Dwell,Gate in,Last seen');
   // the fixture's first trailer: loaded reefer at 34.0 °F, 6/8 fuel, gated in an hour ago
-  expect(lines.find((l) => l.startsWith(`${units[0]},`))).toMatch(new RegExp(`^${units[0]},${slots[0]},Loaded,"On, 34\\.0 °F",6/8,None,1 h 0\\d min,`));
+  expect(lines.find((l) => l.startsWith(`${units[0]},`))).toMatch(
+    new RegExp(`^${units[0]},${slots[0]},Loaded,"On, 34\\.0 °F",6/8,None,1 h 0\\d min,`),
+  );
 
   expect((await page.request.get('/api/yard/board.csv?filter=bogus')).status()).toBe(422);
-  const notJson = await page.request.post('/api/yard/moves', { headers: { 'content-type': 'application/json' }, data: Buffer.from('{not json') });
+  const notJson = await page.request.post('/api/yard/moves', {
+    headers: { 'content-type': 'application/json' },
+    data: Buffer.from('{not json'),
+  });
   expect(notJson.status()).toBe(400);
   const empty = await page.request.post('/api/yard/moves', { data: { unit: '', target: 'A01' } });
   expect(empty.status()).toBe(422);
   expect((await empty.json()).fieldErrors.unit[0]).toBe('Scan or type the unit number.');
-  const badScan = await page.request.post('/api/yard/walks/00000000-0000-4000-8000-000000000000/scans', { data: { clientKey: 'short' } });
+  const badScan = await page.request.post('/api/yard/walks/00000000-0000-4000-8000-000000000000/scans', {
+    data: { clientKey: 'short' },
+  });
   expect(badScan.status()).toBe(422);
 });

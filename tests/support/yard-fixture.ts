@@ -8,64 +8,109 @@ import { carriers, terminals, trailers, users, yardRows, yardSpots } from '../..
 export const uniqueTag = () => randomBytes(3).toString('hex').toUpperCase();
 
 /** A 17-character fake VIN that cannot collide with the seed's (starts with "HMT"); not a valid check digit. */
-const fakeVin = (tag: string, n: number) => `HMT${tag.slice(0, 6).padEnd(6, "0")}${String(n).padStart(8, "0")}`;
+const fakeVin = (tag: string, n: number) =>
+  `HMT${tag.slice(0, 6).padEnd(6, '0')}${String(n).padStart(8, '0')}`;
 
 export async function ensureTerminal(db: Db, code: string, timeZone = 'America/Chicago') {
-  await db.insert(terminals).values({ code, name: `${code} test terminal`, timeZone }).onConflictDoNothing();
+  await db
+    .insert(terminals)
+    .values({ code, name: `${code} test terminal`, timeZone })
+    .onConflictDoNothing();
   const [t] = await db.select({ id: terminals.id }).from(terminals).where(eq(terminals.code, code));
   return t.id;
 }
 
 export async function ensureCarrier(db: Db) {
-  await db.insert(carriers).values({ scac: 'HMTY', name: 'Hitchmark Test Yard Lines', contactEmail: 'yard@test.example' }).onConflictDoNothing();
+  await db
+    .insert(carriers)
+    .values({ scac: 'HMTY', name: 'Hitchmark Test Yard Lines', contactEmail: 'yard@test.example' })
+    .onConflictDoNothing();
   const [c] = await db.select({ id: carriers.id }).from(carriers).where(eq(carriers.scac, 'HMTY'));
   return c.id;
 }
 
 export async function createJockey(db: Db, terminalId: string) {
   const tag = uniqueTag();
-  const [u] = await db.insert(users).values({ name: `Test jockey ${tag}`, role: 'jockey', email: `jockey-${tag}@test.example`, secretHash: 'x', homeTerminalId: terminalId }).returning({ id: users.id });
+  const [u] = await db
+    .insert(users)
+    .values({
+      name: `Test jockey ${tag}`,
+      role: 'jockey',
+      email: `jockey-${tag}@test.example`,
+      secretHash: 'x',
+      homeTerminalId: terminalId,
+    })
+    .returning({ id: users.id });
   return u.id;
 }
 
 /** A new row of `slots` slots named `<rowName>-01…`; returns the row and slot ids in order. */
-export async function createRowWithSlots(db: Db, terminalId: string, rowName: string, slots: number, sortOrder = 1000) {
-  const [row] = await db.insert(yardRows).values({ terminalId, name: rowName, sortOrder }).returning({ id: yardRows.id });
-  const spots = await db.insert(yardSpots).values(Array.from({ length: slots }, (_, i) => ({
-    terminalId, rowId: row.id, kind: 'slot' as const, label: `${rowName.replace(/\s+/g, '')}-${String(i + 1).padStart(2, '0')}`, sortOrder: i,
-  }))).returning({ id: yardSpots.id, label: yardSpots.label });
+export async function createRowWithSlots(
+  db: Db,
+  terminalId: string,
+  rowName: string,
+  slots: number,
+  sortOrder = 1000,
+) {
+  const [row] = await db
+    .insert(yardRows)
+    .values({ terminalId, name: rowName, sortOrder })
+    .returning({ id: yardRows.id });
+  const spots = await db
+    .insert(yardSpots)
+    .values(
+      Array.from({ length: slots }, (_, i) => ({
+        terminalId,
+        rowId: row.id,
+        kind: 'slot' as const,
+        label: `${rowName.replace(/\s+/g, '')}-${String(i + 1).padStart(2, '0')}`,
+        sortOrder: i,
+      })),
+    )
+    .returning({ id: yardSpots.id, label: yardSpots.label });
   return { rowId: row.id, spots };
 }
 
 /** Places new reefer trailers in the given spots (null: create the trailer but leave it on the road). */
 export async function placeTrailers(
-  db: Db, terminalId: string, tag: string, spots: (string | null)[],
+  db: Db,
+  terminalId: string,
+  tag: string,
+  spots: (string | null)[],
   over: Partial<typeof trailers.$inferInsert> = {},
 ) {
   const carrierId = await ensureCarrier(db);
   const now = Date.now();
-  return db.insert(trailers).values(spots.map((spotId, i) => ({
-    unitNumber: `T${tag}${String(i + 1).padStart(2, '0')}`,
-    vin: fakeVin(tag, i + 1),
-    plate: `TST${i}`,
-    plateState: 'IL',
-    kind: 'reefer' as const,
-    ownerCarrierId: carrierId,
-    status: spotId ? ('in_yard' as const) : ('on_road' as const),
-    currentTerminalId: spotId ? terminalId : null,
-    currentSpotId: spotId,
-    isLoaded: true,
-    fuelEighths: 6,
-    isReeferOn: true,
-    setpointTenthsF: 340,
-    gateInAt: new Date(now - (i + 1) * 3_600_000),
-    lastSeenAt: new Date(now - (i + 1) * 3_600_000),
-    ...over,
-  }))).returning({ id: trailers.id, unitNumber: trailers.unitNumber });
+  return db
+    .insert(trailers)
+    .values(
+      spots.map((spotId, i) => ({
+        unitNumber: `T${tag}${String(i + 1).padStart(2, '0')}`,
+        vin: fakeVin(tag, i + 1),
+        plate: `TST${i}`,
+        plateState: 'IL',
+        kind: 'reefer' as const,
+        ownerCarrierId: carrierId,
+        status: spotId ? ('in_yard' as const) : ('on_road' as const),
+        currentTerminalId: spotId ? terminalId : null,
+        currentSpotId: spotId,
+        isLoaded: true,
+        fuelEighths: 6,
+        isReeferOn: true,
+        setpointTenthsF: 340,
+        gateInAt: new Date(now - (i + 1) * 3_600_000),
+        lastSeenAt: new Date(now - (i + 1) * 3_600_000),
+        ...over,
+      })),
+    )
+    .returning({ id: trailers.id, unitNumber: trailers.unitNumber });
 }
 
 export async function spotIdByLabel(db: Db, terminalId: string, label: string) {
-  const [s] = await db.select({ id: yardSpots.id }).from(yardSpots).where(and(eq(yardSpots.terminalId, terminalId), eq(yardSpots.label, label)));
+  const [s] = await db
+    .select({ id: yardSpots.id })
+    .from(yardSpots)
+    .where(and(eq(yardSpots.terminalId, terminalId), eq(yardSpots.label, label)));
   return s?.id ?? null;
 }
 
@@ -75,11 +120,16 @@ export async function spotIdByLabel(db: Db, terminalId: string, label: string) {
  * stay: the audit log is append-only and refers to its actors.
  */
 export async function removeTestYard(db: Db, terminalId: string) {
-  const { labels, walkOutcomes, walkScans, yardMoves, yardTasks, yardWalks } = await import('../../db/schema');
+  const { labels, walkOutcomes, walkScans, yardMoves, yardTasks, yardWalks } =
+    await import('../../db/schema');
   const { inArray } = await import('drizzle-orm');
   const carrierId = await ensureCarrier(db);
-  const own = (await db.select({ id: trailers.id }).from(trailers).where(eq(trailers.ownerCarrierId, carrierId))).map((t) => t.id);
-  const walks = (await db.select({ id: yardWalks.id }).from(yardWalks).where(eq(yardWalks.terminalId, terminalId))).map((w) => w.id);
+  const own = (
+    await db.select({ id: trailers.id }).from(trailers).where(eq(trailers.ownerCarrierId, carrierId))
+  ).map((t) => t.id);
+  const walks = (
+    await db.select({ id: yardWalks.id }).from(yardWalks).where(eq(yardWalks.terminalId, terminalId))
+  ).map((w) => w.id);
   if (walks.length) {
     await db.delete(walkOutcomes).where(inArray(walkOutcomes.walkId, walks));
     await db.delete(walkScans).where(inArray(walkScans.walkId, walks));

@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { canOpen, homeFor, ROLES, SECTION_ROLES } from '@/lib/roles';
-import { BASE_LOCK_SECONDS, FREE_ATTEMPTS, lockAfterFailure, MAX_LOCK_SECONDS, secondsLocked } from '@/lib/sign-in-throttle';
+import {
+  BASE_LOCK_SECONDS,
+  FREE_ATTEMPTS,
+  lockAfterFailure,
+  MAX_LOCK_SECONDS,
+  secondsLocked,
+} from '@/lib/sign-in-throttle';
 import { safeNext, signInSchema } from '@/lib/validation/auth';
 
 describe('sign-in input', () => {
@@ -14,7 +20,11 @@ describe('sign-in input', () => {
     expect(r.error?.issues[0].message).toBe('Your PIN is 4 to 8 digits.');
   });
   it('lower-cases a staff e-mail and refuses a malformed one', () => {
-    const ok = signInSchema.safeParse({ method: 'staff', email: 'Clerk@Bramblecrest.Example', password: 'x' });
+    const ok = signInSchema.safeParse({
+      method: 'staff',
+      email: 'Clerk@Bramblecrest.Example',
+      password: 'x',
+    });
     expect(ok.success && ok.data.method === 'staff' && ok.data.email).toBe('clerk@bramblecrest.example');
     expect(signInSchema.safeParse({ method: 'staff', email: 'clerk', password: 'x' }).success).toBe(false);
   });

@@ -1,11 +1,29 @@
 import { describe, expect, it } from 'vitest';
-import { canonicalJson, handoffContentHash, sha256Hex, verifyChain, type HashableHandoff } from '@/lib/handoff-hash';
+import {
+  canonicalJson,
+  handoffContentHash,
+  sha256Hex,
+  verifyChain,
+  type HashableHandoff,
+} from '@/lib/handoff-hash';
 
 const base = (prevHash: string | null, fuel = 8): HashableHandoff => ({
   content: { kind: 'drop', trailerId: 't-1', fuelEighths: fuel, occurredAt: '2026-11-03T14:05:00.000Z' },
   items: [
-    { itemKey: 'rear.door_left.hinge_3', condition: 'ok', treadThirtySeconds: null, isHoldingAir: null, note: null },
-    { itemKey: 'tires.axle1.left_outer', condition: 'ok', treadThirtySeconds: 9, isHoldingAir: true, note: null },
+    {
+      itemKey: 'rear.door_left.hinge_3',
+      condition: 'ok',
+      treadThirtySeconds: null,
+      isHoldingAir: null,
+      note: null,
+    },
+    {
+      itemKey: 'tires.axle1.left_outer',
+      condition: 'ok',
+      treadThirtySeconds: 9,
+      isHoldingAir: true,
+      note: null,
+    },
   ],
   photoSha256s: [],
   prevHash,

@@ -17,7 +17,12 @@ const pick = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v)
 
 export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
   const user = await requireUser(SECTION_ROLES.desk);
-  const raw = Object.fromEntries((Object.entries(await searchParams) as [string, string | string[] | undefined][]).map(([k, v]) => [k, pick(v)]));
+  const raw = Object.fromEntries(
+    (Object.entries(await searchParams) as [string, string | string[] | undefined][]).map(([k, v]) => [
+      k,
+      pick(v),
+    ]),
+  );
   const parsed = caseQueueQuerySchema.safeParse(raw);
   const errors = parsed.success ? {} : (z.flattenError(parsed.error).fieldErrors as Record<string, string[]>);
   const isStaff = user.role !== 'driver';
@@ -30,25 +35,37 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
-        <h1 className="text-gate-xl font-bold">{isStaff ? 'Damage cases' : `Damage cases for ${user.carrierName ?? 'your carrier'}`}</h1>
+        <h1 className="text-gate-xl font-bold">
+          {isStaff ? 'Damage cases' : `Damage cases for ${user.carrierName ?? 'your carrier'}`}
+        </h1>
         {isStaff ? (
           <Link href="/desk/reports" className="text-gate font-bold text-brand underline">
             Reports
           </Link>
         ) : null}
       </div>
-      {isStaff ? <QueueFilters carriers={carriers} values={raw as Record<string, string>} errors={errors} /> : null}
+      {isStaff ? (
+        <QueueFilters carriers={carriers} values={raw as Record<string, string>} errors={errors} />
+      ) : null}
       {!parsed.success ? (
-        <p role="alert" className="rounded-lg border-2 border-danger bg-danger-bg p-3 text-gate font-bold text-danger">
+        <p
+          role="alert"
+          className="rounded-lg border-2 border-danger bg-danger-bg p-3 text-gate font-bold text-danger"
+        >
           Some filters are not valid; fix them to see cases.
         </p>
       ) : rows.length === 0 ? (
-        <EmptyState title="No cases here">{isStaff ? 'No case matches these filters.' : 'No damage case names your carrier.'}</EmptyState>
+        <EmptyState title="No cases here">
+          {isStaff ? 'No case matches these filters.' : 'No damage case names your carrier.'}
+        </EmptyState>
       ) : (
         <ul className="divide-y divide-paper-line rounded-xl bg-paper" aria-label="Cases">
           {rows.map((c) => (
             <li key={c.id}>
-              <Link href={`/desk/cases/${c.id}`} className="grid min-h-tap grid-cols-[1fr_auto] gap-x-3 gap-y-1 p-3 hover:bg-brand-light sm:grid-cols-[8rem_1fr_8rem_9rem_7rem]">
+              <Link
+                href={`/desk/cases/${c.id}`}
+                className="grid min-h-tap grid-cols-[1fr_auto] gap-x-3 gap-y-1 p-3 hover:bg-brand-light sm:grid-cols-[8rem_1fr_8rem_9rem_7rem]"
+              >
                 <span className="text-gate font-bold">Trailer {c.unitNumber}</span>
                 <span className="text-gate-sm text-ink-soft sm:order-none">
                   {c.carrierScac ?? 'no single carrier'} · {c.terminalCode} · {c.handoffKind}

@@ -15,7 +15,8 @@ export default async function GatePage() {
       <div>
         <h1 className="text-gate-xl font-bold">Gate</h1>
         <p className="text-gate text-ink-soft">
-          {user.terminalName ?? 'No home terminal'}: {inYard} trailers in the yard. Scan the trailer&apos;s label to drop or hook it.
+          {user.terminalName ?? 'No home terminal'}: {inYard} trailers in the yard. Scan the trailer&apos;s
+          label to drop or hook it.
         </p>
       </div>
       <GateLookup />

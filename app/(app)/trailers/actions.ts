@@ -7,7 +7,12 @@ import { releaseHold } from '@/db/queries/holds';
 import { requireUser } from '@/lib/server/auth';
 import { releaseHoldSchema } from '@/lib/validation/desk';
 
-export type ReleaseState = { ok: boolean; message?: string; formError?: string; fieldErrors?: Record<string, string[] | undefined> };
+export type ReleaseState = {
+  ok: boolean;
+  message?: string;
+  formError?: string;
+  fieldErrors?: Record<string, string[] | undefined>;
+};
 
 const REFUSALS = {
   not_found: 'This hold does not exist on this trailer.',
@@ -22,7 +27,11 @@ export async function releaseHoldAction(_prev: ReleaseState, formData: FormData)
   const parsed = releaseHoldSchema.safeParse(Object.fromEntries(formData));
   if (!parsed.success) {
     const flat = z.flattenError(parsed.error);
-    return { ok: false, fieldErrors: flat.fieldErrors, formError: flat.formErrors[0] ?? 'Some fields need attention.' };
+    return {
+      ok: false,
+      fieldErrors: flat.fieldErrors,
+      formError: flat.formErrors[0] ?? 'Some fields need attention.',
+    };
   }
   const v = parsed.data;
   // the form's local date and time are the terminal's wall clock
@@ -30,7 +39,14 @@ export async function releaseHoldAction(_prev: ReleaseState, formData: FormData)
   const [y, mo, da] = d.split('-').map(Number);
   const [h, mi] = t.split(':').map(Number);
   const repairedAt = new Date(new TZDate(y, mo - 1, da, h, mi, user.terminalTimeZone ?? 'UTC').getTime());
-  const result = await releaseHold({ holdId: v.holdId, trailerId: v.trailerId, repairedBy: v.repairedBy, repairNote: v.repairNote, repairedAt, releasedById: user.id });
+  const result = await releaseHold({
+    holdId: v.holdId,
+    trailerId: v.trailerId,
+    repairedBy: v.repairedBy,
+    repairNote: v.repairNote,
+    repairedAt,
+    releasedById: user.id,
+  });
   if (!result.ok) return { ok: false, formError: REFUSALS[result.error] };
   revalidatePath(`/trailers/${v.trailerId}`);
   return { ok: true, message: 'Hold released. The repair is on the trailer file.' };

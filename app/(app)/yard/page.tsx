@@ -17,7 +17,9 @@ export default async function YardPage() {
       {board ? (
         <YardBoard initial={board} />
       ) : (
-        <EmptyState title="No home terminal">Ask an admin to set your home terminal to see its yard.</EmptyState>
+        <EmptyState title="No home terminal">
+          Ask an admin to set your home terminal to see its yard.
+        </EmptyState>
       )}
     </div>
   );

@@ -20,11 +20,21 @@ const CAMERA_HELP: Partial<Record<CameraState, { title: string; text: string }>>
 };
 
 /** The way forward after a camera or code problem; always points to the typed entry. */
-export function ScanProblem({ camera, problem }: { camera: CameraState; problem: { message: string; read?: string } | null }) {
+export function ScanProblem({
+  camera,
+  problem,
+}: {
+  camera: CameraState;
+  problem: { message: string; read?: string } | null;
+}) {
   const help = CAMERA_HELP[camera];
   if (!help && !problem) return <div aria-live="polite" />;
   return (
-    <div aria-live="polite" role="alert" className="rounded-lg border-2 border-danger bg-danger-bg p-3 text-gate text-ink">
+    <div
+      aria-live="polite"
+      role="alert"
+      className="rounded-lg border-2 border-danger bg-danger-bg p-3 text-gate text-ink"
+    >
       {help ? (
         <>
           <p className="font-bold">{help.title}</p>
@@ -34,7 +44,9 @@ export function ScanProblem({ camera, problem }: { camera: CameraState; problem:
       {problem ? (
         <>
           <p className="font-bold">{problem.message}</p>
-          {problem.read ? <p className="mt-1 break-all font-mono text-gate-sm">Read: {problem.read}</p> : null}
+          {problem.read ? (
+            <p className="mt-1 break-all font-mono text-gate-sm">Read: {problem.read}</p>
+          ) : null}
           <p className="mt-1">Scan again, or type the unit number below.</p>
         </>
       ) : null}

@@ -71,18 +71,32 @@ export function TrailerScanner({
         {isLive ? (
           <>
             <p role="status" className="text-gate font-bold">
-              {camera === 'starting' ? 'Starting the camera…' : 'Point the camera at the label. Hold still about a forearm away.'}
+              {camera === 'starting'
+                ? 'Starting the camera…'
+                : 'Point the camera at the label. Hold still about a forearm away.'}
             </p>
             <Button type="button" variant="secondary" className="w-full" onClick={stop}>
               Stop camera
             </Button>
           </>
         ) : (
-          <Button type="button" className="min-h-tap-lg w-full text-gate-lg" onClick={() => { setProblem(null); void start(); }} disabled={isBusy}>
+          <Button
+            type="button"
+            className="min-h-tap-lg w-full text-gate-lg"
+            onClick={() => {
+              setProblem(null);
+              void start();
+            }}
+            disabled={isBusy}
+          >
             {startLabel}
           </Button>
         )}
-        {isBusy ? <p role="status" className="text-gate font-bold">Looking the trailer up…</p> : null}
+        {isBusy ? (
+          <p role="status" className="text-gate font-bold">
+            Looking the trailer up…
+          </p>
+        ) : null}
         <ScanProblem camera={camera} problem={problem} />
       </div>
       <TypedLookup onLookup={(q) => void find(q)} isBusy={isBusy} />

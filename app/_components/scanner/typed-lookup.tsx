@@ -13,7 +13,15 @@ export function typedQuery(raw: string): LookupQuery | null {
   return /^[A-Z0-9]{17}$/.test(vin) ? { vin } : { unit: text.toUpperCase() };
 }
 
-export function TypedLookup({ onLookup, isBusy, initial = '' }: { onLookup: (q: LookupQuery) => void; isBusy: boolean; initial?: string }) {
+export function TypedLookup({
+  onLookup,
+  isBusy,
+  initial = '',
+}: {
+  onLookup: (q: LookupQuery) => void;
+  isBusy: boolean;
+  initial?: string;
+}) {
   const [value, setValue] = useState(initial);
   function submit(event: FormEvent) {
     event.preventDefault();

@@ -8,7 +8,8 @@ export type CameraState = 'idle' | 'starting' | 'scanning' | 'denied' | 'no_came
 function cameraErrorState(error: unknown): CameraState {
   const name = error instanceof Error || error instanceof DOMException ? error.name : '';
   if (name === 'NotAllowedError' || name === 'SecurityError') return 'denied';
-  if (name === 'NotFoundError' || name === 'OverconstrainedError' || name === 'DevicesNotFoundError') return 'no_camera';
+  if (name === 'NotFoundError' || name === 'OverconstrainedError' || name === 'DevicesNotFoundError')
+    return 'no_camera';
   return 'failed';
 }
 
@@ -43,20 +44,29 @@ export function useCameraScan(onDecoded: (text: string) => void) {
     wantsCameraRef.current = true;
     setCamera('starting');
     try {
-      const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([import('@zxing/browser'), import('@zxing/library')]);
-      const hints = new Map<unknown, unknown>([[DecodeHintType.POSSIBLE_FORMATS, [BarcodeFormat.QR_CODE, BarcodeFormat.CODE_39]]]);
+      const [{ BrowserMultiFormatReader }, { BarcodeFormat, DecodeHintType }] = await Promise.all([
+        import('@zxing/browser'),
+        import('@zxing/library'),
+      ]);
+      const hints = new Map<unknown, unknown>([
+        [DecodeHintType.POSSIBLE_FORMATS, [BarcodeFormat.QR_CODE, BarcodeFormat.CODE_39]],
+      ]);
       if (!wantsCameraRef.current || !videoRef.current) return;
       const reader = new BrowserMultiFormatReader(hints as never, { delayBetweenScanAttempts: 100 });
       let isDone = false;
-      const controls = await reader.decodeFromVideoDevice(undefined, videoRef.current, (result, _error, controls) => {
-        if (!result || isDone) return;
-        isDone = true;
-        wantsCameraRef.current = false;
-        controls.stop();
-        controlsRef.current = null;
-        setCamera('idle');
-        onDecodedRef.current(result.getText());
-      });
+      const controls = await reader.decodeFromVideoDevice(
+        undefined,
+        videoRef.current,
+        (result, _error, controls) => {
+          if (!result || isDone) return;
+          isDone = true;
+          wantsCameraRef.current = false;
+          controls.stop();
+          controlsRef.current = null;
+          setCamera('idle');
+          onDecodedRef.current(result.getText());
+        },
+      );
       if (!wantsCameraRef.current) return controls.stop();
       if (!isDone) {
         controlsRef.current = controls;

@@ -17,11 +17,22 @@ export async function POST(request: Request) {
   const parsed = handoffSubmitSchema.safeParse(body.body);
   if (!parsed.success) return invalid(parsed.error);
   try {
-    const result = await submitHandoff(parsed.data, { id: user.id, role: user.role, carrierId: user.carrierId, terminalId: user.terminalId });
+    const result = await submitHandoff(parsed.data, {
+      id: user.id,
+      role: user.role,
+      carrierId: user.carrierId,
+      terminalId: user.terminalId,
+    });
     // the receipt e-mail was queued in the transaction; send it now rather than at the worker's next round
     if (!result.isReplay) after(() => deliverDueEmails().catch(() => undefined));
     return Response.json(
-      { handoff: { id: result.handoffId, verificationCode: result.verificationCode, receiptUrl: `/gate/receipts/${result.handoffId}` } },
+      {
+        handoff: {
+          id: result.handoffId,
+          verificationCode: result.verificationCode,
+          receiptUrl: `/gate/receipts/${result.handoffId}`,
+        },
+      },
       { status: result.isReplay ? 200 : 201 },
     );
   } catch (error) {

@@ -28,20 +28,27 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
       <p className="text-gate-lg font-bold text-brand">Hitchmark</p>
       <h1 className="text-gate-xl font-bold">Damage case: trailer {c.unitNumber}</h1>
       <p className="text-gate">
-        {c.carrierName} · {c.terminalName} · state <span className="font-bold">{c.state}</span> · estimate <span className="font-bold">{formatCents(effectiveAmountCents(c))}</span>
+        {c.carrierName} · {c.terminalName} · state <span className="font-bold">{c.state}</span> · estimate{' '}
+        <span className="font-bold">{formatCents(effectiveAmountCents(c))}</span>
         {c.disputeDeadline ? ` · dispute until ${formatWhen(c.disputeDeadline, c.timeZone)}` : ''}
       </p>
       <ul className="space-y-2">
         {findings.map((f) => (
           <li key={f.id} className="rounded-xl bg-paper p-3">
             <p className="text-gate font-bold">
-              {itemLabel(f.itemKey)}: {f.previousCondition ? CONDITION_LABELS[f.previousCondition] : 'no earlier record'} → {f.condition ? CONDITION_LABELS[f.condition] : 'not checked'}
+              {itemLabel(f.itemKey)}:{' '}
+              {f.previousCondition ? CONDITION_LABELS[f.previousCondition] : 'no earlier record'} →{' '}
+              {f.condition ? CONDITION_LABELS[f.condition] : 'not checked'}
             </p>
             <p className="text-gate-sm">{f.reason}</p>
           </li>
         ))}
       </ul>
-      {isOpen ? <LinkDisputeForm token={decodeURIComponent(token)} /> : <p className="text-gate">This case takes no dispute now ({c.state}).</p>}
+      {isOpen ? (
+        <LinkDisputeForm token={decodeURIComponent(token)} />
+      ) : (
+        <p className="text-gate">This case takes no dispute now ({c.state}).</p>
+      )}
     </main>
   );
 }

@@ -39,9 +39,11 @@ function mac(secret: Buffer, payload: Buffer): Buffer {
 }
 
 function encodeId(id: string): Buffer {
-  if (UUID_PATTERN.test(id)) return Buffer.concat([Buffer.from([UUID_TAG]), Buffer.from(id.replace(/-/g, ''), 'hex')]);
+  if (UUID_PATTERN.test(id))
+    return Buffer.concat([Buffer.from([UUID_TAG]), Buffer.from(id.replace(/-/g, ''), 'hex')]);
   const bytes = Buffer.from(id, 'utf8');
-  if (bytes.length === 0 || bytes.length > MAX_ID_BYTES) throw new RangeError('label and trailer ids must be 1–64 bytes');
+  if (bytes.length === 0 || bytes.length > MAX_ID_BYTES)
+    throw new RangeError('label and trailer ids must be 1–64 bytes');
   return Buffer.concat([Buffer.from([bytes.length]), bytes]);
 }
 
@@ -51,7 +53,10 @@ function decodeId(buf: Buffer, at: number): [id: string, next: number] | null {
   if (tag === UUID_TAG) {
     if (at + 17 > buf.length) return null;
     const h = buf.subarray(at + 1, at + 17).toString('hex');
-    return [`${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20)}`, at + 17];
+    return [
+      `${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20)}`,
+      at + 17,
+    ];
   }
   if (tag === 0 || tag > MAX_ID_BYTES || at + 1 + tag > buf.length) return null;
   return [buf.subarray(at + 1, at + 1 + tag).toString('utf8'), at + 1 + tag];
@@ -59,7 +64,11 @@ function decodeId(buf: Buffer, at: number): [id: string, next: number] | null {
 
 /** Signs a label token. Throws only on a short secret or an empty or over-long id. */
 export function signLabelToken(claims: LabelClaims, secret: string | Uint8Array): string {
-  const payload = Buffer.concat([Buffer.from([VERSION]), encodeId(claims.labelId), encodeId(claims.trailerId)]);
+  const payload = Buffer.concat([
+    Buffer.from([VERSION]),
+    encodeId(claims.labelId),
+    encodeId(claims.trailerId),
+  ]);
   return Buffer.concat([payload, mac(secretBytes(secret), payload)]).toString('base64url');
 }
 
@@ -69,12 +78,16 @@ export function signLabelToken(claims: LabelClaims, secret: string | Uint8Array)
  * `isLabelCurrent` says the label id is no longer current.
  */
 export function verifyLabelToken(
-  token: string, secret: string | Uint8Array, options: VerifyOptions = {},
+  token: string,
+  secret: string | Uint8Array,
+  options: VerifyOptions = {},
 ): LabelTokenResult {
   const key = secretBytes(secret);
-  if (typeof token !== 'string' || token.length > 400 || !BASE64URL.test(token)) return { ok: false, error: 'malformed' };
+  if (typeof token !== 'string' || token.length > 400 || !BASE64URL.test(token))
+    return { ok: false, error: 'malformed' };
   const buf = Buffer.from(token, 'base64url');
-  if (buf.toString('base64url') !== token || buf.length < 1 + 2 + 2 + MAC_BYTES) return { ok: false, error: 'malformed' };
+  if (buf.toString('base64url') !== token || buf.length < 1 + 2 + 2 + MAC_BYTES)
+    return { ok: false, error: 'malformed' };
   const payload = buf.subarray(0, buf.length - MAC_BYTES);
   const given = buf.subarray(buf.length - MAC_BYTES);
   if (!timingSafeEqual(given, mac(key, payload))) return { ok: false, error: 'bad_signature' };

@@ -29,15 +29,22 @@ export interface TrailerSpec {
  * - `reading`: a reefer or fuel reading, stored on the event, not in `items`
  */
 export type ItemKind =
-  | 'condition' | 'skin' | 'hinge' | 'pin' | 'spare' | 'tire' | 'leak' | 'cleanliness' | 'reading';
+  'condition' | 'skin' | 'hinge' | 'pin' | 'spare' | 'tire' | 'leak' | 'cleanliness' | 'reading';
 
 export type ZoneKey =
-  | 'nose' | 'reefer_unit' | 'left_side' | 'right_side' | 'undercarriage' | 'tires' | 'rear'
-  | 'interior' | 'readings';
+  | 'nose'
+  | 'reefer_unit'
+  | 'left_side'
+  | 'right_side'
+  | 'undercarriage'
+  | 'tires'
+  | 'rear'
+  | 'interior'
+  | 'readings';
 
 /** Which event field a `reading` item fills. */
 export type ReadingField =
-  | 'fuelEighths' | 'isUnitOn' | 'setpointF' | 'returnAirF' | 'engineHours' | 'preTrip';
+  'fuelEighths' | 'isUnitOn' | 'setpointF' | 'returnAirF' | 'engineHours' | 'preTrip';
 
 export interface ChecklistItem {
   /** Stable key, e.g. `rear.door_left.hinge_3`; never renamed, so old records still compare. */

@@ -12,8 +12,7 @@ export interface Party {
 }
 
 export type Custodian =
-  | { type: 'terminal' }
-  | { type: 'carrier'; carrierId: string; carrierName: string; driverName?: string };
+  { type: 'terminal' } | { type: 'carrier'; carrierId: string; carrierName: string; driverName?: string };
 
 export interface PreTrip {
   result: 'passed' | 'failed';

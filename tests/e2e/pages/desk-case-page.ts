@@ -6,8 +6,13 @@ export class DeskCasePage {
 
   async openFromQueue(unitNumber: string) {
     await this.page.goto('/desk?sort=newest');
-    await this.page.getByRole('list', { name: 'Cases' }).getByRole('link', { name: new RegExp(`Trailer ${unitNumber}`) }).click();
-    await expect(this.page.getByRole('heading', { level: 1, name: new RegExp(`Trailer ${unitNumber}`) })).toBeVisible();
+    await this.page
+      .getByRole('list', { name: 'Cases' })
+      .getByRole('link', { name: new RegExp(`Trailer ${unitNumber}`) })
+      .click();
+    await expect(
+      this.page.getByRole('heading', { level: 1, name: new RegExp(`Trailer ${unitNumber}`) }),
+    ).toBeVisible();
   }
 
   evidence(itemLabel: string) {
@@ -18,7 +23,11 @@ export class DeskCasePage {
   async photoLoaded(name: RegExp) {
     const img = this.page.getByRole('img', { name });
     await expect(img).toBeVisible();
-    await expect.poll(() => img.evaluate((el) => (el as HTMLImageElement).complete && (el as HTMLImageElement).naturalWidth > 0)).toBe(true);
+    await expect
+      .poll(() =>
+        img.evaluate((el) => (el as HTMLImageElement).complete && (el as HTMLImageElement).naturalWidth > 0),
+      )
+      .toBe(true);
     return img;
   }
 

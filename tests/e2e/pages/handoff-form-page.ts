@@ -9,7 +9,10 @@ export class HandoffFormPage {
   }
 
   async choose(group: string, option: string, within: Locator | Page = this.page) {
-    await within.getByRole('group', { name: group }).getByRole('button', { name: option, exact: true }).click();
+    await within
+      .getByRole('group', { name: group })
+      .getByRole('button', { name: option, exact: true })
+      .click();
   }
 
   async fillHeader({ tractor, loaded }: { tractor: string; loaded: boolean }) {
@@ -17,7 +20,17 @@ export class HandoffFormPage {
     await this.choose('Loaded or empty?', loaded ? 'Loaded' : 'Empty');
   }
 
-  async fillReefer({ fuel, setpoint, returnAir, engineHours }: { fuel: string; setpoint: string; returnAir: string; engineHours: string }) {
+  async fillReefer({
+    fuel,
+    setpoint,
+    returnAir,
+    engineHours,
+  }: {
+    fuel: string;
+    setpoint: string;
+    returnAir: string;
+    engineHours: string;
+  }) {
     await this.choose('Fuel in eighths', fuel);
     await this.choose('Unit running?', 'Running');
     await this.page.getByLabel('Setpoint °F').fill(setpoint);

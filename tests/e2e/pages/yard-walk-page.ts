@@ -11,10 +11,15 @@ export class YardWalkPage {
   }
 
   /** Types the unit, checks the suggested slot is the expected one (or picks it), records the scan. */
-  async scan(unit: string, slotLabel: string, { fuelEighths, keepUnit = false }: { fuelEighths?: number; keepUnit?: boolean } = {}) {
+  async scan(
+    unit: string,
+    slotLabel: string,
+    { fuelEighths, keepUnit = false }: { fuelEighths?: number; keepUnit?: boolean } = {},
+  ) {
     if (!keepUnit) await this.page.getByLabel('Unit', { exact: true }).fill(unit);
     await this.page.getByLabel('Slot', { exact: true }).selectOption({ label: slotLabel });
-    if (fuelEighths !== undefined) await this.page.getByLabel('Fuel (eighths)').selectOption(String(fuelEighths));
+    if (fuelEighths !== undefined)
+      await this.page.getByLabel('Fuel (eighths)').selectOption(String(fuelEighths));
     await this.page.getByRole('button', { name: 'Record scan' }).click();
   }
 

@@ -47,10 +47,19 @@ export function toI420(image: { data: Uint8Array; width: number; height: number 
   }
   for (let row = 0; row < H / 2; row++) {
     for (let col = 0; col < W / 2; col++) {
-      let r = 0, g = 0, b = 0;
-      for (const [dx, dy] of [[0, 0], [1, 0], [0, 1], [1, 1]]) {
+      let r = 0,
+        g = 0,
+        b = 0;
+      for (const [dx, dy] of [
+        [0, 0],
+        [1, 0],
+        [0, 1],
+        [1, 1],
+      ]) {
         const px = rgbAt(col * 2 + dx, row * 2 + dy);
-        r += px[0] / 4; g += px[1] / 4; b += px[2] / 4;
+        r += px[0] / 4;
+        g += px[1] / 4;
+        b += px[2] / 4;
       }
       u[row * (W / 2) + col] = Math.round(128 - 0.148 * r - 0.291 * g + 0.439 * b);
       v[row * (W / 2) + col] = Math.round(128 + 0.439 * r - 0.368 * g - 0.071 * b);
@@ -74,7 +83,8 @@ export function code39Image(text: string, { narrow = 3, height = 200 } = {}) {
   for (const ch of `*${text}*`) {
     const i = CODE39_ALPHABET.indexOf(ch);
     if (i < 0) throw new RangeError(`Code 39 cannot show ${ch}`);
-    for (let e = 0; e < 9; e++) widths.push({ isBar: e % 2 === 0, units: (CODE39_PATTERNS[i] >> (8 - e)) & 1 ? 3 : 1 });
+    for (let e = 0; e < 9; e++)
+      widths.push({ isBar: e % 2 === 0, units: (CODE39_PATTERNS[i] >> (8 - e)) & 1 ? 3 : 1 });
     widths.push({ isBar: false, units: 1 });
   }
   widths.push({ isBar: false, units: 9 });
@@ -82,7 +92,9 @@ export function code39Image(text: string, { narrow = 3, height = 200 } = {}) {
   const data = new Uint8Array(width * height * 4).fill(255);
   let x = 0;
   for (const w of widths) {
-    if (w.isBar) for (let y = 0; y < height; y++) data.fill(0, (y * width + x) * 4, (y * width + x + w.units * narrow) * 4);
+    if (w.isBar)
+      for (let y = 0; y < height; y++)
+        data.fill(0, (y * width + x) * 4, (y * width + x + w.units * narrow) * 4);
     x += w.units * narrow;
   }
   for (let i = 3; i < data.length; i += 4) data[i] = 255;
@@ -91,7 +103,9 @@ export function code39Image(text: string, { narrow = 3, height = 200 } = {}) {
 
 /** Writes a one-frame .y4m of an RGBA image centred on white; returns the absolute path. */
 export async function writeImageVideo(
-  image: { data: Uint8Array; width: number; height: number }, file: string, frame = FRAME,
+  image: { data: Uint8Array; width: number; height: number },
+  file: string,
+  frame = FRAME,
 ): Promise<string> {
   const path = resolve(file);
   const header = Buffer.from(`YUV4MPEG2 W${frame.width} H${frame.height} F30:1 Ip A1:1 C420jpeg\n`);
@@ -100,15 +114,26 @@ export async function writeImageVideo(
 }
 
 /** Writes a one-frame .y4m showing the QR of `text` (a label link, a slot code…); returns the absolute path. */
-export async function writeLabelVideo(text: string, file: string, options?: { scale?: number }): Promise<string> {
+export async function writeLabelVideo(
+  text: string,
+  file: string,
+  options?: { scale?: number },
+): Promise<string> {
   return writeImageVideo(await qrImage(text, options), file);
 }
 
 /** A phone-sized Chromium whose camera shows `file`, with the camera permission granted. */
-export async function launchWithCamera(file: string): Promise<{ browser: Browser; context: BrowserContext; page: Page }> {
+export async function launchWithCamera(
+  file: string,
+): Promise<{ browser: Browser; context: BrowserContext; page: Page }> {
   const browser = await chromium.launch({
     executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
-    args: [...chromiumArgs, '--use-fake-ui-for-media-stream', '--use-fake-device-for-media-stream', `--use-file-for-fake-video-capture=${resolve(file)}`],
+    args: [
+      ...chromiumArgs,
+      '--use-fake-ui-for-media-stream',
+      '--use-fake-device-for-media-stream',
+      `--use-file-for-fake-video-capture=${resolve(file)}`,
+    ],
   });
   const context = await browser.newContext({ ...devices['Pixel 7'], baseURL, permissions: ['camera'] });
   return { browser, context, page: await context.newPage() };

@@ -14,7 +14,13 @@ export function solidPng(rgb: [number, number, number], size = 48): Buffer {
   return PNG.sync.write(png);
 }
 
-type TrailerShape = { id: string; unitNumber: string; hingesPerDoor: number; axleCount: number; tireLayout: 'dual' | 'wide_single' };
+type TrailerShape = {
+  id: string;
+  unitNumber: string;
+  hingesPerDoor: number;
+  axleCount: number;
+  tireLayout: 'dual' | 'wide_single';
+};
 
 /** A reefer on the road that no handoff has touched yet, and a carrier's id, straight from the e2e database. */
 export async function untouchedTrailer(scac: string): Promise<{ trailer: TrailerShape; carrierId: string }> {
@@ -32,9 +38,16 @@ export async function untouchedTrailer(scac: string): Promise<{ trailer: Trailer
   }
 }
 
-export async function uploadPhoto(api: APIRequestContext, trailerId: string, itemKey: string, bytes: Buffer): Promise<string> {
+export async function uploadPhoto(
+  api: APIRequestContext,
+  trailerId: string,
+  itemKey: string,
+  bytes: Buffer,
+): Promise<string> {
   const sha256 = createHash('sha256').update(bytes).digest('hex');
-  const started = await api.post('/api/uploads', { data: { trailerId, itemKey, contentType: 'image/png', byteSize: bytes.length, sha256 } });
+  const started = await api.post('/api/uploads', {
+    data: { trailerId, itemKey, contentType: 'image/png', byteSize: bytes.length, sha256 },
+  });
   expect(started.status(), await started.text()).toBe(201);
   const { photoId, uploadUrl, headers } = await started.json();
   const put = await api.put(uploadUrl, { data: bytes, headers });
@@ -46,9 +59,18 @@ export async function uploadPhoto(api: APIRequestContext, trailerId: string, ite
 
 type Obs = Record<string, unknown> & { condition: string };
 
-export function allOkItems(t: { hingesPerDoor: number; axleCount: number; tireLayout: 'dual' | 'wide_single' }): Record<string, Obs> {
+export function allOkItems(t: {
+  hingesPerDoor: number;
+  axleCount: number;
+  tireLayout: 'dual' | 'wide_single';
+}): Record<string, Obs> {
   const out: Record<string, Obs> = {};
-  for (const i of buildChecklist({ kind: 'reefer', hingesPerDoor: t.hingesPerDoor === 5 ? 5 : 4, axles: t.axleCount, tireLayout: t.tireLayout }).items) {
+  for (const i of buildChecklist({
+    kind: 'reefer',
+    hingesPerDoor: t.hingesPerDoor === 5 ? 5 : 4,
+    axles: t.axleCount,
+    tireLayout: t.tireLayout,
+  }).items) {
     if (i.kind === 'reading') continue;
     const o: Obs = { condition: 'ok' };
     if (i.kind === 'pin') o.isEngaged = true;
@@ -59,13 +81,35 @@ export function allOkItems(t: { hingesPerDoor: number; axleCount: number; tireLa
   return out;
 }
 
-export async function submitHandoff(api: APIRequestContext, trailerId: string, carrierId: string, kind: 'drop' | 'hook', items: Record<string, Obs>) {
+export async function submitHandoff(
+  api: APIRequestContext,
+  trailerId: string,
+  carrierId: string,
+  kind: 'drop' | 'hook',
+  items: Record<string, Obs>,
+) {
   const response = await api.post('/api/handoffs', {
     data: {
-      idempotencyKey: `e2e-desk-${randomUUID()}`, trailerId, kind, carrierId, driverName: 'Lev Marchetti', tractorNumber: 'OS-118',
-      isLoaded: false, sealNumber: null, fuelEighths: 8,
-      reefer: { isUnitOn: true, setpointF: 34, returnAirF: 35, engineHours: 5120, preTripResult: 'pass', preTripAt: new Date(Date.now() - 3_600_000).toISOString() },
-      items, spotId: null, note: null,
+      idempotencyKey: `e2e-desk-${randomUUID()}`,
+      trailerId,
+      kind,
+      carrierId,
+      driverName: 'Lev Marchetti',
+      tractorNumber: 'OS-118',
+      isLoaded: false,
+      sealNumber: null,
+      fuelEighths: 8,
+      reefer: {
+        isUnitOn: true,
+        setpointF: 34,
+        returnAirF: 35,
+        engineHours: 5120,
+        preTripResult: 'pass',
+        preTripAt: new Date(Date.now() - 3_600_000).toISOString(),
+      },
+      items,
+      spotId: null,
+      note: null,
     },
   });
   expect(response.status(), await response.text()).toBe(201);

@@ -13,7 +13,13 @@ export async function walkRowFixture() {
   const rowName = `Row W${tag}`;
   const { spots } = await createRowWithSlots(db, home.id, rowName, 4);
   const trailers = await placeTrailers(db, home.id, tag, [spots[0].id, spots[1].id, spots[2].id]);
-  return { rowName, tag, slots: spots.map((s) => s.label), units: trailers.map((t) => t.unitNumber), trailerIds: trailers.map((t) => t.id) };
+  return {
+    rowName,
+    tag,
+    slots: spots.map((s) => s.label),
+    units: trailers.map((t) => t.unitNumber),
+    trailerIds: trailers.map((t) => t.id),
+  };
 }
 
 /** Issues a current label for a trailer and returns the link its QR code carries. */

@@ -3,7 +3,20 @@
 import { randomUUID } from 'node:crypto';
 import { and, asc, eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
-import { carriers, cases, caseEvents, findings, handoffItems, handoffs, holds, policies, rateCard, terminals, trailers, users } from '@/db/schema';
+import {
+  carriers,
+  cases,
+  caseEvents,
+  findings,
+  handoffItems,
+  handoffs,
+  holds,
+  policies,
+  rateCard,
+  terminals,
+  trailers,
+  users,
+} from '@/db/schema';
 import { hashableFromRows } from '@/lib/handoff-canonical';
 import { handoffContentHash } from '@/lib/handoff-hash';
 
@@ -17,7 +30,13 @@ export async function untouchedTrailer() {
   const [row] = await db
     .select()
     .from(trailers)
-    .where(and(eq(trailers.status, 'on_road'), eq(trailers.kind, 'reefer'), sql`not exists (select 1 from ${handoffs} where ${handoffs.trailerId} = ${trailers.id})`))
+    .where(
+      and(
+        eq(trailers.status, 'on_road'),
+        eq(trailers.kind, 'reefer'),
+        sql`not exists (select 1 from ${handoffs} where ${handoffs.trailerId} = ${trailers.id})`,
+      ),
+    )
     .orderBy(asc(trailers.unitNumber))
     .limit(1);
   if (!row) throw new Error('no untouched trailer left in the test database');
@@ -26,7 +45,10 @@ export async function untouchedTrailer() {
 
 export async function makeDeskFixture() {
   const t = tag();
-  const [terminal] = await db.insert(terminals).values({ code: `T${t}`, name: `Test terminal ${t}`, timeZone: 'America/Chicago' }).returning();
+  const [terminal] = await db
+    .insert(terminals)
+    .values({ code: `T${t}`, name: `Test terminal ${t}`, timeZone: 'America/Chicago' })
+    .returning();
   await db.insert(policies).values({ terminalId: terminal.id, data: { disputeWindowDays: 14 } });
   const [carrierA, carrierB] = await db
     .insert(carriers)
@@ -38,15 +60,39 @@ export async function makeDeskFixture() {
   const [clerk, driverA, driverB] = await db
     .insert(users)
     .values([
-      { name: 'Test Clerk', role: 'clerk', email: `clerk-${t.toLowerCase()}@test.example`, secretHash: 'x', homeTerminalId: terminal.id },
-      { name: 'Driver of A', role: 'driver', driverNumber: `DA${t}`, secretHash: 'x', carrierId: carrierA.id },
-      { name: 'Driver of B', role: 'driver', driverNumber: `DB${t}`, secretHash: 'x', carrierId: carrierB.id },
+      {
+        name: 'Test Clerk',
+        role: 'clerk',
+        email: `clerk-${t.toLowerCase()}@test.example`,
+        secretHash: 'x',
+        homeTerminalId: terminal.id,
+      },
+      {
+        name: 'Driver of A',
+        role: 'driver',
+        driverNumber: `DA${t}`,
+        secretHash: 'x',
+        carrierId: carrierA.id,
+      },
+      {
+        name: 'Driver of B',
+        role: 'driver',
+        driverNumber: `DB${t}`,
+        secretHash: 'x',
+        carrierId: carrierB.id,
+      },
     ])
     .returning();
   const trailer = await untouchedTrailer();
 
   let prevHash: string | null = null;
-  const addHandoff = async (kind: 'drop' | 'hook', at: string, skin: 'ok' | 'damaged', carrierId: string, driver: { id: string; name: string }) => {
+  const addHandoff = async (
+    kind: 'drop' | 'hook',
+    at: string,
+    skin: 'ok' | 'damaged',
+    carrierId: string,
+    driver: { id: string; name: string },
+  ) => {
     const row = {
       id: randomUUID(),
       trailerId: trailer.id,
@@ -62,12 +108,33 @@ export async function makeDeskFixture() {
       occurredAt: new Date(at),
       idempotencyKey: randomUUID(),
       verificationCode: tag() + tag(),
-      sealNumber: null, fuelEighths: null, isReeferOn: null, setpointTenthsF: null, returnAirTenthsF: null, engineHoursTenths: null,
-      pretripResult: null, pretripAt: null, note: null, correctsHandoffId: null, prevHash,
+      sealNumber: null,
+      fuelEighths: null,
+      isReeferOn: null,
+      setpointTenthsF: null,
+      returnAirTenthsF: null,
+      engineHoursTenths: null,
+      pretripResult: null,
+      pretripAt: null,
+      note: null,
+      correctsHandoffId: null,
+      prevHash,
     };
     const items = [
-      { itemKey: 'left_side.skin', condition: skin, treadThirtySeconds: null, isHoldingAir: null, note: skin === 'ok' ? null : 'Torn skin behind the landing gear' },
-      { itemKey: 'rear.header', condition: 'ok' as const, treadThirtySeconds: null, isHoldingAir: null, note: null },
+      {
+        itemKey: 'left_side.skin',
+        condition: skin,
+        treadThirtySeconds: null,
+        isHoldingAir: null,
+        note: skin === 'ok' ? null : 'Torn skin behind the landing gear',
+      },
+      {
+        itemKey: 'rear.header',
+        condition: 'ok' as const,
+        treadThirtySeconds: null,
+        isHoldingAir: null,
+        note: null,
+      },
     ];
     const contentHash = handoffContentHash(hashableFromRows(row, items, []));
     await db.insert(handoffs).values({ ...row, contentHash });
@@ -78,8 +145,19 @@ export async function makeDeskFixture() {
   const hook = await addHandoff('hook', '2026-10-20T14:00:00Z', 'ok', carrierA.id, driverA);
   const drop = await addHandoff('drop', '2026-10-23T09:30:00Z', 'damaged', carrierA.id, driverA);
 
-  const [kase] = await db.insert(cases).values({ handoffId: drop.id, trailerId: trailer.id, terminalId: terminal.id, proposedCarrierId: carrierA.id, openedAt: drop.occurredAt }).returning();
-  await db.insert(caseEvents).values({ caseId: kase.id, kind: 'opened', toState: 'open', note: 'Opened by the drop' });
+  const [kase] = await db
+    .insert(cases)
+    .values({
+      handoffId: drop.id,
+      trailerId: trailer.id,
+      terminalId: terminal.id,
+      proposedCarrierId: carrierA.id,
+      openedAt: drop.occurredAt,
+    })
+    .returning();
+  await db
+    .insert(caseEvents)
+    .values({ caseId: kase.id, kind: 'opened', toState: 'open', note: 'Opened by the drop' });
   await db.insert(findings).values({
     handoffId: drop.id,
     trailerId: trailer.id,
@@ -94,8 +172,24 @@ export async function makeDeskFixture() {
     reason: `Left side skin: inspected ok at the hook, damaged at the drop; ${carrierA.name} held the trailer in between.`,
     caseId: kase.id,
   });
-  const [hold] = await db.insert(holds).values({ trailerId: trailer.id, handoffId: drop.id, severity: 'restricted', restriction: 'no_perishable', ruleKey: 'insulation', itemKey: 'left_side.skin', reason: 'Insulation showing', source: 'handoff', placedAt: drop.occurredAt }).returning();
+  const [hold] = await db
+    .insert(holds)
+    .values({
+      trailerId: trailer.id,
+      handoffId: drop.id,
+      severity: 'restricted',
+      restriction: 'no_perishable',
+      ruleKey: 'insulation',
+      itemKey: 'left_side.skin',
+      reason: 'Insulation showing',
+      source: 'handoff',
+      placedAt: drop.occurredAt,
+    })
+    .returning();
   // a rate only this fixture's item pattern uses, so other tests' rates do not interfere
-  await db.insert(rateCard).values({ itemPattern: 'left_side', condition: 'damaged', amountCents: 85_000 }).onConflictDoNothing();
+  await db
+    .insert(rateCard)
+    .values({ itemPattern: 'left_side', condition: 'damaged', amountCents: 85_000 })
+    .onConflictDoNothing();
   return { terminal, carrierA, carrierB, clerk, driverA, driverB, trailer, hook, drop, kase, hold };
 }

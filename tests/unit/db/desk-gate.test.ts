@@ -26,17 +26,48 @@ describe('desk over submitted handoffs', () => {
     const driver = await actor('D2001');
     // a seeded trailer, not a new one: the foundation test counts the seeded trailers
     const trailer = await untouchedTrailer();
-    const checklist = buildChecklist({ kind: 'reefer', hingesPerDoor: trailer.hingesPerDoor === 5 ? 5 : 4, axles: trailer.axleCount, tireLayout: trailer.tireLayout, fuelTankGallons: trailer.fuelTankGallons });
+    const checklist = buildChecklist({
+      kind: 'reefer',
+      hingesPerDoor: trailer.hingesPerDoor === 5 ? 5 : 4,
+      axles: trailer.axleCount,
+      tireLayout: trailer.tireLayout,
+      fuelTankGallons: trailer.fuelTankGallons,
+    });
     const ok = allOk(checklist);
     const t0 = new Date('2026-09-01T12:00:00Z');
-    await submitHandoff(submitInput(trailer.id, driver.carrierId!, 'drop', ok, t0), driver, { now: t0, sendReceipt: false });
+    await submitHandoff(submitInput(trailer.id, driver.carrierId!, 'drop', ok, t0), driver, {
+      now: t0,
+      sendReceipt: false,
+    });
     const before = await storedPhoto(trailer.id, driver.id);
     const t1 = new Date('2026-09-02T12:00:00Z');
-    await submitHandoff(submitInput(trailer.id, driver.carrierId!, 'hook', { ...ok, 'left_side.skin': { ...ok['left_side.skin'], photoIds: [before] } }, t1), driver, { now: t1, sendReceipt: false });
+    await submitHandoff(
+      submitInput(
+        trailer.id,
+        driver.carrierId!,
+        'hook',
+        { ...ok, 'left_side.skin': { ...ok['left_side.skin'], photoIds: [before] } },
+        t1,
+      ),
+      driver,
+      { now: t1, sendReceipt: false },
+    );
     const after = await storedPhoto(trailer.id, driver.id);
-    const damaged = { ...ok, 'left_side.skin': { condition: 'damaged' as const, isInsulationShowing: false, note: 'Long tear behind the landing gear', photoIds: [after] } };
+    const damaged = {
+      ...ok,
+      'left_side.skin': {
+        condition: 'damaged' as const,
+        isInsulationShowing: false,
+        note: 'Long tear behind the landing gear',
+        photoIds: [after],
+      },
+    };
     const t2 = new Date('2026-09-05T08:00:00Z');
-    const { handoffId } = await submitHandoff(submitInput(trailer.id, driver.carrierId!, 'drop', damaged, t2), driver, { now: t2, sendReceipt: false });
+    const { handoffId } = await submitHandoff(
+      submitInput(trailer.id, driver.carrierId!, 'drop', damaged, t2),
+      driver,
+      { now: t2, sendReceipt: false },
+    );
 
     const [row] = await db.select().from(cases).where(eq(cases.handoffId, handoffId));
     expect(row.proposedCarrierId).toBe(driver.carrierId);
@@ -50,7 +81,8 @@ describe('desk over submitted handoffs', () => {
     const finding = ev.findings.find((f) => f.itemKey === 'left_side.skin');
     expect(finding).toMatchObject({ kind: 'new', previousCondition: 'ok', condition: 'damaged' });
     expect(finding?.reason).toMatch(/Osterlind/);
-    const photoOf = (h: string | null | undefined) => ev.photos.filter((p) => p.handoffId === h && p.itemKey === 'left_side.skin').map((p) => p.id);
+    const photoOf = (h: string | null | undefined) =>
+      ev.photos.filter((p) => p.handoffId === h && p.itemKey === 'left_side.skin').map((p) => p.id);
     expect(photoOf(finding?.previousHandoffId)).toEqual([before]);
     expect(photoOf(handoffId)).toEqual([after]);
 

@@ -16,8 +16,19 @@ import { makeDeskFixture } from './desk-fixtures';
 type Fixture = Awaited<ReturnType<typeof makeDeskFixture>>;
 let f: Fixture;
 const secret = 'desk-test-secret-0123456789abcdef';
-const run = (command: Parameters<typeof runCaseCommand>[0]['command'], actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null }, now: Date) =>
-  runCaseCommand({ caseId: f.kase.id, command, actor, now, appUrl: 'http://localhost:3000', linkSecret: secret });
+const run = (
+  command: Parameters<typeof runCaseCommand>[0]['command'],
+  actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null },
+  now: Date,
+) =>
+  runCaseCommand({
+    caseId: f.kase.id,
+    command,
+    actor,
+    now,
+    appUrl: 'http://localhost:3000',
+    linkSecret: secret,
+  });
 const clerk = () => ({ id: f.clerk.id, role: 'clerk' as const, carrierId: null });
 const driverA = () => ({ id: f.driverA.id, role: 'driver' as const, carrierId: f.carrierA.id });
 const driverB = () => ({ id: f.driverB.id, role: 'driver' as const, carrierId: f.carrierB.id });
@@ -43,7 +54,10 @@ describe('desk in the database', () => {
   });
 
   it('prices the new case from the rate card in whole cents, once', async () => {
-    const [rate] = await db.select().from(rateCard).where(and(eq(rateCard.itemPattern, 'left_side'), eq(rateCard.condition, 'damaged')));
+    const [rate] = await db
+      .select()
+      .from(rateCard)
+      .where(and(eq(rateCard.itemPattern, 'left_side'), eq(rateCard.condition, 'damaged')));
     expect(await priceNewCases(new Date('2026-10-23T10:00:00Z'), [f.kase.id])).toBe(1);
     expect(await priceNewCases(new Date('2026-10-23T10:05:00Z'), [f.kase.id])).toBe(0);
     const [row] = await db.select().from(cases).where(eq(cases.id, f.kase.id));
@@ -52,9 +66,13 @@ describe('desk in the database', () => {
   });
 
   it('filters the queue by state, carrier and amount', async () => {
-    expect((await listCases(clerk(), { state: 'open', carrier: f.carrierA.id })).map((c) => c.id)).toEqual([f.kase.id]);
+    expect((await listCases(clerk(), { state: 'open', carrier: f.carrierA.id })).map((c) => c.id)).toEqual([
+      f.kase.id,
+    ]);
     expect(await listCases(clerk(), { carrier: f.carrierA.id, minAmount: 85_001 })).toEqual([]);
-    expect((await listCases(clerk(), { carrier: f.carrierA.id, maxAmount: 85_000 })).map((c) => c.id)).toEqual([f.kase.id]);
+    expect(
+      (await listCases(clerk(), { carrier: f.carrierA.id, maxAmount: 85_000 })).map((c) => c.id),
+    ).toEqual([f.kase.id]);
   });
 
   it('shows the before and after records of the damaged item', async () => {
@@ -67,27 +85,67 @@ describe('desk in the database', () => {
 
   it('persists each allowed change as an event, refuses the rest, and e-mails through the outbox', async () => {
     const notifiedAt = new Date('2026-10-24T15:00:00Z');
-    expect(await run({ kind: 'dispute', note: 'Not ours at all, we say.' }, driverA(), notifiedAt)).toMatchObject({ ok: false, status: 409 });
-    expect(await run({ kind: 'notify' }, clerk(), notifiedAt)).toMatchObject({ ok: true, toState: 'notified' });
+    expect(
+      await run({ kind: 'dispute', note: 'Not ours at all, we say.' }, driverA(), notifiedAt),
+    ).toMatchObject({ ok: false, status: 409 });
+    expect(await run({ kind: 'notify' }, clerk(), notifiedAt)).toMatchObject({
+      ok: true,
+      toState: 'notified',
+    });
     expect(await run({ kind: 'notify' }, clerk(), notifiedAt)).toMatchObject({ ok: false, status: 409 });
 
-    const mail = await db.select().from(emailOutbox).where(and(eq(emailOutbox.relatedType, 'case'), eq(emailOutbox.relatedId, f.kase.id)));
+    const mail = await db
+      .select()
+      .from(emailOutbox)
+      .where(and(eq(emailOutbox.relatedType, 'case'), eq(emailOutbox.relatedId, f.kase.id)));
     expect(mail).toHaveLength(1);
     expect(mail[0].toAddress).toBe(f.carrierA.contactEmail);
     expect(mail[0].textBody).toContain(f.trailer.unitNumber);
     expect(mail[0].textBody).toContain('$850.00');
     const token = /\/case-link\/(\S+)/.exec(mail[0].textBody)?.[1] ?? '';
-    expect(verifyCaseLink(token, secret, notifiedAt)).toMatchObject({ ok: true, claims: { caseId: f.kase.id, carrierId: f.carrierA.id } });
+    expect(verifyCaseLink(token, secret, notifiedAt)).toMatchObject({
+      ok: true,
+      claims: { caseId: f.kase.id, carrierId: f.carrierA.id },
+    });
 
     // another carrier's driver cannot touch it: the WHERE clause hides the case
-    expect(await run({ kind: 'dispute', note: 'We want to dispute this.' }, driverB(), notifiedAt)).toMatchObject({ ok: false, status: 404 });
-    expect(await run({ kind: 'dispute', note: 'The tear was there at our hook.' }, driverA(), new Date('2026-10-30T12:00:00Z'))).toMatchObject({ ok: true, toState: 'disputed' });
-    expect(await run({ kind: 'decide', decision: 'share', chargedCents: 42_500, reason: 'Hook photos are unclear; split.' }, clerk(), new Date('2026-11-02T12:00:00Z'))).toMatchObject({ ok: true, toState: 'decided' });
-    expect(await run({ kind: 'decide', decision: 'waive', chargedCents: 0, reason: 'Second try' }, clerk(), new Date('2026-11-02T12:01:00Z'))).toMatchObject({ ok: false });
+    expect(
+      await run({ kind: 'dispute', note: 'We want to dispute this.' }, driverB(), notifiedAt),
+    ).toMatchObject({ ok: false, status: 404 });
+    expect(
+      await run(
+        { kind: 'dispute', note: 'The tear was there at our hook.' },
+        driverA(),
+        new Date('2026-10-30T12:00:00Z'),
+      ),
+    ).toMatchObject({ ok: true, toState: 'disputed' });
+    expect(
+      await run(
+        {
+          kind: 'decide',
+          decision: 'share',
+          chargedCents: 42_500,
+          reason: 'Hook photos are unclear; split.',
+        },
+        clerk(),
+        new Date('2026-11-02T12:00:00Z'),
+      ),
+    ).toMatchObject({ ok: true, toState: 'decided' });
+    expect(
+      await run(
+        { kind: 'decide', decision: 'waive', chargedCents: 0, reason: 'Second try' },
+        clerk(),
+        new Date('2026-11-02T12:01:00Z'),
+      ),
+    ).toMatchObject({ ok: false });
 
     const events = await eventsOf();
     expect(events.map((e) => e.kind)).toEqual(['opened', 'estimated', 'notify', 'dispute', 'decide']);
-    expect(events.find((e) => e.kind === 'dispute')).toMatchObject({ actorId: f.driverA.id, fromState: 'notified', toState: 'disputed' });
+    expect(events.find((e) => e.kind === 'dispute')).toMatchObject({
+      actorId: f.driverA.id,
+      fromState: 'notified',
+      toState: 'disputed',
+    });
     const [row] = await db.select().from(cases).where(eq(cases.id, f.kase.id));
     expect(row).toMatchObject({ state: 'decided', decision: 'share', chargedCents: 42_500 });
     // 14 days after 24 Oct 10:00 CDT is 7 Nov 10:00 CST: the IANA tz database ends US DST on 1 Nov 2026.
@@ -99,26 +157,78 @@ describe('desk in the database', () => {
   it('refuses a dispute after the window closes', async () => {
     const g = await makeDeskFixture();
     await priceNewCases(new Date(), [g.kase.id]);
-    const r = (command: Parameters<typeof runCaseCommand>[0]['command'], actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null }, now: Date) =>
-      runCaseCommand({ caseId: g.kase.id, command, actor, now, appUrl: 'http://x', linkSecret: secret });
-    await r({ kind: 'notify' }, { id: g.clerk.id, role: 'clerk', carrierId: null }, new Date('2026-10-24T15:00:00Z'));
-    const late = await r({ kind: 'dispute', note: 'Too late but trying.' }, { id: g.driverA.id, role: 'driver', carrierId: g.carrierA.id }, new Date('2026-11-07T16:00:00.001Z'));
+    const r = (
+      command: Parameters<typeof runCaseCommand>[0]['command'],
+      actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null },
+      now: Date,
+    ) => runCaseCommand({ caseId: g.kase.id, command, actor, now, appUrl: 'http://x', linkSecret: secret });
+    await r(
+      { kind: 'notify' },
+      { id: g.clerk.id, role: 'clerk', carrierId: null },
+      new Date('2026-10-24T15:00:00Z'),
+    );
+    const late = await r(
+      { kind: 'dispute', note: 'Too late but trying.' },
+      { id: g.driverA.id, role: 'driver', carrierId: g.carrierA.id },
+      new Date('2026-11-07T16:00:00.001Z'),
+    );
     expect(late).toMatchObject({ ok: false, reason: expect.stringMatching(/window/) });
   });
 
-  it('attaches the disputer\'s own uploaded photos to the dispute, and refuses someone else\'s', async () => {
+  it("attaches the disputer's own uploaded photos to the dispute, and refuses someone else's", async () => {
     const h = await makeDeskFixture();
     await priceNewCases(new Date(), [h.kase.id]);
-    const cmd = (command: Parameters<typeof runCaseCommand>[0]['command'], actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null }, now: Date) =>
-      runCaseCommand({ caseId: h.kase.id, command, actor, now, appUrl: 'http://x', linkSecret: secret, sendEmail: false });
-    await cmd({ kind: 'notify' }, { id: h.clerk.id, role: 'clerk', carrierId: null }, new Date('2026-10-24T15:00:00Z'));
+    const cmd = (
+      command: Parameters<typeof runCaseCommand>[0]['command'],
+      actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null },
+      now: Date,
+    ) =>
+      runCaseCommand({
+        caseId: h.kase.id,
+        command,
+        actor,
+        now,
+        appUrl: 'http://x',
+        linkSecret: secret,
+        sendEmail: false,
+      });
+    await cmd(
+      { kind: 'notify' },
+      { id: h.clerk.id, role: 'clerk', carrierId: null },
+      new Date('2026-10-24T15:00:00Z'),
+    );
     const photo = async (uploadedById: string) =>
-      (await db.insert(photos).values({ objectKey: `test/${randomUUID()}.png`, uploadedById, trailerId: h.trailer.id, status: 'stored', contentType: 'image/png', byteSize: 10, sha256: 'a'.repeat(64) }).returning())[0].id;
+      (
+        await db
+          .insert(photos)
+          .values({
+            objectKey: `test/${randomUUID()}.png`,
+            uploadedById,
+            trailerId: h.trailer.id,
+            status: 'stored',
+            contentType: 'image/png',
+            byteSize: 10,
+            sha256: 'a'.repeat(64),
+          })
+          .returning()
+      )[0].id;
     const driver = { id: h.driverA.id, role: 'driver' as const, carrierId: h.carrierA.id };
     const foreign = await photo(h.clerk.id);
-    expect(await cmd({ kind: 'dispute', note: 'See the attached photo.', photoIds: [foreign] }, driver, new Date('2026-10-25T10:00:00Z'))).toMatchObject({ ok: false, status: 409 });
+    expect(
+      await cmd(
+        { kind: 'dispute', note: 'See the attached photo.', photoIds: [foreign] },
+        driver,
+        new Date('2026-10-25T10:00:00Z'),
+      ),
+    ).toMatchObject({ ok: false, status: 409 });
     const mine = await photo(h.driverA.id);
-    expect(await cmd({ kind: 'dispute', note: 'See the attached photo.', photoIds: [mine] }, driver, new Date('2026-10-25T10:00:00Z'))).toMatchObject({ ok: true, toState: 'disputed' });
+    expect(
+      await cmd(
+        { kind: 'dispute', note: 'See the attached photo.', photoIds: [mine] },
+        driver,
+        new Date('2026-10-25T10:00:00Z'),
+      ),
+    ).toMatchObject({ ok: true, toState: 'disputed' });
     const events = await listCaseEvents(h.kase.id);
     expect(events.find((e) => e.kind === 'dispute')?.photoIds).toEqual([mine]);
     expect(events.filter((e) => e.kind === 'dispute')).toHaveLength(1);
@@ -126,8 +236,26 @@ describe('desk in the database', () => {
 
   it('releases a hold by recording the repair, shown on the trailer file', async () => {
     const repairedAt = new Date('2026-10-25T08:00:00Z');
-    expect(await releaseHold({ holdId: f.hold.id, trailerId: f.trailer.id, repairedBy: 'Riverbend body shop', repairNote: 'Skin patched and sealed', repairedAt, releasedById: f.clerk.id })).toEqual({ ok: true });
-    expect(await releaseHold({ holdId: f.hold.id, trailerId: f.trailer.id, repairedBy: 'x', repairNote: 'again', repairedAt, releasedById: f.clerk.id })).toEqual({ ok: false, error: 'already_released' });
+    expect(
+      await releaseHold({
+        holdId: f.hold.id,
+        trailerId: f.trailer.id,
+        repairedBy: 'Riverbend body shop',
+        repairNote: 'Skin patched and sealed',
+        repairedAt,
+        releasedById: f.clerk.id,
+      }),
+    ).toEqual({ ok: true });
+    expect(
+      await releaseHold({
+        holdId: f.hold.id,
+        trailerId: f.trailer.id,
+        repairedBy: 'x',
+        repairNote: 'again',
+        repairedAt,
+        releasedById: f.clerk.id,
+      }),
+    ).toEqual({ ok: false, error: 'already_released' });
     const [h] = await db.select().from(holds).where(eq(holds.id, f.hold.id));
     expect(h).toMatchObject({ repairedBy: 'Riverbend body shop', releasedById: f.clerk.id });
     const file = buildTrailerFile(await getTrailerFileRows(f.trailer.id));
@@ -146,6 +274,8 @@ describe('desk in the database', () => {
     const { check, brokenAt } = await checkHandoffChain(f.trailer.id);
     expect(check).toEqual({ ok: false, brokenAt: f.hook.id, why: 'content_changed' });
     expect(brokenAt?.toISOString()).toBe('2026-10-20T14:00:00.000Z');
-    await expect(pool.query('UPDATE handoffs SET driver_name = $1 WHERE id = $2', ['Again', f.hook.id])).rejects.toThrow(/append-only/);
+    await expect(
+      pool.query('UPDATE handoffs SET driver_name = $1 WHERE id = $2', ['Again', f.hook.id]),
+    ).rejects.toThrow(/append-only/);
   });
 });

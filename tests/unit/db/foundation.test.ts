@@ -27,15 +27,29 @@ describe('database foundation (fresh test database)', () => {
   });
 
   it('re-running the seed adds nothing', async () => {
-    const before = await Promise.all([db.select({ n: count() }).from(users), db.select({ n: count() }).from(yardSpots), db.select({ n: count() }).from(trailers)]);
+    const before = await Promise.all([
+      db.select({ n: count() }).from(users),
+      db.select({ n: count() }).from(yardSpots),
+      db.select({ n: count() }).from(trailers),
+    ]);
     await seed();
-    const after = await Promise.all([db.select({ n: count() }).from(users), db.select({ n: count() }).from(yardSpots), db.select({ n: count() }).from(trailers)]);
+    const after = await Promise.all([
+      db.select({ n: count() }).from(users),
+      db.select({ n: count() }).from(yardSpots),
+      db.select({ n: count() }).from(trailers),
+    ]);
     expect(after.map((r) => r[0].n)).toEqual(before.map((r) => r[0].n));
   });
 
   it('never puts two trailers in one slot (unique index)', async () => {
-    const [a, b] = await db.select({ id: trailers.id, spot: trailers.currentSpotId }).from(trailers).where(sql`${trailers.currentSpotId} is not null`).limit(2);
-    await expect(db.update(trailers).set({ currentSpotId: a.spot }).where(eq(trailers.id, b.id))).rejects.toThrow();
+    const [a, b] = await db
+      .select({ id: trailers.id, spot: trailers.currentSpotId })
+      .from(trailers)
+      .where(sql`${trailers.currentSpotId} is not null`)
+      .limit(2);
+    await expect(
+      db.update(trailers).set({ currentSpotId: a.spot }).where(eq(trailers.id, b.id)),
+    ).rejects.toThrow();
   });
 
   it('keeps the audit log append-only: updates and deletes are refused by the database', async () => {
@@ -47,6 +61,8 @@ describe('database foundation (fresh test database)', () => {
   });
 
   it('stores carriers by unique SCAC', async () => {
-    await expect(db.insert(carriers).values({ scac: 'BRCL', name: 'Duplicate', contactEmail: 'x@example.com' })).rejects.toThrow();
+    await expect(
+      db.insert(carriers).values({ scac: 'BRCL', name: 'Duplicate', contactEmail: 'x@example.com' }),
+    ).rejects.toThrow();
   });
 });

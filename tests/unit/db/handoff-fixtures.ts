@@ -11,8 +11,17 @@ import type { HandoffSubmitInput, ItemObservationInput } from '@/lib/validation/
 
 export async function actor(driverNumberOrEmail: string): Promise<HandoffActor & { carrierName: string }> {
   const col = driverNumberOrEmail.includes('@') ? users.email : users.driverNumber;
-  const [u] = await db.select({ id: users.id, role: users.role, carrierId: users.carrierId, terminalId: users.homeTerminalId, carrierName: carriers.name })
-    .from(users).innerJoin(carriers, eq(carriers.id, users.carrierId)).where(eq(col, driverNumberOrEmail));
+  const [u] = await db
+    .select({
+      id: users.id,
+      role: users.role,
+      carrierId: users.carrierId,
+      terminalId: users.homeTerminalId,
+      carrierName: carriers.name,
+    })
+    .from(users)
+    .innerJoin(carriers, eq(carriers.id, users.carrierId))
+    .where(eq(col, driverNumberOrEmail));
   return u;
 }
 
@@ -22,13 +31,27 @@ const taken = new Set<string>();
  * Seeded trailers rather than new rows: the foundation test counts the seed's 300 trailers.
  */
 export async function freshTrailer(kind: 'reefer' | 'dry_van' = 'reefer') {
-  const rows = await db.select().from(trailers)
-    .where(and(eq(trailers.status, 'on_road'), eq(trailers.kind, kind), sql`not exists (select 1 from handoffs h where h.trailer_id = ${trailers.id})`))
+  const rows = await db
+    .select()
+    .from(trailers)
+    .where(
+      and(
+        eq(trailers.status, 'on_road'),
+        eq(trailers.kind, kind),
+        sql`not exists (select 1 from handoffs h where h.trailer_id = ${trailers.id})`,
+      ),
+    )
     .orderBy(desc(trailers.unitNumber));
   const t = rows.find((r) => !taken.has(r.id));
   if (!t) throw new Error('no unused on-road trailer left for this test run');
   taken.add(t.id);
-  const checklist = buildChecklist({ kind, hingesPerDoor: t.hingesPerDoor === 5 ? 5 : 4, axles: t.axleCount, tireLayout: t.tireLayout, fuelTankGallons: t.fuelTankGallons || undefined });
+  const checklist = buildChecklist({
+    kind,
+    hingesPerDoor: t.hingesPerDoor === 5 ? 5 : 4,
+    axles: t.axleCount,
+    tireLayout: t.tireLayout,
+    fuelTankGallons: t.fuelTankGallons || undefined,
+  });
   return { trailer: t, checklist };
 }
 
@@ -36,21 +59,55 @@ export async function freshTrailer(kind: 'reefer' | 'dry_van' = 'reefer') {
 export const allOk = (checklist: Checklist) => allOkObservations(checklist);
 
 export function submitInput(
-  trailerId: string, carrierId: string, kind: 'drop' | 'hook', items: Record<string, ItemObservationInput>, at: Date,
+  trailerId: string,
+  carrierId: string,
+  kind: 'drop' | 'hook',
+  items: Record<string, ItemObservationInput>,
+  at: Date,
   extra: Partial<HandoffSubmitInput> = {},
 ): HandoffSubmitInput {
   return {
-    idempotencyKey: `test-${randomUUID()}`, trailerId, kind, carrierId, driverName: 'Test Driver', tractorNumber: 'TR-77',
-    isLoaded: false, sealNumber: null, fuelEighths: 8,
-    reefer: { isUnitOn: true, setpointF: 34, returnAirF: 36, engineHours: 1200, preTripResult: 'pass', preTripAt: new Date(at.getTime() - 3_600_000).toISOString() },
-    items, spotId: null, note: null, ...extra,
+    idempotencyKey: `test-${randomUUID()}`,
+    trailerId,
+    kind,
+    carrierId,
+    driverName: 'Test Driver',
+    tractorNumber: 'TR-77',
+    isLoaded: false,
+    sealNumber: null,
+    fuelEighths: 8,
+    reefer: {
+      isUnitOn: true,
+      setpointF: 34,
+      returnAirF: 36,
+      engineHours: 1200,
+      preTripResult: 'pass',
+      preTripAt: new Date(at.getTime() - 3_600_000).toISOString(),
+    },
+    items,
+    spotId: null,
+    note: null,
+    ...extra,
   };
 }
 
 /** A photo row already checked and stored (the upload checks are tested against the fake S3 elsewhere). */
-export async function storedPhoto(trailerId: string, uploadedById: string, sha256 = randomBytes(32).toString('hex')) {
-  const [p] = await db.insert(photos).values({
-    objectKey: `test/${randomUUID()}.png`, uploadedById, trailerId, status: 'stored', contentType: 'image/png', byteSize: 1234, sha256,
-  }).returning({ id: photos.id });
+export async function storedPhoto(
+  trailerId: string,
+  uploadedById: string,
+  sha256 = randomBytes(32).toString('hex'),
+) {
+  const [p] = await db
+    .insert(photos)
+    .values({
+      objectKey: `test/${randomUUID()}.png`,
+      uploadedById,
+      trailerId,
+      status: 'stored',
+      contentType: 'image/png',
+      byteSize: 1234,
+      sha256,
+    })
+    .returning({ id: photos.id });
   return p.id;
 }

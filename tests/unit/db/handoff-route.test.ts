@@ -12,7 +12,14 @@ vi.mock('@/lib/server/auth', () => ({ apiUser: async () => signedIn.user }));
 vi.mock('next/server', () => ({ after: () => undefined }));
 const { POST } = await import('@/app/api/handoffs/route');
 
-const post = (body: string) => POST(new Request('http://localhost/api/handoffs', { method: 'POST', body, headers: { 'content-type': 'application/json' } }));
+const post = (body: string) =>
+  POST(
+    new Request('http://localhost/api/handoffs', {
+      method: 'POST',
+      body,
+      headers: { 'content-type': 'application/json' },
+    }),
+  );
 
 describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
   let carrierId: string;
@@ -33,18 +40,25 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
   });
 
   it('missing and wrong fields are a 422 with field messages', async () => {
-    const res = await post(JSON.stringify({ kind: 'park', fuelEighths: 9, items: { 'left_side.skin': { condition: 'shiny' } } }));
+    const res = await post(
+      JSON.stringify({ kind: 'park', fuelEighths: 9, items: { 'left_side.skin': { condition: 'shiny' } } }),
+    );
     expect(res.status).toBe(422);
     const body = await res.json();
     expect(body.code).toBe('invalid');
-    expect(Object.keys(body.fieldErrors)).toEqual(expect.arrayContaining(['kind', 'fuelEighths', 'trailerId', 'driverName', 'items']));
+    expect(Object.keys(body.fieldErrors)).toEqual(
+      expect.arrayContaining(['kind', 'fuelEighths', 'trailerId', 'driverName', 'items']),
+    );
   });
 
   it('bad values of every kind stay 4xx', async () => {
     const { trailer, checklist } = await freshTrailer();
     const good = submitInput(trailer.id, carrierId, 'drop', allOk(checklist), new Date());
     const variants: unknown[] = [
-      null, [], 'drop', 42,
+      null,
+      [],
+      'drop',
+      42,
       { ...good, trailerId: 'not-a-uuid' },
       { ...good, trailerId: randomUUID() }, // unknown trailer → 404
       { ...good, carrierId: randomUUID() }, // not the driver's own carrier → 422
@@ -52,7 +66,10 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
       { ...good, tractorNumber: '<script>' },
       { ...good, reefer: { ...good.reefer, setpointF: 'cold' } },
       { ...good, reefer: { ...good.reefer, preTripResult: 'pass', preTripAt: null } },
-      { ...good, items: { 'tires.axle1.left_outer': { condition: 'ok', treadThirtySeconds: -3, isHoldingAir: true } } },
+      {
+        ...good,
+        items: { 'tires.axle1.left_outer': { condition: 'ok', treadThirtySeconds: -3, isHoldingAir: true } },
+      },
       { ...good, items: { 'not.on.this.trailer': { condition: 'ok' } } },
       { ...good, items: { 'left_side.skin': { condition: 'ok', photoIds: ['x'] } } },
     ];
@@ -86,8 +103,17 @@ describe('verification code input', () => {
 
   it('the submit schema turns an empty seal number into null and upper-cases the tractor', () => {
     const parsed = handoffSubmitSchema.parse({
-      idempotencyKey: 'k'.repeat(20), trailerId: randomUUID(), kind: 'drop', carrierId: randomUUID(), driverName: 'A B',
-      tractorNumber: 'tr-9', isLoaded: false, sealNumber: '', fuelEighths: null, reefer: null, items: {},
+      idempotencyKey: 'k'.repeat(20),
+      trailerId: randomUUID(),
+      kind: 'drop',
+      carrierId: randomUUID(),
+      driverName: 'A B',
+      tractorNumber: 'tr-9',
+      isLoaded: false,
+      sealNumber: '',
+      fuelEighths: null,
+      reefer: null,
+      items: {},
     });
     expect(parsed.sealNumber).toBeNull();
     expect(parsed.tractorNumber).toBe('TR-9');

@@ -4,7 +4,18 @@ import { db, pool } from '@/db';
 import { checkTrailerChain } from '@/db/queries/handoff-chain';
 import { getPhotoForViewer, getReceipt } from '@/db/queries/handoffs';
 import { seed } from '@/db/seed';
-import { carriers, caseEvents, cases, emailOutbox, findings, handoffItems, handoffs, holds, photos, trailers } from '@/db/schema';
+import {
+  carriers,
+  caseEvents,
+  cases,
+  emailOutbox,
+  findings,
+  handoffItems,
+  handoffs,
+  holds,
+  photos,
+  trailers,
+} from '@/db/schema';
 import { hashableFromRows } from '@/lib/handoff-canonical';
 import { HandoffError } from '@/lib/handoff-errors';
 import { handoffContentHash, verifyChain } from '@/lib/handoff-hash';
@@ -16,7 +27,10 @@ const T0 = new Date('2026-11-02T15:00:00Z');
 const at = (h: number) => new Date(T0.getTime() + h * HOUR);
 
 async function refusal(p: Promise<unknown>): Promise<HandoffError> {
-  const e = await p.then(() => null, (x: unknown) => x);
+  const e = await p.then(
+    () => null,
+    (x: unknown) => x,
+  );
   expect(e).toBeInstanceOf(HandoffError);
   return e as HandoffError;
 }
@@ -40,7 +54,10 @@ describe('handoff submit service (real database)', () => {
     const second = await submitHandoff(input, d1, { now: at(0.1) });
     expect(first.isReplay).toBe(false);
     expect(second).toEqual({ ...first, isReplay: true });
-    const rows = await db.select({ id: handoffs.id }).from(handoffs).where(eq(handoffs.trailerId, trailer.id));
+    const rows = await db
+      .select({ id: handoffs.id })
+      .from(handoffs)
+      .where(eq(handoffs.trailerId, trailer.id));
     expect(rows).toHaveLength(1);
     const [t] = await db.select().from(trailers).where(eq(trailers.id, trailer.id));
     expect(t.status).toBe('in_yard');
@@ -51,7 +68,9 @@ describe('handoff submit service (real database)', () => {
     expect(mail).toHaveLength(1);
     expect(mail[0].toAddress).toBe('claims@bramblecrest.example');
     expect(mail[0].textBody).toContain(trailer.unitNumber);
-    expect(mail[0].textBody).toContain(`${first.verificationCode.slice(0, 4)}-${first.verificationCode.slice(4)}`);
+    expect(mail[0].textBody).toContain(
+      `${first.verificationCode.slice(0, 4)}-${first.verificationCode.slice(4)}`,
+    );
   });
 
   it('refuses a second submit while another one holds the trailer row (55P03 → conflict)', async () => {
@@ -60,7 +79,11 @@ describe('handoff submit service (real database)', () => {
     try {
       await client.query('begin');
       await client.query('select id from trailers where id = $1 for update', [trailer.id]);
-      const e = await refusal(submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) }));
+      const e = await refusal(
+        submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
+          now: at(0),
+        }),
+      );
       expect(e.code).toBe('conflict');
       expect(e.message).toMatch(/being recorded right now/);
     } finally {
@@ -73,8 +96,12 @@ describe('handoff submit service (real database)', () => {
   it('two simultaneous submits for one trailer: one succeeds, the other gets a conflict', async () => {
     const { trailer, checklist } = await freshTrailer();
     const results = await Promise.allSettled([
-      submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) }),
-      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', allOk(checklist), at(0)), d2, { now: at(0) }),
+      submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
+        now: at(0),
+      }),
+      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', allOk(checklist), at(0)), d2, {
+        now: at(0),
+      }),
     ]);
     const ok = results.filter((r) => r.status === 'fulfilled');
     const refused = results.filter((r): r is PromiseRejectedResult => r.status === 'rejected');
@@ -90,13 +117,22 @@ describe('handoff submit service (real database)', () => {
     const items = allOk(checklist);
     // 49 CFR 393.207(b): locking pins must not be disengaged; common practice: any one pin counts
     items['undercarriage.tandem_pin.left_rear'] = { condition: 'ok', isEngaged: false };
-    const drop = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) });
+    const drop = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, {
+      now: at(0),
+    });
     const placed = await db.select().from(holds).where(eq(holds.handoffId, drop.handoffId));
     expect(placed.map((h) => [h.ruleKey, h.severity])).toEqual([['pin_not_engaged', 'out_of_service']]);
-    const f = await db.select().from(findings).where(and(eq(findings.handoffId, drop.handoffId), eq(findings.kind, 'pin_not_engaged')));
+    const f = await db
+      .select()
+      .from(findings)
+      .where(and(eq(findings.handoffId, drop.handoffId), eq(findings.kind, 'pin_not_engaged')));
     expect(f).toHaveLength(1);
 
-    const e = await refusal(submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, { now: at(2) }));
+    const e = await refusal(
+      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, {
+        now: at(2),
+      }),
+    );
     expect(e.code).toBe('conflict');
     expect(e.holds?.map((h) => h.reason)).toEqual(['Tandem locking pin, left rear is not engaged.']);
     const [t] = await db.select().from(trailers).where(eq(trailers.id, trailer.id));
@@ -106,37 +142,71 @@ describe('handoff submit service (real database)', () => {
 
   it('a hook whose own pickup report finds a pin not engaged is refused, and the trailer is held for the next driver', async () => {
     const { trailer, checklist } = await freshTrailer();
-    await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) });
+    await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
+      now: at(0),
+    });
     const items = allOk(checklist);
     // 49 CFR 393.207(b): locking pins must not be disengaged; 49 CFR 396.7: not operated likely to break down
     items['undercarriage.tandem_pin.right_front'] = { condition: 'ok', isEngaged: false };
-    const e = await refusal(submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', items, at(1)), d2, { now: at(1) }));
+    const e = await refusal(
+      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', items, at(1)), d2, { now: at(1) }),
+    );
     expect(e.code).toBe('conflict');
-    const placed = await db.select().from(holds).where(and(eq(holds.trailerId, trailer.id), sql`${holds.releasedAt} is null`));
-    expect(placed.map((h) => [h.ruleKey, h.severity, h.handoffId])).toEqual([['pin_not_engaged', 'out_of_service', null]]);
+    const placed = await db
+      .select()
+      .from(holds)
+      .where(and(eq(holds.trailerId, trailer.id), sql`${holds.releasedAt} is null`));
+    expect(placed.map((h) => [h.ruleKey, h.severity, h.handoffId])).toEqual([
+      ['pin_not_engaged', 'out_of_service', null],
+    ]);
     // the next driver's hook is refused by that stored hold, even with a clean report
-    const next = await refusal(submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, { now: at(2) }));
+    const next = await refusal(
+      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, {
+        now: at(2),
+      }),
+    );
     expect(next.message).toMatch(/out of service/);
     expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(1);
   });
 
   it('new damage after another carrier held the trailer: finding attributed to them, one case, hash chain links', async () => {
     const { trailer, checklist } = await freshTrailer();
-    const h1 = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) });
-    const h2 = await submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(5)), d2, { now: at(5) });
+    const h1 = await submitHandoff(
+      submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)),
+      d1,
+      { now: at(0) },
+    );
+    const h2 = await submitHandoff(
+      submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(5)),
+      d2,
+      { now: at(5) },
+    );
 
     const damaged = allOk(checklist);
-    damaged['left_side.skin'] = { condition: 'damaged', isInsulationShowing: true, note: 'Torn skin, 30 cm, insulation showing' };
+    damaged['left_side.skin'] = {
+      condition: 'damaged',
+      isInsulationShowing: true,
+      note: 'Torn skin, 30 cm, insulation showing',
+    };
     // damage without a photo is refused, and nothing is stored
-    const missing = await refusal(submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, { now: at(30) }));
+    const missing = await refusal(
+      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, { now: at(30) }),
+    );
     expect(missing.code).toBe('invalid');
-    expect(missing.fieldErrors?.['items.left_side.skin']).toEqual(['New or worse damage needs at least one photo.']);
+    expect(missing.fieldErrors?.['items.left_side.skin']).toEqual([
+      'New or worse damage needs at least one photo.',
+    ]);
 
     const photoId = await storedPhoto(trailer.id, d2.id);
     damaged['left_side.skin'].photoIds = [photoId];
-    const h3 = await submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, { now: at(30) });
+    const h3 = await submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, {
+      now: at(30),
+    });
 
-    const [f] = await db.select().from(findings).where(and(eq(findings.handoffId, h3.handoffId), eq(findings.itemKey, 'left_side.skin')));
+    const [f] = await db
+      .select()
+      .from(findings)
+      .where(and(eq(findings.handoffId, h3.handoffId), eq(findings.itemKey, 'left_side.skin')));
     expect(f.kind).toBe('new');
     expect(f.previousCondition).toBe('ok');
     expect(f.previousHandoffId).toBe(h2.handoffId);
@@ -146,12 +216,18 @@ describe('handoff submit service (real database)', () => {
     expect(c.state).toBe('open');
     expect(c.proposedCarrierId).toBe(d2.carrierId);
     expect(f.caseId).toBe(c.id);
-    const events = await db.select().from(caseEvents).where(eq(caseEvents.caseId, c.id)).orderBy(caseEvents.createdAt);
+    const events = await db
+      .select()
+      .from(caseEvents)
+      .where(eq(caseEvents.caseId, c.id))
+      .orderBy(caseEvents.createdAt);
     expect(events.map((e) => e.kind).sort()).toEqual(['estimated', 'opened']);
     expect(c.estimateCents).toBeGreaterThan(0);
     // insulation showing → restricted, no perishable loads (common practice, engine rule)
     const hl = await db.select().from(holds).where(eq(holds.handoffId, h3.handoffId));
-    expect(hl.map((h) => [h.ruleKey, h.severity, h.restriction])).toEqual([['insulation_showing', 'restricted', 'no_perishable']]);
+    expect(hl.map((h) => [h.ruleKey, h.severity, h.restriction])).toEqual([
+      ['insulation_showing', 'restricted', 'no_perishable'],
+    ]);
     const [p] = await db.select().from(photos).where(eq(photos.id, photoId));
     expect(p.handoffId).toBe(h3.handoffId);
 
@@ -160,34 +236,60 @@ describe('handoff submit service (real database)', () => {
     const rows = await db.select().from(handoffs).where(inArray(handoffs.id, ids));
     rows.sort((a, b) => a.occurredAt.getTime() - b.occurredAt.getTime());
     expect(rows.map((r) => r.prevHash)).toEqual([null, rows[0].contentHash, rows[1].contentHash]);
-    const links = await Promise.all(rows.map(async (r) => {
-      const it = await db.select().from(handoffItems).where(eq(handoffItems.handoffId, r.id));
-      const ph = await db.select({ sha256: photos.sha256 }).from(photos).where(eq(photos.handoffId, r.id));
-      return { id: r.id, storedHash: r.contentHash, storedPrevHash: r.prevHash, recomputed: hashableFromRows(r, it, ph.map((x) => x.sha256)) };
-    }));
+    const links = await Promise.all(
+      rows.map(async (r) => {
+        const it = await db.select().from(handoffItems).where(eq(handoffItems.handoffId, r.id));
+        const ph = await db.select({ sha256: photos.sha256 }).from(photos).where(eq(photos.handoffId, r.id));
+        return {
+          id: r.id,
+          storedHash: r.contentHash,
+          storedPrevHash: r.prevHash,
+          recomputed: hashableFromRows(
+            r,
+            it,
+            ph.map((x) => x.sha256),
+          ),
+        };
+      }),
+    );
     expect(verifyChain(links)).toEqual({ ok: true, count: 3 });
     // a changed pin reading in the middle record would not match its stored hash
     const tampered = structuredClone(links);
     tampered[1].recomputed.items = tampered[1].recomputed.items.map((i) =>
-      i.itemKey === 'undercarriage.tandem_pin.left_front' ? { ...i, details: { isEngaged: false } } : i);
+      i.itemKey === 'undercarriage.tandem_pin.left_front' ? { ...i, details: { isEngaged: false } } : i,
+    );
     expect(handoffContentHash(tampered[1].recomputed)).not.toBe(rows[1].contentHash);
     expect(verifyChain(tampered)).toEqual({ ok: false, brokenAt: rows[1].id, why: 'content_changed' });
   });
 
   it('the database refuses to change or delete a stored handoff', async () => {
     const { trailer, checklist } = await freshTrailer();
-    const h = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, { now: at(0) });
+    const h = await submitHandoff(
+      submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)),
+      d1,
+      { now: at(0) },
+    );
     const refused = { cause: expect.objectContaining({ message: expect.stringMatching(/append-only/) }) };
-    await expect(db.update(handoffs).set({ driverName: 'Someone else' }).where(eq(handoffs.id, h.handoffId))).rejects.toMatchObject(refused);
-    await expect(db.delete(handoffItems).where(eq(handoffItems.handoffId, h.handoffId))).rejects.toMatchObject(refused);
+    await expect(
+      db.update(handoffs).set({ driverName: 'Someone else' }).where(eq(handoffs.id, h.handoffId)),
+    ).rejects.toMatchObject(refused);
+    await expect(
+      db.delete(handoffItems).where(eq(handoffItems.handoffId, h.handoffId)),
+    ).rejects.toMatchObject(refused);
   });
 
-  it('a driver reads only their own carrier\'s receipts and photos; staff read all', async () => {
+  it("a driver reads only their own carrier's receipts and photos; staff read all", async () => {
     const { trailer, checklist } = await freshTrailer();
     const items = allOk(checklist);
     const photoId = await storedPhoto(trailer.id, d1.id);
-    items['rear.door_left.panel'] = { condition: 'minor', note: 'Scuff on the left door', photoIds: [photoId] };
-    const h = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) });
+    items['rear.door_left.panel'] = {
+      condition: 'minor',
+      note: 'Scuff on the left door',
+      photoIds: [photoId],
+    };
+    const h = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, {
+      now: at(0),
+    });
     const clerk = await actor('clerk@bramblecrest.example');
     expect((await getReceipt(h.handoffId, d1))?.unitNumber).toBe(trailer.unitNumber);
     expect(await getReceipt(h.handoffId, d2)).toBeNull();
@@ -197,30 +299,48 @@ describe('handoff submit service (real database)', () => {
     expect(await getPhotoForViewer(photoId, clerk)).not.toBeNull();
   });
 
-  it('refuses items that are not on the trailer\'s checklist and pins without an answer', async () => {
+  it("refuses items that are not on the trailer's checklist and pins without an answer", async () => {
     const { trailer, checklist } = await freshTrailer('dry_van');
     const items = allOk(checklist);
     items['reefer_unit.housing'] = { condition: 'ok' }; // a dry van has no reefer unit
     items['undercarriage.tandem_pin.right_front'] = { condition: 'ok' };
-    const e = await refusal(submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) }));
+    const e = await refusal(
+      submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) }),
+    );
     expect(e.code).toBe('invalid');
-    expect(Object.keys(e.fieldErrors ?? {}).sort()).toEqual(['items.reefer_unit.housing', 'items.undercarriage.tandem_pin.right_front']);
+    expect(Object.keys(e.fieldErrors ?? {}).sort()).toEqual([
+      'items.reefer_unit.housing',
+      'items.undercarriage.tandem_pin.right_front',
+    ]);
   });
 
   it('the seeded history went through the submit service: outside trips, cases, holds, and intact chains', async () => {
-    const outsideTrips = await db.select({ n: sql<number>`count(*)::int` }).from(handoffs)
-      .innerJoin(carriers, eq(carriers.id, handoffs.carrierId)).where(and(eq(carriers.isHomeCarrier, false), sql`${handoffs.idempotencyKey} like 'seed-%'`));
+    const outsideTrips = await db
+      .select({ n: sql<number>`count(*)::int` })
+      .from(handoffs)
+      .innerJoin(carriers, eq(carriers.id, handoffs.carrierId))
+      .where(and(eq(carriers.isHomeCarrier, false), sql`${handoffs.idempotencyKey} like 'seed-%'`));
     expect(outsideTrips[0].n).toBeGreaterThan(10);
-    const seededCases = await db.select({ proposed: cases.proposedCarrierId, home: carriers.isHomeCarrier }).from(cases)
-      .innerJoin(handoffs, eq(handoffs.id, cases.handoffId)).leftJoin(carriers, eq(carriers.id, cases.proposedCarrierId))
+    const seededCases = await db
+      .select({ proposed: cases.proposedCarrierId, home: carriers.isHomeCarrier })
+      .from(cases)
+      .innerJoin(handoffs, eq(handoffs.id, cases.handoffId))
+      .leftJoin(carriers, eq(carriers.id, cases.proposedCarrierId))
       .where(sql`${handoffs.idempotencyKey} like 'seed-%'`);
     // every seeded damage trip was an outside carrier's hook and drop, so the case proposes that carrier
     expect(seededCases.length).toBeGreaterThan(3);
     expect(seededCases.every((c) => c.home === false)).toBe(true);
-    const rules = await db.selectDistinct({ rule: holds.ruleKey }).from(holds).innerJoin(handoffs, eq(handoffs.id, holds.handoffId))
+    const rules = await db
+      .selectDistinct({ rule: holds.ruleKey })
+      .from(holds)
+      .innerJoin(handoffs, eq(handoffs.id, holds.handoffId))
       .where(sql`${handoffs.idempotencyKey} like 'seed-%'`);
     expect(rules.map((r) => r.rule)).toEqual(expect.arrayContaining(['pin_not_engaged', 'spare_unusable']));
-    const withHistory = await db.selectDistinct({ id: handoffs.trailerId }).from(handoffs).where(isNotNull(handoffs.prevHash)).limit(25);
+    const withHistory = await db
+      .selectDistinct({ id: handoffs.trailerId })
+      .from(handoffs)
+      .where(isNotNull(handoffs.prevHash))
+      .limit(25);
     expect(withHistory.length).toBeGreaterThan(10);
     for (const t of withHistory) expect((await checkTrailerChain(t.id)).ok).toBe(true);
   });

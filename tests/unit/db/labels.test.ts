@@ -12,14 +12,20 @@ process.env.LABEL_SECRET ??= 'a-test-secret-for-hitchmark-labels-0123456789';
 let clerkId: string;
 
 async function trailerByUnit(unit: string) {
-  const [t] = await db.select({ id: trailers.id, vin: trailers.vin }).from(trailers).where(eq(trailers.unitNumber, unit));
+  const [t] = await db
+    .select({ id: trailers.id, vin: trailers.vin })
+    .from(trailers)
+    .where(eq(trailers.unitNumber, unit));
   return t;
 }
 
 describe('labels and trailer lookup (fresh test database)', () => {
   beforeAll(async () => {
     await seed();
-    const [clerk] = await db.select({ id: users.id }).from(users).where(eq(users.email, 'clerk@bramblecrest.example'));
+    const [clerk] = await db
+      .select({ id: users.id })
+      .from(users)
+      .where(eq(users.email, 'clerk@bramblecrest.example'));
     clerkId = clerk.id;
   });
   afterAll(async () => {
@@ -38,7 +44,10 @@ describe('labels and trailer lookup (fresh test database)', () => {
     const old = await getLabelStanding(before!.id);
     expect(old).toMatchObject({ isCurrent: false });
     expect(old!.replacedAt).toBeInstanceOf(Date);
-    const audit = await db.select().from(auditLog).where(and(eq(auditLog.action, 'label.reissue'), eq(auditLog.entityId, t.id)));
+    const audit = await db
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.action, 'label.reissue'), eq(auditLog.entityId, t.id)));
     expect(audit).toHaveLength(1);
     expect(audit[0].detail).toMatchObject({ labelId: after!.id, revokedLabelIds: [before!.id] });
   });
@@ -46,7 +55,10 @@ describe('labels and trailer lookup (fresh test database)', () => {
   it('two re-issues at once leave exactly one unrevoked label (row lock on the trailer)', async () => {
     const t = await trailerByUnit('R53011');
     await Promise.all([reissueLabel(t.id, clerkId), reissueLabel(t.id, clerkId)]);
-    const open = await db.select({ id: labels.id }).from(labels).where(and(eq(labels.trailerId, t.id), isNull(labels.revokedAt)));
+    const open = await db
+      .select({ id: labels.id })
+      .from(labels)
+      .where(and(eq(labels.trailerId, t.id), isNull(labels.revokedAt)));
     expect(open).toHaveLength(1);
   });
 
@@ -60,12 +72,24 @@ describe('labels and trailer lookup (fresh test database)', () => {
     const oldToken = labelToken({ id: old.id, trailerId: t.id });
     expect(await resolveLabelToken(oldToken)).toEqual({ ok: true, trailerId: t.id, labelId: old.id });
     const { label } = (await reissueLabel(t.id, clerkId))!;
-    expect(await resolveLabelToken(oldToken)).toMatchObject({ ok: false, error: 'revoked', replacedAt: expect.any(Date) });
-    expect(await resolveLabelToken(labelToken({ id: label.id, trailerId: t.id }))).toMatchObject({ ok: true, labelId: label.id });
+    expect(await resolveLabelToken(oldToken)).toMatchObject({
+      ok: false,
+      error: 'revoked',
+      replacedAt: expect.any(Date),
+    });
+    expect(await resolveLabelToken(labelToken({ id: label.id, trailerId: t.id }))).toMatchObject({
+      ok: true,
+      labelId: label.id,
+    });
     // signed with another secret, or a real label id paired with another trailer: not ours
     const other = await trailerByUnit('R53013');
-    expect(await resolveLabelToken(signLabelToken({ labelId: label.id, trailerId: t.id }, 'x'.repeat(40)))).toEqual({ ok: false, error: 'not_ours' });
-    expect(await resolveLabelToken(labelToken({ id: label.id, trailerId: other.id }))).toEqual({ ok: false, error: 'not_ours' });
+    expect(
+      await resolveLabelToken(signLabelToken({ labelId: label.id, trailerId: t.id }, 'x'.repeat(40))),
+    ).toEqual({ ok: false, error: 'not_ours' });
+    expect(await resolveLabelToken(labelToken({ id: label.id, trailerId: other.id }))).toEqual({
+      ok: false,
+      error: 'not_ours',
+    });
     const flipped = oldToken.slice(0, 10) + (oldToken[10] === 'A' ? 'B' : 'A') + oldToken.slice(11);
     expect(await resolveLabelToken(flipped)).toEqual({ ok: false, error: 'not_ours' });
   });
@@ -95,7 +119,11 @@ describe('labels and trailer lookup (fresh test database)', () => {
   });
 
   it('a row sheet lists the trailers standing in that row, in slot order', async () => {
-    const [row] = await db.select({ id: yardRows.id }).from(yardRows).where(eq(yardRows.name, 'Row A')).limit(1);
+    const [row] = await db
+      .select({ id: yardRows.id })
+      .from(yardRows)
+      .where(eq(yardRows.name, 'Row A'))
+      .limit(1);
     const standing = await db
       .select({ id: trailers.id, order: yardSpots.sortOrder })
       .from(trailers)

@@ -35,7 +35,11 @@ describe('e-mail outbox', () => {
     process.env.SMTP_HOST = '127.0.0.1';
     process.env.SMTP_PORT = String(PORT);
     resetMailTransport();
-    const id = await enqueueEmail({ to: 'claims@osterlind.example', subject: 'Case opened', text: 'Evidence attached.' });
+    const id = await enqueueEmail({
+      to: 'claims@osterlind.example',
+      subject: 'Case opened',
+      text: 'Evidence attached.',
+    });
 
     const t0 = new Date();
     const down = await deliverDueEmails(t0);

@@ -18,15 +18,27 @@ function smallPng(): Uint8Array {
   return new Uint8Array(PNG.sync.write(png));
 }
 
-async function announceAndPut(trailerId: string, userId: string, declared: { contentType: string; byteSize: number; sha256: string }, body: Uint8Array) {
+async function announceAndPut(
+  trailerId: string,
+  userId: string,
+  declared: { contentType: string; byteSize: number; sha256: string },
+  body: Uint8Array,
+) {
   const up = await createUpload({ trailerId, itemKey: 'left_side.skin', ...declared }, { id: userId });
-  const put = await fetch(up.uploadUrl, { method: 'PUT', headers: up.headers, body: new Blob([new Uint8Array(body)]) });
+  const put = await fetch(up.uploadUrl, {
+    method: 'PUT',
+    headers: up.headers,
+    body: new Blob([new Uint8Array(body)]),
+  });
   expect(put.status).toBe(200);
   return up.photoId;
 }
 
 async function refusedWith(p: Promise<unknown>) {
-  const e = await p.then(() => null, (x: unknown) => x);
+  const e = await p.then(
+    () => null,
+    (x: unknown) => x,
+  );
   expect(e).toBeInstanceOf(UploadError);
   return e as UploadError;
 }
@@ -45,7 +57,12 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
 
   it('stores a real PNG whose size and SHA-256 match', async () => {
     const png = smallPng();
-    const id = await announceAndPut(trailerId, userId, { contentType: 'image/png', byteSize: png.length, sha256: sha(png) }, png);
+    const id = await announceAndPut(
+      trailerId,
+      userId,
+      { contentType: 'image/png', byteSize: png.length, sha256: sha(png) },
+      png,
+    );
     expect(await completeUpload(id, { id: userId })).toEqual({ photoId: id, status: 'stored' });
     const [row] = await db.select().from(photos).where(eq(photos.id, id));
     expect(row.status).toBe('stored');
@@ -54,7 +71,12 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
 
   it('refuses content that is not an image although it was announced as PNG, and deletes it', async () => {
     const text = new TextEncoder().encode('this is not a photo, just text pretending to be one');
-    const id = await announceAndPut(trailerId, userId, { contentType: 'image/png', byteSize: text.length, sha256: sha(text) }, text);
+    const id = await announceAndPut(
+      trailerId,
+      userId,
+      { contentType: 'image/png', byteSize: text.length, sha256: sha(text) },
+      text,
+    );
     const e = await refusedWith(completeUpload(id, { id: userId }));
     expect(e.code).toBe('unsupported_type');
     const [row] = await db.select().from(photos).where(eq(photos.id, id));
@@ -66,7 +88,12 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
     const png = smallPng();
     const other = new Uint8Array(png);
     other[other.length - 20] ^= 0xff; // one byte changed on the way
-    const id = await announceAndPut(trailerId, userId, { contentType: 'image/png', byteSize: png.length, sha256: sha(png) }, other);
+    const id = await announceAndPut(
+      trailerId,
+      userId,
+      { contentType: 'image/png', byteSize: png.length, sha256: sha(png) },
+      other,
+    );
     const e = await refusedWith(completeUpload(id, { id: userId }));
     expect(e.message).toMatch(/checksum/);
     expect((await db.select().from(photos).where(eq(photos.id, id)))[0].status).toBe('rejected');
@@ -75,23 +102,66 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
   it('refuses a body larger than announced', async () => {
     const png = smallPng();
     const longer = new Uint8Array([...png, 0, 0, 0, 0]);
-    const id = await announceAndPut(trailerId, userId, { contentType: 'image/png', byteSize: png.length, sha256: sha(longer) }, longer);
+    const id = await announceAndPut(
+      trailerId,
+      userId,
+      { contentType: 'image/png', byteSize: png.length, sha256: sha(longer) },
+      longer,
+    );
     const e = await refusedWith(completeUpload(id, { id: userId }));
     expect(e.message).toMatch(/size/);
   });
 
   it('refuses an oversize or non-image announcement before any upload URL is given', async () => {
-    const big = await refusedWith(createUpload({ trailerId, itemKey: 'left_side.skin', contentType: 'image/jpeg', byteSize: 8 * 1024 * 1024 + 1, sha256: 'a'.repeat(64) }, { id: userId }));
+    const big = await refusedWith(
+      createUpload(
+        {
+          trailerId,
+          itemKey: 'left_side.skin',
+          contentType: 'image/jpeg',
+          byteSize: 8 * 1024 * 1024 + 1,
+          sha256: 'a'.repeat(64),
+        },
+        { id: userId },
+      ),
+    );
     expect(big.code).toBe('too_large');
-    const pdf = await refusedWith(createUpload({ trailerId, itemKey: 'left_side.skin', contentType: 'application/pdf', byteSize: 100, sha256: 'a'.repeat(64) }, { id: userId }));
+    const pdf = await refusedWith(
+      createUpload(
+        {
+          trailerId,
+          itemKey: 'left_side.skin',
+          contentType: 'application/pdf',
+          byteSize: 100,
+          sha256: 'a'.repeat(64),
+        },
+        { id: userId },
+      ),
+    );
     expect(pdf.code).toBe('unsupported_type');
-    const item = await refusedWith(createUpload({ trailerId, itemKey: 'wheel.of_fortune', contentType: 'image/png', byteSize: 100, sha256: 'a'.repeat(64) }, { id: userId }));
+    const item = await refusedWith(
+      createUpload(
+        {
+          trailerId,
+          itemKey: 'wheel.of_fortune',
+          contentType: 'image/png',
+          byteSize: 100,
+          sha256: 'a'.repeat(64),
+        },
+        { id: userId },
+      ),
+    );
     expect(item.code).toBe('invalid');
   });
 
   it('lets only the uploader complete an upload', async () => {
     const png = smallPng();
-    const id = await announceAndPut(trailerId, userId, { contentType: 'image/png', byteSize: png.length, sha256: sha(png) }, png);
+    const id = await announceAndPut(
+      trailerId,
+      userId,
+      { contentType: 'image/png', byteSize: png.length, sha256: sha(png) },
+      png,
+    );
     const other = await actor('D2001');
     expect((await refusedWith(completeUpload(id, { id: other.id }))).code).toBe('not_found');
   });

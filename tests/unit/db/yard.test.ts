@@ -9,11 +9,24 @@ import { resolveWalkOutcome } from '@/db/queries/yard-outcomes';
 import { finishWalk } from '@/db/queries/yard-walk-finish';
 import { addWalkScan, startWalk } from '@/db/queries/yard-walks';
 import { seed } from '@/db/seed';
-import { createJockey, createRowWithSlots, ensureTerminal, placeTrailers, removeTestYard, uniqueTag } from '../../support/yard-fixture';
+import {
+  createJockey,
+  createRowWithSlots,
+  ensureTerminal,
+  placeTrailers,
+  removeTestYard,
+  uniqueTag,
+} from '../../support/yard-fixture';
 
 let terminalId: string;
 let jockeyId: string;
-const checks = { isUnitRunning: true, setpointTenthsF: 340, fuelEighths: 6, areDoorsClosed: true, isSealPresent: true };
+const checks = {
+  isUnitRunning: true,
+  setpointTenthsF: 340,
+  fuelEighths: 6,
+  areDoorsClosed: true,
+  isSealPresent: true,
+};
 const scanAt = (n: number) => new Date(Date.UTC(2030, 0, 1, 12, n)).toISOString();
 
 beforeAll(async () => {
@@ -32,10 +45,18 @@ describe('moves', () => {
     const tag = uniqueTag();
     const { spots } = await createRowWithSlots(db, terminalId, `Row M${tag}`, 3);
     const [a, b] = await placeTrailers(db, terminalId, tag, [spots[0].id, spots[1].id]);
-    const refused = await moveTrailer({ terminalId, actorId: jockeyId, trailerId: a.id, toSpotId: spots[1].id });
+    const refused = await moveTrailer({
+      terminalId,
+      actorId: jockeyId,
+      trailerId: a.id,
+      toSpotId: spots[1].id,
+    });
     expect(refused).toMatchObject({ ok: false, code: 'conflict' });
     expect(!refused.ok && refused.message).toContain(b.unitNumber);
-    const [still] = await db.select({ spot: trailers.currentSpotId }).from(trailers).where(eq(trailers.id, a.id));
+    const [still] = await db
+      .select({ spot: trailers.currentSpotId })
+      .from(trailers)
+      .where(eq(trailers.id, a.id));
     expect(still.spot).toBe(spots[0].id);
     expect(await db.select().from(yardMoves).where(eq(yardMoves.trailerId, a.id))).toHaveLength(0);
   });
@@ -44,11 +65,24 @@ describe('moves', () => {
     const tag = uniqueTag();
     const { spots } = await createRowWithSlots(db, terminalId, `Row N${tag}`, 2);
     const [a] = await placeTrailers(db, terminalId, tag, [spots[0].id]);
-    const moved = await moveTrailer({ terminalId, actorId: jockeyId, trailerId: a.id, toSpotId: spots[1].id });
-    expect(moved).toMatchObject({ ok: true, fromLabel: spots[0].label, toLabel: spots[1].label, isOutOfService: false });
+    const moved = await moveTrailer({
+      terminalId,
+      actorId: jockeyId,
+      trailerId: a.id,
+      toSpotId: spots[1].id,
+    });
+    expect(moved).toMatchObject({
+      ok: true,
+      fromLabel: spots[0].label,
+      toLabel: spots[1].label,
+      isOutOfService: false,
+    });
     const moves = await db.select().from(yardMoves).where(eq(yardMoves.trailerId, a.id));
     expect(moves).toMatchObject([{ fromSpotId: spots[0].id, toSpotId: spots[1].id, movedById: jockeyId }]);
-    const audit = await db.select().from(auditLog).where(and(eq(auditLog.entityId, a.id), eq(auditLog.action, 'yard.move')));
+    const audit = await db
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.entityId, a.id), eq(auditLog.action, 'yard.move')));
     expect(audit).toHaveLength(1);
     const board = await getBoard(terminalId);
     expect(board!.spots.find((s) => s.id === spots[1].id)?.trailer?.unitNumber).toBe(a.unitNumber);
@@ -59,7 +93,9 @@ describe('moves', () => {
     const tag = uniqueTag();
     const { spots } = await createRowWithSlots(db, terminalId, `Row O${tag}`, 1);
     const [away] = await placeTrailers(db, terminalId, tag, [null]);
-    expect(await moveTrailer({ terminalId, actorId: jockeyId, trailerId: away.id, toSpotId: spots[0].id })).toMatchObject({ ok: false, code: 'not_found' });
+    expect(
+      await moveTrailer({ terminalId, actorId: jockeyId, trailerId: away.id, toSpotId: spots[0].id }),
+    ).toMatchObject({ ok: false, code: 'not_found' });
   });
 });
 
@@ -70,13 +106,19 @@ describe('slot retirement', () => {
     const [a] = await placeTrailers(db, terminalId, tag, [spots[0].id]);
     const refused = await retireSpot(terminalId, jockeyId, spots[0].id);
     expect(refused).toMatchObject({ ok: false, code: 'conflict' });
-    expect(!refused.ok && refused.message).toBe(`${spots[0].label} still holds ${a.unitNumber}: move it first.`);
-    expect((await moveTrailer({ terminalId, actorId: jockeyId, trailerId: a.id, toSpotId: spots[1].id })).ok).toBe(true);
+    expect(!refused.ok && refused.message).toBe(
+      `${spots[0].label} still holds ${a.unitNumber}: move it first.`,
+    );
+    expect(
+      (await moveTrailer({ terminalId, actorId: jockeyId, trailerId: a.id, toSpotId: spots[1].id })).ok,
+    ).toBe(true);
     expect(await retireSpot(terminalId, jockeyId, spots[0].id)).toEqual({ ok: true, id: spots[0].id });
     const board = await getBoard(terminalId);
     expect(board!.spots.some((s) => s.id === spots[0].id)).toBe(false);
     // a retired slot is no longer a move target
-    expect(await moveTrailer({ terminalId, actorId: jockeyId, trailerId: a.id, toSpotId: spots[0].id })).toMatchObject({ ok: false, code: 'not_found' });
+    expect(
+      await moveTrailer({ terminalId, actorId: jockeyId, trailerId: a.id, toSpotId: spots[0].id }),
+    ).toMatchObject({ ok: false, code: 'not_found' });
   });
 });
 
@@ -87,13 +129,24 @@ describe('yard walk', () => {
     const [a] = await placeTrailers(db, terminalId, tag, [spots[0].id]);
     const walk = await startWalk(terminalId, jockeyId, [rowId]);
     if (!walk.ok) throw new Error(walk.message);
-    const scan = { ...checks, clientKey: `k-${tag}-1`, scannedText: a.unitNumber.toLowerCase(), spotId: spots[0].id, scannedAt: scanAt(1), fuelEighths: 2, isUnitRunning: false };
+    const scan = {
+      ...checks,
+      clientKey: `k-${tag}-1`,
+      scannedText: a.unitNumber.toLowerCase(),
+      spotId: spots[0].id,
+      scannedAt: scanAt(1),
+      fuelEighths: 2,
+      isUnitRunning: false,
+    };
     const first = await addWalkScan(walk.id, terminalId, scan);
     const again = await addWalkScan(walk.id, terminalId, scan);
     expect(first).toEqual({ ok: true, seq: 1, isRepeat: false, unitNumber: a.unitNumber });
     expect(again).toEqual({ ok: true, seq: 1, isRepeat: true, unitNumber: a.unitNumber });
     expect(await db.select().from(walkScans).where(eq(walkScans.walkId, walk.id))).toHaveLength(1);
-    const [t] = await db.select({ fuel: trailers.fuelEighths, on: trailers.isReeferOn, seen: trailers.lastSeenAt }).from(trailers).where(eq(trailers.id, a.id));
+    const [t] = await db
+      .select({ fuel: trailers.fuelEighths, on: trailers.isReeferOn, seen: trailers.lastSeenAt })
+      .from(trailers)
+      .where(eq(trailers.id, a.id));
     expect(t).toEqual({ fuel: 2, on: false, seen: new Date(scanAt(1)) });
   });
 
@@ -110,31 +163,89 @@ describe('yard walk', () => {
       { text: t3.unitNumber, spot: spots[3].id, fuelEighths: 6 }, // t3 found in the wrong slot
     ];
     for (const [i, s] of scans.entries()) {
-      const r = await addWalkScan(walk.id, terminalId, { ...checks, clientKey: `k-${tag}-${i}`, scannedText: s.text, spotId: s.spot, scannedAt: scanAt(i), fuelEighths: s.fuelEighths });
+      const r = await addWalkScan(walk.id, terminalId, {
+        ...checks,
+        clientKey: `k-${tag}-${i}`,
+        scannedText: s.text,
+        spotId: s.spot,
+        scannedAt: scanAt(i),
+        fuelEighths: s.fuelEighths,
+      });
       expect(r.ok).toBe(true);
     }
     const done = await finishWalk(walk.id, terminalId, jockeyId);
-    expect(done).toEqual({ ok: true, summary: { matched: 1, wrong_slot: 1, missing: 1, unknown: 1, duplicate: 0, scans: 3, repeatScans: 0 } });
+    expect(done).toEqual({
+      ok: true,
+      summary: { matched: 1, wrong_slot: 1, missing: 1, unknown: 1, duplicate: 0, scans: 3, repeatScans: 0 },
+    });
     const outcomes = await db.select().from(walkOutcomes).where(eq(walkOutcomes.walkId, walk.id));
     const by = (o: string) => outcomes.filter((x) => x.outcome === o);
     expect(by('matched')).toMatchObject([{ trailerId: t1.id, spotId: spots[0].id }]);
-    expect(by('wrong_slot')).toMatchObject([{ trailerId: t3.id, spotId: spots[3].id, expectedSpotId: spots[2].id }]);
+    expect(by('wrong_slot')).toMatchObject([
+      { trailerId: t3.id, spotId: spots[3].id, expectedSpotId: spots[2].id },
+    ]);
     expect(by('missing')).toMatchObject([{ trailerId: t2.id, expectedSpotId: spots[1].id, spotId: null }]);
-    expect(by('unknown')).toMatchObject([{ trailerId: null, scannedText: `NOPE${tag}`, spotId: spots[1].id }]);
-    const tasks = await db.select({ kind: yardTasks.kind, trailerId: yardTasks.trailerId }).from(yardTasks).where(eq(yardTasks.walkId, walk.id));
+    expect(by('unknown')).toMatchObject([
+      { trailerId: null, scannedText: `NOPE${tag}`, spotId: spots[1].id },
+    ]);
+    const tasks = await db
+      .select({ kind: yardTasks.kind, trailerId: yardTasks.trailerId })
+      .from(yardTasks)
+      .where(eq(yardTasks.walkId, walk.id));
     expect(tasks).toEqual([{ kind: 'low_fuel', trailerId: t1.id }]);
     // finishing twice adds nothing
     await finishWalk(walk.id, terminalId, jockeyId);
     expect(await db.select().from(walkOutcomes).where(eq(walkOutcomes.walkId, walk.id))).toHaveLength(4);
 
-    expect(await resolveWalkOutcome({ outcomeId: by('wrong_slot')[0].id, terminalId, actorId: jockeyId, resolution: 'accepted' })).toEqual({ ok: true });
-    expect(await resolveWalkOutcome({ outcomeId: by('missing')[0].id, terminalId, actorId: jockeyId, resolution: 'marked_gone' })).toEqual({ ok: true });
-    expect(await resolveWalkOutcome({ outcomeId: by('unknown')[0].id, terminalId, actorId: jockeyId, resolution: 'accepted' })).toMatchObject({ ok: false, code: 'invalid' });
-    expect(await resolveWalkOutcome({ outcomeId: by('unknown')[0].id, terminalId, actorId: jockeyId, resolution: 'investigating' })).toEqual({ ok: true });
-    expect(await resolveWalkOutcome({ outcomeId: by('unknown')[0].id, terminalId, actorId: jockeyId, resolution: 'investigating' })).toMatchObject({ ok: false, code: 'conflict' });
-    const [moved3] = await db.select({ spot: trailers.currentSpotId }).from(trailers).where(eq(trailers.id, t3.id));
+    expect(
+      await resolveWalkOutcome({
+        outcomeId: by('wrong_slot')[0].id,
+        terminalId,
+        actorId: jockeyId,
+        resolution: 'accepted',
+      }),
+    ).toEqual({ ok: true });
+    expect(
+      await resolveWalkOutcome({
+        outcomeId: by('missing')[0].id,
+        terminalId,
+        actorId: jockeyId,
+        resolution: 'marked_gone',
+      }),
+    ).toEqual({ ok: true });
+    expect(
+      await resolveWalkOutcome({
+        outcomeId: by('unknown')[0].id,
+        terminalId,
+        actorId: jockeyId,
+        resolution: 'accepted',
+      }),
+    ).toMatchObject({ ok: false, code: 'invalid' });
+    expect(
+      await resolveWalkOutcome({
+        outcomeId: by('unknown')[0].id,
+        terminalId,
+        actorId: jockeyId,
+        resolution: 'investigating',
+      }),
+    ).toEqual({ ok: true });
+    expect(
+      await resolveWalkOutcome({
+        outcomeId: by('unknown')[0].id,
+        terminalId,
+        actorId: jockeyId,
+        resolution: 'investigating',
+      }),
+    ).toMatchObject({ ok: false, code: 'conflict' });
+    const [moved3] = await db
+      .select({ spot: trailers.currentSpotId })
+      .from(trailers)
+      .where(eq(trailers.id, t3.id));
     expect(moved3.spot).toBe(spots[3].id);
-    const [gone2] = await db.select({ status: trailers.status, spot: trailers.currentSpotId }).from(trailers).where(eq(trailers.id, t2.id));
+    const [gone2] = await db
+      .select({ status: trailers.status, spot: trailers.currentSpotId })
+      .from(trailers)
+      .where(eq(trailers.id, t2.id));
     expect(gone2).toEqual({ status: 'gone', spot: null });
     expect(await db.select().from(yardMoves).where(eq(yardMoves.trailerId, t3.id))).toHaveLength(1);
   });
@@ -144,10 +255,19 @@ describe('yard walk', () => {
     const { rowId, spots } = await createRowWithSlots(db, terminalId, `Row Z${tag}`, 1);
     const walk = await startWalk(terminalId, jockeyId, [rowId]);
     if (!walk.ok) throw new Error(walk.message);
-    const scan = { ...checks, clientKey: `k-${tag}-a`, scannedText: 'X', spotId: spots[0].id, scannedAt: scanAt(1) };
+    const scan = {
+      ...checks,
+      clientKey: `k-${tag}-a`,
+      scannedText: 'X',
+      spotId: spots[0].id,
+      scannedAt: scanAt(1),
+    };
     expect((await addWalkScan(walk.id, terminalId, scan)).ok).toBe(true);
     await finishWalk(walk.id, terminalId, jockeyId);
-    expect((await addWalkScan(walk.id, terminalId, scan))).toMatchObject({ ok: true, isRepeat: true });
-    expect(await addWalkScan(walk.id, terminalId, { ...scan, clientKey: `k-${tag}-b` })).toMatchObject({ ok: false, code: 'conflict' });
+    expect(await addWalkScan(walk.id, terminalId, scan)).toMatchObject({ ok: true, isRepeat: true });
+    expect(await addWalkScan(walk.id, terminalId, { ...scan, clientKey: `k-${tag}-b` })).toMatchObject({
+      ok: false,
+      code: 'conflict',
+    });
   });
 });

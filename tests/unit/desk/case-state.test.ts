@@ -23,7 +23,12 @@ const snap = (state: CaseState, over: Partial<CaseSnapshot> = {}): CaseSnapshot 
 const commands: Record<string, CaseCommand> = {
   notify: { kind: 'notify' },
   dispute: { kind: 'dispute', note: 'The skin was torn when I hooked it.' },
-  charge: { kind: 'decide', decision: 'charge', chargedCents: 85_000, reason: 'Photos show the tear at drop.' },
+  charge: {
+    kind: 'decide',
+    decision: 'charge',
+    chargedCents: 85_000,
+    reason: 'Photos show the tear at drop.',
+  },
   absorb: { kind: 'decide', decision: 'absorb', chargedCents: 0, reason: 'Yard damage.' },
   close: { kind: 'close' },
 };
@@ -36,7 +41,13 @@ const ALLOWED: Record<string, CaseState[]> = {
   absorb: ['open', 'notified', 'disputed'],
   close: ['decided'],
 };
-const TARGET: Record<string, CaseState> = { notify: 'notified', dispute: 'disputed', charge: 'decided', absorb: 'decided', close: 'closed' };
+const TARGET: Record<string, CaseState> = {
+  notify: 'notified',
+  dispute: 'disputed',
+  charge: 'decided',
+  absorb: 'decided',
+  close: 'closed',
+};
 
 describe('case state machine', () => {
   for (const [name, cmd] of Object.entries(commands)) {
@@ -61,12 +72,22 @@ describe('case state machine', () => {
   });
 
   it('refuses to notify without a proposed carrier or without an estimate', () => {
-    expect(applyCaseCommand(snap('open', { hasProposedCarrier: false }), commands.notify, ctx)).toMatchObject({ ok: false });
-    expect(applyCaseCommand(snap('open', { amountCents: 0 }), commands.notify, ctx)).toMatchObject({ ok: false, reason: /estimate/ });
+    expect(applyCaseCommand(snap('open', { hasProposedCarrier: false }), commands.notify, ctx)).toMatchObject(
+      { ok: false },
+    );
+    expect(applyCaseCommand(snap('open', { amountCents: 0 }), commands.notify, ctx)).toMatchObject({
+      ok: false,
+      reason: /estimate/,
+    });
   });
 
   it('a share is more than zero and less than the estimate', () => {
-    const share = (chargedCents: number) => applyCaseCommand(snap('disputed'), { kind: 'decide', decision: 'share', chargedCents, reason: 'Both had it.' }, ctx);
+    const share = (chargedCents: number) =>
+      applyCaseCommand(
+        snap('disputed'),
+        { kind: 'decide', decision: 'share', chargedCents, reason: 'Both had it.' },
+        ctx,
+      );
     expect(share(42_500).ok).toBe(true);
     expect(share(0).ok).toBe(false);
     expect(share(85_000).ok).toBe(false);
@@ -74,15 +95,39 @@ describe('case state machine', () => {
   });
 
   it('absorb and waive charge nothing; a decision needs a reason', () => {
-    expect(applyCaseCommand(snap('open'), { kind: 'decide', decision: 'waive', chargedCents: 100, reason: 'x' }, ctx).ok).toBe(false);
-    expect(applyCaseCommand(snap('notified'), { kind: 'decide', decision: 'charge', chargedCents: 100, reason: '  ' }, ctx).ok).toBe(false);
+    expect(
+      applyCaseCommand(
+        snap('open'),
+        { kind: 'decide', decision: 'waive', chargedCents: 100, reason: 'x' },
+        ctx,
+      ).ok,
+    ).toBe(false);
+    expect(
+      applyCaseCommand(
+        snap('notified'),
+        { kind: 'decide', decision: 'charge', chargedCents: 100, reason: '  ' },
+        ctx,
+      ).ok,
+    ).toBe(false);
   });
 
   it('an override keeps the state, needs a reason and whole cents, and stops after the decision', () => {
-    const ok = applyCaseCommand(snap('notified'), { kind: 'override', overrideCents: 60_000, reason: 'Body shop quote.' }, ctx);
-    expect(ok).toMatchObject({ ok: true, toState: 'notified', event: { kind: 'override', note: 'Body shop quote.' } });
-    expect(applyCaseCommand(snap('open'), { kind: 'override', overrideCents: 600.5, reason: 'q' }, ctx).ok).toBe(false);
-    expect(applyCaseCommand(snap('decided'), { kind: 'override', overrideCents: 600, reason: 'q' }, ctx).ok).toBe(false);
+    const ok = applyCaseCommand(
+      snap('notified'),
+      { kind: 'override', overrideCents: 60_000, reason: 'Body shop quote.' },
+      ctx,
+    );
+    expect(ok).toMatchObject({
+      ok: true,
+      toState: 'notified',
+      event: { kind: 'override', note: 'Body shop quote.' },
+    });
+    expect(
+      applyCaseCommand(snap('open'), { kind: 'override', overrideCents: 600.5, reason: 'q' }, ctx).ok,
+    ).toBe(false);
+    expect(
+      applyCaseCommand(snap('decided'), { kind: 'override', overrideCents: 600, reason: 'q' }, ctx).ok,
+    ).toBe(false);
   });
 
   it('offers the buttons that match the allowed changes', () => {
@@ -97,7 +142,8 @@ describe('dispute window', () => {
   it('accepts a dispute at the deadline itself and refuses one a millisecond later', () => {
     expect(isWithinDisputeWindow(deadline, deadline)).toBe(true);
     expect(isWithinDisputeWindow(deadline, new Date(deadline.getTime() + 1))).toBe(false);
-    const at = (t: Date) => applyCaseCommand(snap('notified', { disputeDeadline: deadline }), commands.dispute, { ...ctx, now: t });
+    const at = (t: Date) =>
+      applyCaseCommand(snap('notified', { disputeDeadline: deadline }), commands.dispute, { ...ctx, now: t });
     expect(at(deadline).ok).toBe(true);
     expect(at(new Date(deadline.getTime() + 1))).toMatchObject({ ok: false, reason: /window/ });
   });
@@ -109,7 +155,9 @@ describe('dispute window', () => {
     const d = disputeDeadlineFrom(new Date('2026-03-01T16:00:00Z'), 14, 'America/Chicago');
     expect(d.toISOString()).toBe('2026-03-15T15:00:00.000Z');
     // In UTC itself there is no shift: exactly 14 × 24 h.
-    expect(disputeDeadlineFrom(new Date('2026-03-01T16:00:00Z'), 14, 'UTC').toISOString()).toBe('2026-03-15T16:00:00.000Z');
+    expect(disputeDeadlineFrom(new Date('2026-03-01T16:00:00Z'), 14, 'UTC').toISOString()).toBe(
+      '2026-03-15T16:00:00.000Z',
+    );
   });
 
   it('has no window before notification', () => {

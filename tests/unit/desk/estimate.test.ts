@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { effectiveAmountCents, estimateCase, findRate, formatCents, parseDollarsToCents, type RateRow } from '@/lib/desk/estimate';
+import {
+  effectiveAmountCents,
+  estimateCase,
+  findRate,
+  formatCents,
+  parseDollarsToCents,
+  type RateRow,
+} from '@/lib/desk/estimate';
 
 // Invented demo prices (the same shape as the seed's rate card), in whole cents.
 const rates: RateRow[] = [
@@ -40,14 +47,30 @@ describe('estimate from the rate card', () => {
 
   it('keeps cents exact where binary floating point would drift', () => {
     // 0.1 + 0.2 !== 0.3 in IEEE 754 double precision (ECMAScript Number semantics); in cents it is exact.
-    const dimes = Array.from({ length: 3 }, () => ({ itemPattern: 'x', condition: 'damaged', amountCents: 10 }));
-    const e = estimateCase([{ itemKey: 'x', condition: 'damaged' }, { itemKey: 'x', condition: 'damaged' }, { itemKey: 'x', condition: 'damaged' }], dimes);
+    const dimes = Array.from({ length: 3 }, () => ({
+      itemPattern: 'x',
+      condition: 'damaged',
+      amountCents: 10,
+    }));
+    const e = estimateCase(
+      [
+        { itemKey: 'x', condition: 'damaged' },
+        { itemKey: 'x', condition: 'damaged' },
+        { itemKey: 'x', condition: 'damaged' },
+      ],
+      dimes,
+    );
     expect(e.totalCents).toBe(30);
     expect(0.1 + 0.2).not.toBe(0.3);
   });
 
   it('refuses a rate that is not whole cents', () => {
-    expect(() => estimateCase([{ itemKey: 'x', condition: 'damaged' }], [{ itemPattern: 'x', condition: 'damaged', amountCents: 10.5 }])).toThrow();
+    expect(() =>
+      estimateCase(
+        [{ itemKey: 'x', condition: 'damaged' }],
+        [{ itemPattern: 'x', condition: 'damaged', amountCents: 10.5 }],
+      ),
+    ).toThrow();
   });
 
   it('prefers the override when the clerk set one', () => {

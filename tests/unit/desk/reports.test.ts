@@ -2,23 +2,69 @@ import { describe, expect, it } from 'vitest';
 import { csvField, reportCsv, summarizeCases, totalsBy } from '@/lib/desk/reports';
 
 const rows = [
-  { month: '2026-10', carrierScac: 'OSFW', state: 'decided', decision: 'share', amountCents: 85_000, chargedCents: 42_500 },
-  { month: '2026-10', carrierScac: 'OSFW', state: 'closed', decision: 'charge', amountCents: 45_000, chargedCents: 45_000 },
-  { month: '2026-10', carrierScac: 'PLRD', state: 'decided', decision: 'waive', amountCents: 12_000, chargedCents: 0 },
-  { month: '2026-11', carrierScac: 'OSFW', state: 'open', decision: null, amountCents: 30_000, chargedCents: null },
-  { month: '2026-11', carrierScac: null, state: 'decided', decision: 'absorb', amountCents: 20_001, chargedCents: 0 },
+  {
+    month: '2026-10',
+    carrierScac: 'OSFW',
+    state: 'decided',
+    decision: 'share',
+    amountCents: 85_000,
+    chargedCents: 42_500,
+  },
+  {
+    month: '2026-10',
+    carrierScac: 'OSFW',
+    state: 'closed',
+    decision: 'charge',
+    amountCents: 45_000,
+    chargedCents: 45_000,
+  },
+  {
+    month: '2026-10',
+    carrierScac: 'PLRD',
+    state: 'decided',
+    decision: 'waive',
+    amountCents: 12_000,
+    chargedCents: 0,
+  },
+  {
+    month: '2026-11',
+    carrierScac: 'OSFW',
+    state: 'open',
+    decision: null,
+    amountCents: 30_000,
+    chargedCents: null,
+  },
+  {
+    month: '2026-11',
+    carrierScac: null,
+    state: 'decided',
+    decision: 'absorb',
+    amountCents: 20_001,
+    chargedCents: 0,
+  },
 ];
 
 describe('desk reports', () => {
   it('splits each estimate into charged, absorbed, waived and open', () => {
     const lines = summarizeCases(rows);
-    expect(lines.map((l) => `${l.month} ${l.carrier}`)).toEqual(['2026-10 OSFW', '2026-10 PLRD', '2026-11 none', '2026-11 OSFW']);
-    expect(lines[0]).toMatchObject({ cases: 2, estimateCents: 130_000, chargedCents: 87_500, absorbedCents: 42_500 });
+    expect(lines.map((l) => `${l.month} ${l.carrier}`)).toEqual([
+      '2026-10 OSFW',
+      '2026-10 PLRD',
+      '2026-11 none',
+      '2026-11 OSFW',
+    ]);
+    expect(lines[0]).toMatchObject({
+      cases: 2,
+      estimateCents: 130_000,
+      chargedCents: 87_500,
+      absorbedCents: 42_500,
+    });
     expect(lines[1]).toMatchObject({ waivedCents: 12_000, chargedCents: 0, absorbedCents: 0 });
     expect(lines[3]).toMatchObject({ openCents: 30_000 });
     expect(lines[2]).toMatchObject({ absorbedCents: 20_001 });
     // every cent of every estimate lands in exactly one bucket
-    for (const l of lines) expect(l.chargedCents + l.absorbedCents + l.waivedCents + l.openCents).toBe(l.estimateCents);
+    for (const l of lines)
+      expect(l.chargedCents + l.absorbedCents + l.waivedCents + l.openCents).toBe(l.estimateCents);
   });
 
   it('totals by carrier', () => {

@@ -3,15 +3,66 @@ import { buildTrailerFile, type FileRows } from '@/lib/desk/trailer-file';
 
 const t = (iso: string) => new Date(iso);
 const rows: FileRows = {
-  handoffs: [{ id: 'h1', kind: 'drop', occurredAt: t('2026-11-01T10:00:00Z'), driverName: 'Lev Marchetti', carrierScac: 'OSFW', level: 'full', verificationCode: 'K7M2Q9TX' }],
-  moves: [{ id: 'm1', movedAt: t('2026-11-01T11:00:00Z'), fromSpot: null, toSpot: 'B04', jockeyName: 'Tobias Quenneville' }],
+  handoffs: [
+    {
+      id: 'h1',
+      kind: 'drop',
+      occurredAt: t('2026-11-01T10:00:00Z'),
+      driverName: 'Lev Marchetti',
+      carrierScac: 'OSFW',
+      level: 'full',
+      verificationCode: 'K7M2Q9TX',
+    },
+  ],
+  moves: [
+    {
+      id: 'm1',
+      movedAt: t('2026-11-01T11:00:00Z'),
+      fromSpot: null,
+      toSpot: 'B04',
+      jockeyName: 'Tobias Quenneville',
+    },
+  ],
   walks: [],
   findings: [
-    { id: 'f1', createdAt: t('2026-11-01T10:00:01Z'), itemKey: 'left_side.skin', kind: 'new', condition: 'damaged', reason: 'Inspected ok at the hook…' },
-    { id: 'f2', createdAt: t('2026-11-01T10:00:01Z'), itemKey: 'rear.header', kind: 'unchanged', condition: 'ok', reason: 'Same as before.' },
+    {
+      id: 'f1',
+      createdAt: t('2026-11-01T10:00:01Z'),
+      itemKey: 'left_side.skin',
+      kind: 'new',
+      condition: 'damaged',
+      reason: 'Inspected ok at the hook…',
+    },
+    {
+      id: 'f2',
+      createdAt: t('2026-11-01T10:00:01Z'),
+      itemKey: 'rear.header',
+      kind: 'unchanged',
+      condition: 'ok',
+      reason: 'Same as before.',
+    },
   ],
-  holds: [{ id: 'x1', placedAt: t('2026-11-01T10:00:02Z'), severity: 'restricted', reason: 'Insulation showing', releasedAt: t('2026-11-03T09:00:00Z'), repairedBy: 'Riverbend body shop', repairNote: 'Skin patched', releasedByName: 'Priya' }],
-  cases: [{ id: 'c1', openedAt: t('2026-11-01T10:00:03Z'), state: 'open', amountCents: 85_000, carrierScac: 'OSFW' }],
+  holds: [
+    {
+      id: 'x1',
+      placedAt: t('2026-11-01T10:00:02Z'),
+      severity: 'restricted',
+      reason: 'Insulation showing',
+      releasedAt: t('2026-11-03T09:00:00Z'),
+      repairedBy: 'Riverbend body shop',
+      repairNote: 'Skin patched',
+      releasedByName: 'Priya',
+    },
+  ],
+  cases: [
+    {
+      id: 'c1',
+      openedAt: t('2026-11-01T10:00:03Z'),
+      state: 'open',
+      amountCents: 85_000,
+      carrierScac: 'OSFW',
+    },
+  ],
   photos: [],
 };
 

@@ -12,8 +12,14 @@ describe('buildChecklist', () => {
     expect(k).toContain('interior.air_chute');
     expect(k).toContain('interior.bulkhead');
     expect(reefer.items.find((i) => i.key === 'interior.left_wall')?.kind).toBe('skin');
-    expect(reefer.items.filter((i) => i.kind === 'reading').map((i) => i.reading))
-      .toEqual(['fuelEighths', 'isUnitOn', 'setpointF', 'returnAirF', 'engineHours', 'preTrip']);
+    expect(reefer.items.filter((i) => i.kind === 'reading').map((i) => i.reading)).toEqual([
+      'fuelEighths',
+      'isUnitOn',
+      'setpointF',
+      'returnAirF',
+      'engineHours',
+      'preTrip',
+    ]);
   });
 
   it('leaves reefer-only items off a dry van', () => {
@@ -28,8 +34,10 @@ describe('buildChecklist', () => {
   it('has the four tandem locking pins by position (common practice: two per side)', () => {
     const pins = reefer.items.filter((i) => i.kind === 'pin').map((i) => i.key);
     expect(pins).toEqual([
-      'undercarriage.tandem_pin.left_front', 'undercarriage.tandem_pin.left_rear',
-      'undercarriage.tandem_pin.right_front', 'undercarriage.tandem_pin.right_rear',
+      'undercarriage.tandem_pin.left_front',
+      'undercarriage.tandem_pin.left_rear',
+      'undercarriage.tandem_pin.right_front',
+      'undercarriage.tandem_pin.right_rear',
     ]);
   });
 
@@ -44,11 +52,21 @@ describe('buildChecklist', () => {
   it('follows the tire layout: duals give four per axle, wide singles two', () => {
     const single = buildChecklist({ kind: 'reefer', hingesPerDoor: 4, axles: 2, tireLayout: 'wide_single' });
     expect(reefer.items.filter((i) => i.kind === 'tire').map((i) => i.key)).toEqual([
-      'tires.axle1.left_outer', 'tires.axle1.left_inner', 'tires.axle1.right_inner', 'tires.axle1.right_outer',
-      'tires.axle2.left_outer', 'tires.axle2.left_inner', 'tires.axle2.right_inner', 'tires.axle2.right_outer',
+      'tires.axle1.left_outer',
+      'tires.axle1.left_inner',
+      'tires.axle1.right_inner',
+      'tires.axle1.right_outer',
+      'tires.axle2.left_outer',
+      'tires.axle2.left_inner',
+      'tires.axle2.right_inner',
+      'tires.axle2.right_outer',
     ]);
-    expect(single.items.filter((i) => i.kind === 'tire').map((i) => i.key))
-      .toEqual(['tires.axle1.left', 'tires.axle1.right', 'tires.axle2.left', 'tires.axle2.right']);
+    expect(single.items.filter((i) => i.kind === 'tire').map((i) => i.key)).toEqual([
+      'tires.axle1.left',
+      'tires.axle1.right',
+      'tires.axle2.left',
+      'tires.axle2.right',
+    ]);
   });
 
   it('keeps keys unique and the flat list equal to the zones in order', () => {
@@ -66,7 +84,9 @@ describe('buildChecklist', () => {
   });
 
   it('rejects a nonsense axle count', () => {
-    expect(() => buildChecklist({ kind: 'reefer', hingesPerDoor: 4, axles: 0, tireLayout: 'dual' })).toThrow(RangeError);
+    expect(() => buildChecklist({ kind: 'reefer', hingesPerDoor: 4, axles: 0, tireLayout: 'dual' })).toThrow(
+      RangeError,
+    );
   });
 
   it('lists form fields per kind and excludes readings from comparison', () => {

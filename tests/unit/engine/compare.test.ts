@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import {
-  buildChecklist, classifyChange, compareInspection, compareSeverity, damageFindings, isCondition, severityOf,
+  buildChecklist,
+  classifyChange,
+  compareInspection,
+  compareSeverity,
+  damageFindings,
+  isCondition,
+  severityOf,
   worstCondition,
 } from '@/lib/engine';
 import { bluefield, drop, hook, move, northwind, walk } from './fixtures';
@@ -72,10 +78,12 @@ describe('compareInspection', () => {
 
   it('reports a repaired item and worse damage', () => {
     const a = drop('2026-11-01T10:00:00Z', northwind, {
-      [HINGE]: { condition: 'damaged' }, 'left_side.skin': { condition: 'minor' },
+      [HINGE]: { condition: 'damaged' },
+      'left_side.skin': { condition: 'minor' },
     });
     const b = hook('2026-11-02T10:00:00Z', bluefield, {
-      [HINGE]: { condition: 'ok' }, 'left_side.skin': { condition: 'damaged' },
+      [HINGE]: { condition: 'ok' },
+      'left_side.skin': { condition: 'damaged' },
     });
     const fs = compareInspection({ checklist, history: [a], current: b });
     expect(find(fs, HINGE).finding).toBe('repaired');
@@ -84,13 +92,27 @@ describe('compareInspection', () => {
   });
 
   it('uses a yard walk quick check as the latest inspection of the items it covers', () => {
-    const a = drop('2026-11-01T10:00:00Z', northwind, { [HINGE]: { condition: 'ok' }, 'rear.header': { condition: 'ok' } });
+    const a = drop('2026-11-01T10:00:00Z', northwind, {
+      [HINGE]: { condition: 'ok' },
+      'rear.header': { condition: 'ok' },
+    });
     const w = walk('2026-11-02T10:00:00Z', { 'rear.header': { condition: 'minor' } });
     const m = move('2026-11-02T12:00:00Z');
-    const b = hook('2026-11-03T10:00:00Z', bluefield, { [HINGE]: { condition: 'ok' }, 'rear.header': { condition: 'minor' } });
+    const b = hook('2026-11-03T10:00:00Z', bluefield, {
+      [HINGE]: { condition: 'ok' },
+      'rear.header': { condition: 'minor' },
+    });
     const fs = compareInspection({ checklist, history: [a, w, m], current: b });
-    expect(find(fs, 'rear.header')).toMatchObject({ finding: 'unchanged', previousEventId: w.id, previousInspection: 'quick' });
-    expect(find(fs, HINGE)).toMatchObject({ finding: 'unchanged', previousEventId: a.id, previousInspection: 'full' });
+    expect(find(fs, 'rear.header')).toMatchObject({
+      finding: 'unchanged',
+      previousEventId: w.id,
+      previousInspection: 'quick',
+    });
+    expect(find(fs, HINGE)).toMatchObject({
+      finding: 'unchanged',
+      previousEventId: a.id,
+      previousInspection: 'full',
+    });
   });
 
   it('ignores keys that are not on this trailer checklist', () => {

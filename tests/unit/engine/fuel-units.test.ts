@@ -1,13 +1,31 @@
 import { describe, expect, it } from 'vitest';
 import {
-  assessFuel, celsiusToFahrenheit, defaultPolicy, defaultPolicySources, eighthsToGallons, eighthsToLitres,
-  expectedBurnGallons, fahrenheitToCelsius, formatWhen, gallonsToLitres, LITRES_PER_US_GALLON, litresToGallons,
-  makePolicy, roundTo, thirtySecondsToMillimetres,
+  assessFuel,
+  celsiusToFahrenheit,
+  defaultPolicy,
+  defaultPolicySources,
+  eighthsToGallons,
+  eighthsToLitres,
+  expectedBurnGallons,
+  fahrenheitToCelsius,
+  formatWhen,
+  gallonsToLitres,
+  LITRES_PER_US_GALLON,
+  litresToGallons,
+  makePolicy,
+  roundTo,
+  thirtySecondsToMillimetres,
 } from '@/lib/engine';
 import type { TrailerSpec } from '@/lib/engine';
 import { drop, hook, move, northwind, bluefield, walk } from './fixtures';
 
-const spec: TrailerSpec = { kind: 'reefer', hingesPerDoor: 4, axles: 2, tireLayout: 'dual', fuelTankGallons: 50 };
+const spec: TrailerSpec = {
+  kind: 'reefer',
+  hingesPerDoor: 4,
+  axles: 2,
+  tireLayout: 'dual',
+  fuelTankGallons: 50,
+};
 
 describe('units', () => {
   it('US gallon = 3.785411784 L exactly (NIST Handbook 44, Appendix C)', () => {
@@ -63,7 +81,13 @@ describe('fuel', () => {
   it('shortfall against the required eighths at a drop (common practice: full at every drop and hook)', () => {
     const d = drop('2026-11-05T14:00:00Z', northwind, {}, { fuelEighths: 5 });
     const f = assessFuel({ trailer: spec, history: [], current: d, policy: defaultPolicy })!;
-    expect(f).toMatchObject({ gallons: 31.25, requiredEighths: 8, shortfallEighths: 3, shortfallGallons: 18.75, isShort: true });
+    expect(f).toMatchObject({
+      gallons: 31.25,
+      requiredEighths: 8,
+      shortfallEighths: 3,
+      shortfallGallons: 18.75,
+      isShort: true,
+    });
     expect(f.litres).toBeCloseTo(31.25 * 3.785411784, 9);
     expect(f.previousEventId).toBeNull();
     expect(f.isPossibleLeakOrTheft).toBe(false);
@@ -72,23 +96,46 @@ describe('fuel', () => {
   it('uses the policy for hooks and no requirement on walks; default tank when the spec has none', () => {
     const policy = makePolicy({ requiredFuelEighthsAtHook: 6 });
     const h = hook('2026-11-05T14:00:00Z', bluefield, {}, { fuelEighths: 6 });
-    expect(assessFuel({ trailer: spec, history: [], current: h, policy })).toMatchObject({ isShort: false, shortfallEighths: 0 });
+    expect(assessFuel({ trailer: spec, history: [], current: h, policy })).toMatchObject({
+      isShort: false,
+      shortfallEighths: 0,
+    });
     const w = walk('2026-11-05T14:00:00Z', {}, { fuelEighths: 2 });
     const noTank: TrailerSpec = { ...spec, fuelTankGallons: undefined };
     expect(assessFuel({ trailer: noTank, history: [], current: w, policy })).toMatchObject({
-      requiredEighths: null, isShort: false, tankGallons: 50, gallons: 12.5,
+      requiredEighths: null,
+      isShort: false,
+      tankGallons: 50,
+      gallons: 12.5,
     });
-    expect(assessFuel({ trailer: spec, history: [], current: drop('2026-11-05T14:00:00Z', northwind), policy })).toBeNull();
+    expect(
+      assessFuel({ trailer: spec, history: [], current: drop('2026-11-05T14:00:00Z', northwind), policy }),
+    ).toBeNull();
   });
 
   it('flags fuel that fell more than engine hours explain; exactly at tolerance is not flagged', () => {
     // 50 gal tank: 8/8 → 4/8 is 25 gal gone. 10 engine hours × 0.8 gal/h = 8 gal burn.
     const policy = makePolicy({ fuelDropToleranceGallons: 17 });
-    const before = drop('2026-11-04T14:00:00Z', northwind, {}, { fuelEighths: 8, reefer: { engineHours: 1200 } });
+    const before = drop(
+      '2026-11-04T14:00:00Z',
+      northwind,
+      {},
+      { fuelEighths: 8, reefer: { engineHours: 1200 } },
+    );
     const after = (eighths: number, hours: number) =>
       hook('2026-11-05T14:00:00Z', bluefield, {}, { fuelEighths: eighths, reefer: { engineHours: hours } });
-    const at = assessFuel({ trailer: spec, history: [before, move('2026-11-04T15:00:00Z')], current: after(4, 1210), policy })!;
-    expect(at).toMatchObject({ dropGallons: 25, engineHoursRun: 10, expectedBurnGallons: 8, unexplainedGallons: 17 });
+    const at = assessFuel({
+      trailer: spec,
+      history: [before, move('2026-11-04T15:00:00Z')],
+      current: after(4, 1210),
+      policy,
+    })!;
+    expect(at).toMatchObject({
+      dropGallons: 25,
+      engineHoursRun: 10,
+      expectedBurnGallons: 8,
+      unexplainedGallons: 17,
+    });
     expect(at.isPossibleLeakOrTheft).toBe(false);
     const over = assessFuel({ trailer: spec, history: [before], current: after(4, 1209.5), policy })!;
     expect(over.unexplainedGallons).toBeCloseTo(17.4, 9);
@@ -96,16 +143,41 @@ describe('fuel', () => {
   });
 
   it('does not flag without engine hours, when hours run backwards, or when fuel rose', () => {
-    const before = drop('2026-11-04T14:00:00Z', northwind, {}, { fuelEighths: 8, reefer: { engineHours: 1200 } });
+    const before = drop(
+      '2026-11-04T14:00:00Z',
+      northwind,
+      {},
+      { fuelEighths: 8, reefer: { engineHours: 1200 } },
+    );
     const noHours = hook('2026-11-05T14:00:00Z', bluefield, {}, { fuelEighths: 0 });
-    expect(assessFuel({ trailer: spec, history: [before], current: noHours, policy: defaultPolicy }))
-      .toMatchObject({ dropGallons: 50, expectedBurnGallons: null, isPossibleLeakOrTheft: false });
-    const backwards = hook('2026-11-05T14:00:00Z', bluefield, {}, { fuelEighths: 0, reefer: { engineHours: 10 } });
-    expect(assessFuel({ trailer: spec, history: [before], current: backwards, policy: defaultPolicy })!.engineHoursRun).toBeNull();
-    const low = drop('2026-11-04T14:00:00Z', northwind, {}, { fuelEighths: 2, reefer: { engineHours: 1200 } });
-    const refuelled = hook('2026-11-05T14:00:00Z', bluefield, {}, { fuelEighths: 8, reefer: { engineHours: 1220 } });
-    expect(assessFuel({ trailer: spec, history: [low], current: refuelled, policy: defaultPolicy }))
-      .toMatchObject({ dropGallons: 0, isPossibleLeakOrTheft: false });
+    expect(
+      assessFuel({ trailer: spec, history: [before], current: noHours, policy: defaultPolicy }),
+    ).toMatchObject({ dropGallons: 50, expectedBurnGallons: null, isPossibleLeakOrTheft: false });
+    const backwards = hook(
+      '2026-11-05T14:00:00Z',
+      bluefield,
+      {},
+      { fuelEighths: 0, reefer: { engineHours: 10 } },
+    );
+    expect(
+      assessFuel({ trailer: spec, history: [before], current: backwards, policy: defaultPolicy })!
+        .engineHoursRun,
+    ).toBeNull();
+    const low = drop(
+      '2026-11-04T14:00:00Z',
+      northwind,
+      {},
+      { fuelEighths: 2, reefer: { engineHours: 1200 } },
+    );
+    const refuelled = hook(
+      '2026-11-05T14:00:00Z',
+      bluefield,
+      {},
+      { fuelEighths: 8, reefer: { engineHours: 1220 } },
+    );
+    expect(
+      assessFuel({ trailer: spec, history: [low], current: refuelled, policy: defaultPolicy }),
+    ).toMatchObject({ dropGallons: 0, isPossibleLeakOrTheft: false });
   });
 
   it('takes the baseline from the latest earlier reading, a yard walk included', () => {

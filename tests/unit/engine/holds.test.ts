@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { blocksHook, buildChecklist, defaultPolicy, evaluateHolds, makePolicy, OUT_OF_SERVICE_CAUTION } from '@/lib/engine';
+import {
+  blocksHook,
+  buildChecklist,
+  defaultPolicy,
+  evaluateHolds,
+  makePolicy,
+  OUT_OF_SERVICE_CAUTION,
+} from '@/lib/engine';
 import type { HandoffEvent, ItemObservations, ReeferReadings } from '@/lib/engine';
 import { drop, northwind, walk } from './fixtures';
 
@@ -8,7 +15,12 @@ const van = buildChecklist({ kind: 'dry_van', hingesPerDoor: 4, axles: 2, tireLa
 const NOW = new Date('2026-11-05T15:00:00Z');
 const freshPreTrip: ReeferReadings = { preTrip: { result: 'passed', at: new Date('2026-11-05T12:00:00Z') } };
 
-function holdsFor(items: ItemObservations, extra: Partial<HandoffEvent> = {}, checklist = reefer, policy = defaultPolicy) {
+function holdsFor(
+  items: ItemObservations,
+  extra: Partial<HandoffEvent> = {},
+  checklist = reefer,
+  policy = defaultPolicy,
+) {
   const event = drop('2026-11-05T14:00:00Z', northwind, items, { reefer: freshPreTrip, ...extra });
   return evaluateHolds({ checklist, event, now: NOW, policy });
 }
@@ -28,7 +40,9 @@ describe('evaluateHolds', () => {
     });
     expect(hs).toHaveLength(1);
     expect(hs[0]).toMatchObject({
-      ruleKey: 'pin_not_engaged', itemKey: 'undercarriage.tandem_pin.right_rear', severity: 'out_of_service',
+      ruleKey: 'pin_not_engaged',
+      itemKey: 'undercarriage.tandem_pin.right_rear',
+      severity: 'out_of_service',
     });
     expect(hs[0].source).toContain('393.207(b)');
     expect(hs[0].caution).toBe(OUT_OF_SERVICE_CAUTION);
@@ -37,15 +51,21 @@ describe('evaluateHolds', () => {
   });
 
   it('tread under 2/32 in is out of service; exactly 2/32 is not (49 CFR 393.75(c))', () => {
-    const low = holdsFor({ 'tires.axle2.left_inner': { condition: 'ok', treadThirtySeconds: 1, isHoldingAir: true } });
+    const low = holdsFor({
+      'tires.axle2.left_inner': { condition: 'ok', treadThirtySeconds: 1, isHoldingAir: true },
+    });
     expect(low.map((h) => [h.ruleKey, h.severity])).toEqual([['tire_tread_low', 'out_of_service']]);
     expect(low[0].source).toContain('393.75(c)');
-    const atLimit = holdsFor({ 'tires.axle2.left_inner': { condition: 'ok', treadThirtySeconds: 2, isHoldingAir: true } });
+    const atLimit = holdsFor({
+      'tires.axle2.left_inner': { condition: 'ok', treadThirtySeconds: 2, isHoldingAir: true },
+    });
     expect(atLimit).toEqual([]);
   });
 
   it('a tire not holding air is out of service (49 CFR 393.75(a))', () => {
-    const hs = holdsFor({ 'tires.axle1.right_outer': { condition: 'damaged', treadThirtySeconds: 10, isHoldingAir: false } });
+    const hs = holdsFor({
+      'tires.axle1.right_outer': { condition: 'damaged', treadThirtySeconds: 10, isHoldingAir: false },
+    });
     expect(hs.map((h) => h.ruleKey)).toEqual(['tire_not_holding_air']);
     expect(hs[0].source).toContain('393.75(a)');
   });
@@ -58,16 +78,30 @@ describe('evaluateHolds', () => {
     ]) {
       const hs = holdsFor({ 'undercarriage.spare_tire': o });
       expect(hs).toHaveLength(1);
-      expect(hs[0]).toMatchObject({ ruleKey: 'spare_unusable', severity: 'restricted', restriction: 'yard_only' });
+      expect(hs[0]).toMatchObject({
+        ruleKey: 'spare_unusable',
+        severity: 'restricted',
+        restriction: 'yard_only',
+      });
       expect(hs[0].caution).toContain('Chock the wheels');
     }
-    expect(holdsFor({ 'undercarriage.spare_tire': { condition: 'ok', isMounted: true, isHoldingAir: true } })).toEqual([]);
+    expect(
+      holdsFor({ 'undercarriage.spare_tire': { condition: 'ok', isMounted: true, isHoldingAir: true } }),
+    ).toEqual([]);
   });
 
   it('spare severity is policy data: a terminal may make it out of service', () => {
-    const hs = holdsFor({ 'undercarriage.spare_tire': { condition: 'missing' } }, {}, reefer,
-      makePolicy({ spareHoldSeverity: 'out_of_service' }));
-    expect(hs[0]).toMatchObject({ severity: 'out_of_service', restriction: null, caution: OUT_OF_SERVICE_CAUTION });
+    const hs = holdsFor(
+      { 'undercarriage.spare_tire': { condition: 'missing' } },
+      {},
+      reefer,
+      makePolicy({ spareHoldSeverity: 'out_of_service' }),
+    );
+    expect(hs[0]).toMatchObject({
+      severity: 'out_of_service',
+      restriction: null,
+      caution: OUT_OF_SERVICE_CAUTION,
+    });
   });
 
   it('insulation showing and a hinge not locking → restricted, no perishable (common practice)', () => {
@@ -89,18 +123,26 @@ describe('evaluateHolds', () => {
   });
 
   it('an item recorded unsafe is out of service once, even with a specific rule', () => {
-    expect(rules(holdsFor({ 'undercarriage.landing_gear.cross_shaft': { condition: 'unsafe' } }))).toEqual(['item_unsafe']);
-    expect(rules(holdsFor({ 'undercarriage.tandem_pin.left_rear': { condition: 'unsafe', isEngaged: false } })))
-      .toEqual(['pin_not_engaged']);
+    expect(rules(holdsFor({ 'undercarriage.landing_gear.cross_shaft': { condition: 'unsafe' } }))).toEqual([
+      'item_unsafe',
+    ]);
+    expect(
+      rules(holdsFor({ 'undercarriage.tandem_pin.left_rear': { condition: 'unsafe', isEngaged: false } })),
+    ).toEqual(['pin_not_engaged']);
   });
 
   it('pre-trip failed, missing or older than the policy allows → restricted no perishable', () => {
-    const failed = holdsFor({}, { reefer: { preTrip: { result: 'failed', at: new Date('2026-11-05T12:00:00Z') } } });
+    const failed = holdsFor(
+      {},
+      { reefer: { preTrip: { result: 'failed', at: new Date('2026-11-05T12:00:00Z') } } },
+    );
     expect(failed.map((h) => [h.ruleKey, h.restriction])).toEqual([['pre_trip_failed', 'no_perishable']]);
     expect(rules(holdsFor({}, { reefer: null }))).toEqual(['pre_trip_missing']);
     // policy 72 h; 73 h before NOW is stale, exactly 72 h is still allowed.
     const at = (h: number) => new Date(NOW.getTime() - h * 3_600_000);
-    expect(rules(holdsFor({}, { reefer: { preTrip: { result: 'passed', at: at(73) } } }))).toEqual(['pre_trip_stale']);
+    expect(rules(holdsFor({}, { reefer: { preTrip: { result: 'passed', at: at(73) } } }))).toEqual([
+      'pre_trip_stale',
+    ]);
     expect(holdsFor({}, { reefer: { preTrip: { result: 'passed', at: at(72) } } })).toEqual([]);
     const strict = makePolicy({ preTripMaxAgeHours: 2 });
     expect(rules(holdsFor({}, {}, reefer, strict))).toEqual(['pre_trip_stale']);
@@ -113,11 +155,15 @@ describe('evaluateHolds', () => {
   });
 
   it('a not_checked item places no hold, whatever else was typed', () => {
-    expect(holdsFor({ 'undercarriage.tandem_pin.left_front': { condition: 'not_checked', isEngaged: false } })).toEqual([]);
+    expect(
+      holdsFor({ 'undercarriage.tandem_pin.left_front': { condition: 'not_checked', isEngaged: false } }),
+    ).toEqual([]);
   });
 
   it('a yard walk quick check can place a hold', () => {
-    const w = walk('2026-11-05T14:00:00Z', { 'tires.axle1.left_outer': { condition: 'damaged', isHoldingAir: false } });
+    const w = walk('2026-11-05T14:00:00Z', {
+      'tires.axle1.left_outer': { condition: 'damaged', isHoldingAir: false },
+    });
     const hs = evaluateHolds({ checklist: reefer, event: w, now: NOW, policy: defaultPolicy });
     expect(rules(hs)).toEqual(['tire_not_holding_air']);
   });

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import {
-  computeVinCheckDigit, decodeTrailerModelYear, isEquipmentScac, modelYearCandidates, validateScac, validateVin,
+  computeVinCheckDigit,
+  decodeTrailerModelYear,
+  isEquipmentScac,
+  modelYearCandidates,
+  validateScac,
+  validateVin,
   vinWeightedSum,
 } from '@/lib/engine';
 
@@ -20,7 +25,11 @@ describe('validateVin (49 CFR 565.15)', () => {
 
   it('rejects 5TFEV54198X063405, listed as valid in some public test files: it computes 6, not 9', () => {
     // SOURCES.md: the check digit computes to 6 under 565.15(c).
-    expect(validateVin('5TFEV54198X063405')).toEqual({ ok: false, error: 'check_digit', expectedCheckDigit: '6' });
+    expect(validateVin('5TFEV54198X063405')).toEqual({
+      ok: false,
+      error: 'check_digit',
+      expectedCheckDigit: '6',
+    });
   });
 
   it('rejects a single changed character (the check digit catches it)', () => {
@@ -67,7 +76,8 @@ describe('SCAC (NMFTA: 2–4 letters)', () => {
   });
 
   it('rejects one letter, five letters, digits and punctuation', () => {
-    for (const bad of ['H', 'HMKTX', 'HM1', 'H-M', '']) expect(validateScac(bad)).toEqual({ ok: false, error: 'format' });
+    for (const bad of ['H', 'HMKTX', 'HM1', 'H-M', ''])
+      expect(validateScac(bad)).toEqual({ ok: false, error: 'format' });
   });
 
   it('knows codes ending U, X, Z are for equipment (NMFTA)', () => {

@@ -3,7 +3,10 @@ import { describe, expect, it } from 'vitest';
 import { signLabelToken, verifyLabelToken } from '@/lib/engine/identity/label-token';
 
 const SECRET = 'test-only-secret-0123456789abcdef-0123';
-const claims = { labelId: '0b7e7c52-4d1e-4a57-9a55-3f1c2a9d8e01', trailerId: '6f0c2d11-88aa-4b4f-b0de-7d2e9a3c5b44' };
+const claims = {
+  labelId: '0b7e7c52-4d1e-4a57-9a55-3f1c2a9d8e01',
+  trailerId: '6f0c2d11-88aa-4b4f-b0de-7d2e9a3c5b44',
+};
 
 function flipChar(token: string, i: number): string {
   const c = token[i] === 'A' ? 'B' : 'A';
@@ -14,8 +17,9 @@ describe('label tokens', () => {
   it('round-trips label and trailer ids', () => {
     const t = signLabelToken(claims, SECRET);
     expect(verifyLabelToken(t, SECRET)).toEqual({ ok: true, ...claims });
-    expect(verifyLabelToken(signLabelToken({ labelId: 'L-17', trailerId: 'HM 1042' }, SECRET), SECRET))
-      .toEqual({ ok: true, labelId: 'L-17', trailerId: 'HM 1042' });
+    expect(
+      verifyLabelToken(signLabelToken({ labelId: 'L-17', trailerId: 'HM 1042' }, SECRET), SECRET),
+    ).toEqual({ ok: true, labelId: 'L-17', trailerId: 'HM 1042' });
   });
 
   it('is base64url and short enough for a small QR code', () => {
@@ -29,7 +33,11 @@ describe('label tokens', () => {
   it('carries a real HMAC-SHA256 over the payload (checked independently)', () => {
     const raw = Buffer.from(signLabelToken(claims, SECRET), 'base64url');
     const payload = raw.subarray(0, raw.length - 16);
-    const expected = createHmac('sha256', SECRET).update('hitchmark-label\u0000').update(payload).digest().subarray(0, 16);
+    const expected = createHmac('sha256', SECRET)
+      .update('hitchmark-label\u0000')
+      .update(payload)
+      .digest()
+      .subarray(0, 16);
     expect(raw.subarray(raw.length - 16).equals(expected)).toBe(true);
   });
 
@@ -48,11 +56,21 @@ describe('label tokens', () => {
   });
 
   it('treats malformed input as a typed error, never a throw', () => {
-    for (const bad of ['', 'abc', 'not a token!', 'A'.repeat(500), '====', signLabelToken(claims, SECRET).slice(0, 40)]) {
+    for (const bad of [
+      '',
+      'abc',
+      'not a token!',
+      'A'.repeat(500),
+      '====',
+      signLabelToken(claims, SECRET).slice(0, 40),
+    ]) {
       const r = verifyLabelToken(bad, SECRET);
       expect(r.ok).toBe(false);
     }
-    expect(verifyLabelToken(undefined as unknown as string, SECRET)).toEqual({ ok: false, error: 'malformed' });
+    expect(verifyLabelToken(undefined as unknown as string, SECRET)).toEqual({
+      ok: false,
+      error: 'malformed',
+    });
   });
 
   it('reports a revoked label (re-issued) once the signature checks out', () => {

@@ -7,7 +7,8 @@ const root = join(__dirname, '../../../lib/engine');
 
 function sources(dir: string): string[] {
   return readdirSync(dir, { withFileTypes: true }).flatMap((d) =>
-    d.isDirectory() ? sources(join(dir, d.name)) : d.name.endsWith('.ts') ? [join(dir, d.name)] : []);
+    d.isDirectory() ? sources(join(dir, d.name)) : d.name.endsWith('.ts') ? [join(dir, d.name)] : [],
+  );
 }
 
 const files = sources(root).map((f) => ({ path: relative(root, f), text: readFileSync(f, 'utf8') }));
@@ -29,8 +30,9 @@ describe('engine purity', () => {
   });
 
   it('only the label-token module imports node:crypto, and the public index does not pull it in', () => {
-    expect(files.filter((f) => /from ['"](node:)?crypto['"]/.test(f.text)).map((f) => f.path))
-      .toEqual(['identity/label-token.ts']);
+    expect(files.filter((f) => /from ['"](node:)?crypto['"]/.test(f.text)).map((f) => f.path)).toEqual([
+      'identity/label-token.ts',
+    ]);
     const barrels = files.filter((f) => f.path === 'index.ts' || f.path === 'identity/index.ts');
     for (const b of barrels) expect(b.text).not.toMatch(/from ['"][^'"]*label-token['"]/);
   });

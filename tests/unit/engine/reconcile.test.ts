@@ -10,7 +10,11 @@ const board: BoardSlot[] = [
   { slotId: 'B-01', rowId: 'B', expectedTrailerId: 't5' },
   { slotId: 'B-02', rowId: 'B', expectedTrailerId: 't6' },
 ];
-const scan = (slotId: string, trailerId: string | null, code = trailerId ?? 'UNREAD') => ({ slotId, trailerId, code });
+const scan = (slotId: string, trailerId: string | null, code = trailerId ?? 'UNREAD') => ({
+  slotId,
+  trailerId,
+  code,
+});
 
 describe('reconcileWalk', () => {
   it('classifies every walked slot and every trailer', () => {
@@ -32,7 +36,11 @@ describe('reconcileWalk', () => {
     expect(slot('A-04').status).toBe('missing');
     expect(r.slots.some((s) => s.rowId === 'B')).toBe(false);
     expect(trailer('t1').status).toBe('matched');
-    expect(trailer('t5')).toMatchObject({ status: 'wrong_slot', expectedSlotId: 'B-01', foundSlotIds: ['A-02'] });
+    expect(trailer('t5')).toMatchObject({
+      status: 'wrong_slot',
+      expectedSlotId: 'B-01',
+      foundSlotIds: ['A-02'],
+    });
     expect(trailer('HM 9999')).toMatchObject({ status: 'unknown', isKnownTrailer: false });
     expect(trailer('t2')).toMatchObject({ status: 'missing', expectedSlotId: 'A-02' });
     expect(trailer('t4').status).toBe('missing');
@@ -48,20 +56,37 @@ describe('reconcileWalk', () => {
   it('an empty slot seen empty is empty; a known trailer not on the board is unknown', () => {
     const r = reconcileWalk({ board, rowIds: ['A'], scans: [scan('A-03', 't99')] });
     expect(r.slots.find((s) => s.slotId === 'A-03')!.status).toBe('unexpected');
-    expect(r.trailers.find((t) => t.trailerId === 't99')).toMatchObject({ status: 'unknown', isKnownTrailer: true });
-    const clean = reconcileWalk({ board, rowIds: ['A'], scans: [scan('A-01', 't1'), scan('A-02', 't2'), scan('A-04', 't4')] });
-    expect(clean.summary.slots).toEqual({ matched: 3, empty: 1, missing: 0, wrong_trailer: 0, unexpected: 0 });
+    expect(r.trailers.find((t) => t.trailerId === 't99')).toMatchObject({
+      status: 'unknown',
+      isKnownTrailer: true,
+    });
+    const clean = reconcileWalk({
+      board,
+      rowIds: ['A'],
+      scans: [scan('A-01', 't1'), scan('A-02', 't2'), scan('A-04', 't4')],
+    });
+    expect(clean.summary.slots).toEqual({
+      matched: 3,
+      empty: 1,
+      missing: 0,
+      wrong_trailer: 0,
+      unexpected: 0,
+    });
     expect(clean.summary.trailers.missing).toBe(0);
   });
 
   it('a trailer scanned in two slots is a duplicate; the same slot twice is a counted repeat', () => {
     const r = reconcileWalk({
-      board, rowIds: ['A'],
+      board,
+      rowIds: ['A'],
       scans: [scan('A-01', 't1'), scan('A-01', 't1'), scan('A-02', 't2'), scan('A-04', 't2')],
     });
     expect(r.summary.repeatScans).toBe(1);
     expect(r.trailers.find((t) => t.trailerId === 't1')!.status).toBe('matched');
-    expect(r.trailers.find((t) => t.trailerId === 't2')).toMatchObject({ status: 'duplicate', foundSlotIds: ['A-02', 'A-04'] });
+    expect(r.trailers.find((t) => t.trailerId === 't2')).toMatchObject({
+      status: 'duplicate',
+      foundSlotIds: ['A-02', 'A-04'],
+    });
     expect(r.slots.find((s) => s.slotId === 'A-04')!.status).toBe('wrong_trailer');
     expect(r.summary.scans).toBe(4);
   });
@@ -69,7 +94,10 @@ describe('reconcileWalk', () => {
   it('reports scans in slots off the board', () => {
     const r = reconcileWalk({ board, rowIds: ['A'], scans: [scan('Z-09', 't1')] });
     expect(r.slots.find((s) => s.slotId === 'Z-09')).toMatchObject({ rowId: null, status: 'unexpected' });
-    expect(r.trailers.find((t) => t.trailerId === 't1')).toMatchObject({ status: 'wrong_slot', expectedSlotId: 'A-01' });
+    expect(r.trailers.find((t) => t.trailerId === 't1')).toMatchObject({
+      status: 'wrong_slot',
+      expectedSlotId: 'A-01',
+    });
     expect(r.slots.find((s) => s.slotId === 'A-01')!.status).toBe('missing');
   });
 

@@ -16,14 +16,19 @@ export async function pageContents(pdf: Uint8Array): Promise<string[]> {
 
 /** Strings drawn with `<hex> Tj` (pdf-lib writes standard-font text as WinAnsi hex). */
 export function shownText(content: string): string[] {
-  return [...content.matchAll(/<([0-9A-Fa-f]+)> Tj/g)].map((m) => Buffer.from(m[1], 'hex').toString('latin1'));
+  return [...content.matchAll(/<([0-9A-Fa-f]+)> Tj/g)].map((m) =>
+    Buffer.from(m[1], 'hex').toString('latin1'),
+  );
 }
 
 /**
  * Paints every black-filled rectangle of one page inside a clip box onto an RGBA bitmap at one
  * pixel per point (white elsewhere), flipping PDF's bottom-up y axis.
  */
-export function rasterizeBlackRects(content: string, clip: { x: number; y: number; width: number; height: number }) {
+export function rasterizeBlackRects(
+  content: string,
+  clip: { x: number; y: number; width: number; height: number },
+) {
   const { width, height } = clip;
   const rgba = new Uint8ClampedArray(width * height * 4).fill(255);
   for (const block of content.split(/\nQ\n?/)) {

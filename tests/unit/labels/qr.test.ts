@@ -6,7 +6,10 @@ import { signLabelToken } from '@/lib/engine/identity/label-token';
 import { LABEL_QR_LEVEL, LABEL_QR_MARGIN, labelQrModules, labelQrSvg } from '@/lib/labels/qr';
 
 const SECRET = 'a-test-secret-for-hitchmark-labels-0123456789';
-const token = signLabelToken({ labelId: 'f3b1c2d4-5e6f-4a7b-8c9d-0e1f2a3b4c5d', trailerId: '0a1b2c3d-4e5f-4607-8819-2a3b4c5d6e7f' }, SECRET);
+const token = signLabelToken(
+  { labelId: 'f3b1c2d4-5e6f-4a7b-8c9d-0e1f2a3b4c5d', trailerId: '0a1b2c3d-4e5f-4607-8819-2a3b4c5d6e7f' },
+  SECRET,
+);
 // a production-like address and the e2e one; both links stay under 108 bytes
 const LINKS = [`https://gate.hitchmark.example/l/${token}`, `http://localhost:3501/l/${token}`];
 
@@ -33,7 +36,8 @@ function rasterizeSvg(svg: string, scale: number) {
       const to = op === 'h' ? x + Number(a) : Number(a);
       const row = Math.floor(y);
       for (let py = row * scale; py < (row + 1) * scale; py++) {
-        for (let px = x * scale; px < to * scale; px++) rgba.fill(0, (py * w + px) * 4, (py * w + px) * 4 + 3);
+        for (let px = x * scale; px < to * scale; px++)
+          rgba.fill(0, (py * w + px) * 4, (py * w + px) * 4 + 3);
       }
       x = to;
     }
@@ -45,7 +49,13 @@ describe('label QR codes (checked with jsqr against ISO/IEC 18004)', () => {
   for (const link of LINKS) {
     it(`a PNG of ${link.slice(0, 30)}… decodes to the link, at version ≤ 8 for level Q`, async () => {
       expect(Buffer.byteLength(link)).toBeLessThanOrEqual(108);
-      const png = PNG.sync.read(await QRCode.toBuffer(link, { errorCorrectionLevel: LABEL_QR_LEVEL, margin: LABEL_QR_MARGIN, scale: 4 }));
+      const png = PNG.sync.read(
+        await QRCode.toBuffer(link, {
+          errorCorrectionLevel: LABEL_QR_LEVEL,
+          margin: LABEL_QR_MARGIN,
+          scale: 4,
+        }),
+      );
       const decoded = decodeRgba(new Uint8ClampedArray(png.data), png.width, png.height);
       expect(decoded?.data).toBe(link);
       // SOURCES.md (ISO/IEC 18004 capacity): ≤ 108 bytes in byte mode at Q fits version 8
@@ -65,11 +75,14 @@ describe('label QR codes (checked with jsqr against ISO/IEC 18004)', () => {
 
   // The same smear, at two levels: Q (about 25 % recovery) reads, L (about 7 %) does not (ISO/IEC 18004).
   async function smeared(level: 'L' | 'Q') {
-    const png = PNG.sync.read(await QRCode.toBuffer(LINKS[0], { errorCorrectionLevel: level, margin: 4, scale: 4 }));
+    const png = PNG.sync.read(
+      await QRCode.toBuffer(LINKS[0], { errorCorrectionLevel: level, margin: 4, scale: 4 }),
+    );
     // a band 3 modules high across the lower data area, clear of the finder patterns
     const top = Math.floor(png.height * 0.6);
     for (let y = top; y < top + 12; y++) {
-      for (let x = 4 * 12; x < png.width - 4 * 12; x++) png.data.fill(0, (y * png.width + x) * 4, (y * png.width + x) * 4 + 3);
+      for (let x = 4 * 12; x < png.width - 4 * 12; x++)
+        png.data.fill(0, (y * png.width + x) * 4, (y * png.width + x) * 4 + 3);
     }
     return decodeRgba(new Uint8ClampedArray(png.data), png.width, png.height)?.data ?? null;
   }

@@ -1,12 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { labelSheetQuerySchema, trailerLookupSchema } from '@/lib/validation/labels';
 
-const firstMessage = (r: { success: boolean; error?: { issues: { message: string }[] } }) => r.error?.issues[0]?.message;
+const firstMessage = (r: { success: boolean; error?: { issues: { message: string }[] } }) =>
+  r.error?.issues[0]?.message;
 
 describe('trailer lookup input', () => {
   it('takes exactly one of token, unit or vin', () => {
     expect(trailerLookupSchema.safeParse({ unit: ' r53012 ' }).data).toEqual({ unit: 'R53012' });
-    expect(firstMessage(trailerLookupSchema.safeParse({}))).toBe('Look up by exactly one of: token, unit or vin.');
+    expect(firstMessage(trailerLookupSchema.safeParse({}))).toBe(
+      'Look up by exactly one of: token, unit or vin.',
+    );
     expect(trailerLookupSchema.safeParse({ unit: 'R53012', vin: '1G4AH59H45G118341' }).success).toBe(false);
   });
 
@@ -24,8 +27,12 @@ describe('trailer lookup input', () => {
   });
 
   it('refuses VINs of the wrong length or with I, O or Q', () => {
-    expect(firstMessage(trailerLookupSchema.safeParse({ vin: '1G4AH59H45G11834' }))).toBe('A VIN has 17 characters.');
-    expect(firstMessage(trailerLookupSchema.safeParse({ vin: '1G4AH59H45G11834O' }))).toMatch(/never I, O or Q/);
+    expect(firstMessage(trailerLookupSchema.safeParse({ vin: '1G4AH59H45G11834' }))).toBe(
+      'A VIN has 17 characters.',
+    );
+    expect(firstMessage(trailerLookupSchema.safeParse({ vin: '1G4AH59H45G11834O' }))).toMatch(
+      /never I, O or Q/,
+    );
   });
 
   it('refuses tokens that cannot be label tokens and unit numbers with odd characters', () => {

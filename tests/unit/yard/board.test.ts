@@ -1,6 +1,13 @@
 import { TZDate } from '@date-fns/tz';
 import { describe, expect, it } from 'vitest';
-import { dwellMinutes, filterRows, formatDwell, isLowFuel, isOverFreeTime, tableRows } from '@/lib/yard/board';
+import {
+  dwellMinutes,
+  filterRows,
+  formatDwell,
+  isLowFuel,
+  isOverFreeTime,
+  tableRows,
+} from '@/lib/yard/board';
 import { formatLocal, rowCells, sortRows } from '@/lib/yard/table';
 import { board, spot, trailer } from './fixtures';
 
@@ -49,12 +56,30 @@ describe('formatDwell', () => {
 
 describe('board filters', () => {
   const now = new Date('2026-03-09T18:00:00Z');
-  const held = trailer({ id: 'held', holds: [{ severity: 'out_of_service', reason: 'Tandem pin not engaged' }] });
+  const held = trailer({
+    id: 'held',
+    holds: [{ severity: 'out_of_service', reason: 'Tandem pin not engaged' }],
+  });
   const low = trailer({ id: 'low', fuelEighths: 4 });
   const justOver = trailer({ id: 'enough', fuelEighths: 5 });
   const off = trailer({ id: 'off', isReeferOn: false });
-  const van = trailer({ id: 'van', kind: 'dry_van', fuelEighths: null, isReeferOn: null, gateInAt: '2026-03-09T12:00:00Z' });
-  const rows = tableRows(board([spot('A01', 1, held), spot('A02', 2, low), spot('A03', 3, justOver), spot('A04', 4, off), spot('A05', 5, van), spot('A06', 6, null)]));
+  const van = trailer({
+    id: 'van',
+    kind: 'dry_van',
+    fuelEighths: null,
+    isReeferOn: null,
+    gateInAt: '2026-03-09T12:00:00Z',
+  });
+  const rows = tableRows(
+    board([
+      spot('A01', 1, held),
+      spot('A02', 2, low),
+      spot('A03', 3, justOver),
+      spot('A04', 4, off),
+      spot('A05', 5, van),
+      spot('A06', 6, null),
+    ]),
+  );
 
   it('lists only occupied spots', () => {
     expect(rows.map((r) => r.spotLabel)).toEqual(['A01', 'A02', 'A03', 'A04', 'A05']);
@@ -71,7 +96,12 @@ describe('board filters', () => {
     expect(filterRows(rows, ['reefer_off'], policy, now).map((r) => r.trailer.id)).toEqual(['off']);
   });
   it('over free time: every trailer gated in on 1 Mar, not the van gated in 6 h ago', () => {
-    expect(filterRows(rows, ['over_free_time'], policy, now).map((r) => r.trailer.id)).toEqual(['held', 'low', 'enough', 'off']);
+    expect(filterRows(rows, ['over_free_time'], policy, now).map((r) => r.trailer.id)).toEqual([
+      'held',
+      'low',
+      'enough',
+      'off',
+    ]);
   });
   it('several filters combine with AND; none means all', () => {
     expect(filterRows(rows, ['held', 'low_fuel'], policy, now)).toEqual([]);
@@ -81,14 +111,28 @@ describe('board filters', () => {
 
 describe('sorting the table', () => {
   const now = new Date('2026-03-09T18:00:00Z');
-  const rows = tableRows(board([
-    spot('A01', 1, trailer({ id: 'r10', unitNumber: 'R10', fuelEighths: 2, gateInAt: '2026-03-08T18:00:00Z' })),
-    spot('A02', 2, trailer({ id: 'r9', unitNumber: 'R9', fuelEighths: null, gateInAt: '2026-03-09T06:00:00Z' })),
-    spot('A03', 3, trailer({ id: 'r11', unitNumber: 'R11', fuelEighths: 7, gateInAt: null })),
-  ]));
+  const rows = tableRows(
+    board([
+      spot(
+        'A01',
+        1,
+        trailer({ id: 'r10', unitNumber: 'R10', fuelEighths: 2, gateInAt: '2026-03-08T18:00:00Z' }),
+      ),
+      spot(
+        'A02',
+        2,
+        trailer({ id: 'r9', unitNumber: 'R9', fuelEighths: null, gateInAt: '2026-03-09T06:00:00Z' }),
+      ),
+      spot('A03', 3, trailer({ id: 'r11', unitNumber: 'R11', fuelEighths: 7, gateInAt: null })),
+    ]),
+  );
   it('sorts unit numbers numerically (R9 before R10)', () => {
     expect(sortRows(rows, 'unit', 'asc', now).map((r) => r.trailer.unitNumber)).toEqual(['R9', 'R10', 'R11']);
-    expect(sortRows(rows, 'unit', 'desc', now).map((r) => r.trailer.unitNumber)).toEqual(['R11', 'R10', 'R9']);
+    expect(sortRows(rows, 'unit', 'desc', now).map((r) => r.trailer.unitNumber)).toEqual([
+      'R11',
+      'R10',
+      'R9',
+    ]);
   });
   it('keeps unknown values last in both directions', () => {
     expect(sortRows(rows, 'fuel', 'asc', now).map((r) => r.trailer.id)).toEqual(['r10', 'r11', 'r9']);
@@ -105,9 +149,32 @@ describe('sorting the table', () => {
 describe('table cells', () => {
   it('write reefer, fuel, holds and load in words', () => {
     const now = new Date('2026-03-09T18:00:00Z');
-    const [row] = tableRows(board([spot('A01', 1, trailer({ id: 'r1', unitNumber: 'R1', isLoaded: true, setpointTenthsF: -100, fuelEighths: 3, holds: [{ severity: 'restricted', reason: 'No perishable loads' }] }))]));
+    const [row] = tableRows(
+      board([
+        spot(
+          'A01',
+          1,
+          trailer({
+            id: 'r1',
+            unitNumber: 'R1',
+            isLoaded: true,
+            setpointTenthsF: -100,
+            fuelEighths: 3,
+            holds: [{ severity: 'restricted', reason: 'No perishable loads' }],
+          }),
+        ),
+      ]),
+    );
     expect(rowCells(row, CHICAGO, now)).toEqual([
-      'R1', 'A01', 'Loaded', 'On, -10.0 °F', '3/8', 'Restricted: No perishable loads', '8 d 6 h', '1 Mar 2026 06:00 GMT-6', '1 Mar 2026 07:00 GMT-6',
+      'R1',
+      'A01',
+      'Loaded',
+      'On, -10.0 °F',
+      '3/8',
+      'Restricted: No perishable loads',
+      '8 d 6 h',
+      '1 Mar 2026 06:00 GMT-6',
+      '1 Mar 2026 07:00 GMT-6',
     ]);
   });
 });

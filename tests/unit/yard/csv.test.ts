@@ -13,13 +13,22 @@ function parseCsv(text: string): string[][] {
   for (let i = 0; i < text.length; i++) {
     const c = text[i];
     if (quoted) {
-      if (c === '"' && text[i + 1] === '"') { field += '"'; i++; }
-      else if (c === '"') quoted = false;
+      if (c === '"' && text[i + 1] === '"') {
+        field += '"';
+        i++;
+      } else if (c === '"') quoted = false;
       else field += c;
     } else if (c === '"') quoted = true;
-    else if (c === ',') { row.push(field); field = ''; }
-    else if (c === '\r' && text[i + 1] === '\n') { row.push(field); rows.push(row); row = []; field = ''; i++; }
-    else field += c;
+    else if (c === ',') {
+      row.push(field);
+      field = '';
+    } else if (c === '\r' && text[i + 1] === '\n') {
+      row.push(field);
+      rows.push(row);
+      row = [];
+      field = '';
+      i++;
+    } else field += c;
   }
   return rows;
 }
@@ -27,9 +36,25 @@ function parseCsv(text: string): string[][] {
 describe('CSV export of the board', () => {
   const now = new Date('2026-03-09T18:00:00Z');
   const b = board([
-    spot('A01', 1, trailer({ id: 'r1', unitNumber: 'R1', holds: [{ severity: 'out_of_service', reason: 'Tire "axle 1", flat, not holding air' }, { severity: 'restricted', reason: 'No perishable loads' }] })),
+    spot(
+      'A01',
+      1,
+      trailer({
+        id: 'r1',
+        unitNumber: 'R1',
+        holds: [
+          { severity: 'out_of_service', reason: 'Tire "axle 1", flat, not holding air' },
+          { severity: 'restricted', reason: 'No perishable loads' },
+        ],
+      }),
+    ),
     spot('A02', 2, null),
-    spot('Door 1', 3, trailer({ id: 'v1', unitNumber: 'OS7109', kind: 'dry_van', fuelEighths: null, isReeferOn: null }), null),
+    spot(
+      'Door 1',
+      3,
+      trailer({ id: 'v1', unitNumber: 'OS7109', kind: 'dry_van', fuelEighths: null, isReeferOn: null }),
+      null,
+    ),
   ]);
 
   it('quotes fields with commas, quotes and line breaks (RFC 4180 section 2, rules 6 and 7)', () => {
@@ -45,7 +70,9 @@ describe('CSV export of the board', () => {
     expect(parsed[0]).toEqual(COLUMNS.map((c) => c.header));
     expect(parsed.slice(1)).toEqual(rows.map((r) => rowCells(r, b.terminal.timeZone, now)));
     expect(parsed.slice(1).map((r) => r[0])).toEqual(['R1', 'OS7109']);
-    expect(parsed[1][5]).toBe('Out of service: Tire "axle 1", flat, not holding air; Restricted: No perishable loads');
+    expect(parsed[1][5]).toBe(
+      'Out of service: Tire "axle 1", flat, not holding air; Restricted: No perishable loads',
+    );
   });
 
   it('ends every line with CRLF (RFC 4180 section 2, rule 1)', () => {

@@ -15,7 +15,12 @@ export function trailer(over: Partial<BoardTrailer> & { id: string }): BoardTrai
   };
 }
 
-export function spot(label: string, order: number, t: BoardTrailer | null, rowId: string | null = 'row-a'): BoardSpot {
+export function spot(
+  label: string,
+  order: number,
+  t: BoardTrailer | null,
+  rowId: string | null = 'row-a',
+): BoardSpot {
   return { id: `spot-${label}`, label, kind: rowId ? 'slot' : 'door', rowId, order, trailer: t };
 }
 

@@ -1,11 +1,28 @@
 import { describe, expect, it } from 'vitest';
-import { flushQueue, loadQueue, pendingCount, saveQueue, type QueuedScan, type SendOutcome } from '@/lib/yard/scan-queue';
+import {
+  flushQueue,
+  loadQueue,
+  pendingCount,
+  saveQueue,
+  type QueuedScan,
+  type SendOutcome,
+} from '@/lib/yard/scan-queue';
 import { classifyScanText } from '@/lib/yard/scan-text';
 import { DEFAULT_YARD_POLICY, yardPolicyOf } from '@/lib/yard/policy';
 import { suggestNextSpot, tasksForScan, walkScanEvent } from '@/lib/yard/walk';
 
-const spots = [{ id: 's1', label: 'A01', rowId: 'a' }, { id: 's2', label: 'A02', rowId: 'a' }, { id: 's3', label: 'B01', rowId: 'b' }];
-const checks = { isUnitRunning: true, setpointTenthsF: 340, fuelEighths: 6, areDoorsClosed: true, isSealPresent: true };
+const spots = [
+  { id: 's1', label: 'A01', rowId: 'a' },
+  { id: 's2', label: 'A02', rowId: 'a' },
+  { id: 's3', label: 'B01', rowId: 'b' },
+];
+const checks = {
+  isUnitRunning: true,
+  setpointTenthsF: 340,
+  fuelEighths: 6,
+  areDoorsClosed: true,
+  isSealPresent: true,
+};
 
 describe('next slot suggestion', () => {
   it('starts at the first slot, follows row order and ends after the last', () => {
@@ -23,11 +40,19 @@ describe('tasks from a scan', () => {
     expect(tasksForScan(checks, loadedReefer, DEFAULT_YARD_POLICY)).toEqual([]);
   });
   it('flags low fuel at the policy eighths, a unit off on a loaded reefer, open doors and a missing seal', () => {
-    const kinds = tasksForScan({ ...checks, fuelEighths: 4, isUnitRunning: false, areDoorsClosed: false, isSealPresent: false }, loadedReefer, DEFAULT_YARD_POLICY).map((t) => t.kind);
+    const kinds = tasksForScan(
+      { ...checks, fuelEighths: 4, isUnitRunning: false, areDoorsClosed: false, isSealPresent: false },
+      loadedReefer,
+      DEFAULT_YARD_POLICY,
+    ).map((t) => t.kind);
     expect(kinds).toEqual(['low_fuel', 'unit_off', 'doors_open', 'seal_missing']);
   });
   it('does not ask to fuel or start an empty dry van, nor a seal on an empty trailer (common practice)', () => {
-    const kinds = tasksForScan({ ...checks, fuelEighths: 0, isUnitRunning: false, isSealPresent: false }, { kind: 'dry_van', isLoaded: false }, DEFAULT_YARD_POLICY);
+    const kinds = tasksForScan(
+      { ...checks, fuelEighths: 0, isUnitRunning: false, isSealPresent: false },
+      { kind: 'dry_van', isLoaded: false },
+      DEFAULT_YARD_POLICY,
+    );
     expect(kinds).toEqual([]);
   });
 });
@@ -36,7 +61,15 @@ describe('walk scan as an engine timeline event', () => {
   it('carries the readings in the engine units and marks no checklist item inspected', () => {
     const at = new Date('2026-03-09T18:00:00Z');
     const e = walkScanEvent({ id: 'w1', scannedAt: at, ...checks, setpointTenthsF: -105 }, 'Yard jockey');
-    expect(e).toEqual({ type: 'walk', id: 'w1', at, jockeyName: 'Yard jockey', items: {}, fuelEighths: 6, reefer: { isUnitOn: true, setpointF: -10.5 } });
+    expect(e).toEqual({
+      type: 'walk',
+      id: 'w1',
+      at,
+      jockeyName: 'Yard jockey',
+      items: {},
+      fuelEighths: 6,
+      reefer: { isUnitOn: true, setpointF: -10.5 },
+    });
   });
 });
 
@@ -45,7 +78,10 @@ describe('scanned text', () => {
     const token = 'AQ_-abcdefghijklmnopqrstuvwxyz0123456789';
     expect(classifyScanText(`http://localhost:3000/l/${token}`)).toEqual({ kind: 'label', token });
     // a link that is not a label link is just text: it will match no unit and show as unknown
-    expect(classifyScanText('https://elsewhere.example/x')).toEqual({ kind: 'unit', unitNumber: 'HTTPS://ELSEWHERE.EXAMPLE/X' });
+    expect(classifyScanText('https://elsewhere.example/x')).toEqual({
+      kind: 'unit',
+      unitNumber: 'HTTPS://ELSEWHERE.EXAMPLE/X',
+    });
     // 1G4AH59H45G118341: the VIN example of 49 CFR 565.15 (17 characters, no I, O or Q)
     expect(classifyScanText(' 1g4ah59h45g118341 ')).toEqual({ kind: 'vin', vin: '1G4AH59H45G118341' });
     expect(classifyScanText('r53001')).toEqual({ kind: 'unit', unitNumber: 'R53001' });
@@ -54,14 +90,25 @@ describe('scanned text', () => {
 
 describe('yard policy', () => {
   it('reads the figures from the stored document and falls back per field', () => {
-    expect(yardPolicyOf({ freeTimeHours: 72, lowFuelEighths: 3, other: 1 })).toEqual({ freeTimeHours: 72, lowFuelEighths: 3 });
+    expect(yardPolicyOf({ freeTimeHours: 72, lowFuelEighths: 3, other: 1 })).toEqual({
+      freeTimeHours: 72,
+      lowFuelEighths: 3,
+    });
     expect(yardPolicyOf({ freeTimeHours: 'x', lowFuelEighths: 12 })).toEqual(DEFAULT_YARD_POLICY);
     expect(yardPolicyOf(null)).toEqual(DEFAULT_YARD_POLICY);
   });
 });
 
 describe('offline scan queue', () => {
-  const scan = (n: number): QueuedScan => ({ clientKey: `key-000${n}`, scannedText: `R${n}`, spotId: 's1', spotLabel: 'A01', scannedAt: '2026-03-09T18:00:00Z', state: 'pending', ...checks });
+  const scan = (n: number): QueuedScan => ({
+    clientKey: `key-000${n}`,
+    scannedText: `R${n}`,
+    spotId: 's1',
+    spotLabel: 'A01',
+    scannedAt: '2026-03-09T18:00:00Z',
+    state: 'pending',
+    ...checks,
+  });
 
   it('sends in order and stops at the first network failure, keeping the rest pending', async () => {
     const sent: string[] = [];
@@ -89,7 +136,10 @@ describe('offline scan queue', () => {
 
   it('survives a round trip through storage and reads a damaged entry as empty', () => {
     const store = new Map<string, string>();
-    const storage = { getItem: (k: string) => store.get(k) ?? null, setItem: (k: string, v: string) => void store.set(k, v) };
+    const storage = {
+      getItem: (k: string) => store.get(k) ?? null,
+      setItem: (k: string, v: string) => void store.set(k, v),
+    };
     saveQueue(storage, 'w1', [scan(1)]);
     expect(loadQueue(storage, 'w1')).toEqual([scan(1)]);
     store.set('hitchmark.walk.w2.scans', '{not json');

@@ -13,7 +13,9 @@ export default async function RatesPage() {
     <div className="space-y-4">
       <h1 className="text-gate-xl font-bold">Repair rate card</h1>
       <p className="text-gate">
-        A rate applies to a damaged item when its key is the item key or a prefix of it at a dot (<code>rear</code> prices every rear item, <code>rear.door_left</code> only the left door); the longest matching key wins. Amounts are whole cents.
+        A rate applies to a damaged item when its key is the item key or a prefix of it at a dot (
+        <code>rear</code> prices every rear item, <code>rear.door_left</code> only the left door); the longest
+        matching key wins. Amounts are whole cents.
       </p>
       <AddRateForm />
       <ul className="divide-y divide-paper-line rounded-xl bg-paper" aria-label="Rates">
@@ -22,7 +24,11 @@ export default async function RatesPage() {
             <span className="text-gate">
               <code className="font-bold">{r.itemPattern}</code> · {r.condition}
             </span>
-            <ChangeRateForm id={r.id} label={`${r.itemPattern} ${r.condition}`} amount={centsToDollarsText(r.amountCents)} />
+            <ChangeRateForm
+              id={r.id}
+              label={`${r.itemPattern} ${r.condition}`}
+              amount={centsToDollarsText(r.amountCents)}
+            />
           </li>
         ))}
       </ul>

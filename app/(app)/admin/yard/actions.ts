@@ -50,7 +50,10 @@ export async function createSpotAction(_p: ActionState, data: FormData): Promise
   if (!parsed.success) return invalidState(parsed.error);
   if (!user) return NO_TERMINAL;
   const { kind, label, rowId } = parsed.data;
-  return done(await createSpot(user.terminalId, user.id, { kind, label, rowId: rowId || undefined }), `${kind === 'door' ? 'Door' : 'Slot'} ${label} added.`);
+  return done(
+    await createSpot(user.terminalId, user.id, { kind, label, rowId: rowId || undefined }),
+    `${kind === 'door' ? 'Door' : 'Slot'} ${label} added.`,
+  );
 }
 
 export async function renameSpotAction(_p: ActionState, data: FormData): Promise<ActionState> {

@@ -7,5 +7,9 @@ const STYLES: Record<string, string> = {
 };
 
 export function CaseStateBadge({ state }: { state: string }) {
-  return <span className={`inline-block rounded-full px-3 py-0.5 text-gate-sm font-bold ${STYLES[state] ?? ''}`}>{state}</span>;
+  return (
+    <span className={`inline-block rounded-full px-3 py-0.5 text-gate-sm font-bold ${STYLES[state] ?? ''}`}>
+      {state}
+    </span>
+  );
 }

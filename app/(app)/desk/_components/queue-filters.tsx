@@ -20,7 +20,11 @@ function Err({ name, errors }: { name: string; errors: Props['errors'] }) {
 /** The queue's filters as a plain GET form, so a filtered queue is a link a clerk can share. */
 export function QueueFilters({ carriers, values, errors }: Props) {
   return (
-    <form method="get" className="grid grid-cols-2 gap-3 rounded-xl bg-paper p-3 sm:grid-cols-6" aria-label="Filter cases">
+    <form
+      method="get"
+      className="grid grid-cols-2 gap-3 rounded-xl bg-paper p-3 sm:grid-cols-6"
+      aria-label="Filter cases"
+    >
       <label className="text-gate-sm font-bold">
         State
         <select name="state" defaultValue={values.state ?? ''} className={select}>
@@ -55,12 +59,24 @@ export function QueueFilters({ carriers, values, errors }: Props) {
       </label>
       <label className="text-gate-sm font-bold">
         From $
-        <input name="minAmount" inputMode="decimal" defaultValue={values.minAmount ?? ''} className={select} aria-describedby="minAmount-error" />
+        <input
+          name="minAmount"
+          inputMode="decimal"
+          defaultValue={values.minAmount ?? ''}
+          className={select}
+          aria-describedby="minAmount-error"
+        />
         <Err name="minAmount" errors={errors} />
       </label>
       <label className="text-gate-sm font-bold">
         To $
-        <input name="maxAmount" inputMode="decimal" defaultValue={values.maxAmount ?? ''} className={select} aria-describedby="maxAmount-error" />
+        <input
+          name="maxAmount"
+          inputMode="decimal"
+          defaultValue={values.maxAmount ?? ''}
+          className={select}
+          aria-describedby="maxAmount-error"
+        />
         <Err name="maxAmount" errors={errors} />
       </label>
       <label className="text-gate-sm font-bold">
@@ -76,7 +92,10 @@ export function QueueFilters({ carriers, values, errors }: Props) {
         <button type="submit" className="min-h-tap rounded-lg bg-brand px-5 text-gate font-bold text-white">
           Show cases
         </button>
-        <a href="/desk" className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand">
+        <a
+          href="/desk"
+          className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand"
+        >
           Clear
         </a>
       </div>

@@ -20,11 +20,19 @@ export default async function DeskReportsPage({ searchParams }: PageProps<'/desk
     <div className="space-y-4">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h1 className="text-gate-xl font-bold">Damage reports, last {months} months</h1>
-        <a href={`/api/desk/reports.csv?months=${months}`} className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand" download>
+        <a
+          href={`/api/desk/reports.csv?months=${months}`}
+          className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand"
+          download
+        >
           Download CSV
         </a>
       </div>
-      {!parsed.success ? <p role="alert" className="font-bold text-danger">Months must be 1 to 36; showing 12.</p> : null}
+      {!parsed.success ? (
+        <p role="alert" className="font-bold text-danger">
+          Months must be 1 to 36; showing 12.
+        </p>
+      ) : null}
       {lines.length === 0 ? (
         <EmptyState title="No cases in this period" />
       ) : (
@@ -38,9 +46,13 @@ export default async function DeskReportsPage({ searchParams }: PageProps<'/desk
               <caption className="sr-only">Damage by carrier and month</caption>
               <thead className="bg-paper-dim">
                 <tr>
-                  {['Month', 'Carrier', 'Cases', 'Estimate', 'Charged', 'Absorbed', 'Waived', 'Open'].map((h) => (
-                    <th key={h} className="p-2">{h}</th>
-                  ))}
+                  {['Month', 'Carrier', 'Cases', 'Estimate', 'Charged', 'Absorbed', 'Waived', 'Open'].map(
+                    (h) => (
+                      <th key={h} className="p-2">
+                        {h}
+                      </th>
+                    ),
+                  )}
                 </tr>
               </thead>
               <tbody>
@@ -49,9 +61,13 @@ export default async function DeskReportsPage({ searchParams }: PageProps<'/desk
                     <td className="p-2">{l.month}</td>
                     <td className="p-2 font-bold">{l.carrier}</td>
                     <td className="p-2">{l.cases}</td>
-                    {[l.estimateCents, l.chargedCents, l.absorbedCents, l.waivedCents, l.openCents].map((c, i) => (
-                      <td key={i} className="p-2">{formatCents(c)}</td>
-                    ))}
+                    {[l.estimateCents, l.chargedCents, l.absorbedCents, l.waivedCents, l.openCents].map(
+                      (c, i) => (
+                        <td key={i} className="p-2">
+                          {formatCents(c)}
+                        </td>
+                      ),
+                    )}
                   </tr>
                 ))}
               </tbody>

@@ -14,17 +14,27 @@ export const metadata: Metadata = { title: 'Trailer label' };
 export default async function ScanLinkPage({ params }: PageProps<'/l/[token]'>) {
   const user = await requireUser();
   const parsed = labelTokenSchema.safeParse((await params).token);
-  const label = parsed.success ? await resolveLabelToken(parsed.data) : ({ ok: false, error: 'not_ours' } as const);
-  if (label.ok) redirect(canOpen(user.role, 'gate') ? `/gate/trailers/${label.trailerId}` : `/trailers/${label.trailerId}`);
+  const label = parsed.success
+    ? await resolveLabelToken(parsed.data)
+    : ({ ok: false, error: 'not_ours' } as const);
+  if (label.ok)
+    redirect(
+      canOpen(user.role, 'gate') ? `/gate/trailers/${label.trailerId}` : `/trailers/${label.trailerId}`,
+    );
 
   const isReplaced = label.error === 'revoked';
   const next = canOpen(user.role, 'gate') ? '/gate' : '/yard';
   return (
-    <section className="mx-auto max-w-lg space-y-4 rounded-xl border-l-8 border-danger bg-paper p-5" aria-labelledby="label-refused">
+    <section
+      className="mx-auto max-w-lg space-y-4 rounded-xl border-l-8 border-danger bg-paper p-5"
+      aria-labelledby="label-refused"
+    >
       <h1 id="label-refused" className="text-gate-xl font-bold">
         {isReplaced ? 'Old label' : 'Label not accepted'}
       </h1>
-      <p className="text-gate-lg">{isReplaced ? replacedMessage(label.replacedAt, user.terminalTimeZone ?? 'UTC') : NOT_OUR_LABEL}</p>
+      <p className="text-gate-lg">
+        {isReplaced ? replacedMessage(label.replacedAt, user.terminalTimeZone ?? 'UTC') : NOT_OUR_LABEL}
+      </p>
       <p className="text-gate text-ink-soft">
         {isReplaced
           ? 'Look for the newer label on the trailer, or type the unit number. Tell the terminal clerk so the old label comes off.'

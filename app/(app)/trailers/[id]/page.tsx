@@ -37,14 +37,21 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
       <header>
         <h1 className="text-gate-xl font-bold">Trailer {trailer.unitNumber}</h1>
         <p className="text-gate">
-          {trailer.kind === 'reefer' ? 'Reefer' : 'Dry van'} · {trailer.ownerScac} · <span className="font-mono">{trailer.vin}</span> ·{' '}
-          {trailer.status === 'in_yard' ? `${trailer.terminalName} ${trailer.spotLabel ?? ''}` : trailer.status === 'on_road' ? 'on the road' : 'gone'}
+          {trailer.kind === 'reefer' ? 'Reefer' : 'Dry van'} · {trailer.ownerScac} ·{' '}
+          <span className="font-mono">{trailer.vin}</span> ·{' '}
+          {trailer.status === 'in_yard'
+            ? `${trailer.terminalName} ${trailer.spotLabel ?? ''}`
+            : trailer.status === 'on_road'
+              ? 'on the road'
+              : 'gone'}
         </p>
       </header>
       <ChainStatus check={chain.check} brokenAt={chain.brokenAt} timeZone={zone} />
       {openHolds.length ? (
         <section aria-labelledby="holds" className="space-y-3 rounded-xl bg-hold-bg p-3">
-          <h2 id="holds" className="text-gate-lg font-bold text-hold">Open holds</h2>
+          <h2 id="holds" className="text-gate-lg font-bold text-hold">
+            Open holds
+          </h2>
           <Caution title="Before a repair">
             {CAUTIONS.underTrailer} {CAUTIONS.outOfService} {CAUTIONS.inspection}
           </Caution>
@@ -54,30 +61,55 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
                 {h.severity === 'out_of_service' ? 'Out of service' : 'Restricted'}: {h.reason}
               </p>
               <p className="text-gate-sm text-ink-soft">placed {formatWhen(h.placedAt, zone)}</p>
-              {canRelease ? <HoldReleaseForm holdId={h.id} trailerId={trailer.id} reason={h.reason} nowLocal={nowLocal} /> : null}
+              {canRelease ? (
+                <HoldReleaseForm holdId={h.id} trailerId={trailer.id} reason={h.reason} nowLocal={nowLocal} />
+              ) : null}
             </div>
           ))}
         </section>
       ) : null}
       <nav aria-label="Filter the file" className="flex flex-wrap gap-2">
         {[undefined, ...TRAILER_FILE_KINDS].map((k) => (
-          <Link key={k ?? 'all'} href={k ? `/trailers/${id}?kind=${k}` : `/trailers/${id}`} aria-current={kind === k ? 'page' : undefined} className="inline-flex min-h-tap items-center rounded-full border-2 border-brand px-4 text-gate-sm font-bold text-brand aria-[current=page]:bg-brand aria-[current=page]:text-white">
+          <Link
+            key={k ?? 'all'}
+            href={k ? `/trailers/${id}?kind=${k}` : `/trailers/${id}`}
+            aria-current={kind === k ? 'page' : undefined}
+            className="inline-flex min-h-tap items-center rounded-full border-2 border-brand px-4 text-gate-sm font-bold text-brand aria-[current=page]:bg-brand aria-[current=page]:text-white"
+          >
             {k ? `${k}s` : 'everything'}
           </Link>
         ))}
       </nav>
-      {!query.success ? <p role="alert" className="text-gate font-bold text-danger">Unknown filter; showing everything.</p> : null}
+      {!query.success ? (
+        <p role="alert" className="text-gate font-bold text-danger">
+          Unknown filter; showing everything.
+        </p>
+      ) : null}
       <ol className="space-y-2" aria-label="Trailer history">
         {entries.map((e) => (
-          <li key={e.id} className={`rounded-lg border-l-8 bg-paper p-3 ${e.tone ? TONES[e.tone] : 'border-paper-line'}`} data-kind={e.kind}>
+          <li
+            key={e.id}
+            className={`rounded-lg border-l-8 bg-paper p-3 ${e.tone ? TONES[e.tone] : 'border-paper-line'}`}
+            data-kind={e.kind}
+          >
             <p className="text-gate-sm text-ink-soft">
               {formatWhen(e.at, zone)} · {e.kind}
             </p>
-            <p className="text-gate font-bold">{e.href ? <Link href={e.href} className="text-brand underline">{e.title}</Link> : e.title}</p>
+            <p className="text-gate font-bold">
+              {e.href ? (
+                <Link href={e.href} className="text-brand underline">
+                  {e.title}
+                </Link>
+              ) : (
+                e.title
+              )}
+            </p>
             {e.detail ? <p className="text-gate-sm">{e.detail}</p> : null}
           </li>
         ))}
-        {entries.length === 0 ? <li className="text-gate text-ink-soft">Nothing of this kind on file.</li> : null}
+        {entries.length === 0 ? (
+          <li className="text-gate text-ink-soft">Nothing of this kind on file.</li>
+        ) : null}
       </ol>
     </div>
   );

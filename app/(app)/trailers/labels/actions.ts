@@ -12,7 +12,8 @@ export type ReissueState = { ok: false; formError: string } | null;
 export async function reissueLabelAction(_prev: ReissueState, formData: FormData): Promise<ReissueState> {
   const user = await requireUser(['clerk', 'admin']);
   const parsed = reissueLabelSchema.safeParse({ trailerId: formData.get('trailerId') });
-  if (!parsed.success) return { ok: false, formError: 'That trailer could not be read. Reload the page and try again.' };
+  if (!parsed.success)
+    return { ok: false, formError: 'That trailer could not be read. Reload the page and try again.' };
   const result = await reissueLabel(parsed.data.trailerId, user.id);
   if (!result) notFound();
   revalidatePath(`/trailers/${parsed.data.trailerId}/label`);

@@ -19,21 +19,30 @@ export default async function LabelsPage({ searchParams }: PageProps<'/trailers/
 
   const parsed = labelSheetQuerySchema.safeParse({ ids: sp.ids, row: sp.row });
   if (!parsed.success) {
-    return <EmptyState title="Nothing to print">{parsed.error.issues[0]?.message} Choose trailers on the Trailers page, or a row below.</EmptyState>;
+    return (
+      <EmptyState title="Nothing to print">
+        {parsed.error.issues[0]?.message} Choose trailers on the Trailers page, or a row below.
+      </EmptyState>
+    );
   }
   const q = parsed.data;
   const trailers = await prepareLabelSheet(q.row ? { rowId: q.row } : { trailerIds: q.ids! }, user.id);
   const row = q.row ? await getRowName(q.row) : null;
-  const title = row ? `Labels for ${row.terminalName}, ${row.name}` : `Labels for ${trailers.length} trailer${trailers.length === 1 ? '' : 's'}`;
+  const title = row
+    ? `Labels for ${row.terminalName}, ${row.name}`
+    : `Labels for ${trailers.length} trailer${trailers.length === 1 ? '' : 's'}`;
   const pdfQuery = q.row ? `row=${q.row}` : `ids=${q.ids!.join(',')}`;
   return (
     <div className="space-y-4">
       <div className="no-print space-y-3">
         <h1 className="text-gate-xl font-bold">{title}</h1>
         <p className="text-gate text-ink-soft">
-          Print on plain paper or label stock, four to a Letter page. Stick the label where a driver can reach it from the ground, away from the reefer unit.
+          Print on plain paper or label stock, four to a Letter page. Stick the label where a driver can reach
+          it from the ground, away from the reefer unit.
         </p>
-        <Caution title="Putting labels on">{CAUTIONS.reefer} Stick labels on from the ground; do not climb the trailer or go under it to do so.</Caution>
+        <Caution title="Putting labels on">
+          {CAUTIONS.reefer} Stick labels on from the ground; do not climb the trailer or go under it to do so.
+        </Caution>
         <div className="flex flex-wrap gap-2">
           <PrintButton />
           <ButtonLink variant="secondary" href={`/trailers/labels/pdf?${pdfQuery}`} prefetch={false}>
@@ -42,7 +51,9 @@ export default async function LabelsPage({ searchParams }: PageProps<'/trailers/
         </div>
       </div>
       {trailers.length === 0 ? (
-        <EmptyState title="No trailers here">{row ? 'No trailer stands in this row now.' : 'None of the chosen trailers is known to Hitchmark.'}</EmptyState>
+        <EmptyState title="No trailers here">
+          {row ? 'No trailer stands in this row now.' : 'None of the chosen trailers is known to Hitchmark.'}
+        </EmptyState>
       ) : (
         <LabelSheet trailers={trailers} />
       )}
@@ -65,7 +76,10 @@ async function RowChooser() {
       <ul className="grid gap-2 sm:grid-cols-2">
         {rows.map((r) => (
           <li key={r.id}>
-            <Link href={`/trailers/labels?row=${r.id}`} className="flex min-h-tap items-center justify-between rounded-lg bg-paper px-4 text-gate font-bold">
+            <Link
+              href={`/trailers/labels?row=${r.id}`}
+              className="flex min-h-tap items-center justify-between rounded-lg bg-paper px-4 text-gate font-bold"
+            >
               <span>
                 {r.terminalName}, {r.name}
               </span>

@@ -4,7 +4,19 @@ import type { TableRow } from '@/lib/yard/types';
 type Sort = { key: SortKey; dir: SortDir };
 
 /** The board as a table; headers sort (again to reverse). Cells are the CSV export's cells. */
-export function BoardTable({ rows, timeZone, now, sort, onSort }: { rows: TableRow[]; timeZone: string; now: Date; sort: Sort; onSort: (s: Sort) => void }) {
+export function BoardTable({
+  rows,
+  timeZone,
+  now,
+  sort,
+  onSort,
+}: {
+  rows: TableRow[];
+  timeZone: string;
+  now: Date;
+  sort: Sort;
+  onSort: (s: Sort) => void;
+}) {
   return (
     <div className="overflow-x-auto rounded-lg border-2 border-paper-line bg-paper">
       <table className="w-full text-left text-gate-sm">
@@ -14,10 +26,19 @@ export function BoardTable({ rows, timeZone, now, sort, onSort }: { rows: TableR
               const key = c.key === 'gateIn' ? 'dwell' : c.key;
               const active = sort.key === key && c.key !== 'gateIn';
               return (
-                <th key={c.key} scope="col" aria-sort={active ? (sort.dir === 'asc' ? 'ascending' : 'descending') : undefined} className="whitespace-nowrap p-0">
-                  <button type="button" className="min-h-tap w-full px-2 text-left font-bold"
-                    onClick={() => onSort({ key, dir: active && sort.dir === 'asc' ? 'desc' : 'asc' })}>
-                    {c.header}{active ? (sort.dir === 'asc' ? ' ▲' : ' ▼') : ''}
+                <th
+                  key={c.key}
+                  scope="col"
+                  aria-sort={active ? (sort.dir === 'asc' ? 'ascending' : 'descending') : undefined}
+                  className="whitespace-nowrap p-0"
+                >
+                  <button
+                    type="button"
+                    className="min-h-tap w-full px-2 text-left font-bold"
+                    onClick={() => onSort({ key, dir: active && sort.dir === 'asc' ? 'desc' : 'asc' })}
+                  >
+                    {c.header}
+                    {active ? (sort.dir === 'asc' ? ' ▲' : ' ▼') : ''}
                   </button>
                 </th>
               );
@@ -28,7 +49,12 @@ export function BoardTable({ rows, timeZone, now, sort, onSort }: { rows: TableR
           {rows.map((r) => (
             <tr key={r.trailer.id} className="border-t border-paper-line">
               {rowCells(r, timeZone, now).map((cell, i) => (
-                <td key={COLUMNS[i].key} className={`px-2 py-1 ${i === 0 ? 'font-bold' : ''} ${i === 5 && cell !== 'None' ? 'text-hold' : ''}`}>{cell}</td>
+                <td
+                  key={COLUMNS[i].key}
+                  className={`px-2 py-1 ${i === 0 ? 'font-bold' : ''} ${i === 5 && cell !== 'None' ? 'text-hold' : ''}`}
+                >
+                  {cell}
+                </td>
               ))}
             </tr>
           ))}

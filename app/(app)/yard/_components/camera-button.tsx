@@ -14,12 +14,25 @@ export function CameraButton({ label, onText }: { label: string; onText: (text: 
   const isLive = camera === 'starting' || camera === 'scanning';
   return (
     <div className="space-y-1">
-      <video ref={videoRef} muted playsInline aria-label="Camera view" className={isLive ? 'aspect-[4/3] w-full rounded-xl bg-ink object-cover' : 'hidden'} />
-      <button type="button" onClick={() => (isLive ? stop() : void start())}
-        className="min-h-tap w-full rounded-lg border-2 border-brand bg-paper px-4 text-gate font-bold text-brand">
+      <video
+        ref={videoRef}
+        muted
+        playsInline
+        aria-label="Camera view"
+        className={isLive ? 'aspect-[4/3] w-full rounded-xl bg-ink object-cover' : 'hidden'}
+      />
+      <button
+        type="button"
+        onClick={() => (isLive ? stop() : void start())}
+        className="min-h-tap w-full rounded-lg border-2 border-brand bg-paper px-4 text-gate font-bold text-brand"
+      >
         {isLive ? 'Stop camera' : label}
       </button>
-      {camera in PROBLEMS ? <p role="alert" className="text-gate-sm font-bold text-danger">{PROBLEMS[camera as keyof typeof PROBLEMS]}</p> : null}
+      {camera in PROBLEMS ? (
+        <p role="alert" className="text-gate-sm font-bold text-danger">
+          {PROBLEMS[camera as keyof typeof PROBLEMS]}
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -13,5 +13,9 @@ async function fetchBoard(url: string): Promise<Board> {
 
 /** The live board: refreshed every 5 s and on focus, so two screens agree within seconds. */
 export function useBoard(initial?: Board) {
-  return useSWR<Board>(BOARD_KEY, fetchBoard, { fallbackData: initial, refreshInterval: 5000, revalidateOnFocus: true });
+  return useSWR<Board>(BOARD_KEY, fetchBoard, {
+    fallbackData: initial,
+    refreshInterval: 5000,
+    revalidateOnFocus: true,
+  });
 }

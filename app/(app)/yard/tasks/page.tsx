@@ -22,13 +22,21 @@ export default async function TasksPage() {
       <h1 className="text-gate-xl font-bold">Yard tasks</h1>
       <Caution title="Reefer units">{CAUTIONS.reefer}</Caution>
       {tasks.length === 0 ? (
-        <EmptyState title="Nothing to do">Tasks appear here when a yard walk finds low fuel, a unit off on a loaded reefer, open doors or a missing seal.</EmptyState>
+        <EmptyState title="Nothing to do">
+          Tasks appear here when a yard walk finds low fuel, a unit off on a loaded reefer, open doors or a
+          missing seal.
+        </EmptyState>
       ) : (
         <ul className="space-y-2">
           {tasks.map((t) => (
             <li key={t.id} className="rounded-lg bg-paper p-3 shadow">
-              <p className="text-gate font-bold">{TASK_LABELS[t.kind]}: {t.unitNumber}{t.spotLabel ? ` in ${t.spotLabel}` : ''}</p>
-              <p className="text-gate-sm text-ink-soft">{t.note} Found {formatLocal(t.createdAt.toISOString(), tz)}.</p>
+              <p className="text-gate font-bold">
+                {TASK_LABELS[t.kind]}: {t.unitNumber}
+                {t.spotLabel ? ` in ${t.spotLabel}` : ''}
+              </p>
+              <p className="text-gate-sm text-ink-soft">
+                {t.note} Found {formatLocal(t.createdAt.toISOString(), tz)}.
+              </p>
               <ActionForm action={clearTaskAction} submitLabel="Clear" variant="secondary">
                 <input type="hidden" name="id" value={t.id} />
               </ActionForm>

@@ -16,7 +16,12 @@ const NO_TERMINAL: ActionState = { ok: false, message: 'Your account has no home
 export async function startWalkAction(_prev: ActionState, data: FormData): Promise<ActionState> {
   const user = await requireUser(SECTION_ROLES.yard);
   const parsed = startWalkSchema.safeParse({ rowIds: data.getAll('rowIds') });
-  if (!parsed.success) return { ok: false, message: parsed.error.issues[0].message, fieldErrors: z.flattenError(parsed.error).fieldErrors as Record<string, string[]> };
+  if (!parsed.success)
+    return {
+      ok: false,
+      message: parsed.error.issues[0].message,
+      fieldErrors: z.flattenError(parsed.error).fieldErrors as Record<string, string[]>,
+    };
   if (!user.terminalId) return NO_TERMINAL;
   const walk = await startWalk(user.terminalId, user.id, parsed.data.rowIds);
   if (!walk.ok) return { ok: false, message: walk.message };

@@ -14,21 +14,30 @@ export const metadata: Metadata = { title: 'Yard walks' };
 
 export default async function WalksPage() {
   const user = await requireUser(SECTION_ROLES.yard);
-  if (!user.terminalId) return <EmptyState title="No home terminal">Ask an admin to set your home terminal.</EmptyState>;
-  const [{ rows }, walks] = await Promise.all([listLayout(user.terminalId), listRecentWalks(user.terminalId)]);
+  if (!user.terminalId)
+    return <EmptyState title="No home terminal">Ask an admin to set your home terminal.</EmptyState>;
+  const [{ rows }, walks] = await Promise.all([
+    listLayout(user.terminalId),
+    listRecentWalks(user.terminalId),
+  ]);
   const tz = user.terminalTimeZone ?? 'UTC';
   return (
     <div className="space-y-4">
       <YardNav current="/yard/walks" />
       <h1 className="text-gate-xl font-bold">Yard walk</h1>
       <section aria-labelledby="start-title" className="rounded-xl bg-paper p-4 shadow">
-        <h2 id="start-title" className="text-gate-lg font-bold">Start a walk</h2>
+        <h2 id="start-title" className="text-gate-lg font-bold">
+          Start a walk
+        </h2>
         <ActionForm action={startWalkAction} submitLabel="Start walk">
           <fieldset className="w-full">
             <legend className="text-gate font-bold">Rows to walk</legend>
             <div className="mt-1 flex flex-wrap gap-2">
               {rows.map((r) => (
-                <label key={r.id} className="flex min-h-tap items-center gap-2 rounded-lg border-2 border-paper-line px-3 text-gate">
+                <label
+                  key={r.id}
+                  className="flex min-h-tap items-center gap-2 rounded-lg border-2 border-paper-line px-3 text-gate"
+                >
                   <input type="checkbox" name="rowIds" value={r.id} className="size-5" /> {r.name}
                 </label>
               ))}
@@ -37,14 +46,24 @@ export default async function WalksPage() {
         </ActionForm>
       </section>
       <section aria-labelledby="recent-title">
-        <h2 id="recent-title" className="text-gate-lg font-bold">Recent walks</h2>
-        {walks.length === 0 ? <p className="text-gate">No walks yet.</p> : (
+        <h2 id="recent-title" className="text-gate-lg font-bold">
+          Recent walks
+        </h2>
+        {walks.length === 0 ? (
+          <p className="text-gate">No walks yet.</p>
+        ) : (
           <ul className="space-y-1">
             {walks.map((w) => (
               <li key={w.id}>
-                <Link href={`/yard/walks/${w.id}`} className="flex min-h-tap items-center gap-2 rounded-lg bg-paper px-3 text-gate underline">
-                  {formatLocal(w.startedAt.toISOString(), tz)} · {w.startedBy} · {w.status === 'finished' ? 'finished' : 'in progress'}
-                  {w.summary ? ` · ${w.summary.matched ?? 0} matched, ${w.summary.wrong_slot ?? 0} wrong slot, ${w.summary.missing ?? 0} missing, ${w.summary.unknown ?? 0} unknown` : ''}
+                <Link
+                  href={`/yard/walks/${w.id}`}
+                  className="flex min-h-tap items-center gap-2 rounded-lg bg-paper px-3 text-gate underline"
+                >
+                  {formatLocal(w.startedAt.toISOString(), tz)} · {w.startedBy} ·{' '}
+                  {w.status === 'finished' ? 'finished' : 'in progress'}
+                  {w.summary
+                    ? ` · ${w.summary.matched ?? 0} matched, ${w.summary.wrong_slot ?? 0} wrong slot, ${w.summary.missing ?? 0} missing, ${w.summary.unknown ?? 0} unknown`
+                    : ''}
                 </Link>
               </li>
             ))}

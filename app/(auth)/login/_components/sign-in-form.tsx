@@ -6,7 +6,10 @@ import { Field, FormError } from '@/app/_components/field';
 import { signInAction, type SignInState } from '../../actions';
 
 export function SignInForm({ next }: { next?: string }) {
-  const [state, formAction, pending] = useActionState<SignInState, FormData>(signInAction, { ok: false, method: 'driver' });
+  const [state, formAction, pending] = useActionState<SignInState, FormData>(signInAction, {
+    ok: false,
+    method: 'driver',
+  });
   const [method, setMethod] = useState<'driver' | 'staff'>(state.method);
   const errors = state.fieldErrors ?? {};
   return (
@@ -30,13 +33,44 @@ export function SignInForm({ next }: { next?: string }) {
         {next ? <input type="hidden" name="next" value={next} /> : null}
         {method === 'driver' ? (
           <>
-            <Field label="Driver number" name="driverNumber" autoComplete="username" autoCapitalize="characters" required defaultValue={state.values?.driverNumber} error={errors.driverNumber} />
-            <Field label="PIN" name="pin" type="password" inputMode="numeric" autoComplete="current-password" required error={errors.pin} />
+            <Field
+              label="Driver number"
+              name="driverNumber"
+              autoComplete="username"
+              autoCapitalize="characters"
+              required
+              defaultValue={state.values?.driverNumber}
+              error={errors.driverNumber}
+            />
+            <Field
+              label="PIN"
+              name="pin"
+              type="password"
+              inputMode="numeric"
+              autoComplete="current-password"
+              required
+              error={errors.pin}
+            />
           </>
         ) : (
           <>
-            <Field label="E-mail" name="email" type="email" autoComplete="username" required defaultValue={state.values?.email} error={errors.email} />
-            <Field label="Password" name="password" type="password" autoComplete="current-password" required error={errors.password} />
+            <Field
+              label="E-mail"
+              name="email"
+              type="email"
+              autoComplete="username"
+              required
+              defaultValue={state.values?.email}
+              error={errors.email}
+            />
+            <Field
+              label="Password"
+              name="password"
+              type="password"
+              autoComplete="current-password"
+              required
+              error={errors.password}
+            />
           </>
         )}
         <FormError message={state.formError} />

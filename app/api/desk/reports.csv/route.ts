@@ -12,6 +12,9 @@ export async function GET(request: Request) {
   if (!parsed.success) return invalid(parsed.error, 'months must be a whole number from 1 to 36.');
   const csv = reportCsv(summarizeCases(await listReportCases(parsed.data.months)));
   return new Response(csv, {
-    headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="hitchmark-damage-${parsed.data.months}m.csv"` },
+    headers: {
+      'content-type': 'text/csv; charset=utf-8',
+      'content-disposition': `attachment; filename="hitchmark-damage-${parsed.data.months}m.csv"`,
+    },
   });
 }

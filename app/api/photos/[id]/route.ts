@@ -15,6 +15,10 @@ export async function GET(_request: Request, ctx: RouteContext<'/api/photos/[id]
   const body = await streamObject(photo.objectKey);
   if (!body) return apiError('not_found', 'The photo file is missing.');
   return new Response(body, {
-    headers: { 'content-type': photo.contentType, 'cache-control': 'private, max-age=3600', 'x-content-type-options': 'nosniff' },
+    headers: {
+      'content-type': photo.contentType,
+      'cache-control': 'private, max-age=3600',
+      'x-content-type-options': 'nosniff',
+    },
   });
 }

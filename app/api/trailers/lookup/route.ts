@@ -18,7 +18,8 @@ export async function GET(request: Request) {
 
   if (q.token !== undefined) {
     const label = await resolveLabelToken(q.token);
-    if (!label.ok && label.error === 'revoked') return apiError('gone', replacedMessage(label.replacedAt, user.terminalTimeZone ?? 'UTC'));
+    if (!label.ok && label.error === 'revoked')
+      return apiError('gone', replacedMessage(label.replacedAt, user.terminalTimeZone ?? 'UTC'));
     if (!label.ok) return apiError('invalid', NOT_OUR_LABEL, { token: [NOT_OUR_LABEL] });
     const trailer = await getTrailerById(label.trailerId);
     if (!trailer) return apiError('not_found', 'This label belongs to a trailer Hitchmark no longer knows.');
@@ -26,7 +27,11 @@ export async function GET(request: Request) {
   }
   if (q.unit !== undefined) {
     const trailer = await getTrailerByUnit(q.unit);
-    if (!trailer) return apiError('not_found', `No trailer with unit number ${q.unit}. Check the number on the nose or the doors.`);
+    if (!trailer)
+      return apiError(
+        'not_found',
+        `No trailer with unit number ${q.unit}. Check the number on the nose or the doors.`,
+      );
     return Response.json({ trailer, via: 'unit' });
   }
   const trailer = await getTrailerByVin(q.vin!);

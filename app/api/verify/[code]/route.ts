@@ -10,10 +10,21 @@ export async function GET(_request: Request, ctx: RouteContext<'/api/verify/[cod
   if (!r) return apiError('not_found', 'No receipt has this code.');
   return Response.json({
     receipt: {
-      unitNumber: r.unitNumber, kind: r.kind, occurredAt: r.occurredAt, terminalName: r.terminalName, carrierName: r.carrierName,
-      driverName: r.driverName, tractorNumber: r.tractorNumber, isLoaded: r.isLoaded, sealNumber: r.sealNumber,
-      fuelEighths: r.fuelEighths, verificationCode: r.verificationCode, contentHash: r.contentHash,
-      findings: r.findings.map((f) => ({ kind: f.kind, reason: f.reason })), holds: r.holds, photoCount: r.photos.length,
+      unitNumber: r.unitNumber,
+      kind: r.kind,
+      occurredAt: r.occurredAt,
+      terminalName: r.terminalName,
+      carrierName: r.carrierName,
+      driverName: r.driverName,
+      tractorNumber: r.tractorNumber,
+      isLoaded: r.isLoaded,
+      sealNumber: r.sealNumber,
+      fuelEighths: r.fuelEighths,
+      verificationCode: r.verificationCode,
+      contentHash: r.contentHash,
+      findings: r.findings.map((f) => ({ kind: f.kind, reason: f.reason })),
+      holds: r.holds,
+      photoCount: r.photos.length,
     },
   });
 }

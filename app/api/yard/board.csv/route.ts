@@ -22,7 +22,9 @@ export async function GET(request: Request) {
   const now = new Date(board.generatedAt);
   const rows = sortRows(
     filterRows(tableRows(board), parsed.data.filter as BoardFilter[], board.policy, now),
-    parsed.data.sort as SortKey, parsed.data.dir as SortDir, now,
+    parsed.data.sort as SortKey,
+    parsed.data.dir as SortDir,
+    now,
   );
   const stamp = board.generatedAt.slice(0, 16).replace(/[-:T]/g, '');
   return new Response(boardCsv(rows, board.terminal.timeZone, now), {

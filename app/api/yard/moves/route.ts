@@ -16,10 +16,21 @@ export async function POST(request: Request) {
   if (!parsed.success) return invalid(parsed.error);
   if (!user.terminalId) return noTerminal();
   const trailerId = await findTrailerIdByScan(parsed.data.unit);
-  if (!trailerId) return apiError('not_found', `No trailer matches ${parsed.data.unit}.`, { unit: ['No trailer with that unit number, VIN or label.'] });
+  if (!trailerId)
+    return apiError('not_found', `No trailer matches ${parsed.data.unit}.`, {
+      unit: ['No trailer with that unit number, VIN or label.'],
+    });
   const spot = await findSpotByLabel(user.terminalId, parsed.data.target);
-  if (!spot) return apiError('not_found', `No slot or door ${parsed.data.target} in this yard.`, { target: ['No such slot or door in this yard.'] });
-  const result = await moveTrailer({ terminalId: user.terminalId, actorId: user.id, trailerId, toSpotId: spot.id });
+  if (!spot)
+    return apiError('not_found', `No slot or door ${parsed.data.target} in this yard.`, {
+      target: ['No such slot or door in this yard.'],
+    });
+  const result = await moveTrailer({
+    terminalId: user.terminalId,
+    actorId: user.id,
+    trailerId,
+    toSpotId: spot.id,
+  });
   if (!result.ok) return refusalResponse(result);
   return Response.json(result, { status: 201 });
 }

@@ -29,7 +29,10 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
   const [evidence, events] = await Promise.all([getCaseEvidence(c), listCaseEvents(c.id)]);
   const after = evidence.handoffs.find((h) => h.id === c.handoffId);
   const befores = evidence.handoffs.filter((h) => h.id !== c.handoffId).map((h) => h.occurredAt.getTime());
-  const custody = after && befores.length ? await listCustodyEvents(c.trailerId, new Date(Math.min(...befores)), after.occurredAt) : [];
+  const custody =
+    after && befores.length
+      ? await listCustodyEvents(c.trailerId, new Date(Math.min(...befores)), after.occurredAt)
+      : [];
   const amount = effectiveAmountCents(c);
   const isUnsafe = evidence.findings.some((f) => f.condition === 'unsafe');
   const tz = c.timeZone;
@@ -45,11 +48,15 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
           Trailer {c.unitNumber} <CaseStateBadge state={c.state} />
         </h1>
         <p className="text-gate">
-          {c.terminalName} · {after ? `${after.kind === 'drop' ? 'drop' : 'hook'} on ${formatWhen(after.occurredAt, tz)}` : ''} · proposed: <span className="font-bold">{c.carrierName ?? 'no single carrier'}</span>
+          {c.terminalName} ·{' '}
+          {after ? `${after.kind === 'drop' ? 'drop' : 'hook'} on ${formatWhen(after.occurredAt, tz)}` : ''} ·
+          proposed: <span className="font-bold">{c.carrierName ?? 'no single carrier'}</span>
         </p>
         <p className="text-gate">
           Estimate <span className="font-bold">{formatCents(amount)}</span>
-          {c.overrideCents !== null ? ` (set by the clerk: ${c.overrideReason}; rate card ${formatCents(c.estimateCents)})` : ' from the rate card'}
+          {c.overrideCents !== null
+            ? ` (set by the clerk: ${c.overrideReason}; rate card ${formatCents(c.estimateCents)})`
+            : ' from the rate card'}
           {c.decision ? ` · decided: ${c.decision}, charged ${formatCents(c.chargedCents ?? 0)}` : ''}
           {c.disputeDeadline ? ` · dispute until ${formatWhen(c.disputeDeadline, tz)}` : ''}
         </p>
@@ -63,21 +70,46 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
       <div className="grid gap-4 lg:grid-cols-[1fr_22rem]">
         <div className="space-y-4">
           <section aria-labelledby="evidence" className="space-y-3">
-            <h2 id="evidence" className="text-gate-lg font-bold">Evidence, before and after</h2>
+            <h2 id="evidence" className="text-gate-lg font-bold">
+              Evidence, before and after
+            </h2>
             {evidence.findings.map((f) => (
-              <EvidencePair key={f.id} finding={f} evidence={evidence} afterHandoffId={c.handoffId} timeZone={tz} />
+              <EvidencePair
+                key={f.id}
+                finding={f}
+                evidence={evidence}
+                afterHandoffId={c.handoffId}
+                timeZone={tz}
+              />
             ))}
           </section>
-          <TrailerDiagram damagedZones={[...new Set(evidence.findings.map((f) => itemZone(f.itemKey)))]} isReefer={c.trailerKind === 'reefer'} axles={c.axleCount} />
+          <TrailerDiagram
+            damagedZones={[...new Set(evidence.findings.map((f) => itemZone(f.itemKey)))]}
+            isReefer={c.trailerKind === 'reefer'}
+            axles={c.axleCount}
+          />
           <section aria-labelledby="custody" className="space-y-2 rounded-xl bg-paper p-3">
-            <h2 id="custody" className="text-gate-lg font-bold">Custody between the two inspections</h2>
+            <h2 id="custody" className="text-gate-lg font-bold">
+              Custody between the two inspections
+            </h2>
             <CustodyTimeline events={custody} timeZone={tz} />
           </section>
         </div>
         <aside className="space-y-4">
-          <CaseActions caseId={c.id} trailerId={c.trailerId} itemKey={evidence.findings[0]?.itemKey ?? 'left_side.skin'} state={c.state} role={user.role} carrierEmail={c.carrierEmail} amountDollars={centsToDollarsText(amount)} isDisputeOpen={isWithinDisputeWindow(c.disputeDeadline, new Date())} />
+          <CaseActions
+            caseId={c.id}
+            trailerId={c.trailerId}
+            itemKey={evidence.findings[0]?.itemKey ?? 'left_side.skin'}
+            state={c.state}
+            role={user.role}
+            carrierEmail={c.carrierEmail}
+            amountDollars={centsToDollarsText(amount)}
+            isDisputeOpen={isWithinDisputeWindow(c.disputeDeadline, new Date())}
+          />
           <section aria-labelledby="history">
-            <h2 id="history" className="text-gate-lg font-bold">History</h2>
+            <h2 id="history" className="text-gate-lg font-bold">
+              History
+            </h2>
             <CaseHistory events={events} timeZone={tz} />
           </section>
         </aside>

@@ -17,10 +17,16 @@ export default async function ReceiptPage({ params }: PageProps<'/gate/receipts/
   if (!receipt) notFound();
   return (
     <div className="mx-auto max-w-xl space-y-4">
-      <h1 className="text-gate-xl font-bold">Receipt: {receipt.kind} of {receipt.unitNumber}</h1>
-      <p className="text-gate">Recorded. A copy goes by e-mail; anyone holding it can check it on the verify page.</p>
+      <h1 className="text-gate-xl font-bold">
+        Receipt: {receipt.kind} of {receipt.unitNumber}
+      </h1>
+      <p className="text-gate">
+        Recorded. A copy goes by e-mail; anyone holding it can check it on the verify page.
+      </p>
       <ReceiptSummary receipt={receipt} showPhotos />
-      <ButtonLink href="/gate" className="w-full">Next trailer</ButtonLink>
+      <ButtonLink href="/gate" className="w-full">
+        Next trailer
+      </ButtonLink>
     </div>
   );
 }

@@ -39,7 +39,12 @@ export default async function HandoffStartPage({ params, searchParams }: PagePro
             condition={condition}
             kind={kind}
             carriers={carriers}
-            defaults={{ carrierId: user.role === 'driver' ? (user.carrierId ?? '') : '', driverName: user.role === 'driver' ? user.name : '', isDriver: user.role === 'driver', carrierName: user.carrierName }}
+            defaults={{
+              carrierId: user.role === 'driver' ? (user.carrierId ?? '') : '',
+              driverName: user.role === 'driver' ? user.name : '',
+              isDriver: user.role === 'driver',
+              carrierName: user.carrierName,
+            }}
           />
         </>
       )}

@@ -2,7 +2,15 @@ import { formatWhen } from '@/lib/engine';
 import type { ChainCheck } from '@/lib/handoff-hash';
 
 /** Whether the trailer's handoff records still hash to what was stored when they were made. */
-export function ChainStatus({ check, brokenAt, timeZone }: { check: ChainCheck; brokenAt: Date | null; timeZone: string }) {
+export function ChainStatus({
+  check,
+  brokenAt,
+  timeZone,
+}: {
+  check: ChainCheck;
+  brokenAt: Date | null;
+  timeZone: string;
+}) {
   if (check.ok) {
     return (
       <p role="status" className="rounded-lg border-l-8 border-ok bg-ok-bg p-3 text-gate font-bold text-ok">
@@ -11,9 +19,13 @@ export function ChainStatus({ check, brokenAt, timeZone }: { check: ChainCheck; 
     );
   }
   return (
-    <p role="alert" className="rounded-lg border-l-8 border-danger bg-danger-bg p-3 text-gate font-bold text-danger">
+    <p
+      role="alert"
+      className="rounded-lg border-l-8 border-danger bg-danger-bg p-3 text-gate font-bold text-danger"
+    >
       Record of {brokenAt ? formatWhen(brokenAt, timeZone) : 'an unknown date'} changed after the fact
-      {check.why === 'link_broken' ? ' (its link to the record before it is broken)' : ''}. Every later record is unproven.
+      {check.why === 'link_broken' ? ' (its link to the record before it is broken)' : ''}. Every later record
+      is unproven.
     </p>
   );
 }

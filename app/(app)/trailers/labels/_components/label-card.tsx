@@ -15,8 +15,13 @@ export function LabelCard({ unitNumber, vin, ownerScac, link, qrSvg }: LabelCard
       aria-label={`Label for trailer ${unitNumber}`}
       className="label-card flex flex-col items-center rounded-lg border-2 border-dashed border-paper-line bg-white p-4 text-black print:rounded-none print:border-ink-faint"
     >
-      <p className="text-center font-bold leading-none tracking-tight text-[clamp(3rem,16vw,5.5rem)] print:text-[64pt]">{unitNumber}</p>
-      <div className="mt-2 w-full max-w-[18rem] print:max-w-[2.9in] [&>svg]:h-auto [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: qrSvg }} />
+      <p className="text-center font-bold leading-none tracking-tight text-[clamp(3rem,16vw,5.5rem)] print:text-[64pt]">
+        {unitNumber}
+      </p>
+      <div
+        className="mt-2 w-full max-w-[18rem] print:max-w-[2.9in] [&>svg]:h-auto [&>svg]:w-full"
+        dangerouslySetInnerHTML={{ __html: qrSvg }}
+      />
       <figcaption className="mt-1 text-center font-mono text-[0.8rem] leading-snug print:text-[8pt]">
         <span>VIN {vin}</span> <span className="ml-2">Owner {ownerScac}</span>
         <span className="block text-ink-faint">Hitchmark trailer label · scan at the gate</span>

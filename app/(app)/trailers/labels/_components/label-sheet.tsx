@@ -21,7 +21,14 @@ export async function LabelSheet({ trailers }: { trailers: SheetTrailer[] }) {
   return (
     <div className="label-sheet grid gap-4 sm:grid-cols-2 print:grid-cols-2 print:gap-0">
       {cards.map((c) => (
-        <LabelCard key={c.id} unitNumber={c.unitNumber} vin={c.vin} ownerScac={c.ownerScac} link={c.link} qrSvg={c.qrSvg} />
+        <LabelCard
+          key={c.id}
+          unitNumber={c.unitNumber}
+          vin={c.vin}
+          ownerScac={c.ownerScac}
+          link={c.link}
+          qrSvg={c.qrSvg}
+        />
       ))}
     </div>
   );

@@ -12,7 +12,8 @@ export function ReissueForm({ trailerId, unitNumber }: { trailerId: string; unit
     <form action={action} className="space-y-2 rounded-xl bg-paper p-4">
       <h2 className="text-gate-lg font-bold">Re-issue this label</h2>
       <p className="text-gate">
-        Use this when the label on {unitNumber} is torn, faded or lost. The old label stops working at once; a driver who scans it is told to use the new one.
+        Use this when the label on {unitNumber} is torn, faded or lost. The old label stops working at once; a
+        driver who scans it is told to use the new one.
       </p>
       <input type="hidden" name="trailerId" value={trailerId} />
       <FormError message={state?.formError} />

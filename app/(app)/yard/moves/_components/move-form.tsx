@@ -23,14 +23,22 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
     const data = Object.fromEntries(new FormData(form));
     setPending(true);
     try {
-      const res = await fetch('/api/yard/moves', { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(data) });
+      const res = await fetch('/api/yard/moves', {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json' },
+        body: JSON.stringify(data),
+      });
       const body = await res.json();
       if (res.ok) {
         setResult({ ok: true, ...body });
         form.reset();
         await mutate(BOARD_KEY);
       } else {
-        setResult({ ok: false, message: body.message ?? 'The move was not recorded.', fieldErrors: body.fieldErrors });
+        setResult({
+          ok: false,
+          message: body.message ?? 'The move was not recorded.',
+          fieldErrors: body.fieldErrors,
+        });
       }
     } catch {
       setResult({ ok: false, message: 'No connection: the move was not recorded. Try again when online.' });
@@ -44,25 +52,59 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
     if (input) input.value = text.trim();
   }
 
-  const errors = result && !result.ok ? result.fieldErrors ?? {} : {};
+  const errors = result && !result.ok ? (result.fieldErrors ?? {}) : {};
   return (
     <form data-move onSubmit={submit} noValidate className="space-y-2 rounded-xl bg-paper p-4 shadow">
-      <Field label="Unit" name="unit" list="yard-units" autoCapitalize="characters" autoComplete="off" required hint="Unit number, VIN or label" error={errors.unit} />
+      <Field
+        label="Unit"
+        name="unit"
+        list="yard-units"
+        autoCapitalize="characters"
+        autoComplete="off"
+        required
+        hint="Unit number, VIN or label"
+        error={errors.unit}
+      />
       <CameraButton label="Scan trailer label" onText={(t) => fill(t, 'unit')} />
-      <datalist id="yard-units">{units.map((u) => <option key={u} value={u} />)}</datalist>
-      <Field label="To slot or door" name="target" list="free-spots" autoCapitalize="characters" autoComplete="off" required error={errors.target} />
+      <datalist id="yard-units">
+        {units.map((u) => (
+          <option key={u} value={u} />
+        ))}
+      </datalist>
+      <Field
+        label="To slot or door"
+        name="target"
+        list="free-spots"
+        autoCapitalize="characters"
+        autoComplete="off"
+        required
+        error={errors.target}
+      />
       <CameraButton label="Scan slot label" onText={(t) => fill(t, 'target')} />
-      <datalist id="free-spots">{freeSpots.map((s) => <option key={s} value={s} />)}</datalist>
-      <Button type="submit" disabled={pending}>{pending ? 'Recording…' : 'Record move'}</Button>
+      <datalist id="free-spots">
+        {freeSpots.map((s) => (
+          <option key={s} value={s} />
+        ))}
+      </datalist>
+      <Button type="submit" disabled={pending}>
+        {pending ? 'Recording…' : 'Record move'}
+      </Button>
       <FormError message={result && !result.ok && !result.fieldErrors ? result.message : null} />
       <div aria-live="polite">
         {result?.ok ? (
           <div className="space-y-2">
-            <p role="status" className="rounded-lg border-2 border-ok bg-ok-bg p-3 text-gate font-bold text-ok">
-              Moved {result.unitNumber}{result.fromLabel ? ` from ${result.fromLabel}` : ''} to {result.toLabel}.
+            <p
+              role="status"
+              className="rounded-lg border-2 border-ok bg-ok-bg p-3 text-gate font-bold text-ok"
+            >
+              Moved {result.unitNumber}
+              {result.fromLabel ? ` from ${result.fromLabel}` : ''} to {result.toLabel}.
             </p>
             {result.isOutOfService ? (
-              <Caution title="Out of service">{result.unitNumber} has an out-of-service hold. {CAUTIONS.outOfService} It must not go on a public road.</Caution>
+              <Caution title="Out of service">
+                {result.unitNumber} has an out-of-service hold. {CAUTIONS.outOfService} It must not go on a
+                public road.
+              </Caution>
             ) : null}
           </div>
         ) : null}

@@ -23,9 +23,21 @@ export default async function WalkPage({ params }: { params: Promise<{ id: strin
       <YardNav current="/yard/walks" />
       <h1 className="text-gate-xl font-bold">Yard walk: {rowNames}</h1>
       {walk.status === 'in_progress' ? (
-        <WalkScanner walkId={walk.id} spots={walk.spots} stored={walk.scans.map((s) => ({ clientKey: s.clientKey, text: s.scannedText, unitNumber: s.unitNumber, spotLabel: s.spotLabel }))} />
+        <WalkScanner
+          walkId={walk.id}
+          spots={walk.spots}
+          stored={walk.scans.map((s) => ({
+            clientKey: s.clientKey,
+            text: s.scannedText,
+            unitNumber: s.unitNumber,
+            spotLabel: s.spotLabel,
+          }))}
+        />
       ) : (
-        <WalkResult summary={walk.summary ?? {}} outcomes={await listWalkOutcomes(walk.id, user.terminalId)} />
+        <WalkResult
+          summary={walk.summary ?? {}}
+          outcomes={await listWalkOutcomes(walk.id, user.terminalId)}
+        />
       )}
     </div>
   );

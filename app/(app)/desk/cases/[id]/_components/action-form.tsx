@@ -8,7 +8,21 @@ import type { CaseActionState } from '../../../actions';
 type Action = (prev: CaseActionState, formData: FormData) => Promise<CaseActionState>;
 
 /** One case command as a form: hidden case id, the given fields, a pending-aware submit, messages. */
-export function ActionForm({ action, caseId, submit, title, children, variant }: { action: Action; caseId: string; submit: string; title: string; children?: React.ReactNode; variant?: 'primary' | 'secondary' | 'danger' }) {
+export function ActionForm({
+  action,
+  caseId,
+  submit,
+  title,
+  children,
+  variant,
+}: {
+  action: Action;
+  caseId: string;
+  submit: string;
+  title: string;
+  children?: React.ReactNode;
+  variant?: 'primary' | 'secondary' | 'danger';
+}) {
   const [state, formAction, isPending] = useActionState(action, { ok: false });
   const err = (name: string) => state.fieldErrors?.[name]?.[0];
   return (
@@ -36,4 +50,5 @@ export function ActionForm({ action, caseId, submit, title, children, variant }:
   );
 }
 
-export const inputClass = 'mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-3 text-gate';
+export const inputClass =
+  'mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-3 text-gate';

@@ -1,9 +1,27 @@
 import { formatWhen } from '@/lib/engine';
 import { PhotoZoom } from './photo-zoom';
 
-type Event = { id: string; kind: string; fromState: string | null; toState: string | null; note: string | null; createdAt: Date; actorName: string | null; actorRole: string | null; photoIds: string[] };
+type Event = {
+  id: string;
+  kind: string;
+  fromState: string | null;
+  toState: string | null;
+  note: string | null;
+  createdAt: Date;
+  actorName: string | null;
+  actorRole: string | null;
+  photoIds: string[];
+};
 
-const WORDS: Record<string, string> = { opened: 'Opened', estimated: 'Estimated', notify: 'Carrier notified', dispute: 'Disputed', decide: 'Decided', close: 'Closed', override: 'Estimate changed' };
+const WORDS: Record<string, string> = {
+  opened: 'Opened',
+  estimated: 'Estimated',
+  notify: 'Carrier notified',
+  dispute: 'Disputed',
+  decide: 'Decided',
+  close: 'Closed',
+  override: 'Estimate changed',
+};
 
 export function CaseHistory({ events, timeZone }: { events: Event[]; timeZone: string }) {
   return (
@@ -11,7 +29,11 @@ export function CaseHistory({ events, timeZone }: { events: Event[]; timeZone: s
       {events.map((e) => (
         <li key={e.id} className="rounded-lg bg-paper p-2 text-gate-sm">
           <span className="font-bold">{WORDS[e.kind] ?? e.kind}</span> · {formatWhen(e.createdAt, timeZone)}
-          {e.actorName ? ` · ${e.actorName} (${e.actorRole})` : e.kind === 'dispute' ? ' · via the e-mailed link' : ''}
+          {e.actorName
+            ? ` · ${e.actorName} (${e.actorRole})`
+            : e.kind === 'dispute'
+              ? ' · via the e-mailed link'
+              : ''}
           {e.note ? <p className="mt-1 text-ink-soft">{e.note}</p> : null}
           {e.photoIds.length ? (
             <div className="mt-2 grid grid-cols-2 gap-2">

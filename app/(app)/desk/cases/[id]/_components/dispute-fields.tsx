@@ -15,7 +15,13 @@ export function DisputeFields({ trailerId, itemKey }: { trailerId: string; itemK
         <textarea name="note" required minLength={10} rows={4} className={`${inputClass} py-2`} />
       </label>
       <input type="hidden" name="photoIds" value={photos.map((p) => p.id).join(',')} />
-      <PhotoCapture trailerId={trailerId} itemKey={itemKey} label="your evidence" photos={photos} onAdd={(p) => setPhotos((list) => [...list, p])} />
+      <PhotoCapture
+        trailerId={trailerId}
+        itemKey={itemKey}
+        label="your evidence"
+        photos={photos}
+        onAdd={(p) => setPhotos((list) => [...list, p])}
+      />
     </>
   );
 }

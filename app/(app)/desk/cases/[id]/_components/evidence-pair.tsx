@@ -3,7 +3,12 @@ import { itemLabel } from '@/lib/desk/item-labels';
 import { CONDITION_LABELS, formatWhen, type Condition } from '@/lib/engine';
 import { PhotoZoom } from './photo-zoom';
 
-type Side = { title: string; handoff: CaseEvidence['handoffs'][number] | undefined; item: CaseEvidence['items'][number] | undefined; photoIds: string[] };
+type Side = {
+  title: string;
+  handoff: CaseEvidence['handoffs'][number] | undefined;
+  item: CaseEvidence['items'][number] | undefined;
+  photoIds: string[];
+};
 
 function Record({ side, itemName, timeZone }: { side: Side; itemName: string; timeZone: string }) {
   const { handoff, item } = side;
@@ -12,7 +17,8 @@ function Record({ side, itemName, timeZone }: { side: Side; itemName: string; ti
       <h4 className="text-gate-sm font-bold uppercase tracking-wide text-ink-soft">{side.title}</h4>
       {handoff ? (
         <p className="text-gate-sm">
-          {handoff.kind === 'drop' ? 'Drop' : 'Hook'} {formatWhen(handoff.occurredAt, timeZone)} · {handoff.driverName} ({handoff.carrierScac})
+          {handoff.kind === 'drop' ? 'Drop' : 'Hook'} {formatWhen(handoff.occurredAt, timeZone)} ·{' '}
+          {handoff.driverName} ({handoff.carrierScac})
         </p>
       ) : (
         <p className="text-gate-sm text-ink-soft">No earlier record of this item.</p>
@@ -34,21 +40,40 @@ function Record({ side, itemName, timeZone }: { side: Side; itemName: string; ti
   );
 }
 
-const CONFIDENCE_WORDS: Record<string, string> = { high: 'high confidence', medium: 'medium confidence', none: 'no single party' };
+const CONFIDENCE_WORDS: Record<string, string> = {
+  high: 'high confidence',
+  medium: 'medium confidence',
+  none: 'no single party',
+};
 
 /** One damaged item: the before record (the inspection the engine compared against) and the after record, side by side. */
-export function EvidencePair({ finding, evidence, afterHandoffId, timeZone }: { finding: CaseFinding; evidence: CaseEvidence; afterHandoffId: string; timeZone: string }) {
+export function EvidencePair({
+  finding,
+  evidence,
+  afterHandoffId,
+  timeZone,
+}: {
+  finding: CaseFinding;
+  evidence: CaseEvidence;
+  afterHandoffId: string;
+  timeZone: string;
+}) {
   const name = itemLabel(finding.itemKey);
   const sideOf = (title: string, handoffId: string | null): Side => ({
     title,
     handoff: evidence.handoffs.find((h) => h.id === handoffId),
     item: evidence.items.find((i) => i.handoffId === handoffId && i.itemKey === finding.itemKey),
-    photoIds: evidence.photos.filter((p) => p.handoffId === handoffId && p.itemKey === finding.itemKey).map((p) => p.id),
+    photoIds: evidence.photos
+      .filter((p) => p.handoffId === handoffId && p.itemKey === finding.itemKey)
+      .map((p) => p.id),
   });
   return (
     <article className="space-y-2 rounded-xl bg-paper p-3" aria-label={name}>
       <h3 className="text-gate-lg font-bold">
-        {name} <span className="text-gate-sm font-normal text-ink-soft">({finding.kind === 'worse' ? 'worse' : 'new damage'})</span>
+        {name}{' '}
+        <span className="text-gate-sm font-normal text-ink-soft">
+          ({finding.kind === 'worse' ? 'worse' : 'new damage'})
+        </span>
       </h3>
       <div className="grid grid-cols-2 gap-2" data-testid="evidence-pair">
         <Record side={sideOf('Before', finding.previousHandoffId)} itemName={name} timeZone={timeZone} />

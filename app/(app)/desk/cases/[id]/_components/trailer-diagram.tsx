@@ -8,8 +8,11 @@ const ZONE_NAMES: Record<string, string> = ZONE_LABELS;
 
 export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
   const hit = new Set(damagedZones);
-  const fill = (zone: string) => (hit.has(zone) ? 'fill-danger/70 stroke-danger' : 'fill-paper-dim stroke-ink-faint');
-  const label = damagedZones.length ? `Damage at: ${damagedZones.map((z) => ZONE_NAMES[z] ?? z).join(', ')}` : 'No zone marked';
+  const fill = (zone: string) =>
+    hit.has(zone) ? 'fill-danger/70 stroke-danger' : 'fill-paper-dim stroke-ink-faint';
+  const label = damagedZones.length
+    ? `Damage at: ${damagedZones.map((z) => ZONE_NAMES[z] ?? z).join(', ')}`
+    : 'No zone marked';
   const Zone = ({ zone, children }: { zone: string; children: React.ReactNode }) => (
     <g className={fill(zone)} strokeWidth={2} data-zone={zone} data-damaged={hit.has(zone) || undefined}>
       <title>{`${ZONE_NAMES[zone] ?? zone}${hit.has(zone) ? ': damaged' : ''}`}</title>
@@ -19,8 +22,15 @@ export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
   const wheelXs = Array.from({ length: Math.max(1, Math.min(axles, 3)) }, (_, i) => 470 - i * 34);
   return (
     <figure className="rounded-xl bg-paper p-3">
-      <svg viewBox="0 0 600 330" role="img" aria-label={`Trailer diagram. ${label}`} className="h-auto w-full max-w-2xl">
-        <text x="10" y="18" className="fill-ink text-[14px] font-bold">From above (nose left)</text>
+      <svg
+        viewBox="0 0 600 330"
+        role="img"
+        aria-label={`Trailer diagram. ${label}`}
+        className="h-auto w-full max-w-2xl"
+      >
+        <text x="10" y="18" className="fill-ink text-[14px] font-bold">
+          From above (nose left)
+        </text>
         {isReefer ? (
           <Zone zone="reefer_unit">
             <rect x="22" y="48" width="22" height="74" rx="4" />
@@ -41,10 +51,16 @@ export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
         <Zone zone="rear">
           <rect x="540" y="34" width="16" height="102" />
         </Zone>
-        <text x="300" y="30" textAnchor="middle" className="fill-ink-soft text-[12px]">right side</text>
-        <text x="300" y="152" textAnchor="middle" className="fill-ink-soft text-[12px]">left side</text>
+        <text x="300" y="30" textAnchor="middle" className="fill-ink-soft text-[12px]">
+          right side
+        </text>
+        <text x="300" y="152" textAnchor="middle" className="fill-ink-soft text-[12px]">
+          left side
+        </text>
 
-        <text x="10" y="186" className="fill-ink text-[14px] font-bold">Left side view</text>
+        <text x="10" y="186" className="fill-ink text-[14px] font-bold">
+          Left side view
+        </text>
         {isReefer ? (
           <Zone zone="reefer_unit">
             <rect x="22" y="208" width="22" height="50" rx="4" />
@@ -70,7 +86,9 @@ export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
           ))}
         </Zone>
       </svg>
-      <figcaption className="mt-1 text-gate-sm text-ink-soft">{label}. Red zones hold the damage of this case.</figcaption>
+      <figcaption className="mt-1 text-gate-sm text-ink-soft">
+        {label}. Red zones hold the damage of this case.
+      </figcaption>
     </figure>
   );
 }

@@ -10,12 +10,27 @@ const TONES = {
 
 /** Big one-tap choice buttons (gloves): a labelled group of toggle buttons, one pressed at a time. */
 export function Choice<T extends string | number | boolean>({
-  label, options, value, onChange, columns = 0, hideLabel = false,
-}: { label: string; options: Option<T>[]; value: T | null | undefined; onChange: (v: T) => void; columns?: number; hideLabel?: boolean }) {
+  label,
+  options,
+  value,
+  onChange,
+  columns = 0,
+  hideLabel = false,
+}: {
+  label: string;
+  options: Option<T>[];
+  value: T | null | undefined;
+  onChange: (v: T) => void;
+  columns?: number;
+  hideLabel?: boolean;
+}) {
   return (
     <div role="group" aria-label={label}>
       {hideLabel ? null : <p className="text-gate font-bold">{label}</p>}
-      <div className={columns ? 'mt-1 grid gap-2' : 'mt-1 flex flex-wrap gap-2'} style={columns ? { gridTemplateColumns: `repeat(${columns}, minmax(0, 1fr))` } : undefined}>
+      <div
+        className={columns ? 'mt-1 grid gap-2' : 'mt-1 flex flex-wrap gap-2'}
+        style={columns ? { gridTemplateColumns: `repeat(${columns}, minmax(0, 1fr))` } : undefined}
+      >
         {options.map((o) => (
           <button
             key={String(o.value)}

@@ -2,7 +2,12 @@ import { ButtonLink } from '@/app/_components/button';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
 import { HOLD_WORDS, RESTRICTION_WORDS } from '@/lib/receipt';
 
-type HoldRow = { id: string; severity: 'out_of_service' | 'restricted'; restriction: string | null; reason: string };
+type HoldRow = {
+  id: string;
+  severity: 'out_of_service' | 'restricted';
+  restriction: string | null;
+  reason: string;
+};
 
 export function HoldList({ title, holds }: { title: string; holds: HoldRow[] }) {
   return (
@@ -11,7 +16,9 @@ export function HoldList({ title, holds }: { title: string; holds: HoldRow[] }) 
       <ul className="mt-1 list-disc space-y-1 pl-6 text-gate">
         {holds.map((h) => (
           <li key={h.id}>
-            {h.severity === 'restricted' && h.restriction ? `${RESTRICTION_WORDS[h.restriction] ?? h.restriction}: ` : ''}
+            {h.severity === 'restricted' && h.restriction
+              ? `${RESTRICTION_WORDS[h.restriction] ?? h.restriction}: `
+              : ''}
             {h.reason}
           </li>
         ))}
@@ -33,8 +40,12 @@ export function HookRefused({ unitNumber, holds }: { unitNumber: string; holds: 
       <HoldList title="Why" holds={holds} />
       <Caution title="Out of service">{CAUTIONS.outOfService}</Caution>
       <Caution title="Your inspection">{CAUTIONS.inspection}</Caution>
-      <p className="text-gate">Ask the terminal clerk for another trailer. A clerk releases the hold once the repair is recorded.</p>
-      <ButtonLink href="/gate" variant="secondary" className="w-full">Back to the gate</ButtonLink>
+      <p className="text-gate">
+        Ask the terminal clerk for another trailer. A clerk releases the hold once the repair is recorded.
+      </p>
+      <ButtonLink href="/gate" variant="secondary" className="w-full">
+        Back to the gate
+      </ButtonLink>
     </div>
   );
 }

@@ -13,7 +13,9 @@ async function resizeToJpeg(file: File): Promise<Blob> {
   canvas.height = Math.max(1, Math.round(bitmap.height * scale));
   canvas.getContext('2d')!.drawImage(bitmap, 0, 0, canvas.width, canvas.height);
   bitmap.close();
-  return new Promise((resolve, reject) => canvas.toBlob((b) => (b ? resolve(b) : reject(new Error('resize failed'))), 'image/jpeg', 0.85));
+  return new Promise((resolve, reject) =>
+    canvas.toBlob((b) => (b ? resolve(b) : reject(new Error('resize failed'))), 'image/jpeg', 0.85),
+  );
 }
 
 async function sha256Hex(bytes: ArrayBuffer): Promise<string> {
@@ -33,7 +35,13 @@ async function uploadPhoto(file: File, trailerId: string, itemKey: string): Prom
   const announce = await fetch('/api/uploads', {
     method: 'POST',
     headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ trailerId, itemKey, contentType: 'image/jpeg', byteSize: bytes.byteLength, sha256: await sha256Hex(bytes) }),
+    body: JSON.stringify({
+      trailerId,
+      itemKey,
+      contentType: 'image/jpeg',
+      byteSize: bytes.byteLength,
+      sha256: await sha256Hex(bytes),
+    }),
   });
   if (!announce.ok) throw new Error(await message(announce, 'The photo could not be announced.'));
   const { photoId, uploadUrl, headers } = await announce.json();
@@ -44,8 +52,18 @@ async function uploadPhoto(file: File, trailerId: string, itemKey: string): Prom
   return { id: photoId };
 }
 
-export function PhotoCapture({ trailerId, itemKey, label, photos, onAdd }: {
-  trailerId: string; itemKey: string; label: string; photos: DraftPhoto[]; onAdd: (p: DraftPhoto) => void;
+export function PhotoCapture({
+  trailerId,
+  itemKey,
+  label,
+  photos,
+  onAdd,
+}: {
+  trailerId: string;
+  itemKey: string;
+  label: string;
+  photos: DraftPhoto[];
+  onAdd: (p: DraftPhoto) => void;
 }) {
   const [state, setState] = useState<{ busy: boolean; error: string | null }>({ busy: false, error: null });
   const inputId = `photo-${itemKey}`;
@@ -55,11 +73,20 @@ export function PhotoCapture({ trailerId, itemKey, label, photos, onAdd }: {
         <ul className="flex flex-wrap gap-2" aria-label={`Photos of ${label}`}>
           {photos.map((p) => (
             // eslint-disable-next-line @next/next/no-img-element
-            <li key={p.id}><img src={`/api/photos/${p.id}`} alt={`Photo of ${label}`} className="h-20 w-20 rounded border-2 border-paper-line object-cover" /></li>
+            <li key={p.id}>
+              <img
+                src={`/api/photos/${p.id}`}
+                alt={`Photo of ${label}`}
+                className="h-20 w-20 rounded border-2 border-paper-line object-cover"
+              />
+            </li>
           ))}
         </ul>
       ) : null}
-      <label htmlFor={inputId} className="inline-flex min-h-tap cursor-pointer items-center rounded-lg border-2 border-brand bg-paper px-4 text-gate font-bold text-brand">
+      <label
+        htmlFor={inputId}
+        className="inline-flex min-h-tap cursor-pointer items-center rounded-lg border-2 border-brand bg-paper px-4 text-gate font-bold text-brand"
+      >
         {state.busy ? 'Uploading…' : photos.length ? 'Add another photo' : 'Take a photo'}
       </label>
       <input
@@ -79,11 +106,16 @@ export function PhotoCapture({ trailerId, itemKey, label, photos, onAdd }: {
             onAdd(await uploadPhoto(file, trailerId, itemKey));
             setState({ busy: false, error: null });
           } catch (err) {
-            setState({ busy: false, error: err instanceof Error ? err.message : 'The photo could not be saved.' });
+            setState({
+              busy: false,
+              error: err instanceof Error ? err.message : 'The photo could not be saved.',
+            });
           }
         }}
       />
-      <p aria-live="polite" className="text-gate-sm font-bold text-danger">{state.error ?? ''}</p>
+      <p aria-live="polite" className="text-gate-sm font-bold text-danger">
+        {state.error ?? ''}
+      </p>
     </div>
   );
 }

@@ -5,35 +5,123 @@ import { Choice, YES_NO } from './choice';
 
 const input = 'mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-gate';
 
-export function FuelButtons({ value, onChange, last }: { value: number | null; onChange: (v: number) => void; last: number | null | undefined }) {
+export function FuelButtons({
+  value,
+  onChange,
+  last,
+}: {
+  value: number | null;
+  onChange: (v: number) => void;
+  last: number | null | undefined;
+}) {
   return (
     <section aria-labelledby="fuel-title" className="space-y-1">
-      <h2 id="fuel-title" className="text-gate-xl font-bold">Fuel</h2>
-      <p className="text-gate-sm text-ink-soft">Reefer tank gauge in eighths{last !== null && last !== undefined ? `; last record ${last}/8` : ''}.</p>
-      <Choice label="Fuel in eighths" hideLabel columns={3} value={value} onChange={onChange}
-        options={Array.from({ length: 9 }, (_, n) => ({ value: n, label: n === 8 ? 'Full 8/8' : n === 0 ? 'Empty 0/8' : `${n}/8`, tone: n >= 8 ? 'ok' : n >= 4 ? 'warn' : 'danger' }))} />
+      <h2 id="fuel-title" className="text-gate-xl font-bold">
+        Fuel
+      </h2>
+      <p className="text-gate-sm text-ink-soft">
+        Reefer tank gauge in eighths{last !== null && last !== undefined ? `; last record ${last}/8` : ''}.
+      </p>
+      <Choice
+        label="Fuel in eighths"
+        hideLabel
+        columns={3}
+        value={value}
+        onChange={onChange}
+        options={Array.from({ length: 9 }, (_, n) => ({
+          value: n,
+          label: n === 8 ? 'Full 8/8' : n === 0 ? 'Empty 0/8' : `${n}/8`,
+          tone: n >= 8 ? 'ok' : n >= 4 ? 'warn' : 'danger',
+        }))}
+      />
     </section>
   );
 }
 
-export function ReeferFields({ reefer, set, errors }: { reefer: Draft['reefer']; set: (p: Partial<Draft['reefer']>) => void; errors: Record<string, string[]> }) {
+export function ReeferFields({
+  reefer,
+  set,
+  errors,
+}: {
+  reefer: Draft['reefer'];
+  set: (p: Partial<Draft['reefer']>) => void;
+  errors: Record<string, string[]>;
+}) {
   const err = (k: string) => errors[`reefer.${k}`]?.[0] ?? '';
   return (
     <section aria-labelledby="reefer-title" className="space-y-3">
-      <h2 id="reefer-title" className="text-gate-xl font-bold">Reefer readings</h2>
-      <Choice label="Unit running?" options={YES_NO('Running', 'Off', 'warn')} value={reefer.isUnitOn} onChange={(v) => set({ isUnitOn: v })} columns={2} />
+      <h2 id="reefer-title" className="text-gate-xl font-bold">
+        Reefer readings
+      </h2>
+      <Choice
+        label="Unit running?"
+        options={YES_NO('Running', 'Off', 'warn')}
+        value={reefer.isUnitOn}
+        onChange={(v) => set({ isUnitOn: v })}
+        columns={2}
+      />
       <div className="grid grid-cols-2 gap-2">
-        <label className="block text-gate font-bold">Setpoint °F<input type="number" step="0.1" value={reefer.setpointF} onChange={(e) => set({ setpointF: e.target.value })} className={input} /></label>
-        <label className="block text-gate font-bold">Return air °F<input type="number" step="0.1" value={reefer.returnAirF} onChange={(e) => set({ returnAirF: e.target.value })} className={input} /></label>
+        <label className="block text-gate font-bold">
+          Setpoint °F
+          <input
+            type="number"
+            step="0.1"
+            value={reefer.setpointF}
+            onChange={(e) => set({ setpointF: e.target.value })}
+            className={input}
+          />
+        </label>
+        <label className="block text-gate font-bold">
+          Return air °F
+          <input
+            type="number"
+            step="0.1"
+            value={reefer.returnAirF}
+            onChange={(e) => set({ returnAirF: e.target.value })}
+            className={input}
+          />
+        </label>
       </div>
-      <p aria-live="polite" className="text-gate-sm font-bold text-danger">{err('setpointF') || err('returnAirF')}</p>
-      <label className="block text-gate font-bold">Engine hours<input type="number" inputMode="decimal" step="0.1" min={0} value={reefer.engineHours} onChange={(e) => set({ engineHours: e.target.value })} className={input} /></label>
-      <Choice label="Last pre-trip" columns={3} value={reefer.preTripResult} onChange={(v) => set({ preTripResult: v })}
-        options={[{ value: 'pass', label: 'Passed', tone: 'ok' }, { value: 'fail', label: 'Failed', tone: 'danger' }, { value: 'not_run', label: 'Not run', tone: 'warn' }]} />
+      <p aria-live="polite" className="text-gate-sm font-bold text-danger">
+        {err('setpointF') || err('returnAirF')}
+      </p>
+      <label className="block text-gate font-bold">
+        Engine hours
+        <input
+          type="number"
+          inputMode="decimal"
+          step="0.1"
+          min={0}
+          value={reefer.engineHours}
+          onChange={(e) => set({ engineHours: e.target.value })}
+          className={input}
+        />
+      </label>
+      <Choice
+        label="Last pre-trip"
+        columns={3}
+        value={reefer.preTripResult}
+        onChange={(v) => set({ preTripResult: v })}
+        options={[
+          { value: 'pass', label: 'Passed', tone: 'ok' },
+          { value: 'fail', label: 'Failed', tone: 'danger' },
+          { value: 'not_run', label: 'Not run', tone: 'warn' },
+        ]}
+      />
       {reefer.preTripResult && reefer.preTripResult !== 'not_run' ? (
-        <label className="block text-gate font-bold">When was it run?<input type="datetime-local" value={reefer.preTripAt} onChange={(e) => set({ preTripAt: e.target.value })} className={input} /></label>
+        <label className="block text-gate font-bold">
+          When was it run?
+          <input
+            type="datetime-local"
+            value={reefer.preTripAt}
+            onChange={(e) => set({ preTripAt: e.target.value })}
+            className={input}
+          />
+        </label>
       ) : null}
-      <p aria-live="polite" className="text-gate-sm font-bold text-danger">{err('preTripResult') || err('preTripAt')}</p>
+      <p aria-live="polite" className="text-gate-sm font-bold text-danger">
+        {err('preTripResult') || err('preTripAt')}
+      </p>
     </section>
   );
 }

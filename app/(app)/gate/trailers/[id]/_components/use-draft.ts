@@ -20,7 +20,13 @@ export function useDraft(trailerId: string, kind: 'drop' | 'hook', make: () => D
     try {
       const raw = localStorage.getItem(storageKey);
       const parsed = raw ? (JSON.parse(raw) as StoredDraft) : null;
-      if (parsed && typeof parsed.idempotencyKey === 'string' && parsed.trailerId === trailerId && parsed.items) saved = parsed;
+      if (
+        parsed &&
+        typeof parsed.idempotencyKey === 'string' &&
+        parsed.trailerId === trailerId &&
+        parsed.items
+      )
+        saved = parsed;
     } catch {
       saved = null;
     }

@@ -1,6 +1,10 @@
 import type { QuickChecks } from '@/lib/yard/walk';
 
-const YES_NO = [['', 'Not checked'], ['yes', 'Yes'], ['no', 'No']] as const;
+const YES_NO = [
+  ['', 'Not checked'],
+  ['yes', 'Yes'],
+  ['no', 'No'],
+] as const;
 const select = 'mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-2 text-gate';
 
 function YesNo({ name, label }: { name: string; label: string }) {
@@ -8,7 +12,11 @@ function YesNo({ name, label }: { name: string; label: string }) {
     <label className="block text-gate-sm font-bold">
       {label}
       <select name={name} className={select} defaultValue="">
-        {YES_NO.map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+        {YES_NO.map(([v, l]) => (
+          <option key={v} value={v}>
+            {l}
+          </option>
+        ))}
       </select>
     </label>
   );
@@ -22,13 +30,25 @@ export function QuickCheckFields() {
       <YesNo name="isUnitRunning" label="Unit running" />
       <label className="block text-gate-sm font-bold">
         Setpoint °F
-        <input name="setpointF" type="number" step="0.1" min="-40" max="90" inputMode="decimal" className={select} />
+        <input
+          name="setpointF"
+          type="number"
+          step="0.1"
+          min="-40"
+          max="90"
+          inputMode="decimal"
+          className={select}
+        />
       </label>
       <label className="block text-gate-sm font-bold">
         Fuel (eighths)
         <select name="fuelEighths" className={select} defaultValue="">
           <option value="">Not read</option>
-          {Array.from({ length: 9 }, (_, i) => <option key={i} value={i}>{i}/8</option>)}
+          {Array.from({ length: 9 }, (_, i) => (
+            <option key={i} value={i}>
+              {i}/8
+            </option>
+          ))}
         </select>
       </label>
       <YesNo name="areDoorsClosed" label="Doors closed" />
@@ -45,7 +65,8 @@ export function readQuickChecks(data: FormData): QuickChecks {
   const fuel = String(data.get('fuelEighths') ?? '');
   return {
     isUnitRunning: yesNo(data.get('isUnitRunning')),
-    setpointTenthsF: setpoint === '' || Number.isNaN(Number(setpoint)) ? null : Math.round(Number(setpoint) * 10),
+    setpointTenthsF:
+      setpoint === '' || Number.isNaN(Number(setpoint)) ? null : Math.round(Number(setpoint) * 10),
     fuelEighths: fuel === '' ? null : Number(fuel),
     areDoorsClosed: yesNo(data.get('areDoorsClosed')),
     isSealPresent: yesNo(data.get('isSealPresent')),

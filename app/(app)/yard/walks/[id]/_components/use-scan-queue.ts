@@ -6,7 +6,11 @@ import { flushQueue, loadQueue, saveQueue, type QueuedScan, type SendOutcome } f
 async function send(walkId: string, scan: QueuedScan): Promise<SendOutcome> {
   const { state: _s, error: _e, result: _r, spotLabel: _l, ...body } = scan;
   try {
-    const res = await fetch(`/api/yard/walks/${walkId}/scans`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body) });
+    const res = await fetch(`/api/yard/walks/${walkId}/scans`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify(body),
+    });
     if (res.status >= 500) return { kind: 'offline' }; // the server had trouble: keep it and retry
     const json = await res.json().catch(() => ({}));
     if (!res.ok) return { kind: 'rejected', error: json.message ?? `Refused (${res.status}).` };
@@ -23,11 +27,14 @@ export function useScanQueue(walkId: string) {
   const queueRef = useRef<QueuedScan[]>([]);
   const flushing = useRef(false);
 
-  const commit = useCallback((next: QueuedScan[]) => {
-    queueRef.current = next;
-    saveQueue(window.localStorage, walkId, next);
-    setQueue(next);
-  }, [walkId]);
+  const commit = useCallback(
+    (next: QueuedScan[]) => {
+      queueRef.current = next;
+      saveQueue(window.localStorage, walkId, next);
+      setQueue(next);
+    },
+    [walkId],
+  );
 
   const flush = useCallback(async () => {
     if (flushing.current) return;
@@ -48,7 +55,10 @@ export function useScanQueue(walkId: string) {
     queueRef.current = loadQueue(window.localStorage, walkId);
     setQueue(queueRef.current);
     setIsOnline(navigator.onLine);
-    const online = () => { setIsOnline(true); void flush(); };
+    const online = () => {
+      setIsOnline(true);
+      void flush();
+    };
     const offline = () => setIsOnline(false);
     window.addEventListener('online', online);
     window.addEventListener('offline', offline);
@@ -61,10 +71,13 @@ export function useScanQueue(walkId: string) {
     };
   }, [walkId, flush]);
 
-  const add = useCallback((scan: QueuedScan) => {
-    commit([...queueRef.current, scan]);
-    void flush();
-  }, [commit, flush]);
+  const add = useCallback(
+    (scan: QueuedScan) => {
+      commit([...queueRef.current, scan]);
+      void flush();
+    },
+    [commit, flush],
+  );
 
   return { queue, isOnline, add };
 }

@@ -2,9 +2,13 @@ import { resolveOutcomeAction } from '../../actions';
 import { ActionForm } from '../../../_components/action-form';
 
 type Outcome = {
-  id: string; outcome: 'matched' | 'wrong_slot' | 'missing' | 'unknown' | 'duplicate';
+  id: string;
+  outcome: 'matched' | 'wrong_slot' | 'missing' | 'unknown' | 'duplicate';
   resolution: 'accepted' | 'marked_gone' | 'investigating' | null;
-  scannedText: string | null; unitNumber: string | null; foundLabel: string | null; expectedLabel: string | null;
+  scannedText: string | null;
+  unitNumber: string | null;
+  foundLabel: string | null;
+  expectedLabel: string | null;
 };
 
 const GROUPS = [
@@ -15,16 +19,25 @@ const GROUPS = [
   { key: 'matched', title: 'Matched' },
 ] as const;
 
-const RESOLUTION_TEXT = { accepted: 'Board corrected', marked_gone: 'Marked gone', investigating: 'Under investigation' } as const;
+const RESOLUTION_TEXT = {
+  accepted: 'Board corrected',
+  marked_gone: 'Marked gone',
+  investigating: 'Under investigation',
+} as const;
 
 function describe(o: Outcome): string {
   const unit = o.unitNumber ?? o.scannedText ?? 'Unknown';
   switch (o.outcome) {
-    case 'matched': return `${unit} in ${o.foundLabel}`;
-    case 'wrong_slot': return `${unit}: board says ${o.expectedLabel}, seen in ${o.foundLabel}`;
-    case 'missing': return `${unit}: expected in ${o.expectedLabel}, not found`;
-    case 'unknown': return `"${unit}" seen in ${o.foundLabel ?? 'an unknown place'}: not on this board`;
-    case 'duplicate': return `${unit}: scanned in more than one slot (first ${o.foundLabel})`;
+    case 'matched':
+      return `${unit} in ${o.foundLabel}`;
+    case 'wrong_slot':
+      return `${unit}: board says ${o.expectedLabel}, seen in ${o.foundLabel}`;
+    case 'missing':
+      return `${unit}: expected in ${o.expectedLabel}, not found`;
+    case 'unknown':
+      return `"${unit}" seen in ${o.foundLabel ?? 'an unknown place'}: not on this board`;
+    case 'duplicate':
+      return `${unit}: scanned in more than one slot (first ${o.foundLabel})`;
   }
 }
 
@@ -50,16 +63,22 @@ function Resolve({ o }: { o: Outcome }) {
 export function WalkResult({ summary, outcomes }: { summary: Record<string, number>; outcomes: Outcome[] }) {
   return (
     <section aria-labelledby="result-title" className="space-y-3">
-      <h2 id="result-title" className="text-gate-lg font-bold">Reconciliation</h2>
+      <h2 id="result-title" className="text-gate-lg font-bold">
+        Reconciliation
+      </h2>
       <dl className="grid grid-cols-2 gap-2 sm:grid-cols-5" aria-label="Counts">
         {GROUPS.map((g) => (
           <div key={g.key} className="rounded-lg bg-paper p-2 text-center shadow">
             <dt className="text-gate-sm">{g.title}</dt>
-            <dd className="text-gate-xl font-bold" data-testid={`count-${g.key}`}>{summary[g.key] ?? 0}</dd>
+            <dd className="text-gate-xl font-bold" data-testid={`count-${g.key}`}>
+              {summary[g.key] ?? 0}
+            </dd>
           </div>
         ))}
       </dl>
-      <p className="text-gate-sm text-ink-soft">{summary.scans ?? 0} scans{summary.repeatScans ? `, ${summary.repeatScans} repeated` : ''}.</p>
+      <p className="text-gate-sm text-ink-soft">
+        {summary.scans ?? 0} scans{summary.repeatScans ? `, ${summary.repeatScans} repeated` : ''}.
+      </p>
       {GROUPS.map((g) => {
         const list = outcomes.filter((o) => o.outcome === g.key);
         if (list.length === 0) return null;
@@ -76,12 +95,16 @@ export function WalkResult({ summary, outcomes }: { summary: Record<string, numb
         // matched trailers need nothing done: folded away so the problems come first
         return g.key === 'matched' ? (
           <details key={g.key}>
-            <summary className="min-h-tap cursor-pointer py-2 text-gate font-bold">{g.title} ({list.length})</summary>
+            <summary className="min-h-tap cursor-pointer py-2 text-gate font-bold">
+              {g.title} ({list.length})
+            </summary>
             {items}
           </details>
         ) : (
           <section key={g.key} aria-label={g.title} className="space-y-2">
-            <h3 className="text-gate font-bold">{g.title} ({list.length})</h3>
+            <h3 className="text-gate font-bold">
+              {g.title} ({list.length})
+            </h3>
             {items}
           </section>
         );

@@ -13,15 +13,29 @@ import { useScanQueue } from './use-scan-queue';
 type Stored = { clientKey: string; text: string; unitNumber: string | null; spotLabel: string | null };
 const STATE_TEXT = { pending: 'Waiting to send', sent: 'Sent', rejected: 'Refused' } as const;
 
-export function WalkScanner({ walkId, spots, stored }: { walkId: string; spots: WalkSpot[]; stored: Stored[] }) {
+export function WalkScanner({
+  walkId,
+  spots,
+  stored,
+}: {
+  walkId: string;
+  spots: WalkSpot[];
+  stored: Stored[];
+}) {
   const { queue, isOnline, add } = useScanQueue(walkId);
   const [lastSpotId, setLastSpotId] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [finishState, finishAction, finishing] = useActionState(finishWalkAction, { ok: false });
   const unitRef = useRef<HTMLInputElement>(null);
-  const suggested = suggestNextSpot(spots, lastSpotId ?? (queue.length ? queue[queue.length - 1].spotId : null));
+  const suggested = suggestNextSpot(
+    spots,
+    lastSpotId ?? (queue.length ? queue[queue.length - 1].spotId : null),
+  );
   const waiting = pendingCount(queue);
-  const others = useMemo(() => stored.filter((s) => !queue.some((q) => q.clientKey === s.clientKey)), [stored, queue]);
+  const others = useMemo(
+    () => stored.filter((s) => !queue.some((q) => q.clientKey === s.clientKey)),
+    [stored, queue],
+  );
 
   function record(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -32,7 +46,15 @@ export function WalkScanner({ walkId, spots, stored }: { walkId: string; spots: 
     if (!text) return setError('Scan or type the unit first.');
     if (!spot) return setError('Choose the slot the trailer stands in.');
     setError(null);
-    add({ clientKey: crypto.randomUUID(), scannedText: text, spotId: spot.id, spotLabel: spot.label, scannedAt: new Date().toISOString(), state: 'pending', ...readQuickChecks(data) });
+    add({
+      clientKey: crypto.randomUUID(),
+      scannedText: text,
+      spotId: spot.id,
+      spotLabel: spot.label,
+      scannedAt: new Date().toISOString(),
+      state: 'pending',
+      ...readQuickChecks(data),
+    });
     setLastSpotId(spot.id);
     form.reset();
     unitRef.current?.focus();
@@ -40,31 +62,76 @@ export function WalkScanner({ walkId, spots, stored }: { walkId: string; spots: 
 
   return (
     <div className="space-y-3">
-      <p role="status" className={`rounded-lg p-2 text-gate-sm font-bold ${isOnline ? 'bg-ok-bg text-ok' : 'bg-warn-bg text-warn'}`}>
+      <p
+        role="status"
+        className={`rounded-lg p-2 text-gate-sm font-bold ${isOnline ? 'bg-ok-bg text-ok' : 'bg-warn-bg text-warn'}`}
+      >
         {isOnline ? 'Online' : 'Offline: scans are kept on this device and sent when the connection returns.'}
         {waiting ? ` · ${waiting} waiting to send` : ''}
       </p>
-      <form onSubmit={record} noValidate className="space-y-2 rounded-xl bg-paper p-4 shadow" key={suggested?.id ?? 'end'}>
-        <label className="block text-gate font-bold" htmlFor="unit">Unit</label>
-        <input ref={unitRef} autoFocus id="unit" name="unit" autoComplete="off" autoCapitalize="characters" placeholder="Unit number, VIN or label"
-          className="block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-gate" />
-        <CameraButton label="Scan label" onText={(text) => { if (unitRef.current) unitRef.current.value = text; }} />
-        <label className="block text-gate font-bold" htmlFor="spotId">Slot</label>
-        <select id="spotId" name="spotId" defaultValue={suggested?.id ?? ''} className="block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-3 text-gate">
+      <form
+        onSubmit={record}
+        noValidate
+        className="space-y-2 rounded-xl bg-paper p-4 shadow"
+        key={suggested?.id ?? 'end'}
+      >
+        <label className="block text-gate font-bold" htmlFor="unit">
+          Unit
+        </label>
+        <input
+          ref={unitRef}
+          autoFocus
+          id="unit"
+          name="unit"
+          autoComplete="off"
+          autoCapitalize="characters"
+          placeholder="Unit number, VIN or label"
+          className="block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-gate"
+        />
+        <CameraButton
+          label="Scan label"
+          onText={(text) => {
+            if (unitRef.current) unitRef.current.value = text;
+          }}
+        />
+        <label className="block text-gate font-bold" htmlFor="spotId">
+          Slot
+        </label>
+        <select
+          id="spotId"
+          name="spotId"
+          defaultValue={suggested?.id ?? ''}
+          className="block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-3 text-gate"
+        >
           <option value="">Choose the slot</option>
-          {spots.map((s) => <option key={s.id} value={s.id}>{s.label}</option>)}
+          {spots.map((s) => (
+            <option key={s.id} value={s.id}>
+              {s.label}
+            </option>
+          ))}
         </select>
         <QuickCheckFields />
         <Button type="submit">Record scan</Button>
         <FormError message={error} />
       </form>
       <section aria-labelledby="scans-title">
-        <h2 id="scans-title" className="text-gate-lg font-bold">Scans ({queue.length + others.length})</h2>
+        <h2 id="scans-title" className="text-gate-lg font-bold">
+          Scans ({queue.length + others.length})
+        </h2>
         <ol className="space-y-1" aria-label="Scans of this walk">
-          {others.map((s) => <li key={s.clientKey} className="rounded bg-paper px-3 py-1 text-gate-sm">{s.spotLabel}: {s.unitNumber ?? `${s.text} (unknown)`} · Sent</li>)}
+          {others.map((s) => (
+            <li key={s.clientKey} className="rounded bg-paper px-3 py-1 text-gate-sm">
+              {s.spotLabel}: {s.unitNumber ?? `${s.text} (unknown)`} · Sent
+            </li>
+          ))}
           {queue.map((q) => (
-            <li key={q.clientKey} className={`rounded px-3 py-1 text-gate-sm ${q.state === 'rejected' ? 'bg-danger-bg text-danger' : 'bg-paper'}`}>
-              {q.spotLabel}: {q.state === 'sent' ? q.result ?? `${q.scannedText} (unknown)` : q.scannedText} · {STATE_TEXT[q.state]}{q.error ? `: ${q.error}` : ''}
+            <li
+              key={q.clientKey}
+              className={`rounded px-3 py-1 text-gate-sm ${q.state === 'rejected' ? 'bg-danger-bg text-danger' : 'bg-paper'}`}
+            >
+              {q.spotLabel}: {q.state === 'sent' ? (q.result ?? `${q.scannedText} (unknown)`) : q.scannedText}{' '}
+              · {STATE_TEXT[q.state]}
+              {q.error ? `: ${q.error}` : ''}
             </li>
           ))}
         </ol>
