@@ -1,6 +1,12 @@
 'use client';
 
-export default function GlobalError({ reset }: { error: Error & { digest?: string }; reset: () => void }) {
+export default function GlobalError({
+  error,
+  reset,
+}: {
+  error: Error & { digest?: string };
+  reset: () => void;
+}) {
   return (
     <html lang="en">
       <body style={{ fontFamily: 'system-ui', padding: 24 }}>
@@ -9,6 +15,7 @@ export default function GlobalError({ reset }: { error: Error & { digest?: strin
         <button type="button" onClick={() => reset()} style={{ minHeight: 48, padding: '0 20px' }}>
           Try again
         </button>
+        {error.digest ? <p>Reference for the office: {error.digest}</p> : null}
       </body>
     </html>
   );

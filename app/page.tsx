@@ -1,5 +1,5 @@
 import { redirect } from 'next/navigation';
-import { homeFor } from '@/lib/roles';
+import { homeFor } from '@/lib/auth/roles';
 import { currentUser } from '@/lib/server/auth';
 
 export default async function Home() {

@@ -8,7 +8,7 @@ source scripts/env.sh
 bash scripts/fakes.sh start
 trap 'bash scripts/fakes.sh stop' EXIT
 node_modules/.bin/tsx db/migrate.ts
-node_modules/.bin/tsx db/seed.ts
+node_modules/.bin/tsx --conditions=react-server db/seed/index.ts
 node_modules/.bin/next build
 echo "Hitchmark on $APP_URL  (local inbox: http://127.0.0.1:$HM_MAIL_HTTP_PORT)"
 node_modules/.bin/next start -p "$HM_APP_PORT" &

@@ -25,5 +25,5 @@ echo "== end-to-end tests (Playwright, Debian chromium)"
 export HM_DB_NAME=hitchmark_e2e
 bash scripts/db.sh createdb "$HM_DB_NAME"
 node_modules/.bin/tsx db/migrate.ts
-node_modules/.bin/tsx db/seed.ts
+node_modules/.bin/tsx --conditions=react-server db/seed/index.ts
 node_modules/.bin/playwright test "$@"

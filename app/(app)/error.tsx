@@ -1,8 +1,15 @@
 'use client';
 
 import { Button } from '@/app/_components/button';
+import { ErrorDigest } from '@/app/_components/error-digest';
 
-export default function SectionError({ reset }: { error: Error & { digest?: string }; reset: () => void }) {
+export default function SectionError({
+  error,
+  reset,
+}: {
+  error: Error & { digest?: string };
+  reset: () => void;
+}) {
   return (
     <div role="alert" className="rounded-xl border-2 border-danger bg-danger-bg p-4">
       <h1 className="text-gate-lg font-bold text-danger">Something went wrong on our side</h1>
@@ -10,6 +17,7 @@ export default function SectionError({ reset }: { error: Error & { digest?: stri
       <Button type="button" className="mt-3" onClick={() => reset()}>
         Try again
       </Button>
+      <ErrorDigest digest={error.digest} />
     </div>
   );
 }

@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import { signOutAction } from '@/app/(auth)/actions';
-import { canOpen, SECTION_LABELS, type Section } from '@/lib/roles';
+import { canOpen, SECTION_LABELS, type Section } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { NavLinks } from './_components/nav-links';
 

@@ -10,7 +10,7 @@ import {
   getUserForStaffSignIn,
   recordFailedSignIn,
 } from '@/db/queries/users';
-import { homeFor } from '@/lib/roles';
+import { homeFor } from '@/lib/auth/roles';
 import { getSession } from '@/lib/server/session';
 import { lockAfterFailure, secondsLocked } from '@/lib/sign-in-throttle';
 import { safeNext, signInSchema } from '@/lib/validation/auth';

@@ -5,7 +5,7 @@ import { z } from 'zod';
 import { runCaseCommand } from '@/db/queries/case-commands';
 import { verifyCaseLink } from '@/lib/desk/case-link';
 import { deliverDueEmails } from '@/lib/server/mail';
-import { appUrl, caseLinkSecret } from '@/lib/server/case-link-secret';
+import { appUrl, caseLinkSecret } from '@/lib/server/env';
 import { linkDisputeSchema } from '@/lib/validation/desk';
 import type { CaseActionState } from '../(app)/desk/actions';
 

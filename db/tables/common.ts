@@ -1,24 +1,20 @@
 import { pgEnum, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { ROLES } from '@/lib/auth/roles';
+import { CASE_STATES, DECISIONS } from '@/lib/desk/case-state';
+import { CONDITIONS } from '@/lib/engine/conditions';
 
 export const id = () => uuid('id').primaryKey().defaultRandom();
 export const createdAt = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow();
 export const at = (name: string) => timestamp(name, { withTimezone: true });
 
-export const roleEnum = pgEnum('role', ['driver', 'jockey', 'clerk', 'admin']);
+export const roleEnum = pgEnum('role', ROLES);
 export const trailerKindEnum = pgEnum('trailer_kind', ['reefer', 'dry_van']);
 export const tireLayoutEnum = pgEnum('tire_layout', ['dual', 'wide_single']);
 export const trailerStatusEnum = pgEnum('trailer_status', ['in_yard', 'on_road', 'gone']);
 export const spotKindEnum = pgEnum('spot_kind', ['slot', 'door']);
 export const handoffKindEnum = pgEnum('handoff_kind', ['drop', 'hook']);
 export const inspectionLevelEnum = pgEnum('inspection_level', ['full', 'quick']);
-export const conditionEnum = pgEnum('item_condition', [
-  'ok',
-  'minor',
-  'damaged',
-  'unsafe',
-  'missing',
-  'not_checked',
-]);
+export const conditionEnum = pgEnum('item_condition', CONDITIONS);
 export const pretripEnum = pgEnum('pretrip_result', ['pass', 'fail', 'not_run']);
 export const photoStatusEnum = pgEnum('photo_status', ['pending', 'stored', 'rejected']);
 export const confidenceEnum = pgEnum('confidence', ['high', 'medium', 'none']);
@@ -33,6 +29,6 @@ export const walkOutcomeEnum = pgEnum('walk_outcome', [
 ]);
 export const walkResolutionEnum = pgEnum('walk_resolution', ['accepted', 'marked_gone', 'investigating']);
 export const taskKindEnum = pgEnum('yard_task_kind', ['low_fuel', 'unit_off', 'doors_open', 'seal_missing']);
-export const caseStateEnum = pgEnum('case_state', ['open', 'notified', 'disputed', 'decided', 'closed']);
-export const decisionEnum = pgEnum('case_decision', ['charge', 'share', 'absorb', 'waive']);
+export const caseStateEnum = pgEnum('case_state', CASE_STATES);
+export const decisionEnum = pgEnum('case_decision', DECISIONS);
 export const outboxStatusEnum = pgEnum('outbox_status', ['pending', 'sent', 'failed']);

@@ -1,14 +1,14 @@
 import type { Condition } from './types';
 
 /** All conditions, in severity order, then `not_checked` (which has no severity). */
-export const CONDITIONS: readonly Condition[] = [
+export const CONDITIONS = [
   'ok',
   'minor',
   'damaged',
   'unsafe',
   'missing',
   'not_checked',
-];
+] as const satisfies readonly Condition[];
 
 const SEVERITY: Record<Exclude<Condition, 'not_checked'>, number> = {
   ok: 0,

@@ -1,8 +1,7 @@
 import 'server-only';
 import { forbidden, redirect } from 'next/navigation';
 import { getSessionUser, type SessionUser } from '@/db/queries/users';
-import type { Role } from '@/lib/roles';
-import { apiError } from './api';
+import type { Role } from '@/lib/auth/roles';
 import { getSession } from './session';
 
 export type { SessionUser };
@@ -23,11 +22,3 @@ export async function requireUser(roles?: readonly Role[]): Promise<SessionUser>
 }
 
 export const requireRole = (roles: readonly Role[]) => requireUser(roles);
-
-/** Route handlers: returns the user, or a 401/403 JSON response to return as is. */
-export async function apiUser(roles?: readonly Role[]): Promise<SessionUser | Response> {
-  const user = await currentUser();
-  if (!user) return apiError('unauthenticated', 'Sign in first.');
-  if (roles && !roles.includes(user.role)) return apiError('forbidden', 'Your role may not do this.');
-  return user;
-}

@@ -2,10 +2,11 @@
 // No `server-only` marker: the seed runs the submit service under plain Node.
 import type { Tx } from '@/db';
 import { enqueueEmail } from '@/db/queries/outbox';
+import { appUrl as appUrlFromEnv } from './env';
 import { receiptSubject, receiptText, type ReceiptView } from '@/lib/receipt';
 
 export async function enqueueReceiptEmail(tx: Tx, to: string, view: ReceiptView, appUrl?: string) {
-  const base = appUrl ?? process.env.APP_URL ?? 'http://localhost:3000';
+  const base = appUrl ?? appUrlFromEnv();
   await enqueueEmail(
     {
       to,

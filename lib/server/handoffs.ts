@@ -34,7 +34,7 @@ import { HandoffError, isLockNotAvailable, isUniqueViolation } from '@/lib/hando
 import { evaluateHandoff } from '@/lib/handoff-evaluation';
 import { handoffContentHash } from '@/lib/handoff-hash';
 import { damageEvidenceErrors, normalizeItems } from '@/lib/handoff-items';
-import type { Role } from '@/lib/roles';
+import type { Role } from '@/lib/auth/roles';
 import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
 import { newVerificationCode } from '@/lib/verification-code';
 import { enqueueReceiptEmail } from './handoff-receipt-mail';
@@ -378,15 +378,13 @@ async function record(
       })
       .returning({ id: cases.id });
     caseId = c.id;
-    await tx
-      .insert(caseEvents)
-      .values({
-        caseId,
-        kind: 'opened',
-        toState: 'open',
-        actorId: actor.id,
-        note: `Opened by the ${input.kind} of ${trailer.unitNumber}.`,
-      });
+    await tx.insert(caseEvents).values({
+      caseId,
+      kind: 'opened',
+      toState: 'open',
+      actorId: actor.id,
+      note: `Opened by the ${input.kind} of ${trailer.unitNumber}.`,
+    });
   }
   const handoffIds = new Set(history.filter((e) => e.type === 'drop' || e.type === 'hook').map((e) => e.id));
   if (ev.rows.length) {

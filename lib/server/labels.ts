@@ -1,21 +1,7 @@
 import 'server-only';
 import { getLabelStanding } from '@/db/queries/labels';
 import { signLabelToken, verifyLabelToken } from '@/lib/engine/identity/label-token';
-
-const MISSING_SECRET =
-  'LABEL_SECRET is not set. scripts/env.sh sets it for local runs; production must set it (32+ characters).';
-
-/** The label signing secret, read in this one place. Missing in production is a clear startup-time error. */
-export function labelSecret(): string {
-  const secret = process.env.LABEL_SECRET;
-  if (!secret || secret.length < 32) throw new Error(MISSING_SECRET);
-  return secret;
-}
-
-/** Where links point: APP_URL without a trailing slash (kept short so the QR stays a small version). */
-export function appUrl(): string {
-  return (process.env.APP_URL ?? 'http://localhost:3000').replace(/\/+$/, '');
-}
+import { appUrl, labelSecret } from './env';
 
 export function labelToken(label: { id: string; trailerId: string }): string {
   return signLabelToken({ labelId: label.id, trailerId: label.trailerId }, labelSecret());

@@ -1,7 +1,7 @@
 import 'server-only';
 import { getIronSession, type SessionOptions } from 'iron-session';
 import { cookies } from 'next/headers';
-import type { Role } from '@/lib/roles';
+import type { Role } from '@/lib/auth/roles';
 
 export type SessionData = {
   userId?: string;

@@ -6,7 +6,7 @@ import { photos, trailers } from '@/db/schema';
 import { buildChecklist } from '@/lib/engine';
 import { isAllowedImageType, MAX_PHOTO_BYTES, sniffImageType } from '@/lib/image-type';
 import type { UploadRequestInput } from '@/lib/validation/handoffs';
-import type { ApiErrorCode } from './api';
+import type { RefusalCode as ApiErrorCode } from '@/lib/result';
 import { deleteObject, presignPhotoUpload, readObject } from './storage';
 
 /** An expected refusal of an upload, with the API error code it maps to. */

@@ -1,10 +1,11 @@
 import { z } from 'zod';
+import { CONDITIONS } from '@/lib/engine/conditions';
 
 // One schema for the gate form (client-side feedback), POST /api/handoffs and the seed.
 // The server stays the authority: item keys are checked against the trailer's checklist, and
 // the photo-and-note rule for new or worse damage is enforced after the engine's comparison.
 
-export const CONDITION_VALUES = ['ok', 'minor', 'damaged', 'unsafe', 'missing', 'not_checked'] as const;
+export const CONDITION_VALUES = CONDITIONS;
 export const conditionSchema = z.enum(CONDITION_VALUES, { error: 'Choose a condition.' });
 
 const optionalText = (max: number, what: string) =>
@@ -124,11 +125,9 @@ export const verificationCodeSchema = z
   .toUpperCase()
   .transform((s) => s.replace(/[\s-]/g, '').replace(/O/g, '0').replace(/[IL]/g, '1'))
   .pipe(
-    z
-      .string()
-      .regex(/^[0-9A-HJKMNP-TV-Z]{8}$/, {
-        error: 'A verification code is 8 letters and digits, like 7KQ2-M9XD.',
-      }),
+    z.string().regex(/^[0-9A-HJKMNP-TV-Z]{8}$/, {
+      error: 'A verification code is 8 letters and digits, like 7KQ2-M9XD.',
+    }),
   );
 
 export const uploadRequestSchema = z.object({

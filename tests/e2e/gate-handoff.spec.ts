@@ -5,7 +5,7 @@ import { LabelPage } from './pages/label-page';
 import { ACCOUNTS, SignInPage, type AccountName } from './pages/sign-in-page';
 import { launchWithCamera, writeLabelVideo } from './support/fake-camera';
 
-// R53186 is a seeded reefer out on the road whose history ends with a hook (db/seed-history.ts):
+// R53186 is a seeded reefer out on the road whose history ends with a hook (db/seed/history.ts):
 // every item has an earlier ok record, so damage recorded now is new damage.
 const UNIT = 'R53186';
 const MAIL = `http://127.0.0.1:${process.env.HM_MAIL_HTTP_PORT ?? 2580}/messages`;
@@ -140,7 +140,7 @@ test('a draft survives a reload, and a drop submitted offline is sent when the c
   context,
 }) => {
   test.setTimeout(90_000);
-  // R53191: another seeded reefer on the road with an ok history (db/seed-history.ts)
+  // R53191: another seeded reefer on the road with an ok history (db/seed/history.ts)
   await signInAs(page, 'driver');
   const id = await new LabelPage(page).trailerId('R53191');
   await page.goto(`/gate/trailers/${id}`);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { canOpen, homeFor, ROLES, SECTION_ROLES } from '@/lib/roles';
+import { canOpen, homeFor, ROLES, SECTION_ROLES } from '@/lib/auth/roles';
 import {
   BASE_LOCK_SECONDS,
   FREE_ATTEMPTS,

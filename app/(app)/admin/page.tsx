@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { listCarriers, listUsers } from '@/db/queries/admin';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 
 export const metadata: Metadata = { title: 'Admin' };

@@ -6,7 +6,7 @@ import { runCaseCommand } from '@/db/queries/case-commands';
 import type { CaseCommand } from '@/lib/desk/case-state';
 import { deliverDueEmails } from '@/lib/server/mail';
 import { requireUser } from '@/lib/server/auth';
-import { appUrl, caseLinkSecret } from '@/lib/server/case-link-secret';
+import { appUrl, caseLinkSecret } from '@/lib/server/env';
 import {
   closeCaseSchema,
   decideCaseSchema,

@@ -1,4 +1,4 @@
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 
 // Checked here, above this section's loading boundary, so a wrong role gets a real 403 status.

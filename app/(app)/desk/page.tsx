@@ -5,7 +5,7 @@ import { EmptyState } from '@/app/_components/empty-state';
 import { listCaseCarriers, listCases } from '@/db/queries/cases';
 import { formatCents } from '@/lib/desk/estimate';
 import { formatWhen } from '@/lib/engine';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { caseQueueQuerySchema } from '@/lib/validation/desk';
 import { CaseStateBadge } from './_components/case-state-badge';

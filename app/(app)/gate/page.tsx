@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { countTrailersByStatus } from '@/db/queries/trailers';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { GateLookup } from './_components/gate-lookup';
 

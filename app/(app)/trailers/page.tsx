@@ -3,7 +3,7 @@ import Link from 'next/link';
 import { z } from 'zod';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listTrailers } from '@/db/queries/trailers';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 
 export const metadata: Metadata = { title: 'Trailers' };

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { EmptyState } from '@/app/_components/empty-state';
 import { getBoard } from '@/db/queries/yard-board';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { YardBoard } from './_components/yard-board';
 import { YardNav } from './_components/yard-nav';

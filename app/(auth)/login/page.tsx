@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
-import { homeFor } from '@/lib/roles';
+import { homeFor } from '@/lib/auth/roles';
 import { currentUser } from '@/lib/server/auth';
 import { SignInForm } from './_components/sign-in-form';
 

@@ -1,9 +1,9 @@
-import { sql } from 'drizzle-orm';
-import { db } from '@/db';
+import { pingDatabase } from '@/db/queries/health';
+import { route } from '@/lib/server/api';
 
 export const dynamic = 'force-dynamic';
 
-export async function GET() {
-  await db.execute(sql`select 1`);
+export const GET = route({ access: 'public' }, async () => {
+  await pingDatabase();
   return Response.json({ ok: true });
-}
+});

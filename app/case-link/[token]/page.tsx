@@ -7,7 +7,7 @@ import { isWithinDisputeWindow } from '@/lib/desk/case-state';
 import { effectiveAmountCents, formatCents } from '@/lib/desk/estimate';
 import { itemLabel } from '@/lib/desk/item-labels';
 import { CONDITION_LABELS, formatWhen } from '@/lib/engine';
-import { caseLinkSecret } from '@/lib/server/case-link-secret';
+import { caseLinkSecret } from '@/lib/server/env';
 import { LinkDisputeForm } from './link-dispute-form';
 
 export const metadata: Metadata = { title: 'Damage case', robots: { index: false } };

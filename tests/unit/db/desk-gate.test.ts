@@ -74,7 +74,7 @@ describe('desk over submitted handoffs', () => {
     // priced by the submit itself, in the case's own transaction: nothing is left to price afterwards
     expect(await priceNewCases(t2, [row.id])).toBe(0);
     const priced = await getCase(row.id, { role: 'driver', carrierId: driver.carrierId });
-    // seed rate card: left_side damaged = 85,000 cents (invented demo figure in db/seed.ts)
+    // seed rate card: left_side damaged = 85,000 cents (invented demo figure in db/seed/index.ts)
     expect(priced?.estimateCents).toBe(85_000);
 
     const ev = await getCaseEvidence(row);

@@ -8,7 +8,7 @@ import { actor, allOk, freshTrailer, submitInput } from './handoff-fixtures';
 // The route handler with a signed-in driver, without a running Next server: auth is replaced,
 // everything below it (zod, the submit service, the database) is real.
 const signedIn = vi.hoisted(() => ({ user: null as unknown }));
-vi.mock('@/lib/server/auth', () => ({ apiUser: async () => signedIn.user }));
+vi.mock('@/lib/server/auth', () => ({ currentUser: async () => signedIn.user }));
 vi.mock('next/server', () => ({ after: () => undefined }));
 const { POST } = await import('@/app/api/handoffs/route');
 

@@ -3,7 +3,7 @@
 import { revalidatePath } from 'next/cache';
 import { z } from 'zod';
 import { createRow, createSpot, renameRow, renameSpot, retireSpot } from '@/db/queries/yard-layout';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { createRowSchema, createSpotSchema, renameSchema, retireSpotSchema } from '@/lib/validation/yard';
 import type { ActionState } from '@/lib/yard/result';

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listLayout } from '@/db/queries/yard-layout';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { ActionForm } from '../../yard/_components/action-form';
 import {

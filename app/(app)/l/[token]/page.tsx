@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
 import { ButtonLink } from '@/app/_components/button';
 import { NOT_OUR_LABEL, replacedMessage } from '@/lib/labels/wording';
-import { canOpen } from '@/lib/roles';
+import { canOpen } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { resolveLabelToken } from '@/lib/server/labels';
 import { labelTokenSchema } from '@/lib/validation/labels';

@@ -8,7 +8,7 @@ import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { checkHandoffChain, getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
 import { buildTrailerFile } from '@/lib/desk/trailer-file';
 import { formatWhen } from '@/lib/engine';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { TRAILER_FILE_KINDS, trailerFileQuerySchema } from '@/lib/validation/desk';
 import { ChainStatus } from './_components/chain-status';

@@ -4,7 +4,7 @@ import { ButtonLink } from '@/app/_components/button';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { getRowName, prepareLabelSheet, listRowsForLabels } from '@/db/queries/labels';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { labelSheetQuerySchema } from '@/lib/validation/labels';
 import { LabelSheet } from './_components/label-sheet';

@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { getBoard } from '@/db/queries/yard-board';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { YardNav } from '../_components/yard-nav';
 import { MoveForm } from './_components/move-form';

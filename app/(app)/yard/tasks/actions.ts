@@ -2,7 +2,7 @@
 
 import { revalidatePath } from 'next/cache';
 import { clearTask } from '@/db/queries/yard-tasks';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { clearTaskSchema } from '@/lib/validation/yard';
 import type { ActionState } from '@/lib/yard/result';

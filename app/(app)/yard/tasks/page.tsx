@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listOpenTasks } from '@/db/queries/yard-tasks';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { formatLocal } from '@/lib/yard/table';
 import { TASK_LABELS } from '@/lib/yard/walk';

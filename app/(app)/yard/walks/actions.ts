@@ -6,7 +6,7 @@ import { z } from 'zod';
 import { resolveWalkOutcome } from '@/db/queries/yard-outcomes';
 import { finishWalk } from '@/db/queries/yard-walk-finish';
 import { startWalk } from '@/db/queries/yard-walks';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { resolveOutcomeSchema, startWalkSchema } from '@/lib/validation/yard';
 import type { ActionState } from '@/lib/yard/result';

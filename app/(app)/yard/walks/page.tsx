@@ -3,7 +3,7 @@ import Link from 'next/link';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listLayout } from '@/db/queries/yard-layout';
 import { listRecentWalks } from '@/db/queries/yard-walks';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { formatLocal } from '@/lib/yard/table';
 import { ActionForm } from '../_components/action-form';

@@ -1,16 +1,13 @@
 import { getBoard } from '@/db/queries/yard-board';
-import { SECTION_ROLES } from '@/lib/roles';
-import { apiUser } from '@/lib/server/auth';
-import { noTerminal } from '@/lib/server/yard-api';
+import { SECTION_ROLES } from '@/lib/auth/roles';
+import { route } from '@/lib/server/api';
+import { NO_TERMINAL } from '@/lib/server/yard-api';
 
 // The board for SWR: always fresh, never cached.
 export const dynamic = 'force-dynamic';
 
-export async function GET() {
-  const user = await apiUser(SECTION_ROLES.yard);
-  if (user instanceof Response) return user;
-  if (!user.terminalId) return noTerminal();
-  const board = await getBoard(user.terminalId);
-  if (!board) return noTerminal();
+export const GET = route({ access: SECTION_ROLES.yard }, async ({ user }) => {
+  const board = user.terminalId ? await getBoard(user.terminalId) : null;
+  if (!board) return NO_TERMINAL;
   return Response.json(board, { headers: { 'Cache-Control': 'no-store' } });
-}
+});

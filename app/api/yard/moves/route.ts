@@ -1,28 +1,22 @@
 import { findTrailerIdByScan } from '@/db/queries/yard-identify';
 import { findSpotByLabel, moveTrailer } from '@/db/queries/yard-moves';
-import { SECTION_ROLES } from '@/lib/roles';
-import { apiError, invalid, readJson } from '@/lib/server/api';
-import { apiUser } from '@/lib/server/auth';
-import { noTerminal, refusalResponse } from '@/lib/server/yard-api';
+import { SECTION_ROLES } from '@/lib/auth/roles';
+import { refuse } from '@/lib/result';
+import { route } from '@/lib/server/api';
+import { fromYardRefusal, NO_TERMINAL } from '@/lib/server/yard-api';
 import { moveSchema } from '@/lib/validation/yard';
 
 /** Records a jockey's move: `{ unit, target }` — unit number, VIN or label link; slot or door label. */
-export async function POST(request: Request) {
-  const user = await apiUser(SECTION_ROLES.yard);
-  if (user instanceof Response) return user;
-  const body = await readJson(request);
-  if (!body.ok) return body.response;
-  const parsed = moveSchema.safeParse(body.body);
-  if (!parsed.success) return invalid(parsed.error);
-  if (!user.terminalId) return noTerminal();
-  const trailerId = await findTrailerIdByScan(parsed.data.unit);
+export const POST = route({ access: SECTION_ROLES.yard, body: moveSchema }, async ({ user, body }) => {
+  if (!user.terminalId) return NO_TERMINAL;
+  const trailerId = await findTrailerIdByScan(body.unit);
   if (!trailerId)
-    return apiError('not_found', `No trailer matches ${parsed.data.unit}.`, {
+    return refuse('not_found', `No trailer matches ${body.unit}.`, {
       unit: ['No trailer with that unit number, VIN or label.'],
     });
-  const spot = await findSpotByLabel(user.terminalId, parsed.data.target);
+  const spot = await findSpotByLabel(user.terminalId, body.target);
   if (!spot)
-    return apiError('not_found', `No slot or door ${parsed.data.target} in this yard.`, {
+    return refuse('not_found', `No slot or door ${body.target} in this yard.`, {
       target: ['No such slot or door in this yard.'],
     });
   const result = await moveTrailer({
@@ -31,6 +25,6 @@ export async function POST(request: Request) {
     trailerId,
     toSpotId: spot.id,
   });
-  if (!result.ok) return refusalResponse(result);
+  if (!result.ok) return fromYardRefusal(result);
   return Response.json(result, { status: 201 });
-}
+});

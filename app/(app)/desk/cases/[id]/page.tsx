@@ -9,7 +9,7 @@ import { isWithinDisputeWindow } from '@/lib/desk/case-state';
 import { centsToDollarsText, effectiveAmountCents, formatCents } from '@/lib/desk/estimate';
 import { itemZone } from '@/lib/desk/item-labels';
 import { formatWhen } from '@/lib/engine';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { CaseStateBadge } from '../../_components/case-state-badge';
 import { CaseActions } from './_components/case-actions';

@@ -3,7 +3,7 @@ import { notFound } from 'next/navigation';
 import { ButtonLink } from '@/app/_components/button';
 import { ReceiptSummary } from '@/app/_components/receipt-summary';
 import { getReceipt } from '@/db/queries/handoffs';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { idParamSchema } from '@/lib/validation/handoffs';
 

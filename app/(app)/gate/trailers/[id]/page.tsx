@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { listOpenHolds } from '@/db/queries/handoffs';
 import { listCarriers } from '@/db/queries/trailers';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { getTrailerCondition } from '@/lib/server/trailer-condition';
 import { idParamSchema } from '@/lib/validation/handoffs';

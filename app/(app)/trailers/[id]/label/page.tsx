@@ -3,7 +3,7 @@ import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { ButtonLink } from '@/app/_components/button';
 import { prepareLabelSheet } from '@/db/queries/labels';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { LabelSheet } from '../../labels/_components/label-sheet';
 import { PrintButton } from '../../labels/_components/print-button';

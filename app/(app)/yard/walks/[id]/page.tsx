@@ -3,7 +3,7 @@ import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { listWalkOutcomes } from '@/db/queries/yard-outcomes';
 import { getWalk } from '@/db/queries/yard-walks';
-import { SECTION_ROLES } from '@/lib/roles';
+import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { YardNav } from '../../_components/yard-nav';
 import { WalkResult } from './_components/walk-result';

@@ -1,16 +1,17 @@
-import { SECTION_ROLES } from '@/lib/roles';
-import { apiError } from '@/lib/server/api';
-import { apiUser } from '@/lib/server/auth';
+import { z } from 'zod';
+import { SECTION_ROLES } from '@/lib/auth/roles';
+import { refuse } from '@/lib/result';
+import { route } from '@/lib/server/api';
 import { getTrailerCondition } from '@/lib/server/trailer-condition';
 import { idParamSchema } from '@/lib/validation/handoffs';
 
+const ROLES_AT_GATE_OR_YARD = [...new Set([...SECTION_ROLES.gate, ...SECTION_ROLES.yard])];
+
 /** The trailer's checklist and, per item, the latest inspected observation with when and by whom. */
-export async function GET(_request: Request, ctx: RouteContext<'/api/trailers/[id]/condition'>) {
-  const user = await apiUser([...new Set([...SECTION_ROLES.gate, ...SECTION_ROLES.yard])]);
-  if (user instanceof Response) return user;
-  const id = idParamSchema.safeParse((await ctx.params).id);
-  if (!id.success) return apiError('not_found', 'No such trailer.');
-  const condition = await getTrailerCondition(id.data, user.role);
-  if (!condition) return apiError('not_found', 'No such trailer.');
-  return Response.json(condition);
-}
+export const GET = route(
+  { access: ROLES_AT_GATE_OR_YARD, params: z.object({ id: idParamSchema }), notFound: 'No such trailer.' },
+  async ({ user, params }) => {
+    const condition = await getTrailerCondition(params.id, user.role);
+    return condition ? Response.json(condition) : refuse('not_found', 'No such trailer.');
+  },
+);

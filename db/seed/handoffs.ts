@@ -6,16 +6,16 @@
 import { createHash } from 'node:crypto';
 import { inArray } from 'drizzle-orm';
 import { PNG } from 'pngjs';
-import { buildChecklist, type Checklist } from '../lib/engine';
-import { submitHandoff, type HandoffActor } from '../lib/server/handoffs';
-import { putObject } from '../lib/server/storage';
-import type { ItemObservationInput } from '../lib/validation/handoffs';
-import { db } from './index';
-import { photos, trailers, users } from './schema';
+import { buildChecklist, type Checklist } from '@/lib/engine';
+import { submitHandoff, type HandoffActor } from '@/lib/server/handoffs';
+import { putObject } from '@/lib/server/storage';
+import type { ItemObservationInput } from '@/lib/validation/handoffs';
+import { db } from '@/db';
+import { photos, trailers, users } from '@/db/schema';
 
 const HOUR = 3_600_000;
 type TrailerRow = typeof trailers.$inferSelect;
-import { allOkObservations } from '../lib/all-ok';
+import { allOkObservations } from '@/lib/all-ok';
 
 type Driver = HandoffActor & { name: string; driverNumber: string };
 

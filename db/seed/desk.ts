@@ -5,15 +5,15 @@
 import { createHash } from 'node:crypto';
 import { and, desc, eq, inArray, like, sql } from 'drizzle-orm';
 import { PNG } from 'pngjs';
-import { buildChecklist, type Checklist } from '../lib/engine';
-import { putObject } from '../lib/server/storage';
-import { submitHandoff, type HandoffActor } from '../lib/server/handoffs';
-import type { ItemObservationInput } from '../lib/validation/handoffs';
-import { priceNewCases, runCaseCommand } from './queries/case-commands';
-import { db } from './index';
-import { caseEvents, cases, handoffs, photos, trailers, users } from './schema';
+import { buildChecklist, type Checklist } from '@/lib/engine';
+import { putObject } from '@/lib/server/storage';
+import { submitHandoff, type HandoffActor } from '@/lib/server/handoffs';
+import type { ItemObservationInput } from '@/lib/validation/handoffs';
+import { priceNewCases, runCaseCommand } from '@/db/queries/case-commands';
+import { db } from '@/db';
+import { caseEvents, cases, handoffs, photos, trailers, users } from '@/db/schema';
 
-import { allOkObservations } from '../lib/all-ok';
+import { allOkObservations } from '@/lib/all-ok';
 
 const DAY = 86_400_000;
 

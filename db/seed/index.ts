@@ -1,11 +1,13 @@
 // Demo data: an invented reefer carrier, Bramblecrest Cold Lines, with two terminals, ~300
 // trailers and a few outside carriers. Every name, number and place here is made up.
 // Safe to re-run: rows are keyed by natural keys and inserted only when missing.
+import { resolve } from 'node:path';
+import { pathToFileURL } from 'node:url';
 import bcrypt from 'bcryptjs';
 import { and, eq } from 'drizzle-orm';
-import { computeVinCheckDigit } from '../lib/engine/identity';
-import { defaultPolicy } from '../lib/engine/policy';
-import { db, pool } from './index';
+import { computeVinCheckDigit } from '@/lib/engine/identity';
+import { defaultPolicy } from '@/lib/engine/policy';
+import { db, pool } from '@/db';
 import {
   carriers,
   labels,
@@ -16,9 +18,9 @@ import {
   users,
   yardRows,
   yardSpots,
-} from './schema';
-import { seedDesk } from './seed-desk';
-import { seedHistory } from './seed-history';
+} from '@/db/schema';
+import { seedDesk } from './desk';
+import { seedHistory } from './history';
 
 export const DEMO_ACCOUNTS = [
   {
@@ -269,7 +271,7 @@ export async function seed() {
   await seedDesk();
 }
 
-const isMain = process.argv[1] && import.meta.url.endsWith(process.argv[1].split('/').pop() ?? '');
+const isMain = !!process.argv[1] && import.meta.url === pathToFileURL(resolve(process.argv[1])).href;
 if (isMain) {
   const started = Date.now();
   await seed();

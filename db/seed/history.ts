@@ -1,10 +1,10 @@
 // Where the demo trailers stand now: most in the two yards, the rest out on the road, and weeks
-// of handoff history for a sixth of them (db/seed-handoffs.ts, through the real submit service).
+// of handoff history for a sixth of them (db/seed/handoffs.ts, through the real submit service).
 // Runs once (skips when any trailer is already in a yard).
 import { and, asc, eq, isNotNull } from 'drizzle-orm';
-import { db } from './index';
-import { trailers, yardSpots } from './schema';
-import { seedHandoffs, type HandoffPlan } from './seed-handoffs';
+import { db } from '@/db';
+import { trailers, yardSpots } from '@/db/schema';
+import { seedHandoffs, type HandoffPlan } from './handoffs';
 
 const HOUR = 3_600_000;
 

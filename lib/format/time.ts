@@ -1,0 +1,50 @@
+// Every time a person reads is shown in the terminal's IANA zone, through these functions only.
+import { TZDate, tz } from '@date-fns/tz';
+import { format } from 'date-fns';
+
+export type TimeStyle = 'date' | 'time' | 'dateTime';
+
+const OPTIONS: Record<TimeStyle, Intl.DateTimeFormatOptions> = {
+  date: { day: 'numeric', month: 'short', year: 'numeric' },
+  time: { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZoneName: 'short' },
+  dateTime: {
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+    timeZoneName: 'short',
+  },
+};
+
+const cache = new Map<string, Intl.DateTimeFormat>();
+
+/** `at` in `timeZone`, e.g. `Mar 12, 2026, 14:05 CDT`. */
+export function formatTime(
+  at: Date | string | number,
+  timeZone: string,
+  style: TimeStyle = 'dateTime',
+  locale = 'en-US',
+): string {
+  const key = `${locale}|${timeZone}|${style}`;
+  let f = cache.get(key);
+  if (!f) {
+    f = new Intl.DateTimeFormat(locale, { ...OPTIONS[style], timeZone });
+    cache.set(key, f);
+  }
+  return f.format(new Date(at));
+}
+
+/** The value a `datetime-local` input shows for `at` in the terminal's zone. */
+export function toLocalInput(at: Date, timeZone: string): string {
+  return format(at, "yyyy-MM-dd'T'HH:mm", { in: tz(timeZone) });
+}
+
+/** A `datetime-local` value (`2026-03-08T02:30`) read as wall time in the terminal's zone. */
+export function fromLocalInput(value: string, timeZone: string): Date | null {
+  const m = /^(\d{4})-(\d{2})-(\d{2})T(\d{2}):(\d{2})$/.exec(value);
+  if (!m) return null;
+  const [y, mo, d, h, mi] = m.slice(1).map(Number);
+  return new Date(new TZDate(y, mo - 1, d, h, mi, timeZone).getTime());
+}

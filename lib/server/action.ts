@@ -1,0 +1,54 @@
+import 'server-only';
+import type { z } from 'zod';
+import type { Role } from '@/lib/auth/roles';
+import { isRefusal, type ActionState, type Refusal } from '@/lib/result';
+import { describeZodError } from '@/lib/validation/errors';
+import { requireUser, type SessionUser } from './auth';
+
+// Never sent back to refill a form.
+const SECRET_FIELD = /password|pin|secret|token/i;
+
+function echo(raw: unknown): Record<string, string> {
+  if (!raw || typeof raw !== 'object') return {};
+  const out: Record<string, string> = {};
+  for (const [key, value] of Object.entries(raw)) {
+    if (typeof value === 'string' && !SECRET_FIELD.test(key) && !key.startsWith('$')) out[key] = value;
+  }
+  return out;
+}
+
+type Spec<S extends z.ZodType> = {
+  roles: readonly Role[];
+  schema: S;
+  /** How to read the form; the default takes each field's last value. */
+  read?: (form: FormData) => unknown;
+};
+
+/** What the work of an action returns: a refusal, or success with an optional message. */
+export type ActionOutcome = Refusal | { ok: true; message?: string } | void;
+
+/**
+ * The one server-action wrapper: signed-in user with an allowed role, the form parsed with the
+ * shared schema (field messages and the typed values back on failure), then the work. The work
+ * may `redirect()`; a refusal comes back to the form under its fields.
+ */
+export function formAction<S extends z.ZodType>(
+  spec: Spec<S>,
+  work: (user: SessionUser, input: z.output<S>) => Promise<ActionOutcome>,
+) {
+  return async (_prev: ActionState, form: FormData): Promise<ActionState> => {
+    const user = await requireUser(spec.roles);
+    const raw = spec.read ? spec.read(form) : Object.fromEntries(form);
+    const values = echo(Object.fromEntries(form));
+    const parsed = spec.schema.safeParse(raw);
+    if (!parsed.success) {
+      const { message, fieldErrors } = describeZodError(parsed.error);
+      return { ok: false, formError: message, fieldErrors, values };
+    }
+    const outcome = await work(user, parsed.data);
+    if (isRefusal(outcome)) {
+      return { ok: false, formError: outcome.message, fieldErrors: outcome.fieldErrors, values };
+    }
+    return { ok: true, message: outcome?.message };
+  };
+}
