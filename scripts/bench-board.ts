@@ -41,15 +41,13 @@ for (let i = 0; i < OCCUPIED; i += 500) {
     fuelEighths: i % 8,
   });
 }
-await db
-  .insert(users)
-  .values({
-    name: 'Bench jockey',
-    role: 'jockey',
-    email: JOCKEY.email,
-    secretHash: await hash(JOCKEY.password, 10),
-    homeTerminalId: terminalId,
-  });
+await db.insert(users).values({
+  name: 'Bench jockey',
+  role: 'jockey',
+  email: JOCKEY.email,
+  secretHash: await hash(JOCKEY.password, 10),
+  homeTerminalId: terminalId,
+});
 await pool.end();
 
 const server = spawn('node_modules/.bin/next', ['start', '-p', String(PORT)], {

@@ -224,16 +224,14 @@ export async function priceCase(tx: Tx, id: string, now: Date, rates?: RateRow[]
   const missing = estimate.unpricedItemKeys.length
     ? `; no rate for ${estimate.unpricedItemKeys.map(itemLabel).join(', ')}`
     : '';
-  await tx
-    .insert(caseEvents)
-    .values({
-      caseId: id,
-      kind: 'estimated',
-      fromState: 'open',
-      toState: 'open',
-      note: `Rate card: ${formatCents(estimate.totalCents)} for ${fs.length} item(s)${missing}`,
-      createdAt: now,
-    });
+  await tx.insert(caseEvents).values({
+    caseId: id,
+    kind: 'estimated',
+    fromState: 'open',
+    toState: 'open',
+    note: `Rate card: ${formatCents(estimate.totalCents)} for ${fs.length} item(s)${missing}`,
+    createdAt: now,
+  });
   return true;
 }
 
