@@ -1,21 +1,37 @@
-import type { ComponentProps } from 'react';
+'use client';
 
-/** A labelled input whose first error shows under it, linked with aria-describedby. */
-export function Field({
+import type { ComponentProps, ReactNode } from 'react';
+import { useFieldError, useTypedValue } from './form-state';
+
+const control =
+  'mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-3 text-gate aria-[invalid=true]:border-danger';
+
+type Labelled = { label: string; name: string; error?: string[]; hint?: string; className?: string };
+
+/** Label, hint, the control and its first error, wired with aria-describedby and aria-invalid. */
+function Frame({
   label,
   name,
-  error,
+  id,
   hint,
+  messages,
   className = '',
-  ...input
-}: ComponentProps<'input'> & { label: string; name: string; error?: string[]; hint?: string }) {
-  const errorId = `${name}-error`;
-  const hintId = `${name}-hint`;
-  const describedBy =
-    [hint ? hintId : null, error?.length ? errorId : null].filter(Boolean).join(' ') || undefined;
+  children,
+}: {
+  label: string;
+  name: string;
+  id: string;
+  hint?: string;
+  messages?: string[];
+  className?: string;
+  children: (aria: { 'aria-invalid'?: true; 'aria-describedby'?: string }) => ReactNode;
+}) {
+  const errorId = `${id}-error`;
+  const hintId = `${id}-hint`;
+  const describedBy = [hint ? hintId : null, messages?.length ? errorId : null].filter(Boolean).join(' ');
   return (
     <div className={className}>
-      <label htmlFor={input.id ?? name} className="block text-gate font-bold">
+      <label htmlFor={id} className="block text-gate font-bold">
         {label}
       </label>
       {hint ? (
@@ -23,16 +39,93 @@ export function Field({
           {hint}
         </p>
       ) : null}
-      <input
-        id={input.id ?? name}
-        name={name}
-        aria-invalid={error?.length ? true : undefined}
-        aria-describedby={describedBy}
-        className="mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-3 text-gate aria-[invalid=true]:border-danger"
-        {...input}
-      />
-      <FieldError id={errorId} messages={error} />
+      {children({
+        ...(messages?.length ? { 'aria-invalid': true as const } : {}),
+        ...(describedBy ? { 'aria-describedby': describedBy } : {}),
+      })}
+      <FieldError id={errorId} messages={messages} />
     </div>
+  );
+}
+
+/** A labelled input whose first error shows under it. Inside an ActionForm it finds its own error. */
+export function Field({ label, name, error, hint, className, ...input }: ComponentProps<'input'> & Labelled) {
+  const messages = useFieldError(name, error);
+  const typed = useTypedValue(name);
+  const id = input.id ?? name;
+  return (
+    <Frame label={label} name={name} id={id} hint={hint} messages={messages} className={className}>
+      {(aria) => (
+        <input
+          id={id}
+          name={name}
+          className={control}
+          {...input}
+          {...aria}
+          {...(typed !== undefined && input.value === undefined && input.type !== 'hidden'
+            ? { defaultValue: typed }
+            : {})}
+        />
+      )}
+    </Frame>
+  );
+}
+
+export function Select({
+  label,
+  name,
+  error,
+  hint,
+  className,
+  children,
+  ...select
+}: ComponentProps<'select'> & Labelled) {
+  const messages = useFieldError(name, error);
+  const typed = useTypedValue(name);
+  const id = select.id ?? name;
+  return (
+    <Frame label={label} name={name} id={id} hint={hint} messages={messages} className={className}>
+      {(aria) => (
+        <select
+          id={id}
+          name={name}
+          className={control}
+          {...select}
+          {...aria}
+          {...(typed !== undefined && select.value === undefined ? { defaultValue: typed } : {})}
+        >
+          {children}
+        </select>
+      )}
+    </Frame>
+  );
+}
+
+export function Textarea({
+  label,
+  name,
+  error,
+  hint,
+  className,
+  ...area
+}: ComponentProps<'textarea'> & Labelled) {
+  const messages = useFieldError(name, error);
+  const typed = useTypedValue(name);
+  const id = area.id ?? name;
+  return (
+    <Frame label={label} name={name} id={id} hint={hint} messages={messages} className={className}>
+      {(aria) => (
+        <textarea
+          id={id}
+          name={name}
+          rows={3}
+          className={`${control} py-2`}
+          {...area}
+          {...aria}
+          {...(typed !== undefined && area.value === undefined ? { defaultValue: typed } : {})}
+        />
+      )}
+    </Frame>
   );
 }
 

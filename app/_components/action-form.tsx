@@ -1,0 +1,56 @@
+'use client';
+
+import { useActionState, type ReactNode } from 'react';
+import { IDLE, type ActionState } from '@/lib/result';
+import { Button } from './button';
+import { FormError } from './field';
+import { FormStateProvider } from './form-state';
+
+type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
+
+/**
+ * A form posting to a server action made with `formAction()`. Fields inside it (Field, Select,
+ * Textarea) show their own messages under them; the summary and the success message sit above
+ * the button, and the button says when it is working.
+ */
+export function ActionForm({
+  action,
+  submitLabel,
+  pendingLabel = 'Saving…',
+  title,
+  hidden,
+  variant = 'primary',
+  className = '',
+  children,
+}: {
+  action: Action;
+  submitLabel: string;
+  pendingLabel?: string;
+  title?: string;
+  hidden?: Record<string, string>;
+  variant?: 'primary' | 'secondary' | 'danger';
+  className?: string;
+  children?: ReactNode;
+}) {
+  const [state, run, isPending] = useActionState(action, IDLE);
+  return (
+    <FormStateProvider value={state}>
+      <form action={run} aria-label={title} className={`space-y-2 ${className}`}>
+        {title ? <h3 className="text-gate-lg font-bold">{title}</h3> : null}
+        {Object.entries(hidden ?? {}).map(([name, value]) => (
+          <input key={name} type="hidden" name={name} value={value} />
+        ))}
+        {children}
+        <FormError message={state.ok ? null : state.formError} />
+        {state.ok && state.message ? (
+          <p role="status" className="rounded-lg bg-ok-bg p-2 text-gate font-bold text-ok">
+            {state.message}
+          </p>
+        ) : null}
+        <Button type="submit" disabled={isPending} variant={variant}>
+          {isPending ? pendingLabel : submitLabel}
+        </Button>
+      </form>
+    </FormStateProvider>
+  );
+}
