@@ -1,5 +1,5 @@
 // Which findings are damage a carrier may be charged for: new or worse, and past cosmetic.
-// `minor` is cosmetic and acceptable (PRODUCT.md); small scratches are acceptable (common practice),
+// `minor` is cosmetic and acceptable (docs/sources.md); small scratches are acceptable (common practice),
 // so a mark that only became `minor` is recorded and compared but needs no photo and opens no case.
 import { severityOf, type Condition, type FindingKind } from './engine';
 

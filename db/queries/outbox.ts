@@ -3,7 +3,7 @@ import { db, type Tx } from '@/db';
 import { emailOutbox } from '@/db/schema';
 import { nextAttemptAt } from '@/lib/outbox-retry';
 
-// No `server-only` marker: the outbox worker script imports this under plain Node.
+import 'server-only';
 
 export type OutgoingEmail = {
   to: string;

@@ -1,6 +1,6 @@
 // The label sheet as a PDF: four labels per US Letter page (2 × 2), each with the unit number in
 // large type, the QR drawn as filled squares at a whole number of points per module (scanners
-// misread fractional module sizes; STACK.md), and the VIN and owner SCAC in small type.
+// misread fractional module sizes), and the VIN and owner SCAC in small type.
 import { PDFDocument, rgb, StandardFonts, type PDFFont, type PDFPage } from 'pdf-lib';
 import { LABEL_QR_MARGIN, labelQrModules } from './qr';
 

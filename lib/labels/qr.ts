@@ -1,5 +1,5 @@
 // QR settings for trailer labels. Level Q recovers about 25 % of codewords (ISO/IEC 18004), which
-// suits a label in a dirty yard; a link of up to 108 bytes then fits version 8 (SOURCES.md).
+// suits a label in a dirty yard; a link of up to 108 bytes then fits version 8 (ISO/IEC 18004).
 //
 // The mask: ISO/IEC 18004 lets the encoder pick any of eight mask patterns. The scanner's decoder
 // (@zxing/library, the one @zxing/browser runs on the phone) fails on a few percent of clean

@@ -9,7 +9,7 @@ const party = { carrierId: 'c1', carrierName: 'Osterlind Freightways', driverNam
 const t = (h: number) => new Date(Date.UTC(2026, 10, 2, h));
 
 describe('gate form draft', () => {
-  it('leaves untouched items out of the submit: not checked, never silently ok (PRODUCT.md)', () => {
+  it('leaves untouched items out of the submit: not checked, never silently ok (common practice)', () => {
     const d = newDraft({
       idempotencyKey: 'k'.repeat(20),
       trailerId: '3f1c2b7e-8a4d-4c1e-9b2a-6d5e4f3a2b1c',
@@ -110,7 +110,7 @@ describe('last known condition', () => {
 });
 
 describe('which changes need a photo and a note', () => {
-  // PRODUCT.md: `minor` is cosmetic and acceptable; common practice: small scratches are acceptable
+  // `minor` is cosmetic and acceptable (condition scale); common practice: small scratches are acceptable
   it('a new cosmetic mark (ok → minor) needs no evidence; ok → damaged and minor → unsafe do', () => {
     expect(needsEvidence('new', { condition: 'minor' })).toBe(false);
     expect(needsEvidence('new', { condition: 'damaged' })).toBe(true);

@@ -94,7 +94,7 @@ describe('labels and trailer lookup (fresh test database)', () => {
     expect(await resolveLabelToken(flipped)).toEqual({ ok: false, error: 'not_ours' });
   });
 
-  it('keeps the label link short enough for a version 8 QR at level Q (≤ 108 bytes, SOURCES.md)', async () => {
+  it('keeps the label link short enough for a version 8 QR at level Q (≤ 108 bytes, ISO/IEC 18004)', async () => {
     const t = await trailerByUnit('R53014');
     const label = (await getCurrentLabel(t.id))!;
     const link = labelLink({ id: label.id, trailerId: t.id });

@@ -16,7 +16,7 @@ const HINGE = 'rear.door_left.hinge_3';
 const find = (fs: ReturnType<typeof compareInspection>, key: string) => fs.find((f) => f.itemKey === key)!;
 
 describe('conditions', () => {
-  it('orders severity ok < minor < damaged < unsafe < missing (PRODUCT.md condition scale)', () => {
+  it('orders severity ok < minor < damaged < unsafe < missing (condition scale, common practice)', () => {
     expect(compareSeverity('ok', 'minor')).toBeLessThan(0);
     expect(compareSeverity('damaged', 'minor')).toBeGreaterThan(0);
     expect(compareSeverity('missing', 'unsafe')).toBeGreaterThan(0);

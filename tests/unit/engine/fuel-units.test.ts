@@ -68,7 +68,7 @@ describe('fuel', () => {
   });
 
   it('labels the default figures with their sources', () => {
-    // SOURCES.md, secondary source: 0.4–1.1 gal/h; tanks about 50 gal.
+    // secondary source (docs/sources.md): 0.4–1.1 gal/h; tanks about 50 gal.
     expect(defaultPolicy.reeferBurnGallonsPerHour).toBe(0.8);
     expect(defaultPolicySources.reeferBurnGallonsPerHour).toContain('secondary source');
     expect(defaultPolicySources.defaultTankGallons).toContain('secondary source');

@@ -18,13 +18,13 @@ describe('validateVin (49 CFR 565.15)', () => {
   });
 
   it('accepts a VIN whose check digit is X (remainder 10)', () => {
-    // Widely published worked example (SOURCES.md): 1M8GDM9AXKP042788, remainder 10 → X.
+    // Widely published worked example: 1M8GDM9AXKP042788, remainder 10 → X.
     expect(computeVinCheckDigit('1M8GDM9AXKP042788')).toBe('X');
     expect(validateVin('1m8gdm9axkp042788 ')).toMatchObject({ ok: true, checkDigit: 'X' });
   });
 
   it('rejects 5TFEV54198X063405, listed as valid in some public test files: it computes 6, not 9', () => {
-    // SOURCES.md: the check digit computes to 6 under 565.15(c).
+    // 49 CFR 565.15(c) applied by hand: the check digit computes to 6 under 565.15(c).
     expect(validateVin('5TFEV54198X063405')).toEqual({
       ok: false,
       error: 'check_digit',

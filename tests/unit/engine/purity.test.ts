@@ -1,4 +1,4 @@
-// The engine is pure (STYLE.md, "The engine"): no clock, env, database or framework imports.
+// The engine is pure (docs/architecture.md): no clock, env, database or framework imports.
 import { readdirSync, readFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { describe, expect, it } from 'vitest';

@@ -18,7 +18,7 @@ function attribute(history: TimelineEvent[], current: InspectionEvent, terminalN
 }
 
 describe('custody legs', () => {
-  it('drop hands custody to the terminal, hook to the driver carrier, moves keep it (PRODUCT.md)', () => {
+  it('drop hands custody to the terminal, hook to the driver carrier, moves keep it (common practice)', () => {
     const t = [
       drop('2026-11-01T10:00:00Z', northwind),
       move('2026-11-01T11:00:00Z'),

@@ -13,7 +13,7 @@ const token = signLabelToken(
 // a production-like address and the e2e one; both links stay under 108 bytes
 const LINKS = [`https://gate.hitchmark.example/l/${token}`, `http://localhost:3501/l/${token}`];
 
-// Byte-mode capacity at level Q per ISO/IEC 18004 as listed in SOURCES.md: 108 bytes → version 8.
+// Byte-mode capacity at level Q per ISO/IEC 18004 (docs/sources.md): 108 bytes → version 8.
 const SOURCES_Q_VERSION_FOR_108_BYTES = 8;
 
 function decodeRgba(data: Uint8ClampedArray, width: number, height: number) {
@@ -58,7 +58,7 @@ describe('label QR codes (checked with jsqr against ISO/IEC 18004)', () => {
       );
       const decoded = decodeRgba(new Uint8ClampedArray(png.data), png.width, png.height);
       expect(decoded?.data).toBe(link);
-      // SOURCES.md (ISO/IEC 18004 capacity): ≤ 108 bytes in byte mode at Q fits version 8
+      // ISO/IEC 18004 capacity: ≤ 108 bytes in byte mode at Q fits version 8
       expect(decoded!.version).toBeLessThanOrEqual(SOURCES_Q_VERSION_FOR_108_BYTES);
       // the encoder's own idea of the version agrees with what the independent decoder read
       expect(labelQrModules(link).version).toBe(decoded!.version);

@@ -20,7 +20,7 @@ describe('trailer lookup input', () => {
   });
 
   it('refuses a bad check digit with a clear message', () => {
-    // 5TFEV54198X063405 circulates as "valid" but its check digit computes to 6, not 9 (SOURCES.md)
+    // 5TFEV54198X063405 circulates as "valid" but its check digit computes to 6, not 9 (49 CFR 565.15(c))
     const result = trailerLookupSchema.safeParse({ vin: '5TFEV54198X063405' });
     expect(result.success).toBe(false);
     expect(firstMessage(result)).toMatch(/check digit \(9th character\) is wrong/);
