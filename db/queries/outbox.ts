@@ -1,9 +1,9 @@
+import 'server-only';
 import { and, asc, eq, lte, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { emailOutbox } from '@/db/schema';
 import { nextAttemptAt } from '@/lib/outbox-retry';
 
-import 'server-only';
 
 export type OutgoingEmail = {
   to: string;
