@@ -2,6 +2,7 @@ import { pgEnum, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { ROLES } from '@/lib/auth/roles';
 import { CASE_STATES, DECISIONS } from '@/lib/desk/case-state';
 import { CONDITIONS } from '@/lib/engine/conditions';
+import { TASK_KINDS, WALK_RESOLUTIONS } from '@/lib/yard/walk';
 
 export const id = () => uuid('id').primaryKey().defaultRandom();
 export const createdAt = () => timestamp('created_at', { withTimezone: true }).notNull().defaultNow();
@@ -27,8 +28,8 @@ export const walkOutcomeEnum = pgEnum('walk_outcome', [
   'unknown',
   'duplicate',
 ]);
-export const walkResolutionEnum = pgEnum('walk_resolution', ['accepted', 'marked_gone', 'investigating']);
-export const taskKindEnum = pgEnum('yard_task_kind', ['low_fuel', 'unit_off', 'doors_open', 'seal_missing']);
+export const walkResolutionEnum = pgEnum('walk_resolution', WALK_RESOLUTIONS);
+export const taskKindEnum = pgEnum('yard_task_kind', TASK_KINDS);
 export const caseStateEnum = pgEnum('case_state', CASE_STATES);
 export const decisionEnum = pgEnum('case_decision', DECISIONS);
 export const outboxStatusEnum = pgEnum('outbox_status', ['pending', 'sent', 'failed']);

@@ -1,24 +1,23 @@
 import { z } from 'zod';
 import { BOARD_FILTERS } from '@/lib/yard/board';
-import { SORT_KEYS } from '@/lib/yard/table';
+import { SORT_DIRS, SORT_KEYS } from '@/lib/yard/table';
+import { WALK_RESOLUTIONS } from '@/lib/yard/walk';
+import { plainText } from './text';
 
 const uuid = z.uuid('Not a valid id.');
-const label = z.string().trim().min(1, 'Enter a name.').max(40, 'At most 40 characters.');
+const label = plainText(40).min(1, 'Enter a name.');
 
 export const boardQuerySchema = z.object({
   filter: z
-    .preprocess(
-      (v) => (typeof v === 'string' && v ? v.split(',') : []),
-      z.array(z.enum(BOARD_FILTERS as [string, ...string[]])),
-    )
+    .preprocess((v) => (typeof v === 'string' && v ? v.split(',') : []), z.array(z.enum(BOARD_FILTERS)))
     .default([]),
-  sort: z.enum(SORT_KEYS as [string, ...string[]]).default('slot'),
-  dir: z.enum(['asc', 'desc']).default('asc'),
+  sort: z.enum(SORT_KEYS).default('slot'),
+  dir: z.enum(SORT_DIRS).default('asc'),
 });
 
 export const moveSchema = z.object({
-  unit: z.string().trim().min(1, 'Scan or type the unit number.').max(200),
-  target: z.string().trim().min(1, 'Scan or type the target slot or door.').max(40),
+  unit: plainText(200).min(1, 'Scan or type the unit number.'),
+  target: plainText(40).min(1, 'Scan or type the target slot or door.'),
 });
 export type MoveInput = z.infer<typeof moveSchema>;
 
@@ -40,8 +39,8 @@ export const startWalkSchema = z.object({ rowIds: z.array(uuid).min(1, 'Choose a
 
 const optionalBool = z.boolean().nullable().default(null);
 export const walkScanSchema = z.object({
-  clientKey: z.string().trim().min(8).max(80),
-  scannedText: z.string().trim().min(1, 'Scan or type the unit.').max(400),
+  clientKey: plainText(80).min(8),
+  scannedText: plainText(400).min(1, 'Scan or type the unit.'),
   spotId: uuid,
   scannedAt: z.iso.datetime({ offset: true }),
   isUnitRunning: optionalBool,
@@ -60,7 +59,8 @@ export type WalkScanInput = z.infer<typeof walkScanSchema>;
 
 export const resolveOutcomeSchema = z.object({
   outcomeId: uuid,
-  resolution: z.enum(['accepted', 'marked_gone', 'investigating']),
+  resolution: z.enum(WALK_RESOLUTIONS),
 });
 
 export const clearTaskSchema = z.object({ id: uuid });
+export const finishWalkSchema = z.object({ walkId: uuid });

@@ -1,8 +1,8 @@
 import { differenceInMinutes } from 'date-fns';
 import type { Board, BoardTrailer, TableRow, YardPolicy } from './types';
 
-export type BoardFilter = 'held' | 'low_fuel' | 'reefer_off' | 'over_free_time';
-export const BOARD_FILTERS: readonly BoardFilter[] = ['held', 'low_fuel', 'reefer_off', 'over_free_time'];
+export const BOARD_FILTERS = ['held', 'low_fuel', 'reefer_off', 'over_free_time'] as const;
+export type BoardFilter = (typeof BOARD_FILTERS)[number];
 export const FILTER_LABELS: Record<BoardFilter, string> = {
   held: 'On hold',
   low_fuel: 'Low fuel',

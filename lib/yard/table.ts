@@ -1,20 +1,11 @@
-import { format } from 'date-fns';
-import { tz } from '@date-fns/tz';
+import { formatTime } from '@/lib/format/time';
 import { dwellMinutes, formatDwell } from './board';
 import type { BoardTrailer, TableRow } from './types';
 
-export type SortKey = 'unit' | 'slot' | 'load' | 'reefer' | 'fuel' | 'holds' | 'dwell' | 'lastSeen';
-export type SortDir = 'asc' | 'desc';
-export const SORT_KEYS: readonly SortKey[] = [
-  'unit',
-  'slot',
-  'load',
-  'reefer',
-  'fuel',
-  'holds',
-  'dwell',
-  'lastSeen',
-];
+export const SORT_KEYS = ['unit', 'slot', 'load', 'reefer', 'fuel', 'holds', 'dwell', 'lastSeen'] as const;
+export type SortKey = (typeof SORT_KEYS)[number];
+export const SORT_DIRS = ['asc', 'desc'] as const;
+export type SortDir = (typeof SORT_DIRS)[number];
 
 /** Table columns in order; the CSV export uses the same headers and cells. */
 export const COLUMNS: readonly { key: SortKey | 'gateIn'; header: string }[] = [
@@ -29,11 +20,7 @@ export const COLUMNS: readonly { key: SortKey | 'gateIn'; header: string }[] = [
   { key: 'lastSeen', header: 'Last seen' },
 ];
 
-/** A local date and time in the terminal's IANA zone, e.g. "7 Mar 2026 12:00 CST". */
-export function formatLocal(at: string | null, timeZone: string): string {
-  if (at === null) return '—';
-  return format(new Date(at), 'd MMM yyyy HH:mm zzz', { in: tz(timeZone) });
-}
+const localTime = (at: string | null, timeZone: string) => (at === null ? '—' : formatTime(at, timeZone));
 
 export function reeferText(t: BoardTrailer): string {
   if (t.kind !== 'reefer') return 'No unit';
@@ -65,8 +52,8 @@ export function rowCells(row: TableRow, timeZone: string, now: Date): string[] {
     fuelText(t),
     holdsText(t),
     formatDwell(dwellMinutes(t.gateInAt, now)),
-    formatLocal(t.gateInAt, timeZone),
-    formatLocal(t.lastSeenAt, timeZone),
+    localTime(t.gateInAt, timeZone),
+    localTime(t.lastSeenAt, timeZone),
   ];
 }
 

@@ -49,7 +49,12 @@ export function walkScanEvent(scan: StoredWalkScan, jockeyName?: string): YardWa
   };
 }
 
-export type TaskKind = 'low_fuel' | 'unit_off' | 'doors_open' | 'seal_missing';
+export const TASK_KINDS = ['low_fuel', 'unit_off', 'doors_open', 'seal_missing'] as const;
+export type TaskKind = (typeof TASK_KINDS)[number];
+
+/** What the clerk or jockey did about a walk outcome. */
+export const WALK_RESOLUTIONS = ['accepted', 'marked_gone', 'investigating'] as const;
+export type WalkResolution = (typeof WALK_RESOLUTIONS)[number];
 
 export const TASK_LABELS: Record<TaskKind, string> = {
   low_fuel: 'Fuel the reefer',
@@ -80,5 +85,41 @@ export function tasksForScan(
   if (scan.areDoorsClosed === false) tasks.push({ kind: 'doors_open', note: 'Doors found open.' });
   if (trailer.isLoaded && scan.isSealPresent === false)
     tasks.push({ kind: 'seal_missing', note: 'Loaded trailer found without a seal.' });
+  return tasks;
+}
+
+/** A walk scan with what is known of the trailer it named (nothing for an unknown text). */
+export interface ScanOfTrailer extends QuickChecks {
+  trailerId: string | null;
+  kind: 'reefer' | 'dry_van' | null;
+  isLoaded: boolean | null;
+}
+
+export type NewTask = { trailerId: string; kind: TaskKind; note: string };
+
+/**
+ * The tasks a finished walk adds. Scans come in walking order and the latest scan of a trailer
+ * decides (a later look overrides an earlier one); a task already open for the trailer is not
+ * added again.
+ */
+export function tasksForWalk(
+  scans: readonly ScanOfTrailer[],
+  openTasks: readonly { trailerId: string; kind: TaskKind }[],
+  policy: YardPolicy,
+): NewTask[] {
+  const seen = new Set(openTasks.map((o) => `${o.trailerId}:${o.kind}`));
+  const latest = new Map<string, ScanOfTrailer & { trailerId: string }>();
+  for (const s of scans)
+    if (s.trailerId !== null && s.kind !== null) latest.set(s.trailerId, { ...s, trailerId: s.trailerId });
+  const tasks: NewTask[] = [];
+  for (const s of latest.values()) {
+    const trailer = { kind: s.kind!, isLoaded: s.isLoaded ?? false };
+    for (const task of tasksForScan(s, trailer, policy)) {
+      const key = `${s.trailerId}:${task.kind}`;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      tasks.push({ trailerId: s.trailerId, ...task });
+    }
+  }
   return tasks;
 }

@@ -8,7 +8,7 @@ import {
   isOverFreeTime,
   tableRows,
 } from '@/lib/yard/board';
-import { formatLocal, rowCells, sortRows } from '@/lib/yard/table';
+import { rowCells, sortRows } from '@/lib/yard/table';
 import { board, spot, trailer } from './fixtures';
 
 const CHICAGO = 'America/Chicago';
@@ -32,10 +32,18 @@ describe('dwell across a daylight-saving change', () => {
     expect(dwellMinutes(gateIn.toISOString(), now)).toBe(25 * 60);
   });
 
-  it('shows local times with the offset of the day (UTC-6 before, UTC-5 after the change)', () => {
+  it('shows gate-in and last-seen times in the zone of the day (CST before, CDT after the change)', () => {
     // IANA tz database: America/Chicago is CST (UTC-6) in winter, CDT (UTC-5) in summer time.
-    expect(formatLocal('2026-03-07T18:00:00Z', CHICAGO)).toBe('7 Mar 2026 12:00 GMT-6');
-    expect(formatLocal('2026-03-09T17:00:00Z', CHICAGO)).toBe('9 Mar 2026 12:00 GMT-5');
+    const row = {
+      trailer: trailer({ id: 'r1', gateInAt: '2026-03-07T18:00:00Z', lastSeenAt: '2026-03-09T17:00:00Z' }),
+      spotLabel: 'A01',
+      spotOrder: 1,
+    };
+    const cells = rowCells(row, CHICAGO, new Date('2026-03-09T18:00:00Z'));
+    expect(cells.slice(7)).toEqual(['Mar 7, 2026, 12:00 CST', 'Mar 9, 2026, 12:00 CDT']);
+    expect(rowCells({ ...row, trailer: { ...row.trailer, gateInAt: null } }, CHICAGO, new Date())[7]).toBe(
+      '—',
+    );
   });
 
   it('is over the 48 h free time only after 48 elapsed hours', () => {
@@ -173,8 +181,8 @@ describe('table cells', () => {
       '3/8',
       'Restricted: No perishable loads',
       '8 d 6 h',
-      '1 Mar 2026 06:00 GMT-6',
-      '1 Mar 2026 07:00 GMT-6',
+      'Mar 1, 2026, 06:00 CST',
+      'Mar 1, 2026, 07:00 CST',
     ]);
   });
 });

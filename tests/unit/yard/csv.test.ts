@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { filterRows, tableRows } from '@/lib/yard/board';
-import { boardCsv, csvField } from '@/lib/yard/csv';
+import { boardCsv } from '@/lib/yard/csv';
 import { COLUMNS, rowCells, sortRows } from '@/lib/yard/table';
 import { board, spot, trailer } from './fixtures';
 
@@ -58,10 +58,37 @@ describe('CSV export of the board', () => {
   ]);
 
   it('quotes fields with commas, quotes and line breaks (RFC 4180 section 2, rules 6 and 7)', () => {
-    expect(csvField('plain')).toBe('plain');
-    expect(csvField('a,b')).toBe('"a,b"');
-    expect(csvField('say "hi"')).toBe('"say ""hi"""');
-    expect(csvField('two\nlines')).toBe('"two\nlines"');
+    const odd = board([
+      spot(
+        'A01',
+        1,
+        trailer({
+          id: 'q1',
+          unitNumber: 'Q1',
+          holds: [{ severity: 'restricted', reason: 'say "hi"\ntwo lines' }],
+        }),
+      ),
+    ]);
+    const text = boardCsv(tableRows(odd), odd.terminal.timeZone, now);
+    const line = text.split('\r\n')[1];
+    // plain fields bare; the comma inside "On, 34.0 °F" and the quote and line break of the hold quoted
+    expect(line.startsWith('Q1,A01,Empty,"On, 34.0 °F",6/8,')).toBe(true);
+    expect(text).toContain('"Restricted: say ""hi""\ntwo lines"');
+    expect(parseCsv(text)[1][5]).toBe('Restricted: say "hi"\ntwo lines');
+  });
+
+  it('cannot smuggle a spreadsheet formula in through a unit number or a slot label', () => {
+    // OWASP "CSV Injection": a cell starting with = + - @ (or tab, CR) runs as a formula when the
+    // file is opened in a spreadsheet; such a cell is written with a leading apostrophe.
+    const risky = board([
+      spot('=HYPERLINK("http://x.example")', 1, trailer({ id: 'f1', unitNumber: '@SUM(A1:A9)' })),
+      spot('+A02', 2, trailer({ id: 'f2', unitNumber: '-2+3' })),
+    ]);
+    const parsed = parseCsv(boardCsv(tableRows(risky), risky.terminal.timeZone, now));
+    expect(parsed.slice(1).map((r) => [r[0], r[1]])).toEqual([
+      ["'@SUM(A1:A9)", '\'=HYPERLINK("http://x.example")'],
+      ["'-2+3", "'+A02"],
+    ]);
   });
 
   it('has the table header and exactly the table cells, row for row', () => {

@@ -8,8 +8,9 @@ import {
   type SendOutcome,
 } from '@/lib/yard/scan-queue';
 import { classifyScanText } from '@/lib/yard/scan-text';
-import { DEFAULT_YARD_POLICY, yardPolicyOf } from '@/lib/yard/policy';
-import { suggestNextSpot, tasksForScan, walkScanEvent } from '@/lib/yard/walk';
+import { terminalPolicyOf } from '@/lib/terminal/policy';
+import { DEFAULT_YARD_POLICY } from '@/lib/yard/policy';
+import { suggestNextSpot, tasksForScan, tasksForWalk, walkScanEvent } from '@/lib/yard/walk';
 
 const spots = [
   { id: 's1', label: 'A01', rowId: 'a' },
@@ -57,6 +58,22 @@ describe('tasks from a scan', () => {
   });
 });
 
+describe('tasks from a whole walk', () => {
+  const reefer = { kind: 'reefer' as const, isLoaded: true };
+  it('lets the latest scan of a trailer decide and adds no task that is already open', () => {
+    const scans = [
+      { ...checks, ...reefer, trailerId: 't1', fuelEighths: 2, areDoorsClosed: false }, // first look
+      { ...checks, ...reefer, trailerId: 't1', fuelEighths: 7 }, // looked again: fuelled, doors shut
+      { ...checks, ...reefer, trailerId: 't2', fuelEighths: 1, isSealPresent: false },
+      { ...checks, trailerId: null, kind: null, isLoaded: null, fuelEighths: 0 }, // unknown text
+    ];
+    const open = [{ trailerId: 't2', kind: 'low_fuel' as const }];
+    expect(tasksForWalk(scans, open, DEFAULT_YARD_POLICY)).toEqual([
+      { trailerId: 't2', kind: 'seal_missing', note: 'Loaded trailer found without a seal.' },
+    ]);
+  });
+});
+
 describe('walk scan as an engine timeline event', () => {
   it('carries the readings in the engine units and marks no checklist item inspected', () => {
     const at = new Date('2026-03-09T18:00:00Z');
@@ -89,12 +106,17 @@ describe('scanned text', () => {
 });
 
 describe('yard policy', () => {
+  const yardPolicyOf = (data: unknown) => terminalPolicyOf(data).yard;
   it('reads the figures from the stored document and falls back per field', () => {
     expect(yardPolicyOf({ freeTimeHours: 72, lowFuelEighths: 3, other: 1 })).toEqual({
       freeTimeHours: 72,
       lowFuelEighths: 3,
     });
     expect(yardPolicyOf({ freeTimeHours: 'x', lowFuelEighths: 12 })).toEqual(DEFAULT_YARD_POLICY);
+    expect(yardPolicyOf({ freeTimeHours: 24, lowFuelEighths: 12 })).toEqual({
+      freeTimeHours: 24,
+      lowFuelEighths: 4,
+    });
     expect(yardPolicyOf(null)).toEqual(DEFAULT_YARD_POLICY);
   });
 });
