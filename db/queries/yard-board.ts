@@ -2,7 +2,7 @@ import 'server-only';
 import { and, asc, eq, isNull } from 'drizzle-orm';
 import { db } from '@/db';
 import { holds, policies, terminals, trailers, yardRows, yardSpots } from '@/db/schema';
-import { yardPolicyOf } from '@/lib/yard/policy';
+import { terminalPolicyOf } from '@/lib/terminal/policy';
 import type { Board, BoardHold, BoardSpot } from '@/lib/yard/types';
 
 /** The yard board of one terminal: live slots and doors in map order, who sits where, open holds. */
@@ -83,7 +83,7 @@ export async function getBoard(terminalId: string, now = new Date()): Promise<Bo
   }));
   return {
     terminal: { name: terminal.name, timeZone: terminal.timeZone },
-    policy: yardPolicyOf(terminal.policy),
+    policy: terminalPolicyOf(terminal.policy).yard,
     rows,
     spots: boardSpots,
     generatedAt: now.toISOString(),

@@ -2,35 +2,9 @@ import 'server-only';
 import { and, eq, isNull } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { holds, trailers, yardMoves, yardSpots } from '@/db/schema';
-import { refuse, type Refusal } from '@/lib/yard/result';
-import { recordAudit } from './audit';
 
-export type MoveResult =
-  | {
-      ok: true;
-      moveId: string;
-      unitNumber: string;
-      fromLabel: string | null;
-      toLabel: string;
-      isOutOfService: boolean;
-    }
-  | Refusal;
-
-/**
- * Moves a trailer of this terminal's yard into a slot or door, inside the caller's transaction.
- * Locks the trailer, the target spot and any occupant; refuses an occupied target naming the
- * occupant. Custody stays with the terminal: a yard move, not a handoff.
- */
-export async function moveTrailerInTx(
-  tx: Tx,
-  {
-    terminalId,
-    actorId,
-    trailerId,
-    toSpotId,
-    reason,
-  }: { terminalId: string; actorId: string; trailerId: string; toSpotId: string; reason: string },
-): Promise<MoveResult> {
+/** A trailer with where it stands, row-locked for the caller's transaction. */
+export async function lockTrailerPlace(tx: Tx, trailerId: string) {
   const [trailer] = await tx
     .select({
       id: trailers.id,
@@ -42,78 +16,56 @@ export async function moveTrailerInTx(
     .from(trailers)
     .where(eq(trailers.id, trailerId))
     .for('update');
-  if (!trailer || trailer.terminalId !== terminalId || trailer.status !== 'in_yard') {
-    return refuse(
-      'not_found',
-      `${trailer?.unitNumber ?? 'That trailer'} is not in this terminal's yard.`,
-      'unit',
-    );
-  }
-  const [target] = await tx
+  return trailer ?? null;
+}
+
+/** A slot or door of this terminal (live or retired), row-locked. */
+export async function lockSpot(tx: Tx, terminalId: string, spotId: string) {
+  const [spot] = await tx
     .select({ id: yardSpots.id, label: yardSpots.label, retiredAt: yardSpots.retiredAt })
     .from(yardSpots)
-    .where(and(eq(yardSpots.id, toSpotId), eq(yardSpots.terminalId, terminalId)))
+    .where(and(eq(yardSpots.id, spotId), eq(yardSpots.terminalId, terminalId)))
     .for('update');
-  if (!target || target.retiredAt) return refuse('not_found', 'No such slot or door in this yard.', 'target');
-  if (trailer.spotId === target.id)
-    return refuse('invalid', `${trailer.unitNumber} is already in ${target.label}.`, 'target');
+  return spot ?? null;
+}
+
+/** The trailer standing in a spot, row-locked; null when the spot is free. */
+export async function lockOccupant(tx: Tx, spotId: string) {
   const [occupant] = await tx
     .select({ unitNumber: trailers.unitNumber })
     .from(trailers)
-    .where(eq(trailers.currentSpotId, target.id))
+    .where(eq(trailers.currentSpotId, spotId))
     .for('update');
-  if (occupant) {
-    return refuse(
-      'conflict',
-      `${target.label} is occupied by ${occupant.unitNumber}. Move ${occupant.unitNumber} out first or choose another spot.`,
-      'target',
-    );
-  }
-  const [from] = trailer.spotId
-    ? await tx.select({ label: yardSpots.label }).from(yardSpots).where(eq(yardSpots.id, trailer.spotId))
-    : [];
-  const [move] = await tx
-    .insert(yardMoves)
-    .values({ trailerId, terminalId, fromSpotId: trailer.spotId, toSpotId: target.id, movedById: actorId })
-    .returning({ id: yardMoves.id });
+  return occupant ?? null;
+}
+
+export async function spotLabel(tx: Tx, spotId: string): Promise<string | null> {
+  const [spot] = await tx.select({ label: yardSpots.label }).from(yardSpots).where(eq(yardSpots.id, spotId));
+  return spot?.label ?? null;
+}
+
+export async function insertYardMove(tx: Tx, move: typeof yardMoves.$inferInsert): Promise<string> {
+  const [row] = await tx.insert(yardMoves).values(move).returning({ id: yardMoves.id });
+  return row.id;
+}
+
+/** Puts the trailer in the spot and marks it seen there. */
+export async function setTrailerSpot(tx: Tx, trailerId: string, spotId: string, seenAt: Date) {
   await tx
     .update(trailers)
-    .set({ currentSpotId: target.id, lastSeenAt: new Date() })
+    .set({ currentSpotId: spotId, lastSeenAt: seenAt })
     .where(eq(trailers.id, trailerId));
-  const oos = await tx
+}
+
+export async function hasOpenOutOfServiceHold(tx: Tx, trailerId: string): Promise<boolean> {
+  const rows = await tx
     .select({ id: holds.id })
     .from(holds)
     .where(
       and(eq(holds.trailerId, trailerId), isNull(holds.releasedAt), eq(holds.severity, 'out_of_service')),
     )
     .limit(1);
-  await recordAudit(
-    {
-      actorId,
-      action: 'yard.move',
-      entityType: 'trailer',
-      entityId: trailerId,
-      detail: { moveId: move.id, from: from?.label ?? null, to: target.label, reason },
-    },
-    tx,
-  );
-  return {
-    ok: true,
-    moveId: move.id,
-    unitNumber: trailer.unitNumber,
-    fromLabel: from?.label ?? null,
-    toLabel: target.label,
-    isOutOfService: oos.length > 0,
-  };
-}
-
-export async function moveTrailer(input: {
-  terminalId: string;
-  actorId: string;
-  trailerId: string;
-  toSpotId: string;
-}): Promise<MoveResult> {
-  return db.transaction((tx) => moveTrailerInTx(tx, { ...input, reason: 'jockey move' }));
+  return rows.length > 0;
 }
 
 /** A live slot or door of this terminal by its label (case-insensitive), or null. */

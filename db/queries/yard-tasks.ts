@@ -1,9 +1,7 @@
 import 'server-only';
 import { and, asc, eq, isNull } from 'drizzle-orm';
-import { db } from '@/db';
+import { db, type Tx } from '@/db';
 import { trailers, yardSpots, yardTasks } from '@/db/schema';
-import { refuse, type Refusal } from '@/lib/yard/result';
-import { recordAudit } from './audit';
 
 /** Open yard tasks of one terminal, oldest first, with the trailer and where it stands. */
 export async function listOpenTasks(terminalId: string) {
@@ -23,17 +21,18 @@ export async function listOpenTasks(terminalId: string) {
     .orderBy(asc(yardTasks.createdAt), asc(trailers.unitNumber));
 }
 
-export async function clearTask(
+/** Clears an open task of this terminal; the id, or null when there is no such open task. */
+export async function clearOpenTask(
+  tx: Tx,
   terminalId: string,
-  actorId: string,
   id: string,
-): Promise<{ ok: true } | Refusal> {
-  const [task] = await db
+  clearedById: string,
+  clearedAt: Date,
+): Promise<string | null> {
+  const [task] = await tx
     .update(yardTasks)
-    .set({ clearedAt: new Date(), clearedById: actorId })
+    .set({ clearedAt, clearedById })
     .where(and(eq(yardTasks.id, id), eq(yardTasks.terminalId, terminalId), isNull(yardTasks.clearedAt)))
     .returning({ id: yardTasks.id });
-  if (!task) return refuse('not_found', 'No open task with that id in this yard.');
-  await recordAudit({ actorId, action: 'yard.task_cleared', entityType: 'yard_task', entityId: id });
-  return { ok: true };
+  return task?.id ?? null;
 }

@@ -3,6 +3,7 @@
 import { randomBytes } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
 import type { Db } from '../../db';
+import type { Role } from '../../lib/auth/roles';
 import { carriers, terminals, trailers, users, yardRows, yardSpots } from '../../db/schema';
 
 export const uniqueTag = () => randomBytes(3).toString('hex').toUpperCase();
@@ -29,14 +30,15 @@ export async function ensureCarrier(db: Db) {
   return c.id;
 }
 
-export async function createJockey(db: Db, terminalId: string) {
+/** A user of the given role whose home terminal is `terminalId` (a jockey unless told otherwise). */
+export async function createStaff(db: Db, terminalId: string, role: Role = 'jockey') {
   const tag = uniqueTag();
   const [u] = await db
     .insert(users)
     .values({
-      name: `Test jockey ${tag}`,
-      role: 'jockey',
-      email: `jockey-${tag}@test.example`,
+      name: `Test ${role} ${tag}`,
+      role,
+      email: `${role}-${tag}@test.example`,
       secretHash: 'x',
       homeTerminalId: terminalId,
     })
@@ -44,7 +46,7 @@ export async function createJockey(db: Db, terminalId: string) {
   return u.id;
 }
 
-/** A new row of `slots` slots named `<rowName>-01…`; returns the row and slot ids in order. */
+/** A new row of `slots` slots (maybe none) named `<rowName>-01…`; returns the row and slot ids in order. */
 export async function createRowWithSlots(
   db: Db,
   terminalId: string,
@@ -56,6 +58,7 @@ export async function createRowWithSlots(
     .insert(yardRows)
     .values({ terminalId, name: rowName, sortOrder })
     .returning({ id: yardRows.id });
+  if (slots === 0) return { rowId: row.id, spots: [] };
   const spots = await db
     .insert(yardSpots)
     .values(

@@ -3,14 +3,15 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
 import { auditLog, trailers, walkOutcomes, walkScans, yardMoves, yardTasks } from '@/db/schema';
 import { getBoard } from '@/db/queries/yard-board';
-import { retireSpot } from '@/db/queries/yard-layout';
-import { moveTrailer } from '@/db/queries/yard-moves';
-import { resolveWalkOutcome } from '@/db/queries/yard-outcomes';
-import { finishWalk } from '@/db/queries/yard-walk-finish';
-import { addWalkScan, startWalk } from '@/db/queries/yard-walks';
 import { seed } from '@/db/seed';
+import type { YardActor } from '@/lib/server/yard/actor';
+import { finishWalk } from '@/lib/server/yard/finish-walk';
+import { retireSpot } from '@/lib/server/yard/layout';
+import { recordMove } from '@/lib/server/yard/moves';
+import { resolveOutcome } from '@/lib/server/yard/outcomes';
+import { addWalkScan, startWalk } from '@/lib/server/yard/walks';
 import {
-  createJockey,
+  createStaff,
   createRowWithSlots,
   ensureTerminal,
   placeTrailers,
@@ -20,6 +21,7 @@ import {
 
 let terminalId: string;
 let jockeyId: string;
+let jockey: YardActor;
 const checks = {
   isUnitRunning: true,
   setpointTenthsF: 340,
@@ -33,7 +35,8 @@ beforeAll(async () => {
   // the demo seed first (idempotent), so its placement of trailers is not skipped because ours exist
   await seed();
   terminalId = await ensureTerminal(db, 'HMYT');
-  jockeyId = await createJockey(db, terminalId);
+  jockeyId = await createStaff(db, terminalId);
+  jockey = { id: jockeyId, terminalId };
 });
 afterAll(async () => {
   await removeTestYard(db, terminalId);
@@ -45,14 +48,10 @@ describe('moves', () => {
     const tag = uniqueTag();
     const { spots } = await createRowWithSlots(db, terminalId, `Row M${tag}`, 3);
     const [a, b] = await placeTrailers(db, terminalId, tag, [spots[0].id, spots[1].id]);
-    const refused = await moveTrailer({
-      terminalId,
-      actorId: jockeyId,
-      trailerId: a.id,
-      toSpotId: spots[1].id,
-    });
+    const refused = await recordMove(jockey, { unit: a.unitNumber, target: spots[1].label });
     expect(refused).toMatchObject({ ok: false, code: 'conflict' });
     expect(!refused.ok && refused.message).toContain(b.unitNumber);
+    expect(!refused.ok && refused.fieldErrors?.target?.[0]).toContain(b.unitNumber);
     const [still] = await db
       .select({ spot: trailers.currentSpotId })
       .from(trailers)
@@ -65,17 +64,19 @@ describe('moves', () => {
     const tag = uniqueTag();
     const { spots } = await createRowWithSlots(db, terminalId, `Row N${tag}`, 2);
     const [a] = await placeTrailers(db, terminalId, tag, [spots[0].id]);
-    const moved = await moveTrailer({
-      terminalId,
-      actorId: jockeyId,
-      trailerId: a.id,
-      toSpotId: spots[1].id,
+    // typed in lower case: unit numbers and labels are matched without regard to case
+    const moved = await recordMove(jockey, {
+      unit: a.unitNumber.toLowerCase(),
+      target: spots[1].label.toLowerCase(),
     });
     expect(moved).toMatchObject({
       ok: true,
-      fromLabel: spots[0].label,
-      toLabel: spots[1].label,
-      isOutOfService: false,
+      value: {
+        unitNumber: a.unitNumber,
+        fromLabel: spots[0].label,
+        toLabel: spots[1].label,
+        isOutOfService: false,
+      },
     });
     const moves = await db.select().from(yardMoves).where(eq(yardMoves.trailerId, a.id));
     expect(moves).toMatchObject([{ fromSpotId: spots[0].id, toSpotId: spots[1].id, movedById: jockeyId }]);
@@ -93,9 +94,32 @@ describe('moves', () => {
     const tag = uniqueTag();
     const { spots } = await createRowWithSlots(db, terminalId, `Row O${tag}`, 1);
     const [away] = await placeTrailers(db, terminalId, tag, [null]);
-    expect(
-      await moveTrailer({ terminalId, actorId: jockeyId, trailerId: away.id, toSpotId: spots[0].id }),
-    ).toMatchObject({ ok: false, code: 'not_found' });
+    expect(await recordMove(jockey, { unit: away.unitNumber, target: spots[0].label })).toMatchObject({
+      ok: false,
+      code: 'not_found',
+      fieldErrors: { unit: [`${away.unitNumber} is not in this terminal's yard.`] },
+    });
+  });
+
+  it('names both fields when neither the unit nor the slot or door exists', async () => {
+    const tag = uniqueTag();
+    expect(await recordMove(jockey, { unit: `NOUNIT${tag}`, target: `NOSLOT${tag}` })).toEqual({
+      ok: false,
+      code: 'not_found',
+      message: `No trailer matches NOUNIT${tag}. No slot or door NOSLOT${tag} in this yard.`,
+      fieldErrors: {
+        unit: ['No trailer with that unit number, VIN or label.'],
+        target: ['No such slot or door in this yard.'],
+      },
+    });
+  });
+
+  it('refuses an account without a home terminal before reading anything', async () => {
+    expect(await recordMove({ id: jockeyId, terminalId: null }, { unit: 'X', target: 'Y' })).toMatchObject({
+      ok: false,
+      code: 'not_found',
+      message: 'Your account has no home terminal; ask an admin to set one.',
+    });
   });
 });
 
@@ -104,21 +128,21 @@ describe('slot retirement', () => {
     const tag = uniqueTag();
     const { spots } = await createRowWithSlots(db, terminalId, `Row R${tag}`, 2);
     const [a] = await placeTrailers(db, terminalId, tag, [spots[0].id]);
-    const refused = await retireSpot(terminalId, jockeyId, spots[0].id);
+    const refused = await retireSpot(jockey, { id: spots[0].id });
     expect(refused).toMatchObject({ ok: false, code: 'conflict' });
     expect(!refused.ok && refused.message).toBe(
       `${spots[0].label} still holds ${a.unitNumber}: move it first.`,
     );
-    expect(
-      (await moveTrailer({ terminalId, actorId: jockeyId, trailerId: a.id, toSpotId: spots[1].id })).ok,
-    ).toBe(true);
-    expect(await retireSpot(terminalId, jockeyId, spots[0].id)).toEqual({ ok: true, id: spots[0].id });
+    expect((await recordMove(jockey, { unit: a.unitNumber, target: spots[1].label })).ok).toBe(true);
+    expect(await retireSpot(jockey, { id: spots[0].id })).toEqual({ ok: true, value: { id: spots[0].id } });
     const board = await getBoard(terminalId);
     expect(board!.spots.some((s) => s.id === spots[0].id)).toBe(false);
     // a retired slot is no longer a move target
-    expect(
-      await moveTrailer({ terminalId, actorId: jockeyId, trailerId: a.id, toSpotId: spots[0].id }),
-    ).toMatchObject({ ok: false, code: 'not_found' });
+    expect(await recordMove(jockey, { unit: a.unitNumber, target: spots[0].label })).toMatchObject({
+      ok: false,
+      code: 'not_found',
+      fieldErrors: { target: ['No such slot or door in this yard.'] },
+    });
   });
 });
 
@@ -127,8 +151,9 @@ describe('yard walk', () => {
     const tag = uniqueTag();
     const { rowId, spots } = await createRowWithSlots(db, terminalId, `Row W${tag}`, 1);
     const [a] = await placeTrailers(db, terminalId, tag, [spots[0].id]);
-    const walk = await startWalk(terminalId, jockeyId, [rowId]);
-    if (!walk.ok) throw new Error(walk.message);
+    const started = await startWalk(jockey, { rowIds: [rowId] });
+    if (!started.ok) throw new Error(started.message);
+    const walk = started.value;
     const scan = {
       ...checks,
       clientKey: `k-${tag}-1`,
@@ -138,10 +163,10 @@ describe('yard walk', () => {
       fuelEighths: 2,
       isUnitRunning: false,
     };
-    const first = await addWalkScan(walk.id, terminalId, scan);
-    const again = await addWalkScan(walk.id, terminalId, scan);
-    expect(first).toEqual({ ok: true, seq: 1, isRepeat: false, unitNumber: a.unitNumber });
-    expect(again).toEqual({ ok: true, seq: 1, isRepeat: true, unitNumber: a.unitNumber });
+    const first = await addWalkScan(jockey, walk.id, scan);
+    const again = await addWalkScan(jockey, walk.id, scan);
+    expect(first).toEqual({ ok: true, value: { seq: 1, isRepeat: false, unitNumber: a.unitNumber } });
+    expect(again).toEqual({ ok: true, value: { seq: 1, isRepeat: true, unitNumber: a.unitNumber } });
     expect(await db.select().from(walkScans).where(eq(walkScans.walkId, walk.id))).toHaveLength(1);
     const [t] = await db
       .select({ fuel: trailers.fuelEighths, on: trailers.isReeferOn, seen: trailers.lastSeenAt })
@@ -155,15 +180,16 @@ describe('yard walk', () => {
     const { rowId, spots } = await createRowWithSlots(db, terminalId, `Row X${tag}`, 4);
     // board: s1 = t1, s2 = t2, s3 = t3, s4 empty
     const [t1, t2, t3] = await placeTrailers(db, terminalId, tag, [spots[0].id, spots[1].id, spots[2].id]);
-    const walk = await startWalk(terminalId, jockeyId, [rowId]);
-    if (!walk.ok) throw new Error(walk.message);
+    const started = await startWalk(jockey, { rowIds: [rowId] });
+    if (!started.ok) throw new Error(started.message);
+    const walk = started.value;
     const scans = [
       { text: t1.unitNumber, spot: spots[0].id, fuelEighths: 3 }, // matched, low fuel (policy default 4/8)
       { text: `NOPE${tag}`, spot: spots[1].id, fuelEighths: 6 }, // unknown label where t2 should be
       { text: t3.unitNumber, spot: spots[3].id, fuelEighths: 6 }, // t3 found in the wrong slot
     ];
     for (const [i, s] of scans.entries()) {
-      const r = await addWalkScan(walk.id, terminalId, {
+      const r = await addWalkScan(jockey, walk.id, {
         ...checks,
         clientKey: `k-${tag}-${i}`,
         scannedText: s.text,
@@ -173,11 +199,17 @@ describe('yard walk', () => {
       });
       expect(r.ok).toBe(true);
     }
-    const done = await finishWalk(walk.id, terminalId, jockeyId);
-    expect(done).toEqual({
-      ok: true,
-      summary: { matched: 1, wrong_slot: 1, missing: 1, unknown: 1, duplicate: 0, scans: 3, repeatScans: 0 },
-    });
+    const done = await finishWalk(jockey, { walkId: walk.id });
+    const summary = {
+      matched: 1,
+      wrong_slot: 1,
+      missing: 1,
+      unknown: 1,
+      duplicate: 0,
+      scans: 3,
+      repeatScans: 0,
+    };
+    expect(done).toEqual({ ok: true, value: { summary } });
     const outcomes = await db.select().from(walkOutcomes).where(eq(walkOutcomes.walkId, walk.id));
     const by = (o: string) => outcomes.filter((x) => x.outcome === o);
     expect(by('matched')).toMatchObject([{ trailerId: t1.id, spotId: spots[0].id }]);
@@ -193,49 +225,24 @@ describe('yard walk', () => {
       .from(yardTasks)
       .where(eq(yardTasks.walkId, walk.id));
     expect(tasks).toEqual([{ kind: 'low_fuel', trailerId: t1.id }]);
-    // finishing twice adds nothing
-    await finishWalk(walk.id, terminalId, jockeyId);
+    // finishing twice adds nothing and answers the stored summary
+    expect(await finishWalk(jockey, { walkId: walk.id })).toEqual({ ok: true, value: { summary } });
     expect(await db.select().from(walkOutcomes).where(eq(walkOutcomes.walkId, walk.id))).toHaveLength(4);
 
     expect(
-      await resolveWalkOutcome({
-        outcomeId: by('wrong_slot')[0].id,
-        terminalId,
-        actorId: jockeyId,
-        resolution: 'accepted',
-      }),
-    ).toEqual({ ok: true });
+      await resolveOutcome(jockey, { outcomeId: by('wrong_slot')[0].id, resolution: 'accepted' }),
+    ).toEqual({ ok: true, value: undefined });
     expect(
-      await resolveWalkOutcome({
-        outcomeId: by('missing')[0].id,
-        terminalId,
-        actorId: jockeyId,
-        resolution: 'marked_gone',
-      }),
-    ).toEqual({ ok: true });
+      await resolveOutcome(jockey, { outcomeId: by('missing')[0].id, resolution: 'marked_gone' }),
+    ).toEqual({ ok: true, value: undefined });
     expect(
-      await resolveWalkOutcome({
-        outcomeId: by('unknown')[0].id,
-        terminalId,
-        actorId: jockeyId,
-        resolution: 'accepted',
-      }),
+      await resolveOutcome(jockey, { outcomeId: by('unknown')[0].id, resolution: 'accepted' }),
     ).toMatchObject({ ok: false, code: 'invalid' });
     expect(
-      await resolveWalkOutcome({
-        outcomeId: by('unknown')[0].id,
-        terminalId,
-        actorId: jockeyId,
-        resolution: 'investigating',
-      }),
-    ).toEqual({ ok: true });
+      await resolveOutcome(jockey, { outcomeId: by('unknown')[0].id, resolution: 'investigating' }),
+    ).toEqual({ ok: true, value: undefined });
     expect(
-      await resolveWalkOutcome({
-        outcomeId: by('unknown')[0].id,
-        terminalId,
-        actorId: jockeyId,
-        resolution: 'investigating',
-      }),
+      await resolveOutcome(jockey, { outcomeId: by('unknown')[0].id, resolution: 'investigating' }),
     ).toMatchObject({ ok: false, code: 'conflict' });
     const [moved3] = await db
       .select({ spot: trailers.currentSpotId })
@@ -253,8 +260,9 @@ describe('yard walk', () => {
   it('refuses scans once the walk is finished, unless it is a re-send of a stored one', async () => {
     const tag = uniqueTag();
     const { rowId, spots } = await createRowWithSlots(db, terminalId, `Row Z${tag}`, 1);
-    const walk = await startWalk(terminalId, jockeyId, [rowId]);
-    if (!walk.ok) throw new Error(walk.message);
+    const started = await startWalk(jockey, { rowIds: [rowId] });
+    if (!started.ok) throw new Error(started.message);
+    const walk = started.value;
     const scan = {
       ...checks,
       clientKey: `k-${tag}-a`,
@@ -262,10 +270,10 @@ describe('yard walk', () => {
       spotId: spots[0].id,
       scannedAt: scanAt(1),
     };
-    expect((await addWalkScan(walk.id, terminalId, scan)).ok).toBe(true);
-    await finishWalk(walk.id, terminalId, jockeyId);
-    expect(await addWalkScan(walk.id, terminalId, scan)).toMatchObject({ ok: true, isRepeat: true });
-    expect(await addWalkScan(walk.id, terminalId, { ...scan, clientKey: `k-${tag}-b` })).toMatchObject({
+    expect((await addWalkScan(jockey, walk.id, scan)).ok).toBe(true);
+    await finishWalk(jockey, { walkId: walk.id });
+    expect(await addWalkScan(jockey, walk.id, scan)).toMatchObject({ ok: true, value: { isRepeat: true } });
+    expect(await addWalkScan(jockey, walk.id, { ...scan, clientKey: `k-${tag}-b` })).toMatchObject({
       ok: false,
       code: 'conflict',
     });
