@@ -21,6 +21,7 @@ export function ActionForm({
   hidden,
   variant = 'primary',
   className = '',
+  disabled = false,
   children,
 }: {
   action: Action;
@@ -30,6 +31,8 @@ export function ActionForm({
   hidden?: Record<string, string>;
   variant?: 'primary' | 'secondary' | 'danger';
   className?: string;
+  /** Holds the button back (for example while something else must happen first). */
+  disabled?: boolean;
   children?: ReactNode;
 }) {
   const [state, run, isPending] = useActionState(action, IDLE);
@@ -47,7 +50,7 @@ export function ActionForm({
             {state.message}
           </p>
         ) : null}
-        <Button type="submit" disabled={isPending} variant={variant}>
+        <Button type="submit" disabled={isPending || disabled} variant={variant}>
           {isPending ? pendingLabel : submitLabel}
         </Button>
       </form>
