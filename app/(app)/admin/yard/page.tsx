@@ -1,9 +1,10 @@
 import type { Metadata } from 'next';
+import { ActionForm } from '@/app/_components/action-form';
 import { EmptyState } from '@/app/_components/empty-state';
+import { Field } from '@/app/_components/field';
 import { listLayout } from '@/db/queries/yard-layout';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
-import { ActionForm } from '../../yard/_components/action-form';
 import {
   createRowAction,
   createSpotAction,
@@ -14,42 +15,39 @@ import {
 
 export const metadata: Metadata = { title: 'Yard layout' };
 
-const input = 'min-h-tap rounded-lg border-2 border-paper-line bg-paper px-2 text-gate-sm';
-
 type Spot = Awaited<ReturnType<typeof listLayout>>['spots'][number];
 
 function SpotLine({ s }: { s: Spot }) {
   if (s.retiredAt) return <li className="text-gate-sm text-ink-faint">{s.label} · retired</li>;
   return (
     <li className="flex flex-wrap items-start gap-2 border-t border-paper-line pt-2">
-      <ActionForm action={renameSpotAction} submitLabel="Rename" variant="secondary">
-        <input type="hidden" name="id" value={s.id} />
-        <input
-          name="name"
-          defaultValue={s.label}
-          aria-label={`Label of ${s.label}`}
-          className={`${input} w-28`}
-        />
+      <ActionForm action={renameSpotAction} submitLabel="Rename" variant="secondary" hidden={{ id: s.id }}>
+        <Field id={`spot-${s.id}-name`} name="name" label={`Label of ${s.label}`} defaultValue={s.label} />
       </ActionForm>
       <span className="py-3 text-gate-sm">{s.occupant ? `holds ${s.occupant}` : 'empty'}</span>
-      <ActionForm action={retireSpotAction} submitLabel={`Retire ${s.label}`} variant="danger">
-        <input type="hidden" name="id" value={s.id} />
-      </ActionForm>
+      <ActionForm
+        action={retireSpotAction}
+        submitLabel={`Retire ${s.label}`}
+        pendingLabel="Retiring…"
+        variant="danger"
+        hidden={{ id: s.id }}
+      />
     </li>
   );
 }
 
 function AddSpot({ kind, rowId, name }: { kind: 'slot' | 'door'; rowId?: string; name: string }) {
   return (
-    <ActionForm action={createSpotAction} submitLabel={kind === 'door' ? 'Add door' : 'Add slot'}>
-      <input type="hidden" name="kind" value={kind} />
-      {rowId ? <input type="hidden" name="rowId" value={rowId} /> : null}
-      <input
+    <ActionForm
+      action={createSpotAction}
+      submitLabel={kind === 'door' ? 'Add door' : 'Add slot'}
+      hidden={{ kind, ...(rowId ? { rowId } : {}) }}
+    >
+      <Field
+        id={`new-${kind}-${rowId ?? 'doors'}-label`}
         name="label"
         required
-        placeholder="Label"
-        aria-label={`New ${kind} label in ${name}`}
-        className={`${input} w-32`}
+        label={`New ${kind} label in ${name}`}
       />
     </ActionForm>
   );
@@ -72,7 +70,7 @@ export default async function YardLayoutPage() {
           Add a row
         </h2>
         <ActionForm action={createRowAction} submitLabel="Add row">
-          <input name="name" required placeholder="Row name" aria-label="New row name" className={input} />
+          <Field id="new-row-name" name="name" required label="New row name" />
         </ActionForm>
       </section>
       {rows.map((r) => {
@@ -82,9 +80,13 @@ export default async function YardLayoutPage() {
             <summary className="min-h-tap cursor-pointer py-2 text-gate-lg font-bold">
               {r.name} · {own.filter((s) => !s.retiredAt).length} slots
             </summary>
-            <ActionForm action={renameRowAction} submitLabel="Rename row" variant="secondary">
-              <input type="hidden" name="id" value={r.id} />
-              <input name="name" defaultValue={r.name} aria-label={`Name of ${r.name}`} className={input} />
+            <ActionForm
+              action={renameRowAction}
+              submitLabel="Rename row"
+              variant="secondary"
+              hidden={{ id: r.id }}
+            >
+              <Field id={`row-${r.id}-name`} name="name" label={`Name of ${r.name}`} defaultValue={r.name} />
             </ActionForm>
             <ul className="mt-2 space-y-2">
               {own.map((s) => (

@@ -1,12 +1,12 @@
 import type { Metadata } from 'next';
+import { ActionForm } from '@/app/_components/action-form';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listOpenTasks } from '@/db/queries/yard-tasks';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
-import { formatLocal } from '@/lib/yard/table';
+import { formatTime } from '@/lib/format/time';
 import { TASK_LABELS } from '@/lib/yard/walk';
-import { ActionForm } from '../_components/action-form';
 import { YardNav } from '../_components/yard-nav';
 import { clearTaskAction } from './actions';
 
@@ -35,11 +35,15 @@ export default async function TasksPage() {
                 {t.spotLabel ? ` in ${t.spotLabel}` : ''}
               </p>
               <p className="text-gate-sm text-ink-soft">
-                {t.note} Found {formatLocal(t.createdAt.toISOString(), tz)}.
+                {t.note} Found {formatTime(t.createdAt, tz)}.
               </p>
-              <ActionForm action={clearTaskAction} submitLabel="Clear" variant="secondary">
-                <input type="hidden" name="id" value={t.id} />
-              </ActionForm>
+              <ActionForm
+                action={clearTaskAction}
+                submitLabel="Clear"
+                pendingLabel="Clearing…"
+                variant="secondary"
+                hidden={{ id: t.id }}
+              />
             </li>
           ))}
         </ul>

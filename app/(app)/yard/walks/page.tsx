@@ -1,13 +1,14 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { ActionForm } from '@/app/_components/action-form';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listLayout } from '@/db/queries/yard-layout';
 import { listRecentWalks } from '@/db/queries/yard-walks';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
-import { formatLocal } from '@/lib/yard/table';
-import { ActionForm } from '../_components/action-form';
+import { formatTime } from '@/lib/format/time';
 import { YardNav } from '../_components/yard-nav';
+import { RowChoice } from './_components/row-choice';
 import { startWalkAction } from './actions';
 
 export const metadata: Metadata = { title: 'Yard walks' };
@@ -29,20 +30,8 @@ export default async function WalksPage() {
         <h2 id="start-title" className="text-gate-lg font-bold">
           Start a walk
         </h2>
-        <ActionForm action={startWalkAction} submitLabel="Start walk">
-          <fieldset className="w-full">
-            <legend className="text-gate font-bold">Rows to walk</legend>
-            <div className="mt-1 flex flex-wrap gap-2">
-              {rows.map((r) => (
-                <label
-                  key={r.id}
-                  className="flex min-h-tap items-center gap-2 rounded-lg border-2 border-paper-line px-3 text-gate"
-                >
-                  <input type="checkbox" name="rowIds" value={r.id} className="size-5" /> {r.name}
-                </label>
-              ))}
-            </div>
-          </fieldset>
+        <ActionForm action={startWalkAction} submitLabel="Start walk" pendingLabel="Starting…">
+          <RowChoice rows={rows} />
         </ActionForm>
       </section>
       <section aria-labelledby="recent-title">
@@ -59,7 +48,7 @@ export default async function WalksPage() {
                   href={`/yard/walks/${w.id}`}
                   className="flex min-h-tap items-center gap-2 rounded-lg bg-paper px-3 text-gate underline"
                 >
-                  {formatLocal(w.startedAt.toISOString(), tz)} · {w.startedBy} ·{' '}
+                  {formatTime(w.startedAt, tz)} · {w.startedBy} ·{' '}
                   {w.status === 'finished' ? 'finished' : 'in progress'}
                   {w.summary
                     ? ` · ${w.summary.matched ?? 0} matched, ${w.summary.wrong_slot ?? 0} wrong slot, ${w.summary.missing ?? 0} missing, ${w.summary.unknown ?? 0} unknown`

@@ -1,3 +1,4 @@
+import { Field, Select } from '@/app/_components/field';
 import type { QuickChecks } from '@/lib/yard/walk';
 
 const YES_NO = [
@@ -5,20 +6,16 @@ const YES_NO = [
   ['yes', 'Yes'],
   ['no', 'No'],
 ] as const;
-const select = 'mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-2 text-gate';
 
 function YesNo({ name, label }: { name: string; label: string }) {
   return (
-    <label className="block text-gate-sm font-bold">
-      {label}
-      <select name={name} className={select} defaultValue="">
-        {YES_NO.map(([v, l]) => (
-          <option key={v} value={v}>
-            {l}
-          </option>
-        ))}
-      </select>
-    </label>
+    <Select name={name} label={label} defaultValue="">
+      {YES_NO.map(([v, l]) => (
+        <option key={v} value={v}>
+          {l}
+        </option>
+      ))}
+    </Select>
   );
 }
 
@@ -28,29 +25,23 @@ export function QuickCheckFields() {
     <fieldset className="grid grid-cols-2 gap-2 sm:grid-cols-5">
       <legend className="text-gate font-bold">Quick checks</legend>
       <YesNo name="isUnitRunning" label="Unit running" />
-      <label className="block text-gate-sm font-bold">
-        Setpoint °F
-        <input
-          name="setpointF"
-          type="number"
-          step="0.1"
-          min="-40"
-          max="90"
-          inputMode="decimal"
-          className={select}
-        />
-      </label>
-      <label className="block text-gate-sm font-bold">
-        Fuel (eighths)
-        <select name="fuelEighths" className={select} defaultValue="">
-          <option value="">Not read</option>
-          {Array.from({ length: 9 }, (_, i) => (
-            <option key={i} value={i}>
-              {i}/8
-            </option>
-          ))}
-        </select>
-      </label>
+      <Field
+        name="setpointF"
+        label="Setpoint °F"
+        type="number"
+        step="0.1"
+        min="-40"
+        max="90"
+        inputMode="decimal"
+      />
+      <Select name="fuelEighths" label="Fuel (eighths)" defaultValue="">
+        <option value="">Not read</option>
+        {Array.from({ length: 9 }, (_, i) => (
+          <option key={i} value={i}>
+            {i}/8
+          </option>
+        ))}
+      </Select>
       <YesNo name="areDoorsClosed" label="Doors closed" />
       <YesNo name="isSealPresent" label="Seal present" />
     </fieldset>

@@ -1,10 +1,11 @@
+import { ActionForm } from '@/app/_components/action-form';
+import type { WalkResolution } from '@/lib/yard/walk';
 import { resolveOutcomeAction } from '../../actions';
-import { ActionForm } from '../../../_components/action-form';
 
 type Outcome = {
   id: string;
   outcome: 'matched' | 'wrong_slot' | 'missing' | 'unknown' | 'duplicate';
-  resolution: 'accepted' | 'marked_gone' | 'investigating' | null;
+  resolution: WalkResolution | null;
   scannedText: string | null;
   unitNumber: string | null;
   foundLabel: string | null;
@@ -19,11 +20,11 @@ const GROUPS = [
   { key: 'matched', title: 'Matched' },
 ] as const;
 
-const RESOLUTION_TEXT = {
+const RESOLUTION_TEXT: Record<WalkResolution, string> = {
   accepted: 'Board corrected',
   marked_gone: 'Marked gone',
   investigating: 'Under investigation',
-} as const;
+};
 
 function describe(o: Outcome): string {
   const unit = o.unitNumber ?? o.scannedText ?? 'Unknown';
@@ -44,11 +45,14 @@ function describe(o: Outcome): string {
 function Resolve({ o }: { o: Outcome }) {
   if (o.outcome === 'matched') return null;
   if (o.resolution) return <p className="text-gate-sm font-bold text-ok">{RESOLUTION_TEXT[o.resolution]}</p>;
-  const choice = (resolution: string, label: string, variant: 'primary' | 'secondary' | 'danger') => (
-    <ActionForm key={resolution} action={resolveOutcomeAction} submitLabel={label} variant={variant}>
-      <input type="hidden" name="outcomeId" value={o.id} />
-      <input type="hidden" name="resolution" value={resolution} />
-    </ActionForm>
+  const choice = (resolution: WalkResolution, label: string, variant: 'primary' | 'secondary' | 'danger') => (
+    <ActionForm
+      key={resolution}
+      action={resolveOutcomeAction}
+      submitLabel={label}
+      variant={variant}
+      hidden={{ outcomeId: o.id, resolution }}
+    />
   );
   return (
     <div className="flex flex-wrap gap-2">

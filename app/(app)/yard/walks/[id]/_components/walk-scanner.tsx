@@ -1,8 +1,9 @@
 'use client';
 
-import { useActionState, useMemo, useRef, useState } from 'react';
+import { useMemo, useRef, useState } from 'react';
+import { ActionForm } from '@/app/_components/action-form';
 import { Button } from '@/app/_components/button';
-import { FormError } from '@/app/_components/field';
+import { Field, Select } from '@/app/_components/field';
 import { pendingCount } from '@/lib/yard/scan-queue';
 import { suggestNextSpot, type WalkSpot } from '@/lib/yard/walk';
 import { finishWalkAction } from '../../actions';
@@ -24,8 +25,7 @@ export function WalkScanner({
 }) {
   const { queue, isOnline, add } = useScanQueue(walkId);
   const [lastSpotId, setLastSpotId] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
-  const [finishState, finishAction, finishing] = useActionState(finishWalkAction, { ok: false });
+  const [errors, setErrors] = useState<{ unit?: string[]; spotId?: string[] }>({});
   const unitRef = useRef<HTMLInputElement>(null);
   const suggested = suggestNextSpot(
     spots,
@@ -43,9 +43,12 @@ export function WalkScanner({
     const data = new FormData(form);
     const text = String(data.get('unit') ?? '').trim();
     const spot = spots.find((s) => s.id === data.get('spotId'));
-    if (!text) return setError('Scan or type the unit first.');
-    if (!spot) return setError('Choose the slot the trailer stands in.');
-    setError(null);
+    const missing = {
+      ...(text ? {} : { unit: ['Scan or type the unit first.'] }),
+      ...(spot ? {} : { spotId: ['Choose the slot the trailer stands in.'] }),
+    };
+    setErrors(missing);
+    if (!text || !spot) return;
     add({
       clientKey: crypto.randomUUID(),
       scannedText: text,
@@ -75,18 +78,15 @@ export function WalkScanner({
         className="space-y-2 rounded-xl bg-paper p-4 shadow"
         key={suggested?.id ?? 'end'}
       >
-        <label className="block text-gate font-bold" htmlFor="unit">
-          Unit
-        </label>
-        <input
+        <Field
           ref={unitRef}
           autoFocus
-          id="unit"
+          label="Unit"
           name="unit"
           autoComplete="off"
           autoCapitalize="characters"
           placeholder="Unit number, VIN or label"
-          className="block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-gate"
+          error={errors.unit}
         />
         <CameraButton
           label="Scan label"
@@ -94,25 +94,16 @@ export function WalkScanner({
             if (unitRef.current) unitRef.current.value = text;
           }}
         />
-        <label className="block text-gate font-bold" htmlFor="spotId">
-          Slot
-        </label>
-        <select
-          id="spotId"
-          name="spotId"
-          defaultValue={suggested?.id ?? ''}
-          className="block min-h-tap w-full rounded-lg border-2 border-paper-line bg-paper px-3 text-gate"
-        >
+        <Select label="Slot" name="spotId" defaultValue={suggested?.id ?? ''} error={errors.spotId}>
           <option value="">Choose the slot</option>
           {spots.map((s) => (
             <option key={s.id} value={s.id}>
               {s.label}
             </option>
           ))}
-        </select>
+        </Select>
         <QuickCheckFields />
         <Button type="submit">Record scan</Button>
-        <FormError message={error} />
       </form>
       <section aria-labelledby="scans-title">
         <h2 id="scans-title" className="text-gate-lg font-bold">
@@ -136,13 +127,14 @@ export function WalkScanner({
           ))}
         </ol>
       </section>
-      <form action={finishAction} className="space-y-2">
-        <input type="hidden" name="walkId" value={walkId} />
-        <Button type="submit" variant="secondary" disabled={finishing || waiting > 0}>
-          {waiting > 0 ? 'Finish (send waiting scans first)' : finishing ? 'Reconciling…' : 'Finish walk'}
-        </Button>
-        <FormError message={finishState.ok ? null : finishState.message} />
-      </form>
+      <ActionForm
+        action={finishWalkAction}
+        submitLabel={waiting > 0 ? 'Finish (send waiting scans first)' : 'Finish walk'}
+        pendingLabel="Reconciling…"
+        variant="secondary"
+        disabled={waiting > 0}
+        hidden={{ walkId }}
+      />
     </div>
   );
 }
