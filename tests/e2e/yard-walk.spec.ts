@@ -1,6 +1,7 @@
 import { expect, test } from '@playwright/test';
 import { pool } from '../../db';
 import { SignInPage } from './pages/sign-in-page';
+import { YardMovePage } from './pages/yard-move-page';
 import { YardWalkPage } from './pages/yard-walk-page';
 import { launchWithCamera, writeLabelVideo } from './support/fake-camera';
 import { labelLinkFor, walkRowFixture } from './support/yard-state';
@@ -20,6 +21,12 @@ test('a jockey walks a row: one missing, one in the wrong slot, one unknown labe
   await expect(page).toHaveURL(/\/yard$/);
   const walk = new YardWalkPage(page);
   await walk.start(rowName);
+  // nothing typed yet: the message sits under the unit field, nothing is queued
+  await page.getByRole('button', { name: 'Record scan' }).click();
+  await expect(page.getByLabel('Unit', { exact: true })).toHaveAccessibleDescription(
+    /Scan or type the unit first\./,
+  );
+  await expect(walk.scans()).toHaveCount(0);
 
   // the first slot of the row is suggested, then the next one in row order
   await expect(page.getByLabel('Slot', { exact: true })).toHaveValue(/.+/);
@@ -88,16 +95,18 @@ test('a jockey walks a row: one missing, one in the wrong slot, one unknown labe
 test('a move into an occupied slot is refused naming the occupant; the board shows a good move', async ({
   page,
 }) => {
-  const { slots, units } = await walkRowFixture();
+  const { tag, slots, units } = await walkRowFixture();
   await new SignInPage(page).signIn('jockey');
   await expect(page).toHaveURL(/\/yard$/);
-  await page.goto('/yard/moves');
-  await page.getByLabel('Unit', { exact: true }).fill(units[0]);
-  await page.getByLabel('To slot or door').fill(slots[1]);
-  await page.getByRole('button', { name: 'Record move' }).click();
+  const moves = new YardMovePage(page);
+  await moves.open();
+  // two typos at once: each message sits under its own field
+  await moves.move(`NOUNIT${tag}`, `NOSLOT${tag}`);
+  await expect(moves.unit()).toHaveAccessibleDescription(/No trailer with that unit number, VIN or label\./);
+  await expect(moves.target()).toHaveAccessibleDescription('No such slot or door in this yard.');
+  await moves.move(units[0], slots[1]);
   await expect(page.getByText(`${slots[1]} is occupied by ${units[1]}`)).toBeVisible();
-  await page.getByLabel('To slot or door').fill(slots[3]);
-  await page.getByRole('button', { name: 'Record move' }).click();
+  await moves.move(units[0], slots[3]);
   await expect(
     page.getByRole('status').filter({ hasText: `Moved ${units[0]} from ${slots[0]} to ${slots[3]}.` }),
   ).toBeVisible();
@@ -132,4 +141,19 @@ test('the CSV export carries the table columns and rows; bad input gets a clear 
     data: { clientKey: 'short' },
   });
   expect(badScan.status()).toBe(422);
+});
+
+test('an admin adds a row; a taken name is refused under the name field, the typed name kept', async ({
+  page,
+}) => {
+  const { rowName } = await walkRowFixture();
+  await new SignInPage(page).signIn('admin');
+  await expect(page).toHaveURL(/\/desk$/);
+  await page.goto('/admin/yard');
+  const name = page.getByLabel('New row name');
+  await name.fill(rowName);
+  await page.getByRole('button', { name: 'Add row' }).click();
+  await expect(name).toHaveAccessibleDescription(`A row named ${rowName} already exists.`);
+  await expect(name).toHaveAttribute('aria-invalid', 'true');
+  await expect(name).toHaveValue(rowName);
 });
