@@ -3,9 +3,10 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
-import { getCaseEvidence, listCustodyEvents } from '@/db/queries/case-evidence';
+import { getCaseEvidence, listCustodyRows } from '@/db/queries/case-evidence';
 import { getCase, listCaseEvents } from '@/db/queries/cases';
 import { isWithinDisputeWindow } from '@/lib/desk/case-state';
+import { custodyTimeline } from '@/lib/desk/custody';
 import { isDeskStaff } from '@/lib/desk/access';
 import { effectiveAmountCents } from '@/lib/desk/estimate';
 import { itemZone } from '@/lib/desk/item-labels';
@@ -33,7 +34,7 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
   const befores = evidence.handoffs.filter((h) => h.id !== c.handoffId).map((h) => h.occurredAt.getTime());
   const custody =
     after && befores.length
-      ? await listCustodyEvents(c.trailerId, new Date(Math.min(...befores)), after.occurredAt)
+      ? custodyTimeline(await listCustodyRows(c.trailerId, new Date(Math.min(...befores)), after.occurredAt))
       : [];
   const amount = effectiveAmountCents(c);
   const isUnsafe = evidence.findings.some((f) => f.condition === 'unsafe');
