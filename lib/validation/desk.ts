@@ -108,7 +108,6 @@ export const decideCaseSchema = z
     ...v,
     chargedCents: v.decision === 'absorb' || v.decision === 'waive' ? 0 : (v.amount ?? 0),
   }));
-export type DecideCaseInput = z.infer<typeof decideCaseSchema>;
 
 export const RATE_CONDITIONS = ['minor', 'damaged', 'unsafe', 'missing'] as const;
 export type RateCondition = (typeof RATE_CONDITIONS)[number];
