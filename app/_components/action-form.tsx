@@ -18,6 +18,7 @@ export function ActionForm({
   submitLabel,
   pendingLabel = 'Saving…',
   title,
+  ariaLabel,
   hidden,
   variant = 'primary',
   className = '',
@@ -28,6 +29,8 @@ export function ActionForm({
   submitLabel: string;
   pendingLabel?: string;
   title?: string;
+  /** The form's name for assistive technology when it shows no title. */
+  ariaLabel?: string;
   hidden?: Record<string, string>;
   variant?: 'primary' | 'secondary' | 'danger';
   className?: string;
@@ -38,7 +41,7 @@ export function ActionForm({
   const [state, run, isPending] = useActionState(action, IDLE);
   return (
     <FormStateProvider value={state}>
-      <form action={run} aria-label={title} className={`space-y-2 ${className}`}>
+      <form action={run} aria-label={title ?? ariaLabel} className={`space-y-2 ${className}`}>
         {title ? <h3 className="text-gate-lg font-bold">{title}</h3> : null}
         {Object.entries(hidden ?? {}).map(([name, value]) => (
           <input key={name} type="hidden" name={name} value={value} />

@@ -87,6 +87,8 @@ export function Select({
     <Frame label={label} name={name} id={id} hint={hint} messages={messages} className={className}>
       {(aria) => (
         <select
+          // React applies a select's defaultValue only when it mounts, so a new typed value remounts it
+          key={typed}
           id={id}
           name={name}
           className={control}

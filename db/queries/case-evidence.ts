@@ -10,8 +10,8 @@ import {
   walkScans,
   yardMoves,
   yardSpots,
-  yardWalks,
 } from '@/db/schema';
+import type { CustodyRows } from '@/lib/desk/custody';
 
 /** Damage findings of a case: those linked to it, or (older rows) the new/worse findings of its handoff. */
 export async function listCaseFindings(c: { id: string; handoffId: string }) {
@@ -99,9 +99,9 @@ export async function getCaseEvidence(c: { id: string; handoffId: string }) {
 }
 export type CaseEvidence = Awaited<ReturnType<typeof getCaseEvidence>>;
 
-/** What happened to the trailer between two instants: handoffs, yard moves and yard-walk scans, oldest first. */
-export async function listCustodyEvents(trailerId: string, from: Date, to: Date) {
-  const [hs, moves, scans] = await Promise.all([
+/** What happened to the trailer between two instants: its handoffs, yard moves and yard-walk scans. */
+export async function listCustodyRows(trailerId: string, from: Date, to: Date): Promise<CustodyRows> {
+  const [hs, moves, walks] = await Promise.all([
     db
       .select(handoffHeader)
       .from(handoffs)
@@ -117,35 +117,11 @@ export async function listCustodyEvents(trailerId: string, from: Date, to: Date)
         and(eq(yardMoves.trailerId, trailerId), gte(yardMoves.movedAt, from), lte(yardMoves.movedAt, to)),
       ),
     db
-      .select({ id: walkScans.id, scannedAt: walkScans.scannedAt, walkId: yardWalks.id })
+      .select({ id: walkScans.id, scannedAt: walkScans.scannedAt })
       .from(walkScans)
-      .innerJoin(yardWalks, eq(yardWalks.id, walkScans.walkId))
       .where(
         and(eq(walkScans.trailerId, trailerId), gte(walkScans.scannedAt, from), lte(walkScans.scannedAt, to)),
       ),
   ]);
-  const events = [
-    ...hs.map((h) => ({
-      id: h.id,
-      at: h.occurredAt,
-      kind: h.kind,
-      text:
-        h.kind === 'drop'
-          ? `Dropped by ${h.driverName} (${h.carrierScac}); custody passes to the terminal`
-          : `Hooked by ${h.driverName} (${h.carrierScac}); custody passes to ${h.carrierName}`,
-    })),
-    ...moves.map((m) => ({
-      id: m.id,
-      at: m.movedAt,
-      kind: 'move' as const,
-      text: `Yard move to ${m.toSpot}; custody stays with the terminal`,
-    })),
-    ...scans.map((s) => ({
-      id: s.id,
-      at: s.scannedAt,
-      kind: 'walk' as const,
-      text: 'Seen on a yard walk (quick check)',
-    })),
-  ];
-  return events.sort((a, b) => a.at.getTime() - b.at.getTime());
+  return { handoffs: hs, moves, walks };
 }

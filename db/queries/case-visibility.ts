@@ -1,10 +1,10 @@
+import 'server-only';
 import { eq, sql, type SQL } from 'drizzle-orm';
 import { cases } from '@/db/schema';
-
-// No `server-only` marker: the demo seed walks cases through the same commands under plain Node.
+import type { Role } from '@/lib/auth/roles';
 
 /** Who is looking: drivers see only cases proposed to their own carrier. */
-export type CaseViewer = { role: 'driver' | 'jockey' | 'clerk' | 'admin'; carrierId: string | null };
+export type CaseViewer = { role: Role; carrierId: string | null };
 
 /** The ownership condition every case read and write carries in its WHERE clause. */
 export function caseVisibleTo(viewer: CaseViewer): SQL | undefined {

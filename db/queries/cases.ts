@@ -92,7 +92,6 @@ export async function getCase(id: string, viewer: CaseViewer) {
     .limit(1);
   return row ?? null;
 }
-export type CaseDetail = NonNullable<Awaited<ReturnType<typeof getCase>>>;
 
 const actors = aliasedTable(users, 'actors');
 

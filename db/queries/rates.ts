@@ -1,7 +1,8 @@
 import 'server-only';
 import { asc, eq } from 'drizzle-orm';
-import { db } from '@/db';
+import { db, type Db, type Tx } from '@/db';
 import { rateCard } from '@/db/schema';
+import type { RateCondition } from '@/lib/validation/desk';
 
 export async function listRates() {
   return db
@@ -16,17 +17,17 @@ export async function listRates() {
 }
 
 /** Adds a rate; false when that pattern and condition already has one (change it instead). */
-export async function addRate(rate: {
-  itemPattern: string;
-  condition: 'minor' | 'damaged' | 'unsafe' | 'missing';
-  amountCents: number;
-}) {
-  const rows = await db.insert(rateCard).values(rate).onConflictDoNothing().returning({ id: rateCard.id });
+export async function addRate(
+  rate: { itemPattern: string; condition: RateCondition; amountCents: number },
+  tx: Tx | Db = db,
+) {
+  const rows = await tx.insert(rateCard).values(rate).onConflictDoNothing().returning({ id: rateCard.id });
   return rows.length > 0;
 }
 
-export async function changeRate(id: string, amountCents: number) {
-  const rows = await db
+/** Changes a rate's amount; false when the rate no longer exists. */
+export async function changeRate(id: string, amountCents: number, tx: Tx | Db = db) {
+  const rows = await tx
     .update(rateCard)
     .set({ amountCents })
     .where(eq(rateCard.id, id))

@@ -141,20 +141,6 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
   return { handoffs: hs, moves, walks, findings: fs, holds: hls, cases: cs, photos: ps };
 }
 
-export async function listOpenHolds(trailerId: string) {
-  return db
-    .select({
-      id: holds.id,
-      severity: holds.severity,
-      reason: holds.reason,
-      placedAt: holds.placedAt,
-      releasedAt: holds.releasedAt,
-    })
-    .from(holds)
-    .where(eq(holds.trailerId, trailerId))
-    .orderBy(asc(holds.placedAt));
-}
-
 /** Re-verifies the trailer's hash chain from the rows as they are in the database now (oldest first, as the submit service links them). */
 export async function checkHandoffChain(trailerId: string) {
   const rows = await db

@@ -2,22 +2,18 @@
 // ok and then a drop with new damage, recorded through the gate's real submit service; the cases
 // are then walked through the desk's own commands into every state, two of them disputed.
 // Invented data only. Skips when it ran before (its idempotency keys start with "seed-desk-").
-import { createHash } from 'node:crypto';
 import { and, desc, eq, inArray, like, sql } from 'drizzle-orm';
-import { PNG } from 'pngjs';
-import { buildChecklist, type Checklist } from '@/lib/engine';
-import { putObject } from '@/lib/server/storage';
-import { submitHandoff, type HandoffActor } from '@/lib/server/handoffs';
-import type { ItemObservationInput } from '@/lib/validation/handoffs';
-import { priceNewCases, runCaseCommand } from '@/db/queries/case-commands';
 import { db } from '@/db';
-import { caseEvents, cases, handoffs, photos, trailers, users } from '@/db/schema';
-
+import { caseEvents, cases, handoffs, trailers, users } from '@/db/schema';
 import { allOkObservations } from '@/lib/all-ok';
+import { priceNewCases } from '@/lib/server/desk/pricing';
+import { submitHandoff, type HandoffActor } from '@/lib/server/handoffs';
+import { checklistOf } from '@/lib/trailers/checklist';
+import type { ItemObservationInput } from '@/lib/validation/handoffs';
+import { demoPhoto } from './desk-photos';
+import { walkDemoCases } from './desk-walk';
 
 const DAY = 86_400_000;
-
-const okItems = (checklist: Checklist) => allOkObservations(checklist);
 
 const DAMAGE: { itemKey: string; condition: 'damaged'; note: string; isInsulationShowing?: boolean }[] = [
   {
@@ -35,48 +31,6 @@ const DAMAGE: { itemKey: string; condition: 'damaged'; note: string; isInsulatio
   { itemKey: 'rear.header', condition: 'damaged', note: 'Header detached on the left' },
 ];
 const DRIVERS = ['D2001', 'D3001', 'D4001', 'D2002'];
-
-/** An invented picture of a trailer panel: light grey skin with rivet lines; `isTorn` adds a dark tear. */
-function panelPng(isTorn: boolean, shade: number): Uint8Array {
-  const w = 320;
-  const h = 200;
-  const png = new PNG({ width: w, height: h });
-  for (let y = 0; y < h; y++) {
-    for (let x = 0; x < w; x++) {
-      const rivet = x % 40 < 2 || y % 50 < 2;
-      const tear = isTorn && Math.abs(y - 60 - (x - 80) * 0.45) < 5 && x > 80 && x < 260;
-      const v = tear ? 35 : rivet ? 150 : 205 + ((x + y + shade) % 7);
-      png.data.set(tear ? [70, 40, 30, 255] : [v, v, v + 6, 255], (y * w + x) * 4);
-    }
-  }
-  return PNG.sync.write(png);
-}
-
-async function demoPhoto(
-  trailerId: string,
-  uploadedById: string,
-  key: string,
-  isTorn: boolean,
-  shade: number,
-) {
-  const bytes = panelPng(isTorn, shade);
-  const objectKey = `photos/${trailerId}/seed-desk-${key}.png`;
-  await putObject(objectKey, bytes, 'image/png');
-  const sha256 = createHash('sha256').update(bytes).digest('hex');
-  const [p] = await db
-    .insert(photos)
-    .values({
-      objectKey,
-      uploadedById,
-      trailerId,
-      status: 'stored',
-      contentType: 'image/png',
-      byteSize: bytes.length,
-      sha256,
-    })
-    .returning({ id: photos.id });
-  return p.id;
-}
 
 export async function seedDesk(now = new Date()) {
   const done = await db
@@ -112,14 +66,7 @@ export async function seedDesk(now = new Date()) {
       carrierId: p.carrierId,
       terminalId: p.homeTerminalId,
     };
-    const checklist = buildChecklist({
-      kind: t.kind,
-      hingesPerDoor: t.hingesPerDoor === 5 ? 5 : 4,
-      axles: t.axleCount,
-      tireLayout: t.tireLayout,
-      fuelTankGallons: t.fuelTankGallons || undefined,
-    });
-    const ok = okItems(checklist);
+    const ok = allOkObservations(checklistOf(t));
     const base = now.getTime() - (90 - k * 8) * DAY;
     const submit = async (
       kind: 'drop' | 'hook',
@@ -198,87 +145,14 @@ export async function seedDesk(now = new Date()) {
   for (const [i, id] of caseIds.entries())
     await priceNewCases(new Date(now.getTime() - (90 - i * 8) * DAY + 4 * DAY + 60_000), [id]);
 
-  // Walk the cases through the desk: 0 open, 1 notified, 2 disputed, 3 charged, 4 shared after a
-  // dispute, 5 absorbed without notice, 6 closed, 7 waived.
-  const clerkActor = { id: clerk.id, role: 'clerk' as const, carrierId: null };
-  const at = (i: number, days: number) => new Date(now.getTime() - (90 - i * 8) * DAY + (4 + days) * DAY);
-  const step = (
-    i: number,
-    command: Parameters<typeof runCaseCommand>[0]['command'],
-    days: number,
-    actor: { id: string; role: 'clerk' | 'driver'; carrierId: string | null } = clerkActor,
-  ) =>
-    caseIds[i]
-      ? runCaseCommand({
-          caseId: caseIds[i],
-          command,
-          actor,
-          now: at(i, days),
-          appUrl: '',
-          linkSecret: 'seed-sends-no-mail',
-          sendEmail: false,
-        })
-      : null;
-  const driverOf = (i: number) => {
-    const p = people.find((u) => u.driverNumber === DRIVERS[i % DRIVERS.length])!;
-    return { id: p.id, role: 'driver' as const, carrierId: p.carrierId };
-  };
-  for (const i of [1, 2, 3, 4, 6, 7]) await step(i, { kind: 'notify' }, 0.1);
-  await step(
-    2,
-    {
-      kind: 'dispute',
-      note: 'Our driver photographed that side at the hook; the tear is not in our pictures.',
+  await walkDemoCases(
+    caseIds,
+    clerk.id,
+    (i) => {
+      const p = people.find((u) => u.driverNumber === DRIVERS[i % DRIVERS.length])!;
+      return { id: p.id, role: 'driver', carrierId: p.carrierId };
     },
-    2,
-    driverOf(2),
-  );
-  await step(
-    3,
-    {
-      kind: 'decide',
-      decision: 'charge',
-      chargedCents: 95_000,
-      reason: 'Unit door was ok at the hook and cracked at the drop; no dispute.',
-    },
-    15,
-  );
-  await step(4, { kind: 'dispute', note: 'The rail was already dented when we took it.' }, 3, driverOf(4));
-  await step(
-    4,
-    {
-      kind: 'decide',
-      decision: 'share',
-      chargedCents: 42_500,
-      reason: 'Hook photo is unclear on the rail; split the repair.',
-    },
-    6,
-  );
-  await step(
-    5,
-    {
-      kind: 'decide',
-      decision: 'absorb',
-      chargedCents: 0,
-      reason: 'Yard tractor contact reported by our own jockey.',
-    },
-    1,
-  );
-  await step(
-    6,
-    { kind: 'decide', decision: 'charge', chargedCents: 85_000, reason: 'Clear before and after photos.' },
-    15,
-  );
-  await step(6, { kind: 'close', note: 'Carrier paid.' }, 20);
-  await step(
-    7,
-    {
-      kind: 'decide',
-      decision: 'waive',
-      chargedCents: 0,
-      reason: 'Long-standing customer; small repair done in house.',
-    },
-    5,
+    (i, days) => new Date(now.getTime() - (90 - i * 8) * DAY + (4 + days) * DAY),
   );
   // the gate's seed history opens cases of its own: price them from the rate card too
   await priceNewCases(now);

@@ -1,7 +1,9 @@
 // The words of the case e-mails. Pure: the caller passes every fact, the time zone and the link.
-import { formatWhen } from '@/lib/engine/wording';
+import { CONDITION_LABELS, type Condition } from '@/lib/engine';
+import { formatMoney } from '@/lib/format/money';
+import { formatTime } from '@/lib/format/time';
 import type { Decision } from './case-state';
-import { formatCents } from './estimate';
+import { itemLabel } from './item-labels';
 
 export type CaseEmailFacts = {
   unitNumber: string;
@@ -12,6 +14,38 @@ export type CaseEmailFacts = {
   amountCents: number;
   items: { label: string; before: string | null; after: string | null; reason: string }[];
 };
+
+type CaseHeader = {
+  unitNumber: string;
+  terminalName: string;
+  carrierName: string | null;
+  timeZone: string;
+  occurredAt: Date;
+};
+type FindingRow = {
+  itemKey: string;
+  previousCondition: Condition | null;
+  condition: Condition | null;
+  reason: string;
+};
+
+/** The facts both e-mails tell, from the case's header row and its findings. */
+export function caseEmailFacts(c: CaseHeader, findings: FindingRow[], amountCents: number): CaseEmailFacts {
+  return {
+    unitNumber: c.unitNumber,
+    terminalName: c.terminalName,
+    carrierName: c.carrierName ?? 'Carrier',
+    timeZone: c.timeZone,
+    handoffAt: c.occurredAt,
+    amountCents,
+    items: findings.map((f) => ({
+      label: itemLabel(f.itemKey),
+      before: f.previousCondition ? CONDITION_LABELS[f.previousCondition] : null,
+      after: f.condition ? CONDITION_LABELS[f.condition] : null,
+      reason: f.reason,
+    })),
+  };
+}
 
 const DECISION_WORDS: Record<Decision, string> = {
   charge: 'charged to your company',
@@ -34,13 +68,13 @@ export function notifyEmail(f: CaseEmailFacts, deadline: Date, link: string) {
     text: [
       `${f.carrierName},`,
       '',
-      `Trailer ${f.unitNumber} was recorded with new damage at ${f.terminalName} on ${formatWhen(f.handoffAt, f.timeZone)}.`,
+      `Trailer ${f.unitNumber} was recorded with new damage at ${f.terminalName} on ${formatTime(f.handoffAt, f.timeZone)}.`,
       'Hitchmark compared the handoff with the earlier record of each item:',
       '',
       itemLines(f),
       '',
-      `Repair estimate: ${formatCents(f.amountCents)}.`,
-      `You may dispute this case with a note until ${formatWhen(deadline, f.timeZone)} (${f.timeZone}).`,
+      `Repair estimate: ${formatMoney(f.amountCents)}.`,
+      `You may dispute this case with a note until ${formatTime(deadline, f.timeZone)} (${f.timeZone}).`,
       `Evidence and dispute form: ${link}`,
       '',
       'Hitchmark',
@@ -54,8 +88,8 @@ export function decisionEmail(f: CaseEmailFacts, decision: Decision, chargedCent
     text: [
       `${f.carrierName},`,
       '',
-      `The damage case for trailer ${f.unitNumber} (${f.terminalName}, ${formatWhen(f.handoffAt, f.timeZone)}) is decided: ${DECISION_WORDS[decision]}.`,
-      `Repair estimate: ${formatCents(f.amountCents)}. Charged to your company: ${formatCents(chargedCents)}.`,
+      `The damage case for trailer ${f.unitNumber} (${f.terminalName}, ${formatTime(f.handoffAt, f.timeZone)}) is decided: ${DECISION_WORDS[decision]}.`,
+      `Repair estimate: ${formatMoney(f.amountCents)}. Charged to your company: ${formatMoney(chargedCents)}.`,
       `Reason: ${reason}`,
       '',
       itemLines(f),

@@ -8,6 +8,7 @@
 // Charging or sharing needs the carrier to have been notified, so they had the chance to dispute.
 import { TZDate } from '@date-fns/tz';
 import { addDays } from 'date-fns';
+import { formatMoney } from '@/lib/format/money';
 
 export const CASE_STATES = ['open', 'notified', 'disputed', 'decided', 'closed'] as const;
 export type CaseState = (typeof CASE_STATES)[number];
@@ -39,7 +40,8 @@ export type CaseEventDraft = {
 };
 export type TransitionResult =
   | { ok: true; toState: CaseState; event: CaseEventDraft; disputeDeadline?: Date }
-  | { ok: false; reason: string };
+  /** `field` names the form input the refusal is about, when there is one. */
+  | { ok: false; reason: string; field?: 'note' | 'reason' | 'amount' | 'decision' };
 
 /**
  * The last moment a dispute is accepted: the same local wall-clock time `days` calendar days
@@ -54,7 +56,11 @@ export function isWithinDisputeWindow(deadline: Date | null, now: Date): boolean
   return deadline !== null && now.getTime() <= deadline.getTime();
 }
 
-const refuse = (reason: string): TransitionResult => ({ ok: false, reason });
+const refuse = (reason: string, field?: 'note' | 'reason' | 'amount' | 'decision'): TransitionResult => ({
+  ok: false,
+  reason,
+  ...(field ? { field } : {}),
+});
 
 export function applyCaseCommand(
   c: CaseSnapshot,
@@ -84,7 +90,7 @@ export function applyCaseCommand(
         );
       if (!isWithinDisputeWindow(c.disputeDeadline, ctx.now))
         return refuse('The dispute window for this case has closed.');
-      if (!cmd.note.trim()) return refuse('Say why you dispute the case.');
+      if (!cmd.note.trim()) return refuse('Say why you dispute the case.', 'note');
       return done('disputed', cmd.note.trim());
     case 'decide':
       return decide(c, cmd, done);
@@ -95,8 +101,8 @@ export function applyCaseCommand(
       if (from === 'decided' || from === 'closed')
         return refuse('The estimate cannot change after the decision.');
       if (!Number.isSafeInteger(cmd.overrideCents) || cmd.overrideCents < 0)
-        return refuse('The amount must be whole cents, zero or more.');
-      if (!cmd.reason.trim()) return refuse('Give a reason for changing the estimate.');
+        return refuse('The amount must be whole cents, zero or more.', 'amount');
+      if (!cmd.reason.trim()) return refuse('Give a reason for changing the estimate.', 'reason');
       return done(from, cmd.reason.trim());
   }
 }
@@ -109,18 +115,25 @@ function decide(
   const { decision, chargedCents } = cmd;
   if (c.state === 'decided' || c.state === 'closed') return refuse('This case is already decided.');
   if (c.state === 'open' && (decision === 'charge' || decision === 'share')) {
-    return refuse('Notify the carrier before charging them, so they can dispute.');
+    return refuse('Notify the carrier before charging them, so they can dispute.', 'decision');
   }
-  if (!cmd.reason.trim()) return refuse('Give a reason for the decision.');
+  if (!cmd.reason.trim()) return refuse('Give a reason for the decision.', 'reason');
   if (!Number.isSafeInteger(chargedCents) || chargedCents < 0)
-    return refuse('The amount must be whole cents, zero or more.');
+    return refuse('The amount must be whole cents, zero or more.', 'amount');
   if ((decision === 'absorb' || decision === 'waive') && chargedCents !== 0)
-    return refuse(`Nothing is charged when you ${decision}.`);
-  if (decision === 'charge' && chargedCents <= 0) return refuse('Enter the amount to charge.');
+    return refuse(`Nothing is charged when you ${decision}.`, 'amount');
+  if (decision === 'charge' && chargedCents <= 0) return refuse('Enter the amount to charge.', 'amount');
   if (decision === 'share' && (chargedCents <= 0 || chargedCents >= c.amountCents)) {
-    return refuse('A shared charge is more than zero and less than the estimate.');
+    return refuse('A shared charge is more than zero and less than the estimate.', 'amount');
   }
   return done('decided', cmd.reason.trim());
+}
+
+/** The note stored with the command's event: the amount first for an override or a decision. */
+export function eventNote(cmd: CaseCommand, note: string | null): string | null {
+  if (cmd.kind === 'override') return `${formatMoney(cmd.overrideCents)}: ${note}`;
+  if (cmd.kind === 'decide') return `${cmd.decision} ${formatMoney(cmd.chargedCents)}: ${note}`;
+  return note;
 }
 
 /** Which commands make sense now, for the case page's buttons. */

@@ -2,6 +2,8 @@
 // A rate row applies to a finding when its condition matches and its pattern is the item key or a
 // dot-separated prefix of it (`rear` and `rear.door_left` both apply to `rear.door_left.hinge_3`);
 // the longest matching pattern wins.
+import { formatMoney } from '@/lib/format/money';
+import { itemLabel } from './item-labels';
 
 export type RateRow = { itemPattern: string; condition: string; amountCents: number };
 export type EstimateFinding = { itemKey: string; condition: string | null };
@@ -46,17 +48,17 @@ export function estimateCase(findings: EstimateFinding[], rates: RateRow[]): Est
   };
 }
 
+/** The note of the case's `estimated` event: the total, how many items, and which had no rate. */
+export function estimateNote(estimate: Estimate): string {
+  const missing = estimate.unpricedItemKeys.length
+    ? `; no rate for ${estimate.unpricedItemKeys.map(itemLabel).join(', ')}`
+    : '';
+  return `Rate card: ${formatMoney(estimate.totalCents)} for ${estimate.lines.length} item(s)${missing}`;
+}
+
 /** What the case is worth now: the clerk's override when set, else the rate-card estimate. */
 export function effectiveAmountCents(c: { estimateCents: number; overrideCents: number | null }): number {
   return c.overrideCents ?? c.estimateCents;
-}
-
-/** Whole cents as dollars for display: 123456 → "$1,234.56". Integer arithmetic only. */
-export function formatCents(cents: number): string {
-  const sign = cents < 0 ? '-' : '';
-  const abs = Math.abs(cents);
-  const dollars = Math.trunc(abs / 100).toLocaleString('en-US');
-  return `${sign}$${dollars}.${String(abs % 100).padStart(2, '0')}`;
 }
 
 /** Parses "1,234.56" or "1234.5" or "1234" dollars into whole cents without floating-point; null when not money. */
@@ -65,9 +67,4 @@ export function parseDollarsToCents(text: string): number | null {
   if (!m) return null;
   const cents = Number(m[1].replace(/,/g, '')) * 100 + Number((m[2] ?? '').padEnd(2, '0'));
   return Number.isSafeInteger(cents) ? cents : null;
-}
-
-/** Whole cents as a plain dollars field value: 85000 → "850.00" (for form inputs). */
-export function centsToDollarsText(cents: number): string {
-  return `${Math.trunc(cents / 100)}.${String(Math.abs(cents % 100)).padStart(2, '0')}`;
 }

@@ -1,4 +1,6 @@
 // Desk reports: damage by carrier and by month, charged vs absorbed, in integer cents; CSV text.
+import { toCsv } from '@/lib/format/csv';
+import { centsToDollarsInput } from '@/lib/format/money';
 
 export type ReportCaseRow = {
   month: string;
@@ -70,42 +72,28 @@ export function totalsBy<K extends 'month' | 'carrier'>(lines: ReportLine[], key
   return [...out.values()].sort((a, b) => a.label.localeCompare(b.label));
 }
 
-/** One CSV field per RFC 4180 §2: quoted when it holds a comma, quote, CR or LF; quotes doubled. */
-export function csvField(value: string | number): string {
-  const s = String(value);
-  // A leading =, +, - or @ would run as a formula in a spreadsheet; prefix it (OWASP "CSV injection").
-  const safe = /^[=+\-@]/.test(s) && typeof value === 'string' ? `'${s}` : s;
-  return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
-}
+const HEADER = [
+  'month',
+  'carrier',
+  'cases',
+  'estimate_usd',
+  'charged_usd',
+  'absorbed_usd',
+  'waived_usd',
+  'open_usd',
+] as const;
 
-const dollars = (cents: number) =>
-  `${Math.trunc(cents / 100)}.${String(Math.abs(cents % 100)).padStart(2, '0')}`;
-
-/** The report as CSV with CRLF line ends (RFC 4180), amounts in dollars with two decimals. */
+/** The report as CSV (RFC 4180, CRLF line ends), amounts in dollars with two decimals. */
 export function reportCsv(lines: ReportLine[]): string {
-  const header = [
-    'month',
-    'carrier',
-    'cases',
-    'estimate_usd',
-    'charged_usd',
-    'absorbed_usd',
-    'waived_usd',
-    'open_usd',
-  ];
-  const body = lines.map((l) =>
-    [
+  return toCsv(
+    HEADER,
+    lines.map((l) => [
       l.month,
       l.carrier,
       l.cases,
-      dollars(l.estimateCents),
-      dollars(l.chargedCents),
-      dollars(l.absorbedCents),
-      dollars(l.waivedCents),
-      dollars(l.openCents),
-    ]
-      .map(csvField)
-      .join(','),
+      ...[l.estimateCents, l.chargedCents, l.absorbedCents, l.waivedCents, l.openCents].map(
+        centsToDollarsInput,
+      ),
+    ]),
   );
-  return [header.join(','), ...body].join('\r\n') + '\r\n';
 }

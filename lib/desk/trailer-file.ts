@@ -1,5 +1,5 @@
 // One trailer's whole history as a single timeline, newest first. Pure: the query passes the rows.
-import { formatCents } from './estimate';
+import { formatMoney } from '@/lib/format/money';
 import { itemLabel } from './item-labels';
 
 export type FileKind = 'handoff' | 'move' | 'walk' | 'finding' | 'hold' | 'case' | 'photo';
@@ -109,7 +109,7 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
       kind: 'case',
       at: c.openedAt,
       title: `Damage case ${c.state}${c.carrierScac ? ` · ${c.carrierScac}` : ''}`,
-      detail: `Estimate ${formatCents(c.amountCents)}`,
+      detail: `Estimate ${formatMoney(c.amountCents)}`,
       href: `/desk/cases/${c.id}`,
     })),
     ...rows.photos.map((p): FileEntry => ({

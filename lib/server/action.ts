@@ -3,7 +3,7 @@ import type { z } from 'zod';
 import type { Role } from '@/lib/auth/roles';
 import { isRefusal, type ActionState, type Refusal } from '@/lib/result';
 import { describeZodError } from '@/lib/validation/errors';
-import { requireUser, type SessionUser } from './auth';
+import { currentUser, requireUser, type SessionUser } from './auth';
 
 // Never sent back to refill a form.
 const SECRET_FIELD = /password|pin|secret|token/i;
@@ -17,8 +17,12 @@ function echo(raw: unknown): Record<string, string> {
   return out;
 }
 
-type Spec<S extends z.ZodType> = {
-  roles: readonly Role[];
+type Access = readonly Role[] | 'public';
+type UserOf<A extends Access> = A extends 'public' ? SessionUser | null : SessionUser;
+
+type Spec<S extends z.ZodType, A extends Access> = {
+  /** Roles that may call, or 'public' (a signed link, not a session, is the permission). */
+  roles: A;
   schema: S;
   /** How to read the form; the default takes each field's last value. */
   read?: (form: FormData) => unknown;
@@ -28,16 +32,16 @@ type Spec<S extends z.ZodType> = {
 export type ActionOutcome = Refusal | { ok: true; message?: string } | void;
 
 /**
- * The one server-action wrapper: signed-in user with an allowed role, the form parsed with the
- * shared schema (field messages and the typed values back on failure), then the work. The work
- * may `redirect()`; a refusal comes back to the form under its fields.
+ * The one server-action wrapper: signed-in user with an allowed role (or anyone, when public),
+ * the form parsed with the shared schema (field messages and the typed values back on failure),
+ * then the work. The work may `redirect()`; a refusal comes back to the form under its fields.
  */
-export function formAction<S extends z.ZodType>(
-  spec: Spec<S>,
-  work: (user: SessionUser, input: z.output<S>) => Promise<ActionOutcome>,
+export function formAction<S extends z.ZodType, A extends Access = readonly Role[]>(
+  spec: Spec<S, A>,
+  work: (user: UserOf<A>, input: z.output<S>) => Promise<ActionOutcome>,
 ) {
   return async (_prev: ActionState, form: FormData): Promise<ActionState> => {
-    const user = await requireUser(spec.roles);
+    const user = (spec.roles === 'public' ? await currentUser() : await requireUser(spec.roles)) as UserOf<A>;
     const raw = spec.read ? spec.read(form) : Object.fromEntries(form);
     const values = echo(Object.fromEntries(form));
     const parsed = spec.schema.safeParse(raw);

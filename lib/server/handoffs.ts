@@ -3,7 +3,7 @@
 import { randomUUID } from 'node:crypto';
 import { and, desc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
-import { priceCase } from '@/db/queries/case-commands';
+import { priceCase } from '@/lib/server/desk/pricing';
 import { listTimeline } from '@/db/queries/timeline';
 import {
   auditLog,

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { CASE_STATES, DECISIONS } from '@/lib/desk/case-state';
 import { parseDollarsToCents } from '@/lib/desk/estimate';
+import { noteText, plainText } from './text';
 
 /** A dollar amount typed by a person ("1,234.56"), read as whole cents without floating point. */
 export const dollarsSchema = z
@@ -57,17 +58,13 @@ export const caseQueueQuerySchema = z.object({
 });
 export type CaseQueueQuery = z.infer<typeof caseQueueQuerySchema>;
 
-const reasonSchema = z
-  .string({ error: 'Give a reason.' })
-  .trim()
-  .min(3, { error: 'Give a reason (a few words at least).' })
-  .max(2000);
+const reasonSchema = plainText(2000).min(3, { error: 'Give a reason (a few words at least).' });
 const caseIdSchema = z.uuid({ error: 'This case does not exist.' });
 
 export const notifyCaseSchema = z.object({ caseId: caseIdSchema });
 export const closeCaseSchema = z.object({
   caseId: caseIdSchema,
-  note: z.string().trim().max(2000).optional(),
+  note: noteText(2000).optional(),
 });
 /** Photo ids from the form, comma separated (uploaded first through /api/uploads). */
 const photoIdsSchema = z
@@ -90,11 +87,7 @@ const photoIdsSchema = z
 export const disputeCaseSchema = z.object({
   caseId: caseIdSchema,
   photoIds: photoIdsSchema,
-  note: z
-    .string({ error: 'Say why you dispute the case.' })
-    .trim()
-    .min(10, { error: 'Say why you dispute the case (10 characters at least).' })
-    .max(4000),
+  note: noteText(4000).min(10, { error: 'Say why you dispute the case (10 characters at least).' }),
 });
 export const linkDisputeSchema = disputeCaseSchema
   .omit({ caseId: true, photoIds: true })
@@ -115,9 +108,9 @@ export const decideCaseSchema = z
     ...v,
     chargedCents: v.decision === 'absorb' || v.decision === 'waive' ? 0 : (v.amount ?? 0),
   }));
-export type DecideCaseInput = z.infer<typeof decideCaseSchema>;
 
 export const RATE_CONDITIONS = ['minor', 'damaged', 'unsafe', 'missing'] as const;
+export type RateCondition = (typeof RATE_CONDITIONS)[number];
 export const itemPatternSchema = z
   .string({ error: 'Enter an item key or prefix.' })
   .trim()
@@ -139,16 +132,8 @@ export const changeRateSchema = z.object({
 export const releaseHoldSchema = z.object({
   holdId: z.uuid({ error: 'This hold does not exist.' }),
   trailerId: z.uuid(),
-  repairedBy: z
-    .string({ error: 'Who repaired it?' })
-    .trim()
-    .min(2, { error: 'Who repaired it? (name or shop)' })
-    .max(200),
-  repairNote: z
-    .string({ error: 'What was repaired?' })
-    .trim()
-    .min(5, { error: 'Say what was repaired.' })
-    .max(2000),
+  repairedBy: plainText(200).min(2, { error: 'Who repaired it? (name or shop)' }),
+  repairNote: plainText(2000).min(5, { error: 'Say what was repaired.' }),
   repairedAt: z
     .string({ error: 'When was it repaired?' })
     .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/, { error: 'Enter the date and time of the repair.' }),

@@ -113,6 +113,18 @@ test('a damage case from drop to shared decision, with e-mails through the outbo
   await clerk.reload();
   await expect(clerk.getByRole('heading', { level: 1 })).toContainText('disputed');
   const decide = desk.form('Decide');
+  // a refused decision shows its message under the input it concerns and keeps what was typed
+  const charged = decide.getByLabel(/Charged to the carrier/);
+  await decide.getByRole('radio', { name: 'share' }).check();
+  await charged.fill('900.00');
+  await decide.getByLabel('Reason').fill('Split it.');
+  await decide.getByRole('button', { name: 'Record decision' }).click();
+  await expect(charged).toHaveAccessibleDescription(
+    'A shared charge is more than zero and less than the estimate.',
+  );
+  await expect(charged).toHaveAttribute('aria-invalid', 'true');
+  await expect(charged).toHaveValue('900.00');
+  await expect(clerk.getByRole('heading', { level: 1 })).toContainText('disputed');
   await decide.getByRole('radio', { name: 'share' }).check();
   await decide.getByLabel(/Charged to the carrier/).fill('425.00');
   await decide.getByLabel('Reason').fill('The hook photo is unclear on that panel; we split the repair.');

@@ -1,13 +1,14 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { z } from 'zod';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listCaseCarriers, listCases } from '@/db/queries/cases';
-import { formatCents } from '@/lib/desk/estimate';
-import { formatWhen } from '@/lib/engine';
 import { SECTION_ROLES } from '@/lib/auth/roles';
+import { isDeskStaff } from '@/lib/desk/access';
+import { formatMoney } from '@/lib/format/money';
+import { formatTime } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { caseQueueQuerySchema } from '@/lib/validation/desk';
+import { describeZodError } from '@/lib/validation/errors';
 import { CaseStateBadge } from './_components/case-state-badge';
 import { QueueFilters } from './_components/queue-filters';
 
@@ -24,8 +25,8 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
     ]),
   );
   const parsed = caseQueueQuerySchema.safeParse(raw);
-  const errors = parsed.success ? {} : (z.flattenError(parsed.error).fieldErrors as Record<string, string[]>);
-  const isStaff = user.role !== 'driver';
+  const errors = parsed.success ? {} : describeZodError(parsed.error).fieldErrors;
+  const isStaff = isDeskStaff(user.role);
   const now = new Date();
   const [rows, carriers] = await Promise.all([
     parsed.success ? listCases(user, { ...parsed.data, now }) : Promise.resolve([]),
@@ -71,10 +72,10 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
                   {c.carrierScac ?? 'no single carrier'} · {c.terminalCode} · {c.handoffKind}
                 </span>
                 <span className="text-gate font-bold">
-                  {formatCents(c.amountCents)}
+                  {formatMoney(c.amountCents)}
                   {c.isOverridden ? <span className="text-gate-sm text-ink-soft"> (set)</span> : null}
                 </span>
-                <span className="text-gate-sm">opened {formatWhen(c.openedAt, tz)}</span>
+                <span className="text-gate-sm">opened {formatTime(c.openedAt, tz)}</span>
                 <span>
                   <CaseStateBadge state={c.state} />
                 </span>

@@ -4,9 +4,11 @@ import { listCaseFindings } from '@/db/queries/case-evidence';
 import { getCase } from '@/db/queries/cases';
 import { verifyCaseLink } from '@/lib/desk/case-link';
 import { isWithinDisputeWindow } from '@/lib/desk/case-state';
-import { effectiveAmountCents, formatCents } from '@/lib/desk/estimate';
+import { effectiveAmountCents } from '@/lib/desk/estimate';
 import { itemLabel } from '@/lib/desk/item-labels';
-import { CONDITION_LABELS, formatWhen } from '@/lib/engine';
+import { CONDITION_LABELS } from '@/lib/engine';
+import { formatMoney } from '@/lib/format/money';
+import { formatTime } from '@/lib/format/time';
 import { caseLinkSecret } from '@/lib/server/env';
 import { LinkDisputeForm } from './link-dispute-form';
 
@@ -29,8 +31,8 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
       <h1 className="text-gate-xl font-bold">Damage case: trailer {c.unitNumber}</h1>
       <p className="text-gate">
         {c.carrierName} · {c.terminalName} · state <span className="font-bold">{c.state}</span> · estimate{' '}
-        <span className="font-bold">{formatCents(effectiveAmountCents(c))}</span>
-        {c.disputeDeadline ? ` · dispute until ${formatWhen(c.disputeDeadline, c.timeZone)}` : ''}
+        <span className="font-bold">{formatMoney(effectiveAmountCents(c))}</span>
+        {c.disputeDeadline ? ` · dispute until ${formatTime(c.disputeDeadline, c.timeZone)}` : ''}
       </p>
       <ul className="space-y-2">
         {findings.map((f) => (

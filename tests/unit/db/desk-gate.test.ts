@@ -3,12 +3,12 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
-import { priceNewCases } from '@/db/queries/case-commands';
 import { getCaseEvidence } from '@/db/queries/case-evidence';
 import { getCase } from '@/db/queries/cases';
 import { checkHandoffChain } from '@/db/queries/trailer-file';
 import { cases } from '@/db/schema';
 import { seed } from '@/db/seed';
+import { priceNewCases } from '@/lib/server/desk/pricing';
 import { submitHandoff } from '@/lib/server/handoffs';
 import { buildChecklist } from '@/lib/engine';
 import { untouchedTrailer } from './desk-fixtures';

@@ -3,39 +3,34 @@ import { and, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
 import { getCase, listCaseEvents, listCases } from '@/db/queries/cases';
-import { priceNewCases, runCaseCommand } from '@/db/queries/case-commands';
 import { getCaseEvidence } from '@/db/queries/case-evidence';
-import { releaseHold } from '@/db/queries/holds';
 import { checkHandoffChain, getTrailerFileRows } from '@/db/queries/trailer-file';
 import { caseEvents, cases, emailOutbox, holds, photos, rateCard } from '@/db/schema';
 import { verifyCaseLink } from '@/lib/desk/case-link';
+import type { CaseCommand } from '@/lib/desk/case-state';
 import { buildTrailerFile } from '@/lib/desk/trailer-file';
+import { runCaseCommand, type CaseActor } from '@/lib/server/desk/case-command';
+import { priceNewCases } from '@/lib/server/desk/pricing';
+import { reloadEnv } from '@/lib/server/env';
+import { releaseHold } from '@/lib/server/holds/release';
 import { seed } from '@/db/seed';
 import { makeDeskFixture } from './desk-fixtures';
 
 type Fixture = Awaited<ReturnType<typeof makeDeskFixture>>;
 let f: Fixture;
 const secret = 'desk-test-secret-0123456789abcdef';
-const run = (
-  command: Parameters<typeof runCaseCommand>[0]['command'],
-  actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null },
-  now: Date,
-) =>
-  runCaseCommand({
-    caseId: f.kase.id,
-    command,
-    actor,
-    now,
-    appUrl: 'http://localhost:3000',
-    linkSecret: secret,
-  });
-const clerk = () => ({ id: f.clerk.id, role: 'clerk' as const, carrierId: null });
-const driverA = () => ({ id: f.driverA.id, role: 'driver' as const, carrierId: f.carrierA.id });
-const driverB = () => ({ id: f.driverB.id, role: 'driver' as const, carrierId: f.carrierB.id });
+const run = (command: CaseCommand, actor: CaseActor, now: Date) =>
+  runCaseCommand(actor, { caseId: f.kase.id, command }, { now });
+const clerk = (): CaseActor => ({ id: f.clerk.id, role: 'clerk', carrierId: null });
+const driverA = (): CaseActor => ({ id: f.driverA.id, role: 'driver', carrierId: f.carrierA.id });
+const driverB = (): CaseActor => ({ id: f.driverB.id, role: 'driver', carrierId: f.carrierB.id });
 const eventsOf = () => db.select().from(caseEvents).where(eq(caseEvents.caseId, f.kase.id));
 
 describe('desk in the database', () => {
   beforeAll(async () => {
+    // the e-mailed links are signed with this secret, so the test can check them
+    process.env.CASE_LINK_SECRET = secret;
+    reloadEnv();
     await seed();
     f = await makeDeskFixture();
   });
@@ -87,12 +82,12 @@ describe('desk in the database', () => {
     const notifiedAt = new Date('2026-10-24T15:00:00Z');
     expect(
       await run({ kind: 'dispute', note: 'Not ours at all, we say.' }, driverA(), notifiedAt),
-    ).toMatchObject({ ok: false, status: 409 });
+    ).toMatchObject({ ok: false, code: 'conflict' });
     expect(await run({ kind: 'notify' }, clerk(), notifiedAt)).toMatchObject({
       ok: true,
-      toState: 'notified',
+      value: { toState: 'notified' },
     });
-    expect(await run({ kind: 'notify' }, clerk(), notifiedAt)).toMatchObject({ ok: false, status: 409 });
+    expect(await run({ kind: 'notify' }, clerk(), notifiedAt)).toMatchObject({ ok: false, code: 'conflict' });
 
     const mail = await db
       .select()
@@ -111,14 +106,14 @@ describe('desk in the database', () => {
     // another carrier's driver cannot touch it: the WHERE clause hides the case
     expect(
       await run({ kind: 'dispute', note: 'We want to dispute this.' }, driverB(), notifiedAt),
-    ).toMatchObject({ ok: false, status: 404 });
+    ).toMatchObject({ ok: false, code: 'not_found' });
     expect(
       await run(
         { kind: 'dispute', note: 'The tear was there at our hook.' },
         driverA(),
         new Date('2026-10-30T12:00:00Z'),
       ),
-    ).toMatchObject({ ok: true, toState: 'disputed' });
+    ).toMatchObject({ ok: true, value: { toState: 'disputed' } });
     expect(
       await run(
         {
@@ -130,14 +125,14 @@ describe('desk in the database', () => {
         clerk(),
         new Date('2026-11-02T12:00:00Z'),
       ),
-    ).toMatchObject({ ok: true, toState: 'decided' });
+    ).toMatchObject({ ok: true, value: { toState: 'decided' } });
     expect(
       await run(
         { kind: 'decide', decision: 'waive', chargedCents: 0, reason: 'Second try' },
         clerk(),
         new Date('2026-11-02T12:01:00Z'),
       ),
-    ).toMatchObject({ ok: false });
+    ).toMatchObject({ ok: false, code: 'conflict', message: 'This case is already decided.' });
 
     const events = await eventsOf();
     expect(events.map((e) => e.kind)).toEqual(['opened', 'estimated', 'notify', 'dispute', 'decide']);
@@ -157,11 +152,8 @@ describe('desk in the database', () => {
   it('refuses a dispute after the window closes', async () => {
     const g = await makeDeskFixture();
     await priceNewCases(new Date(), [g.kase.id]);
-    const r = (
-      command: Parameters<typeof runCaseCommand>[0]['command'],
-      actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null },
-      now: Date,
-    ) => runCaseCommand({ caseId: g.kase.id, command, actor, now, appUrl: 'http://x', linkSecret: secret });
+    const r = (command: CaseCommand, actor: CaseActor, now: Date) =>
+      runCaseCommand(actor, { caseId: g.kase.id, command }, { now });
     await r(
       { kind: 'notify' },
       { id: g.clerk.id, role: 'clerk', carrierId: null },
@@ -172,26 +164,14 @@ describe('desk in the database', () => {
       { id: g.driverA.id, role: 'driver', carrierId: g.carrierA.id },
       new Date('2026-11-07T16:00:00.001Z'),
     );
-    expect(late).toMatchObject({ ok: false, reason: expect.stringMatching(/window/) });
+    expect(late).toMatchObject({ ok: false, code: 'conflict', message: expect.stringMatching(/window/) });
   });
 
   it("attaches the disputer's own uploaded photos to the dispute, and refuses someone else's", async () => {
     const h = await makeDeskFixture();
     await priceNewCases(new Date(), [h.kase.id]);
-    const cmd = (
-      command: Parameters<typeof runCaseCommand>[0]['command'],
-      actor: { id: string; role: 'driver' | 'clerk'; carrierId: string | null },
-      now: Date,
-    ) =>
-      runCaseCommand({
-        caseId: h.kase.id,
-        command,
-        actor,
-        now,
-        appUrl: 'http://x',
-        linkSecret: secret,
-        sendEmail: false,
-      });
+    const cmd = (command: CaseCommand, actor: CaseActor, now: Date) =>
+      runCaseCommand(actor, { caseId: h.kase.id, command }, { now, sendEmail: false });
     await cmd(
       { kind: 'notify' },
       { id: h.clerk.id, role: 'clerk', carrierId: null },
@@ -212,7 +192,7 @@ describe('desk in the database', () => {
           })
           .returning()
       )[0].id;
-    const driver = { id: h.driverA.id, role: 'driver' as const, carrierId: h.carrierA.id };
+    const driver: CaseActor = { id: h.driverA.id, role: 'driver', carrierId: h.carrierA.id };
     const foreign = await photo(h.clerk.id);
     expect(
       await cmd(
@@ -220,7 +200,7 @@ describe('desk in the database', () => {
         driver,
         new Date('2026-10-25T10:00:00Z'),
       ),
-    ).toMatchObject({ ok: false, status: 409 });
+    ).toMatchObject({ ok: false, code: 'conflict', fieldErrors: { photoIds: [expect.any(String)] } });
     const mine = await photo(h.driverA.id);
     expect(
       await cmd(
@@ -228,7 +208,7 @@ describe('desk in the database', () => {
         driver,
         new Date('2026-10-25T10:00:00Z'),
       ),
-    ).toMatchObject({ ok: true, toState: 'disputed' });
+    ).toMatchObject({ ok: true, value: { toState: 'disputed' } });
     const events = await listCaseEvents(h.kase.id);
     expect(events.find((e) => e.kind === 'dispute')?.photoIds).toEqual([mine]);
     expect(events.filter((e) => e.kind === 'dispute')).toHaveLength(1);
@@ -237,25 +217,23 @@ describe('desk in the database', () => {
   it('releases a hold by recording the repair, shown on the trailer file', async () => {
     const repairedAt = new Date('2026-10-25T08:00:00Z');
     expect(
-      await releaseHold({
+      await releaseHold(f.clerk, {
         holdId: f.hold.id,
         trailerId: f.trailer.id,
         repairedBy: 'Riverbend body shop',
         repairNote: 'Skin patched and sealed',
         repairedAt,
-        releasedById: f.clerk.id,
       }),
-    ).toEqual({ ok: true });
+    ).toEqual({ ok: true, value: { holdId: f.hold.id } });
     expect(
-      await releaseHold({
+      await releaseHold(f.clerk, {
         holdId: f.hold.id,
         trailerId: f.trailer.id,
         repairedBy: 'x',
         repairNote: 'again',
         repairedAt,
-        releasedById: f.clerk.id,
       }),
-    ).toEqual({ ok: false, error: 'already_released' });
+    ).toMatchObject({ ok: false, code: 'conflict', message: 'This hold was already released.' });
     const [h] = await db.select().from(holds).where(eq(holds.id, f.hold.id));
     expect(h).toMatchObject({ repairedBy: 'Riverbend body shop', releasedById: f.clerk.id });
     const file = buildTrailerFile(await getTrailerFileRows(f.trailer.id));
@@ -274,8 +252,9 @@ describe('desk in the database', () => {
     const { check, brokenAt } = await checkHandoffChain(f.trailer.id);
     expect(check).toEqual({ ok: false, brokenAt: f.hook.id, why: 'content_changed' });
     expect(brokenAt?.toISOString()).toBe('2026-10-20T14:00:00.000Z');
+    // the append-only trigger raises its own SQLSTATE (db/migrations/0001_append-only-records.sql)
     await expect(
       pool.query('UPDATE handoffs SET driver_name = $1 WHERE id = $2', ['Again', f.hook.id]),
-    ).rejects.toThrow(/append-only/);
+    ).rejects.toMatchObject({ code: 'HM001', message: expect.stringMatching(/append-only/) });
   });
 });

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   applyCaseCommand,
   availableCommands,
+  eventNote,
   CASE_STATES,
   disputeDeadlineFrom,
   isWithinDisputeWindow,
@@ -128,6 +129,32 @@ describe('case state machine', () => {
     expect(
       applyCaseCommand(snap('decided'), { kind: 'override', overrideCents: 600, reason: 'q' }, ctx).ok,
     ).toBe(false);
+  });
+
+  it('names the input a refusal is about, so the form shows it there', () => {
+    const decide = (decision: 'charge' | 'share' | 'waive', chargedCents: number, reason = 'Both had it.') =>
+      applyCaseCommand(snap('disputed'), { kind: 'decide', decision, chargedCents, reason }, ctx);
+    expect(decide('share', 85_000)).toMatchObject({ ok: false, field: 'amount' });
+    expect(decide('waive', 100)).toMatchObject({ ok: false, field: 'amount' });
+    expect(decide('charge', 100, ' ')).toMatchObject({ ok: false, field: 'reason' });
+    const early = applyCaseCommand(
+      snap('open'),
+      { kind: 'decide', decision: 'charge', chargedCents: 100, reason: 'Clear photos.' },
+      ctx,
+    );
+    expect(early).toMatchObject({ ok: false, field: 'decision' });
+    // a refusal about the case's state concerns no input
+    const twice = applyCaseCommand(snap('notified'), commands.notify, ctx);
+    expect(twice.ok).toBe(false);
+    expect(twice).not.toHaveProperty('field');
+  });
+
+  it('stores the amount first in the note of an override or a decision', () => {
+    const override = { kind: 'override', overrideCents: 60_000, reason: 'Body shop quote.' } as const;
+    expect(eventNote(override, 'Body shop quote.')).toBe('$600.00: Body shop quote.');
+    const decision = { kind: 'decide', decision: 'share', chargedCents: 42_550, reason: 'Split.' } as const;
+    expect(eventNote(decision, 'Split.')).toBe('share $425.50: Split.');
+    expect(eventNote(commands.notify, null)).toBeNull();
   });
 
   it('offers the buttons that match the allowed changes', () => {

@@ -2,11 +2,12 @@ import { describe, expect, it } from 'vitest';
 import {
   effectiveAmountCents,
   estimateCase,
+  estimateNote,
   findRate,
-  formatCents,
   parseDollarsToCents,
   type RateRow,
 } from '@/lib/desk/estimate';
+import { centsToDollarsInput } from '@/lib/format/money';
 
 // Invented demo prices (the same shape as the seed's rate card), in whole cents.
 const rates: RateRow[] = [
@@ -78,9 +79,18 @@ describe('estimate from the rate card', () => {
     expect(effectiveAmountCents({ estimateCents: 85_000, overrideCents: 0 })).toBe(0);
   });
 
-  it('formats and parses dollars without floats', () => {
-    expect(formatCents(123_456)).toBe('$1,234.56');
-    expect(formatCents(5)).toBe('$0.05');
+  it('says what the rate card priced and what it could not', () => {
+    const e = estimateCase(
+      [
+        { itemKey: 'left_side.skin', condition: 'damaged' },
+        { itemKey: 'interior.floor', condition: 'damaged' },
+      ],
+      rates,
+    );
+    expect(estimateNote(e)).toBe('Rate card: $850.00 for 2 item(s); no rate for Floor (cracks and gaps)');
+  });
+
+  it('parses dollars without floats', () => {
     expect(parseDollarsToCents('1,234.56')).toBe(123_456);
     expect(parseDollarsToCents('425.5')).toBe(42_550);
     expect(parseDollarsToCents('$19.99')).toBe(1999);
@@ -91,10 +101,9 @@ describe('estimate from the rate card', () => {
 });
 
 describe('dollars text for form fields', () => {
-  it('writes whole cents back as dollars with two decimals', async () => {
-    const { centsToDollarsText } = await import('@/lib/desk/estimate');
-    expect(centsToDollarsText(85_000)).toBe('850.00');
-    expect(centsToDollarsText(42_505)).toBe('425.05');
-    expect(parseDollarsToCents(centsToDollarsText(123_456_78))).toBe(123_456_78);
+  it('writes whole cents back as dollars with two decimals that parse back to the same cents', () => {
+    expect(centsToDollarsInput(85_000)).toBe('850.00');
+    expect(centsToDollarsInput(42_505)).toBe('425.05');
+    expect(parseDollarsToCents(centsToDollarsInput(123_456_78))).toBe(123_456_78);
   });
 });

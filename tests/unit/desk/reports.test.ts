@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { csvField, reportCsv, summarizeCases, totalsBy } from '@/lib/desk/reports';
+import { reportCsv, summarizeCases, totalsBy } from '@/lib/desk/reports';
 
 const rows = [
   {
@@ -72,17 +72,23 @@ describe('desk reports', () => {
     expect(t.find((x) => x.label === 'OSFW')).toMatchObject({ cases: 3, chargedCents: 87_500 });
   });
 
-  it('writes RFC 4180 CSV: CRLF line ends, quoted fields with commas and doubled quotes', () => {
-    // RFC 4180 §2 rules 2, 6 and 7.
-    expect(csvField('a,b')).toBe('"a,b"');
-    expect(csvField('say "hi"')).toBe('"say ""hi"""');
-    expect(csvField('plain')).toBe('plain');
-    expect(csvField('=SUM(A1)')).toBe("'=SUM(A1)"); // OWASP CSV injection guidance
+  it('writes RFC 4180 CSV: CRLF line ends, amounts in dollars with two decimals', () => {
+    // RFC 4180 §2 rule 2: every record ends with CRLF.
     const csv = reportCsv(summarizeCases(rows));
     const lines = csv.split('\r\n');
     expect(lines[0]).toBe('month,carrier,cases,estimate_usd,charged_usd,absorbed_usd,waived_usd,open_usd');
     expect(lines[1]).toBe('2026-10,OSFW,2,1300.00,875.00,425.00,0.00,0.00');
     expect(lines[3]).toBe('2026-11,none,1,200.01,0.00,200.01,0.00,0.00');
     expect(csv.endsWith('\r\n')).toBe(true);
+  });
+
+  it('quotes and neutralizes what a carrier code could smuggle into a spreadsheet', () => {
+    const odd = (carrierScac: string) => ({ ...rows[0], month: '2026-12', carrierScac });
+    const lines = reportCsv(summarizeCases([odd('a,b'), odd('say "hi"'), odd('=SUM(A1)')])).split('\r\n');
+    // OWASP "CSV injection": a cell starting with = is prefixed with a quote so it stays text
+    expect(lines[1]).toBe("2026-12,'=SUM(A1),1,850.00,425.00,425.00,0.00,0.00");
+    // RFC 4180 §2 rules 6 and 7: a field with a comma or a quote is quoted, its quotes doubled
+    expect(lines[2]).toBe('2026-12,"a,b",1,850.00,425.00,425.00,0.00,0.00');
+    expect(lines[3]).toBe('2026-12,"say ""hi""",1,850.00,425.00,425.00,0.00,0.00');
   });
 });

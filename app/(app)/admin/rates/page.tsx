@@ -1,13 +1,14 @@
 import type { Metadata } from 'next';
 import { listRates } from '@/db/queries/rates';
-import { centsToDollarsText } from '@/lib/desk/estimate';
+import { SECTION_ROLES } from '@/lib/auth/roles';
+import { centsToDollarsInput } from '@/lib/format/money';
 import { requireUser } from '@/lib/server/auth';
 import { AddRateForm, ChangeRateForm } from './_components/rate-forms';
 
 export const metadata: Metadata = { title: 'Repair rate card' };
 
 export default async function RatesPage() {
-  await requireUser(['admin']);
+  await requireUser(SECTION_ROLES.admin);
   const rates = await listRates();
   return (
     <div className="space-y-4">
@@ -27,7 +28,7 @@ export default async function RatesPage() {
             <ChangeRateForm
               id={r.id}
               label={`${r.itemPattern} ${r.condition}`}
-              amount={centsToDollarsText(r.amountCents)}
+              amount={centsToDollarsInput(r.amountCents)}
             />
           </li>
         ))}

@@ -1,7 +1,8 @@
 import type { Metadata } from 'next';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listReportCases } from '@/db/queries/desk-reports';
-import { formatCents } from '@/lib/desk/estimate';
+import { formatMoney } from '@/lib/format/money';
+import { DESK_STAFF } from '@/lib/desk/access';
 import { summarizeCases, totalsBy } from '@/lib/desk/reports';
 import { requireUser } from '@/lib/server/auth';
 import { reportQuerySchema } from '@/lib/validation/desk';
@@ -10,7 +11,7 @@ import { ChargedAbsorbedChart } from './_components/charged-absorbed-chart';
 export const metadata: Metadata = { title: 'Desk reports' };
 
 export default async function DeskReportsPage({ searchParams }: PageProps<'/desk/reports'>) {
-  await requireUser(['clerk', 'admin']);
+  await requireUser(DESK_STAFF);
   const parsed = reportQuerySchema.safeParse(await searchParams);
   const months = parsed.success ? parsed.data.months : 12;
   const lines = summarizeCases(await listReportCases(months));
@@ -64,7 +65,7 @@ export default async function DeskReportsPage({ searchParams }: PageProps<'/desk
                     {[l.estimateCents, l.chargedCents, l.absorbedCents, l.waivedCents, l.openCents].map(
                       (c, i) => (
                         <td key={i} className="p-2">
-                          {formatCents(c)}
+                          {formatMoney(c)}
                         </td>
                       ),
                     )}

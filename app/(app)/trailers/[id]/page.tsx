@@ -1,14 +1,13 @@
-import { format } from 'date-fns';
-import { tz } from '@date-fns/tz';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { checkHandoffChain, getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
-import { buildTrailerFile } from '@/lib/desk/trailer-file';
-import { formatWhen } from '@/lib/engine';
 import { SECTION_ROLES } from '@/lib/auth/roles';
+import { isDeskStaff } from '@/lib/desk/access';
+import { buildTrailerFile } from '@/lib/desk/trailer-file';
+import { formatTime, toLocalInput } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { TRAILER_FILE_KINDS, trailerFileQuerySchema } from '@/lib/validation/desk';
 import { ChainStatus } from './_components/chain-status';
@@ -30,8 +29,8 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   const zone = trailer.timeZone ?? user.terminalTimeZone ?? 'UTC';
   const entries = buildTrailerFile(rows, kind);
   const openHolds = rows.holds.filter((h) => !h.releasedAt);
-  const canRelease = user.role === 'clerk' || user.role === 'admin';
-  const nowLocal = format(new Date(), "yyyy-MM-dd'T'HH:mm", { in: tz(zone) });
+  const canRelease = isDeskStaff(user.role);
+  const nowLocal = toLocalInput(new Date(), zone);
   return (
     <div className="space-y-4">
       <header>
@@ -60,7 +59,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
               <p className="text-gate font-bold">
                 {h.severity === 'out_of_service' ? 'Out of service' : 'Restricted'}: {h.reason}
               </p>
-              <p className="text-gate-sm text-ink-soft">placed {formatWhen(h.placedAt, zone)}</p>
+              <p className="text-gate-sm text-ink-soft">placed {formatTime(h.placedAt, zone)}</p>
               {canRelease ? (
                 <HoldReleaseForm holdId={h.id} trailerId={trailer.id} reason={h.reason} nowLocal={nowLocal} />
               ) : null}
@@ -93,7 +92,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
             data-kind={e.kind}
           >
             <p className="text-gate-sm text-ink-soft">
-              {formatWhen(e.at, zone)} · {e.kind}
+              {formatTime(e.at, zone)} · {e.kind}
             </p>
             <p className="text-gate font-bold">
               {e.href ? (

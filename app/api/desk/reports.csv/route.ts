@@ -1,4 +1,5 @@
 import { listReportCases } from '@/db/queries/desk-reports';
+import { DESK_STAFF } from '@/lib/desk/access';
 import { reportCsv, summarizeCases } from '@/lib/desk/reports';
 import { route } from '@/lib/server/api';
 import { reportQuerySchema } from '@/lib/validation/desk';
@@ -6,7 +7,7 @@ import { reportQuerySchema } from '@/lib/validation/desk';
 /** Damage by carrier and month as CSV (RFC 4180), for clerks and admins. */
 export const GET = route(
   {
-    access: ['clerk', 'admin'],
+    access: DESK_STAFF,
     query: reportQuerySchema,
     invalidMessage: 'months must be a whole number from 1 to 36.',
   },

@@ -3,13 +3,16 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
-import { getCaseEvidence, listCustodyEvents } from '@/db/queries/case-evidence';
+import { getCaseEvidence, listCustodyRows } from '@/db/queries/case-evidence';
 import { getCase, listCaseEvents } from '@/db/queries/cases';
 import { isWithinDisputeWindow } from '@/lib/desk/case-state';
-import { centsToDollarsText, effectiveAmountCents, formatCents } from '@/lib/desk/estimate';
+import { custodyTimeline } from '@/lib/desk/custody';
+import { isDeskStaff } from '@/lib/desk/access';
+import { effectiveAmountCents } from '@/lib/desk/estimate';
 import { itemZone } from '@/lib/desk/item-labels';
-import { formatWhen } from '@/lib/engine';
 import { SECTION_ROLES } from '@/lib/auth/roles';
+import { centsToDollarsInput, formatMoney } from '@/lib/format/money';
+import { formatTime } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { CaseStateBadge } from '../../_components/case-state-badge';
 import { CaseActions } from './_components/case-actions';
@@ -31,7 +34,7 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
   const befores = evidence.handoffs.filter((h) => h.id !== c.handoffId).map((h) => h.occurredAt.getTime());
   const custody =
     after && befores.length
-      ? await listCustodyEvents(c.trailerId, new Date(Math.min(...befores)), after.occurredAt)
+      ? custodyTimeline(await listCustodyRows(c.trailerId, new Date(Math.min(...befores)), after.occurredAt))
       : [];
   const amount = effectiveAmountCents(c);
   const isUnsafe = evidence.findings.some((f) => f.condition === 'unsafe');
@@ -49,18 +52,18 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
         </h1>
         <p className="text-gate">
           {c.terminalName} ·{' '}
-          {after ? `${after.kind === 'drop' ? 'drop' : 'hook'} on ${formatWhen(after.occurredAt, tz)}` : ''} ·
+          {after ? `${after.kind === 'drop' ? 'drop' : 'hook'} on ${formatTime(after.occurredAt, tz)}` : ''} ·
           proposed: <span className="font-bold">{c.carrierName ?? 'no single carrier'}</span>
         </p>
         <p className="text-gate">
-          Estimate <span className="font-bold">{formatCents(amount)}</span>
+          Estimate <span className="font-bold">{formatMoney(amount)}</span>
           {c.overrideCents !== null
-            ? ` (set by the clerk: ${c.overrideReason}; rate card ${formatCents(c.estimateCents)})`
+            ? ` (set by the clerk: ${c.overrideReason}; rate card ${formatMoney(c.estimateCents)})`
             : ' from the rate card'}
-          {c.decision ? ` · decided: ${c.decision}, charged ${formatCents(c.chargedCents ?? 0)}` : ''}
-          {c.disputeDeadline ? ` · dispute until ${formatWhen(c.disputeDeadline, tz)}` : ''}
+          {c.decision ? ` · decided: ${c.decision}, charged ${formatMoney(c.chargedCents ?? 0)}` : ''}
+          {c.disputeDeadline ? ` · dispute until ${formatTime(c.disputeDeadline, tz)}` : ''}
         </p>
-        {user.role !== 'driver' ? (
+        {isDeskStaff(user.role) ? (
           <Link href={`/trailers/${c.trailerId}`} className="text-gate-sm font-bold text-brand underline">
             Trailer file
           </Link>
@@ -103,7 +106,7 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
             state={c.state}
             role={user.role}
             carrierEmail={c.carrierEmail}
-            amountDollars={centsToDollarsText(amount)}
+            amountDollars={centsToDollarsInput(amount)}
             isDisputeOpen={isWithinDisputeWindow(c.disputeDeadline, new Date())}
           />
           <section aria-labelledby="history">

@@ -1,4 +1,4 @@
-import { formatCents } from '@/lib/desk/estimate';
+import { formatMoney } from '@/lib/format/money';
 
 type Bar = { label: string; chargedCents: number; absorbedCents: number };
 
@@ -14,7 +14,7 @@ export function ChargedAbsorbedChart({ bars, title }: { bars: Bar[]; title: stri
       <svg
         viewBox={`0 0 600 ${height}`}
         role="img"
-        aria-label={`${title}: ${bars.map((b) => `${b.label} charged ${formatCents(b.chargedCents)}, absorbed ${formatCents(b.absorbedCents)}`).join('; ')}`}
+        aria-label={`${title}: ${bars.map((b) => `${b.label} charged ${formatMoney(b.chargedCents)}, absorbed ${formatMoney(b.absorbedCents)}`).join('; ')}`}
         className="mt-2 h-auto w-full"
       >
         {bars.map((b, i) => {
@@ -26,11 +26,11 @@ export function ChargedAbsorbedChart({ bars, title }: { bars: Bar[]; title: stri
               </text>
               <rect x="90" y={y} width={scale(b.chargedCents)} height="16" className="fill-brand" />
               <text x={96 + scale(b.chargedCents)} y={y + 13} className="fill-ink text-[12px]">
-                {formatCents(b.chargedCents)}
+                {formatMoney(b.chargedCents)}
               </text>
               <rect x="90" y={y + 18} width={scale(b.absorbedCents)} height="16" className="fill-warn" />
               <text x={96 + scale(b.absorbedCents)} y={y + 31} className="fill-ink text-[12px]">
-                {formatCents(b.absorbedCents)}
+                {formatMoney(b.absorbedCents)}
               </text>
             </g>
           );

@@ -1,4 +1,4 @@
-import { formatWhen } from '@/lib/engine';
+import { formatTime } from '@/lib/format/time';
 import type { ChainCheck } from '@/lib/handoff-hash';
 
 /** Whether the trailer's handoff records still hash to what was stored when they were made. */
@@ -23,7 +23,7 @@ export function ChainStatus({
       role="alert"
       className="rounded-lg border-l-8 border-danger bg-danger-bg p-3 text-gate font-bold text-danger"
     >
-      Record of {brokenAt ? formatWhen(brokenAt, timeZone) : 'an unknown date'} changed after the fact
+      Record of {brokenAt ? formatTime(brokenAt, timeZone) : 'an unknown date'} changed after the fact
       {check.why === 'link_broken' ? ' (its link to the record before it is broken)' : ''}. Every later record
       is unproven.
     </p>

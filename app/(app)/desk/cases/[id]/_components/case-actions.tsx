@@ -1,3 +1,7 @@
+import { ActionForm } from '@/app/_components/action-form';
+import { Field } from '@/app/_components/field';
+import type { Role } from '@/lib/auth/roles';
+import { isDeskStaff } from '@/lib/desk/access';
 import { availableCommands, type CaseState } from '@/lib/desk/case-state';
 import {
   closeCaseAction,
@@ -6,7 +10,7 @@ import {
   notifyCaseAction,
   overrideEstimateAction,
 } from '../../../actions';
-import { ActionForm, inputClass } from './action-form';
+import { DecisionFields } from './decision-fields';
 import { DisputeFields } from './dispute-fields';
 
 type Props = {
@@ -14,11 +18,13 @@ type Props = {
   trailerId: string;
   itemKey: string;
   state: CaseState;
-  role: string;
+  role: Role;
   carrierEmail: string | null;
   amountDollars: string;
   isDisputeOpen: boolean;
 };
+
+const BOX = 'rounded-xl bg-paper p-3';
 
 /** The commands this viewer may give in this state; the server checks again. */
 export function CaseActions({
@@ -32,17 +38,19 @@ export function CaseActions({
   isDisputeOpen,
 }: Props) {
   const can = new Set(availableCommands(state));
-  const isStaff = role === 'clerk' || role === 'admin';
+  const isStaff = isDeskStaff(role);
+  const hidden = { caseId };
   const forms: React.ReactNode[] = [];
   if (can.has('dispute') && isDisputeOpen && (role === 'driver' || isStaff)) {
     forms.push(
       <ActionForm
         key="dispute"
         action={disputeCaseAction}
-        caseId={caseId}
+        hidden={hidden}
         title="Dispute this case"
-        submit="Send dispute"
+        submitLabel="Send dispute"
         variant="danger"
+        className={BOX}
       >
         <DisputeFields trailerId={trailerId} itemKey={itemKey} />
       </ActionForm>,
@@ -54,9 +62,10 @@ export function CaseActions({
       <ActionForm
         key="notify"
         action={notifyCaseAction}
-        caseId={caseId}
+        hidden={hidden}
         title="Notify the carrier"
-        submit="Notify carrier"
+        submitLabel="Notify carrier"
+        className={BOX}
       >
         <p className="text-gate-sm">
           E-mails {carrierEmail ?? 'the carrier'} the evidence summary and a signed link to dispute.
@@ -69,25 +78,27 @@ export function CaseActions({
       <ActionForm
         key="override"
         action={overrideEstimateAction}
-        caseId={caseId}
+        hidden={hidden}
         title="Change the estimate"
-        submit="Save estimate"
+        submitLabel="Save estimate"
         variant="secondary"
+        className={BOX}
       >
-        <label className="block text-gate font-bold">
-          Amount ($)
-          <input
-            name="amount"
-            inputMode="decimal"
-            required
-            defaultValue={amountDollars}
-            className={inputClass}
-          />
-        </label>
-        <label className="block text-gate font-bold">
-          Reason
-          <input name="reason" required className={inputClass} placeholder="e.g. body shop quote" />
-        </label>
+        <Field
+          label="Amount ($)"
+          name="amount"
+          id="override-amount"
+          inputMode="decimal"
+          required
+          defaultValue={amountDollars}
+        />
+        <Field
+          label="Reason"
+          name="reason"
+          id="override-reason"
+          required
+          placeholder="e.g. body shop quote"
+        />
       </ActionForm>,
     );
   }
@@ -98,29 +109,19 @@ export function CaseActions({
       <ActionForm
         key="decide"
         action={decideCaseAction}
-        caseId={caseId}
+        hidden={hidden}
         title="Decide"
-        submit="Record decision"
+        submitLabel="Record decision"
+        className={BOX}
       >
-        <fieldset className="grid grid-cols-2 gap-2">
-          <legend className="text-gate font-bold">Decision</legend>
-          {choices.map((d) => (
-            <label
-              key={d}
-              className="flex min-h-tap items-center gap-2 rounded-lg border-2 border-paper-line px-3 text-gate"
-            >
-              <input type="radio" name="decision" value={d} required className="h-5 w-5" /> {d}
-            </label>
-          ))}
-        </fieldset>
-        <label className="block text-gate font-bold">
-          Charged to the carrier ($, for charge or share)
-          <input name="amount" inputMode="decimal" className={inputClass} />
-        </label>
-        <label className="block text-gate font-bold">
-          Reason
-          <input name="reason" required className={inputClass} />
-        </label>
+        <DecisionFields choices={choices} />
+        <Field
+          label="Charged to the carrier ($, for charge or share)"
+          name="amount"
+          id="decide-amount"
+          inputMode="decimal"
+        />
+        <Field label="Reason" name="reason" id="decide-reason" required />
         {state === 'open' ? (
           <p className="text-gate-sm text-ink-soft">
             To charge or share, notify the carrier first so they can dispute.
@@ -134,15 +135,13 @@ export function CaseActions({
       <ActionForm
         key="close"
         action={closeCaseAction}
-        caseId={caseId}
+        hidden={hidden}
         title="Close the case"
-        submit="Close case"
+        submitLabel="Close case"
         variant="secondary"
+        className={BOX}
       >
-        <label className="block text-gate font-bold">
-          Note (optional)
-          <input name="note" className={inputClass} placeholder="e.g. paid, repair done" />
-        </label>
+        <Field label="Note (optional)" name="note" id="close-note" placeholder="e.g. paid, repair done" />
       </ActionForm>,
     );
   }

@@ -1,4 +1,4 @@
-import { formatWhen } from '@/lib/engine';
+import { formatTime } from '@/lib/format/time';
 import { PhotoZoom } from './photo-zoom';
 
 type Event = {
@@ -28,7 +28,7 @@ export function CaseHistory({ events, timeZone }: { events: Event[]; timeZone: s
     <ol className="space-y-2" aria-label="Case history">
       {events.map((e) => (
         <li key={e.id} className="rounded-lg bg-paper p-2 text-gate-sm">
-          <span className="font-bold">{WORDS[e.kind] ?? e.kind}</span> · {formatWhen(e.createdAt, timeZone)}
+          <span className="font-bold">{WORDS[e.kind] ?? e.kind}</span> · {formatTime(e.createdAt, timeZone)}
           {e.actorName
             ? ` · ${e.actorName} (${e.actorRole})`
             : e.kind === 'dispute'

@@ -1,4 +1,4 @@
-import { formatWhen } from '@/lib/engine';
+import { formatTime } from '@/lib/format/time';
 
 type Event = { id: string; at: Date; kind: string; text: string };
 
@@ -17,7 +17,7 @@ export function CustodyTimeline({ events, timeZone }: { events: Event[]; timeZon
     >
       {events.map((e) => (
         <li key={e.id} className="text-gate-sm">
-          <span className="font-bold">{formatWhen(e.at, timeZone)}</span> — {e.text}
+          <span className="font-bold">{formatTime(e.at, timeZone)}</span> — {e.text}
         </li>
       ))}
     </ol>

@@ -1,19 +1,24 @@
 'use client';
 
 import { useState } from 'react';
-// the gate's camera-to-storage upload (resize, SHA-256, presigned PUT, server check), reused as is
-import { PhotoCapture } from '@/app/(app)/gate/trailers/[id]/_components/photo-capture';
-import { inputClass } from './action-form';
+import { FieldError, Textarea } from '@/app/_components/field';
+import { useFieldError } from '@/app/_components/form-state';
+import { PhotoCapture } from '@/app/_components/photo-capture';
 
 /** The dispute's note and optional photos; the photo ids travel in one hidden field. */
 export function DisputeFields({ trailerId, itemKey }: { trailerId: string; itemKey: string }) {
   const [photos, setPhotos] = useState<{ id: string }[]>([]);
+  const photoErrors = useFieldError('photoIds');
   return (
     <>
-      <label className="block text-gate font-bold">
-        Why is this damage not yours?
-        <textarea name="note" required minLength={10} rows={4} className={`${inputClass} py-2`} />
-      </label>
+      <Textarea
+        label="Why is this damage not yours?"
+        name="note"
+        id="dispute-note"
+        required
+        minLength={10}
+        rows={4}
+      />
       <input type="hidden" name="photoIds" value={photos.map((p) => p.id).join(',')} />
       <PhotoCapture
         trailerId={trailerId}
@@ -22,6 +27,7 @@ export function DisputeFields({ trailerId, itemKey }: { trailerId: string; itemK
         photos={photos}
         onAdd={(p) => setPhotos((list) => [...list, p])}
       />
+      <FieldError id="photoIds-error" messages={photoErrors} />
     </>
   );
 }

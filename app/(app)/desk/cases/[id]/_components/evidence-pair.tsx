@@ -1,6 +1,7 @@
 import type { CaseEvidence, CaseFinding } from '@/db/queries/case-evidence';
 import { itemLabel } from '@/lib/desk/item-labels';
-import { CONDITION_LABELS, formatWhen, type Condition } from '@/lib/engine';
+import { CONDITION_LABELS, type Condition } from '@/lib/engine';
+import { formatTime } from '@/lib/format/time';
 import { PhotoZoom } from './photo-zoom';
 
 type Side = {
@@ -17,7 +18,7 @@ function Record({ side, itemName, timeZone }: { side: Side; itemName: string; ti
       <h4 className="text-gate-sm font-bold uppercase tracking-wide text-ink-soft">{side.title}</h4>
       {handoff ? (
         <p className="text-gate-sm">
-          {handoff.kind === 'drop' ? 'Drop' : 'Hook'} {formatWhen(handoff.occurredAt, timeZone)} ·{' '}
+          {handoff.kind === 'drop' ? 'Drop' : 'Hook'} {formatTime(handoff.occurredAt, timeZone)} ·{' '}
           {handoff.driverName} ({handoff.carrierScac})
         </p>
       ) : (

@@ -6,19 +6,27 @@ type Props = { damagedZones: string[]; isReefer: boolean; axles: number };
 
 const ZONE_NAMES: Record<string, string> = ZONE_LABELS;
 
-export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
-  const hit = new Set(damagedZones);
-  const fill = (zone: string) =>
-    hit.has(zone) ? 'fill-danger/70 stroke-danger' : 'fill-paper-dim stroke-ink-faint';
-  const label = damagedZones.length
-    ? `Damage at: ${damagedZones.map((z) => ZONE_NAMES[z] ?? z).join(', ')}`
-    : 'No zone marked';
-  const Zone = ({ zone, children }: { zone: string; children: React.ReactNode }) => (
-    <g className={fill(zone)} strokeWidth={2} data-zone={zone} data-damaged={hit.has(zone) || undefined}>
-      <title>{`${ZONE_NAMES[zone] ?? zone}${hit.has(zone) ? ': damaged' : ''}`}</title>
+/** One zone of the drawing: filled red when this case has damage there. */
+function Zone({ zone, hit, children }: { zone: string; hit: Set<string>; children: React.ReactNode }) {
+  const isDamaged = hit.has(zone);
+  return (
+    <g
+      className={isDamaged ? 'fill-danger/70 stroke-danger' : 'fill-paper-dim stroke-ink-faint'}
+      strokeWidth={2}
+      data-zone={zone}
+      data-damaged={isDamaged || undefined}
+    >
+      <title>{`${ZONE_NAMES[zone] ?? zone}${isDamaged ? ': damaged' : ''}`}</title>
       {children}
     </g>
   );
+}
+
+export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
+  const hit = new Set(damagedZones);
+  const label = damagedZones.length
+    ? `Damage at: ${damagedZones.map((z) => ZONE_NAMES[z] ?? z).join(', ')}`
+    : 'No zone marked';
   const wheelXs = Array.from({ length: Math.max(1, Math.min(axles, 3)) }, (_, i) => 470 - i * 34);
   return (
     <figure className="rounded-xl bg-paper p-3">
@@ -32,23 +40,23 @@ export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
           From above (nose left)
         </text>
         {isReefer ? (
-          <Zone zone="reefer_unit">
+          <Zone zone="reefer_unit" hit={hit}>
             <rect x="22" y="48" width="22" height="74" rx="4" />
           </Zone>
         ) : null}
-        <Zone zone="nose">
+        <Zone zone="nose" hit={hit}>
           <rect x="46" y="34" width="14" height="102" />
         </Zone>
-        <Zone zone="right_side">
+        <Zone zone="right_side" hit={hit}>
           <rect x="60" y="34" width="480" height="14" />
         </Zone>
-        <Zone zone="interior">
+        <Zone zone="interior" hit={hit}>
           <rect x="60" y="48" width="480" height="74" />
         </Zone>
-        <Zone zone="left_side">
+        <Zone zone="left_side" hit={hit}>
           <rect x="60" y="122" width="480" height="14" />
         </Zone>
-        <Zone zone="rear">
+        <Zone zone="rear" hit={hit}>
           <rect x="540" y="34" width="16" height="102" />
         </Zone>
         <text x="300" y="30" textAnchor="middle" className="fill-ink-soft text-[12px]">
@@ -62,25 +70,25 @@ export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
           Left side view
         </text>
         {isReefer ? (
-          <Zone zone="reefer_unit">
+          <Zone zone="reefer_unit" hit={hit}>
             <rect x="22" y="208" width="22" height="50" rx="4" />
           </Zone>
         ) : null}
-        <Zone zone="nose">
+        <Zone zone="nose" hit={hit}>
           <rect x="46" y="198" width="14" height="82" />
         </Zone>
-        <Zone zone="left_side">
+        <Zone zone="left_side" hit={hit}>
           <rect x="60" y="198" width="480" height="82" />
         </Zone>
-        <Zone zone="rear">
+        <Zone zone="rear" hit={hit}>
           <rect x="540" y="198" width="16" height="82" />
         </Zone>
-        <Zone zone="undercarriage">
+        <Zone zone="undercarriage" hit={hit}>
           <rect x="120" y="280" width="20" height="32" />
           <rect x="200" y="280" width="70" height="16" rx="6" />
           <rect x="400" y="280" width="110" height="10" />
         </Zone>
-        <Zone zone="tires">
+        <Zone zone="tires" hit={hit}>
           {wheelXs.map((x) => (
             <circle key={x} cx={x} cy={304} r={15} />
           ))}

@@ -1,0 +1,121 @@
+'use client';
+
+import { useState } from 'react';
+import type { DraftPhoto } from '@/lib/handoff-draft';
+
+const MAX_SIDE = 1600;
+
+async function resizeToJpeg(file: File): Promise<Blob> {
+  const bitmap = await createImageBitmap(file);
+  const scale = Math.min(1, MAX_SIDE / Math.max(bitmap.width, bitmap.height));
+  const canvas = document.createElement('canvas');
+  canvas.width = Math.max(1, Math.round(bitmap.width * scale));
+  canvas.height = Math.max(1, Math.round(bitmap.height * scale));
+  canvas.getContext('2d')!.drawImage(bitmap, 0, 0, canvas.width, canvas.height);
+  bitmap.close();
+  return new Promise((resolve, reject) =>
+    canvas.toBlob((b) => (b ? resolve(b) : reject(new Error('resize failed'))), 'image/jpeg', 0.85),
+  );
+}
+
+async function sha256Hex(bytes: ArrayBuffer): Promise<string> {
+  const digest = await crypto.subtle.digest('SHA-256', bytes);
+  return [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join('');
+}
+
+async function message(res: Response, fallback: string) {
+  const body = await res.json().catch(() => null);
+  return (body && typeof body.message === 'string' ? body.message : fallback) as string;
+}
+
+/** Camera photo → resized JPEG → SHA-256 → presigned PUT → server check. */
+async function uploadPhoto(file: File, trailerId: string, itemKey: string): Promise<DraftPhoto> {
+  const blob = await resizeToJpeg(file);
+  const bytes = await blob.arrayBuffer();
+  const announce = await fetch('/api/uploads', {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({
+      trailerId,
+      itemKey,
+      contentType: 'image/jpeg',
+      byteSize: bytes.byteLength,
+      sha256: await sha256Hex(bytes),
+    }),
+  });
+  if (!announce.ok) throw new Error(await message(announce, 'The photo could not be announced.'));
+  const { photoId, uploadUrl, headers } = await announce.json();
+  const put = await fetch(uploadUrl, { method: 'PUT', headers, body: blob });
+  if (!put.ok) throw new Error('The photo did not upload; try again.');
+  const done = await fetch(`/api/uploads/${photoId}/complete`, { method: 'POST' });
+  if (!done.ok) throw new Error(await message(done, 'The photo was refused.'));
+  return { id: photoId };
+}
+
+export function PhotoCapture({
+  trailerId,
+  itemKey,
+  label,
+  photos,
+  onAdd,
+}: {
+  trailerId: string;
+  itemKey: string;
+  label: string;
+  photos: DraftPhoto[];
+  onAdd: (p: DraftPhoto) => void;
+}) {
+  const [state, setState] = useState<{ busy: boolean; error: string | null }>({ busy: false, error: null });
+  const inputId = `photo-${itemKey}`;
+  return (
+    <div className="space-y-2">
+      {photos.length ? (
+        <ul className="flex flex-wrap gap-2" aria-label={`Photos of ${label}`}>
+          {photos.map((p) => (
+            // eslint-disable-next-line @next/next/no-img-element
+            <li key={p.id}>
+              <img
+                src={`/api/photos/${p.id}`}
+                alt={`Photo of ${label}`}
+                className="h-20 w-20 rounded border-2 border-paper-line object-cover"
+              />
+            </li>
+          ))}
+        </ul>
+      ) : null}
+      <label
+        htmlFor={inputId}
+        className="inline-flex min-h-tap cursor-pointer items-center rounded-lg border-2 border-brand bg-paper px-4 text-gate font-bold text-brand"
+      >
+        {state.busy ? 'Uploading…' : photos.length ? 'Add another photo' : 'Take a photo'}
+      </label>
+      <input
+        id={inputId}
+        type="file"
+        accept="image/*"
+        capture="environment"
+        className="sr-only"
+        aria-label={`Photo of ${label}`}
+        disabled={state.busy}
+        onChange={async (e) => {
+          const file = e.target.files?.[0];
+          e.target.value = '';
+          if (!file) return;
+          setState({ busy: true, error: null });
+          try {
+            onAdd(await uploadPhoto(file, trailerId, itemKey));
+            setState({ busy: false, error: null });
+          } catch (err) {
+            setState({
+              busy: false,
+              error: err instanceof Error ? err.message : 'The photo could not be saved.',
+            });
+          }
+        }}
+      />
+      <p aria-live="polite" className="text-gate-sm font-bold text-danger">
+        {state.error ?? ''}
+      </p>
+    </div>
+  );
+}
