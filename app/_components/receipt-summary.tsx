@@ -1,7 +1,7 @@
 import { CAUTIONS, Caution } from '@/app/_components/caution';
 import { formatWhen } from '@/lib/engine';
-import { FINDING_WORDS, holdTitle, type ReceiptView } from '@/lib/receipt';
-import { formatVerificationCode } from '@/lib/verification-code';
+import { FINDING_WORDS, holdTitle, type ReceiptView } from '@/lib/handoffs/receipt';
+import { formatVerificationCode } from '@/lib/handoffs/verification-code';
 
 /** The receipt as the gate, the e-mail and the public verify page show it. Photos only where the viewer may see them. */
 export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptView; showPhotos: boolean }) {

@@ -2,8 +2,8 @@ import 'server-only';
 import { asc, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { handoffItems, handoffs, photos } from '@/db/schema';
-import { hashableFromRows } from '@/lib/handoff-canonical';
-import { verifyChain, type ChainLink } from '@/lib/handoff-hash';
+import { hashableFromRows } from '@/lib/handoffs/canonical';
+import { verifyChain, type ChainLink } from '@/lib/handoffs/hash';
 
 /** A trailer's handoffs as hash-chain links, oldest first, recomputed from the stored rows. */
 export async function listChainLinks(trailerId: string): Promise<ChainLink[]> {

@@ -13,7 +13,7 @@ import { priceNewCases, runCaseCommand } from '@/db/queries/case-commands';
 import { db } from '@/db';
 import { caseEvents, cases, handoffs, photos, trailers, users } from '@/db/schema';
 
-import { allOkObservations } from '@/lib/all-ok';
+import { allOkObservations } from '@/lib/handoffs/all-ok';
 
 const DAY = 86_400_000;
 

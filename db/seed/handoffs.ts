@@ -15,7 +15,7 @@ import { photos, trailers, users } from '@/db/schema';
 
 const HOUR = 3_600_000;
 type TrailerRow = typeof trailers.$inferSelect;
-import { allOkObservations } from '@/lib/all-ok';
+import { allOkObservations } from '@/lib/handoffs/all-ok';
 
 type Driver = HandoffActor & { name: string; driverNumber: string };
 

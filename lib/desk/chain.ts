@@ -1,7 +1,7 @@
 // Re-checks a trailer's handoff chain from the rows as stored now, with the same hash input the
 // submit service used (lib/handoff-canonical.ts) and lib/handoff-hash.ts verifyChain.
-import { hashableFromRows, type HandoffHashRow, type HandoffItemHashRow } from '@/lib/handoff-canonical';
-import { verifyChain, type ChainCheck } from '@/lib/handoff-hash';
+import { hashableFromRows, type HandoffHashRow, type HandoffItemHashRow } from '@/lib/handoffs/canonical';
+import { verifyChain, type ChainCheck } from '@/lib/handoffs/hash';
 
 export type StoredHandoff = {
   row: HandoffHashRow & { contentHash: string };

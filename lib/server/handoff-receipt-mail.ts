@@ -3,7 +3,7 @@
 import type { Tx } from '@/db';
 import { enqueueEmail } from '@/db/queries/outbox';
 import { appUrl as appUrlFromEnv } from './env';
-import { receiptSubject, receiptText, type ReceiptView } from '@/lib/receipt';
+import { receiptSubject, receiptText, type ReceiptView } from '@/lib/handoffs/receipt';
 
 export async function enqueueReceiptEmail(tx: Tx, to: string, view: ReceiptView, appUrl?: string) {
   const base = appUrl ?? appUrlFromEnv();

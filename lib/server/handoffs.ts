@@ -29,14 +29,14 @@ import {
   type HandoffEvent,
   type Hold,
 } from '@/lib/engine';
-import { hashableFromRows } from '@/lib/handoff-canonical';
+import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { HandoffError, isLockNotAvailable, isUniqueViolation } from '@/lib/handoff-errors';
-import { evaluateHandoff } from '@/lib/handoff-evaluation';
-import { handoffContentHash } from '@/lib/handoff-hash';
-import { damageEvidenceErrors, normalizeItems } from '@/lib/handoff-items';
+import { evaluateHandoff } from '@/lib/handoffs/evaluation';
+import { handoffContentHash } from '@/lib/handoffs/hash';
+import { damageEvidenceErrors, normalizeItems } from '@/lib/handoffs/items';
 import type { Role } from '@/lib/auth/roles';
 import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
-import { newVerificationCode } from '@/lib/verification-code';
+import { newVerificationCode } from '@/lib/handoffs/verification-code';
 import { enqueueReceiptEmail } from './handoff-receipt-mail';
 import { chooseSpot } from './handoff-slots';
 

@@ -2,7 +2,7 @@ import 'server-only';
 import { listTimeline } from '@/db/queries/timeline';
 import { getTrailerForGate } from '@/db/queries/trailers';
 import { buildChecklist } from '@/lib/engine';
-import { lastKnownCondition, lastReadings } from '@/lib/last-condition';
+import { lastKnownCondition, lastReadings } from '@/lib/handoffs/last-condition';
 import type { Role } from '@/lib/auth/roles';
 
 /** A trailer, its checklist and the last known condition per item; null for an unknown trailer. */

@@ -4,7 +4,7 @@ import { and, eq } from 'drizzle-orm';
 import { db } from '@/db';
 import { photos, trailers } from '@/db/schema';
 import { buildChecklist } from '@/lib/engine';
-import { isAllowedImageType, MAX_PHOTO_BYTES, sniffImageType } from '@/lib/image-type';
+import { isAllowedImageType, MAX_PHOTO_BYTES, sniffImageType } from '@/lib/photos/image-type';
 import type { UploadRequestInput } from '@/lib/validation/handoffs';
 import type { RefusalCode as ApiErrorCode } from '@/lib/result';
 import { deleteObject, presignPhotoUpload, readObject } from './storage';

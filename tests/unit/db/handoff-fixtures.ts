@@ -1,4 +1,4 @@
-import { allOkObservations } from '@/lib/all-ok';
+import { allOkObservations } from '@/lib/handoffs/all-ok';
 // Helpers for the handoff database tests: a fresh trailer per test, the demo actors, a full
 // inspection with every item ok. Not a test file (no .test.ts).
 import { randomBytes, randomUUID } from 'node:crypto';

@@ -16,9 +16,9 @@ import {
   photos,
   trailers,
 } from '@/db/schema';
-import { hashableFromRows } from '@/lib/handoff-canonical';
+import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { HandoffError } from '@/lib/handoff-errors';
-import { handoffContentHash, verifyChain } from '@/lib/handoff-hash';
+import { handoffContentHash, verifyChain } from '@/lib/handoffs/hash';
 import { submitHandoff } from '@/lib/server/handoffs';
 import { actor, allOk, freshTrailer, storedPhoto, submitInput } from './handoff-fixtures';
 

@@ -13,7 +13,7 @@ import {
   newDraft,
   type Draft,
   type DraftItem,
-} from '@/lib/handoff-draft';
+} from '@/lib/handoffs/draft';
 import type { TrailerCondition } from '@/lib/server/trailer-condition';
 import { handoffSubmitSchema } from '@/lib/validation/handoffs';
 import { FuelButtons, ReeferFields } from './readings-fields';

@@ -1,8 +1,8 @@
 'use client';
 
 import type { ChecklistItem, Condition } from '@/lib/engine';
-import { itemChange, needsEvidence, type DraftItem } from '@/lib/handoff-draft';
-import type { LastSeen } from '@/lib/last-condition';
+import { itemChange, needsEvidence, type DraftItem } from '@/lib/handoffs/draft';
+import type { LastSeen } from '@/lib/handoffs/last-condition';
 import { Choice } from './choice';
 import { ItemFields } from './item-fields';
 import { PhotoCapture } from './photo-capture';

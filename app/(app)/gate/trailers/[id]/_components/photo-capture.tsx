@@ -1,7 +1,7 @@
 'use client';
 
 import { useState } from 'react';
-import type { DraftPhoto } from '@/lib/handoff-draft';
+import type { DraftPhoto } from '@/lib/handoffs/draft';
 
 const MAX_SIDE = 1600;
 

@@ -1,7 +1,7 @@
 'use client';
 
 import { useEffect, useState } from 'react';
-import type { Draft } from '@/lib/handoff-draft';
+import type { Draft } from '@/lib/handoffs/draft';
 
 export type StoredDraft = Draft & { isQueued?: boolean };
 

@@ -1,6 +1,6 @@
 'use client';
 
-import type { Draft } from '@/lib/handoff-draft';
+import type { Draft } from '@/lib/handoffs/draft';
 import { Choice } from './choice';
 
 const input = 'mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-gate';
