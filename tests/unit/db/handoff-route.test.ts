@@ -64,6 +64,10 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
       { ...good, carrierId: randomUUID() }, // not the driver's own carrier → 422
       { ...good, idempotencyKey: 'short' },
       { ...good, tractorNumber: '<script>' },
+      // PostgreSQL refuses NUL in text: it must be refused as input, not fail the insert
+      { ...good, driverName: 'Test\u0000Driver' },
+      { ...good, note: 'gate\u0000note' },
+      { ...good, items: { 'left_side.skin': { condition: 'ok', note: 'scuff\u0000' } } },
       { ...good, reefer: { ...good.reefer, setpointF: 'cold' } },
       { ...good, reefer: { ...good.reefer, preTripResult: 'pass', preTripAt: null } },
       {
@@ -79,6 +83,16 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
       expect(res.status).toBeLessThan(500);
       expect(await res.json()).toHaveProperty('message');
     }
+  });
+
+  it('a control character in a typed field is refused under that field', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const good = submitInput(trailer.id, carrierId, 'drop', allOk(checklist), new Date());
+    const res = await post(JSON.stringify({ ...good, driverName: 'Test\u0000Driver', note: 'a\u0007b' }));
+    expect(res.status).toBe(422);
+    const body = await res.json();
+    expect(body.fieldErrors.driverName).toEqual(['Remove the special characters from this field.']);
+    expect(body.fieldErrors.note).toEqual(['Remove the special characters from this note.']);
   });
 
   it('a good body is 201, and the same body again is 200 with the same handoff', async () => {
