@@ -7,7 +7,7 @@ import { and, desc, eq, inArray, like, sql } from 'drizzle-orm';
 import { PNG } from 'pngjs';
 import { buildChecklist, type Checklist } from '@/lib/engine';
 import { putObject } from '@/lib/server/storage';
-import { submitHandoff, type HandoffActor } from '@/lib/server/handoffs';
+import { recordSeedHandoff, type HandoffActor } from './submit';
 import type { ItemObservationInput } from '@/lib/validation/handoffs';
 import { priceNewCases, runCaseCommand } from '@/db/queries/case-commands';
 import { db } from '@/db';
@@ -127,7 +127,7 @@ export async function seedDesk(now = new Date()) {
       items: Record<string, ItemObservationInput>,
       n: number,
     ) =>
-      submitHandoff(
+      recordSeedHandoff(
         {
           idempotencyKey: `seed-desk-${t.unitNumber}-${n}`,
           trailerId: t.id,

@@ -3,7 +3,8 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { pool } from '@/db';
 import { seed } from '@/db/seed';
 import { handoffSubmitSchema, verificationCodeSchema } from '@/lib/validation/handoffs';
-import { actor, allOk, freshTrailer, submitInput } from './handoff-fixtures';
+import { CAUTIONS } from '@/app/_components/caution';
+import { actor, allOk, freshTrailer, recorded, submitInput } from './handoff-fixtures';
 
 // The route handler with a signed-in driver, without a running Next server: auth is replaced,
 // everything below it (zod, the submit service, the database) is real.
@@ -93,6 +94,28 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
     const body = await res.json();
     expect(body.fieldErrors.driverName).toEqual(['Remove the special characters from this field.']);
     expect(body.fieldErrors.note).toEqual(['Remove the special characters from this note.']);
+  });
+
+  it('a hook of an out-of-service trailer is a 409 naming the holds, with the cautions to read', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    // 49 CFR 393.207(b): locking pins must not be disengaged
+    items['undercarriage.tandem_pin.left_front'] = { condition: 'ok', isEngaged: false };
+    const d = await actor('D1001');
+    await recorded(submitInput(trailer.id, carrierId, 'drop', items, new Date(Date.now() - 60_000)), d, {
+      now: new Date(Date.now() - 60_000),
+      sendReceipt: false,
+    });
+    const res = await post(
+      JSON.stringify(submitInput(trailer.id, carrierId, 'hook', allOk(checklist), new Date())),
+    );
+    expect(res.status).toBe(409);
+    const body = await res.json();
+    expect(body).toMatchObject({
+      code: 'conflict',
+      holds: [{ reason: 'Tandem locking pin, left front is not engaged.', severity: 'out_of_service' }],
+      cautions: [CAUTIONS.outOfService, CAUTIONS.inspection],
+    });
   });
 
   it('a good body is 201, and the same body again is 200 with the same handoff', async () => {

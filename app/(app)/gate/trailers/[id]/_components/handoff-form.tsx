@@ -14,7 +14,7 @@ import {
   type Draft,
   type DraftItem,
 } from '@/lib/handoffs/draft';
-import type { TrailerCondition } from '@/lib/server/trailer-condition';
+import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { handoffSubmitSchema } from '@/lib/validation/handoffs';
 import { FuelButtons, ReeferFields } from './readings-fields';
 import { newDraftKey, useDraft, type StoredDraft } from './use-draft';
