@@ -6,12 +6,12 @@ import { db, pool } from '@/db';
 import { priceNewCases } from '@/db/queries/case-commands';
 import { getCaseEvidence } from '@/db/queries/case-evidence';
 import { getCase } from '@/db/queries/cases';
-import { checkHandoffChain } from '@/db/queries/trailer-file';
 import { cases } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { buildChecklist } from '@/lib/engine';
 import { untouchedTrailer } from './desk-fixtures';
 import { actor, allOk, recorded, storedPhoto, submitInput } from './handoff-fixtures';
+import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 
 describe('desk over submitted handoffs', () => {
   beforeAll(async () => {
@@ -85,6 +85,6 @@ describe('desk over submitted handoffs', () => {
     expect(photoOf(finding?.previousHandoffId)).toEqual([before]);
     expect(photoOf(handoffId)).toEqual([after]);
 
-    expect((await checkHandoffChain(trailer.id)).check).toEqual({ ok: true, count: 3 });
+    expect((await verifyTrailerChain(trailer.id)).check).toEqual({ ok: true, count: 3 });
   });
 });

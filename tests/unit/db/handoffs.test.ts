@@ -3,7 +3,6 @@ import { and, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
 import { isLockNotAvailable, isUniqueViolation } from '@/db/errors';
-import { checkTrailerChain } from '@/db/queries/handoff-chain';
 import { getPhotoForViewer, getReceipt } from '@/db/queries/handoffs';
 import { seed } from '@/db/seed';
 import {
@@ -21,6 +20,7 @@ import {
 import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { handoffContentHash, verifyChain } from '@/lib/handoffs/hash';
 import { isRefusal } from '@/lib/result';
+import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 import { submitHandoff } from '@/lib/server/handoffs/submit';
 import { actor, allOk, freshTrailer, recorded, refused, storedPhoto, submitInput } from './handoff-fixtures';
 
@@ -286,6 +286,30 @@ describe('handoff submit service (real database)', () => {
     expect(isLockNotAvailable(error)).toBe(false);
   });
 
+  it('the chain counts the photos the submit hashed: a photo that stops being stored breaks it', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    const photoId = await storedPhoto(trailer.id, d1.id);
+    items['rear.door_right.panel'] = { condition: 'minor', note: 'Scuff', photoIds: [photoId] };
+    await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) });
+    const h = await recorded(submitInput(trailer.id, d1.carrierId!, 'hook', allOk(checklist), at(3)), d1, {
+      now: at(3),
+    });
+    expect(await verifyTrailerChain(trailer.id)).toEqual({ check: { ok: true, count: 2 }, brokenAt: null });
+    // the receipt no longer shows the photo, so the record is not what was hashed
+    await db.update(photos).set({ status: 'rejected' }).where(eq(photos.id, photoId));
+    const [drop] = await db.select().from(photos).where(eq(photos.id, photoId));
+    expect(await verifyTrailerChain(trailer.id)).toEqual({
+      check: { ok: false, brokenAt: drop.handoffId, why: 'content_changed' },
+      brokenAt: at(0),
+    });
+    // a photo pointed at a record afterwards, never stored, is not part of it
+    await db.update(photos).set({ status: 'stored' }).where(eq(photos.id, photoId));
+    const stray = await storedPhoto(trailer.id, d1.id);
+    await db.update(photos).set({ status: 'pending', handoffId: h.handoffId }).where(eq(photos.id, stray));
+    expect((await verifyTrailerChain(trailer.id)).check).toEqual({ ok: true, count: 2 });
+  });
+
   it("a driver reads only their own carrier's receipts and photos; staff read all", async () => {
     const { trailer, checklist } = await freshTrailer();
     const items = allOk(checklist);
@@ -348,6 +372,6 @@ describe('handoff submit service (real database)', () => {
       .where(isNotNull(handoffs.prevHash))
       .limit(25);
     expect(withHistory.length).toBeGreaterThan(10);
-    for (const t of withHistory) expect((await checkTrailerChain(t.id)).ok).toBe(true);
+    for (const t of withHistory) expect((await verifyTrailerChain(t.id)).check.ok).toBe(true);
   });
 });

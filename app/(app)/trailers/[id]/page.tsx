@@ -5,7 +5,7 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
-import { checkHandoffChain, getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
+import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
 import { buildTrailerFile } from '@/lib/desk/trailer-file';
 import { formatWhen } from '@/lib/engine';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -13,6 +13,7 @@ import { requireUser } from '@/lib/server/auth';
 import { TRAILER_FILE_KINDS, trailerFileQuerySchema } from '@/lib/validation/desk';
 import { ChainStatus } from './_components/chain-status';
 import { HoldReleaseForm } from './_components/hold-release-form';
+import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 
 export const metadata: Metadata = { title: 'Trailer file' };
 
@@ -26,7 +27,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   const kind = query.success ? query.data.kind : undefined;
   const trailer = await getTrailerHeader(id);
   if (!trailer) notFound();
-  const [rows, chain] = await Promise.all([getTrailerFileRows(id), checkHandoffChain(id)]);
+  const [rows, chain] = await Promise.all([getTrailerFileRows(id), verifyTrailerChain(id)]);
   const zone = trailer.timeZone ?? user.terminalTimeZone ?? 'UTC';
   const entries = buildTrailerFile(rows, kind);
   const openHolds = rows.holds.filter((h) => !h.releasedAt);
