@@ -97,9 +97,9 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
         {showPhotos && r.photos.length ? (
           <ul className="mt-1 flex flex-wrap gap-2">
             {r.photos.map((p) => (
-              // eslint-disable-next-line @next/next/no-img-element
               <li key={p.id}>
                 <a href={`/api/photos/${p.id}`}>
+                  {/* eslint-disable-next-line @next/next/no-img-element -- served by the app, checked and sized at upload */}
                   <img
                     src={`/api/photos/${p.id}`}
                     alt={`Photo${p.itemKey ? ` of ${p.itemKey}` : ''}`}

@@ -2,7 +2,7 @@
 
 import { useState } from 'react';
 // the gate's camera-to-storage upload (resize, SHA-256, presigned PUT, server check), reused as is
-import { PhotoCapture } from '@/app/(app)/gate/trailers/[id]/_components/photo-capture';
+import { PhotoCapture } from '@/app/_components/photo-capture';
 import { inputClass } from './action-form';
 
 /** The dispute's note and optional photos; the photo ids travel in one hidden field. */
