@@ -87,7 +87,7 @@ async function receiptWhere(where: SQL | undefined): Promise<ReceiptView | null>
     verificationCode: h.verificationCode,
     contentHash: h.contentHash,
     findings: f,
-    holds: hl.map((x) => ({ ...x, severity: x.severity })),
+    holds: hl,
     photos: p,
   };
 }
