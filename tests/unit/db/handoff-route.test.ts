@@ -1,6 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { pool } from '@/db';
+import { eq } from 'drizzle-orm';
+import { db, pool } from '@/db';
+import { handoffs } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { handoffSubmitSchema, verificationCodeSchema } from '@/lib/validation/handoffs';
 import { CAUTIONS } from '@/app/_components/caution';
@@ -116,6 +118,26 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
       holds: [{ reason: 'Tandem locking pin, left front is not engaged.', severity: 'out_of_service' }],
       cautions: [CAUTIONS.outOfService, CAUTIONS.inspection],
     });
+  });
+
+  it('only gate roles record a handoff: a jockey gets 403, nobody signed in 401, and nothing is stored', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const body = JSON.stringify(submitInput(trailer.id, carrierId, 'drop', allOk(checklist), new Date()));
+    const driver = signedIn.user;
+    try {
+      const j = await actor('jockey@bramblecrest.example');
+      signedIn.user = { id: j.id, role: 'jockey', carrierId: j.carrierId, terminalId: j.terminalId };
+      const asJockey = await post(body);
+      expect(asJockey.status).toBe(403);
+      expect(await asJockey.json()).toMatchObject({ code: 'forbidden' });
+      signedIn.user = null;
+      const signedOut = await post(body);
+      expect(signedOut.status).toBe(401);
+      expect(await signedOut.json()).toMatchObject({ code: 'unauthenticated' });
+    } finally {
+      signedIn.user = driver;
+    }
+    expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(0);
   });
 
   it('a good body is 201, and the same body again is 200 with the same handoff', async () => {
