@@ -1,7 +1,9 @@
 'use client';
 
 import { useState } from 'react';
-import type { DraftPhoto } from '@/lib/handoff-draft';
+
+/** A photo that reached storage and passed the server's checks. */
+export type CapturedPhoto = { id: string };
 
 const MAX_SIDE = 1600;
 
@@ -29,7 +31,7 @@ async function message(res: Response, fallback: string) {
 }
 
 /** Camera photo → resized JPEG → SHA-256 → presigned PUT → server check. */
-async function uploadPhoto(file: File, trailerId: string, itemKey: string): Promise<DraftPhoto> {
+async function uploadPhoto(file: File, trailerId: string, itemKey: string): Promise<CapturedPhoto> {
   const blob = await resizeToJpeg(file);
   const bytes = await blob.arrayBuffer();
   const announce = await fetch('/api/uploads', {
@@ -52,6 +54,7 @@ async function uploadPhoto(file: File, trailerId: string, itemKey: string): Prom
   return { id: photoId };
 }
 
+/** Takes a photo of one checklist item and uploads it; the gate form and the desk's dispute form use it. */
 export function PhotoCapture({
   trailerId,
   itemKey,
@@ -62,8 +65,8 @@ export function PhotoCapture({
   trailerId: string;
   itemKey: string;
   label: string;
-  photos: DraftPhoto[];
-  onAdd: (p: DraftPhoto) => void;
+  photos: CapturedPhoto[];
+  onAdd: (p: CapturedPhoto) => void;
 }) {
   const [state, setState] = useState<{ busy: boolean; error: string | null }>({ busy: false, error: null });
   const inputId = `photo-${itemKey}`;
@@ -72,8 +75,8 @@ export function PhotoCapture({
       {photos.length ? (
         <ul className="flex flex-wrap gap-2" aria-label={`Photos of ${label}`}>
           {photos.map((p) => (
-            // eslint-disable-next-line @next/next/no-img-element
             <li key={p.id}>
+              {/* eslint-disable-next-line @next/next/no-img-element -- served by the app, checked and sized at upload */}
               <img
                 src={`/api/photos/${p.id}`}
                 alt={`Photo of ${label}`}

@@ -1,7 +1,7 @@
 import { CAUTIONS, Caution } from '@/app/_components/caution';
 import { formatWhen } from '@/lib/engine';
-import { FINDING_WORDS, holdTitle, type ReceiptView } from '@/lib/receipt';
-import { formatVerificationCode } from '@/lib/verification-code';
+import { FINDING_WORDS, holdTitle, type ReceiptView } from '@/lib/handoffs/receipt';
+import { formatVerificationCode } from '@/lib/handoffs/verification-code';
 
 /** The receipt as the gate, the e-mail and the public verify page show it. Photos only where the viewer may see them. */
 export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptView; showPhotos: boolean }) {
@@ -97,9 +97,9 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
         {showPhotos && r.photos.length ? (
           <ul className="mt-1 flex flex-wrap gap-2">
             {r.photos.map((p) => (
-              // eslint-disable-next-line @next/next/no-img-element
               <li key={p.id}>
                 <a href={`/api/photos/${p.id}`}>
+                  {/* eslint-disable-next-line @next/next/no-img-element -- served by the app, checked and sized at upload */}
                   <img
                     src={`/api/photos/${p.id}`}
                     alt={`Photo${p.itemKey ? ` of ${p.itemKey}` : ''}`}

@@ -2,11 +2,10 @@ import 'server-only';
 import { asc, eq, inArray } from 'drizzle-orm';
 import { db } from '@/db';
 import { handoffItems, handoffs, photos } from '@/db/schema';
-import { hashableFromRows } from '@/lib/handoff-canonical';
-import { verifyChain, type ChainLink } from '@/lib/handoff-hash';
+import type { ChainRecord } from '@/lib/handoffs/chain';
 
-/** A trailer's handoffs as hash-chain links, oldest first, recomputed from the stored rows. */
-export async function listChainLinks(trailerId: string): Promise<ChainLink[]> {
+/** A trailer's handoffs as stored, oldest first (as the submit links them), with their items and photos. */
+export async function listChainRecords(trailerId: string): Promise<ChainRecord[]> {
   const rows = await db
     .select()
     .from(handoffs)
@@ -14,24 +13,16 @@ export async function listChainLinks(trailerId: string): Promise<ChainLink[]> {
     .orderBy(asc(handoffs.occurredAt), asc(handoffs.createdAt));
   if (!rows.length) return [];
   const ids = rows.map((r) => r.id);
-  const items = await db.select().from(handoffItems).where(inArray(handoffItems.handoffId, ids));
-  const shas = await db
-    .select({ handoffId: photos.handoffId, sha256: photos.sha256 })
-    .from(photos)
-    .where(inArray(photos.handoffId, ids));
-  return rows.map((r) => ({
-    id: r.id,
-    storedHash: r.contentHash,
-    storedPrevHash: r.prevHash,
-    recomputed: hashableFromRows(
-      r,
-      items.filter((i) => i.handoffId === r.id),
-      shas.filter((p) => p.handoffId === r.id).map((p) => p.sha256),
-    ),
+  const [items, pics] = await Promise.all([
+    db.select().from(handoffItems).where(inArray(handoffItems.handoffId, ids)),
+    db
+      .select({ handoffId: photos.handoffId, sha256: photos.sha256, status: photos.status })
+      .from(photos)
+      .where(inArray(photos.handoffId, ids)),
+  ]);
+  return rows.map((row) => ({
+    row,
+    items: items.filter((i) => i.handoffId === row.id),
+    photos: pics.filter((p) => p.handoffId === row.id),
   }));
-}
-
-/** Whether a trailer's stored handoffs still match their hashes and links. */
-export async function checkTrailerChain(trailerId: string) {
-  return verifyChain(await listChainLinks(trailerId));
 }

@@ -2,7 +2,7 @@ import 'server-only';
 import { and, asc, eq, gt, isNull, lte, or, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
 import { carriers, findings, handoffs, holds, photos, terminals, trailers, yardSpots } from '@/db/schema';
-import type { ReceiptView } from '@/lib/receipt';
+import type { ReceiptView } from '@/lib/handoffs/receipt';
 import type { Role } from '@/lib/auth/roles';
 
 export type Viewer = { id: string; role: Role; carrierId: string | null };
@@ -87,7 +87,7 @@ async function receiptWhere(where: SQL | undefined): Promise<ReceiptView | null>
     verificationCode: h.verificationCode,
     contentHash: h.contentHash,
     findings: f,
-    holds: hl.map((x) => ({ ...x, severity: x.severity })),
+    holds: hl,
     photos: p,
   };
 }

@@ -1,11 +1,10 @@
 import 'server-only';
-import { aliasedTable, asc, desc, eq, sql } from 'drizzle-orm';
+import { aliasedTable, desc, eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import {
   carriers,
   cases,
   findings,
-  handoffItems,
   handoffs,
   holds,
   photos,
@@ -17,7 +16,6 @@ import {
   yardSpots,
   yardWalks,
 } from '@/db/schema';
-import { checkTrailerChain } from '@/lib/desk/chain';
 import type { FileRows } from '@/lib/desk/trailer-file';
 
 export async function getTrailerHeader(id: string) {
@@ -139,41 +137,4 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
       .orderBy(desc(photos.createdAt)),
   ]);
   return { handoffs: hs, moves, walks, findings: fs, holds: hls, cases: cs, photos: ps };
-}
-
-/** Re-verifies the trailer's hash chain from the rows as they are in the database now (oldest first, as the submit service links them). */
-export async function checkHandoffChain(trailerId: string) {
-  const rows = await db
-    .select()
-    .from(handoffs)
-    .where(eq(handoffs.trailerId, trailerId))
-    .orderBy(asc(handoffs.occurredAt), asc(handoffs.createdAt));
-  const [items, pics] = await Promise.all([
-    db
-      .select({
-        handoffId: handoffItems.handoffId,
-        itemKey: handoffItems.itemKey,
-        condition: handoffItems.condition,
-        treadThirtySeconds: handoffItems.treadThirtySeconds,
-        isHoldingAir: handoffItems.isHoldingAir,
-        note: handoffItems.note,
-        details: handoffItems.details,
-      })
-      .from(handoffItems)
-      .innerJoin(handoffs, eq(handoffs.id, handoffItems.handoffId))
-      .where(eq(handoffs.trailerId, trailerId)),
-    db
-      .select({ handoffId: photos.handoffId, sha256: photos.sha256, status: photos.status })
-      .from(photos)
-      .where(eq(photos.trailerId, trailerId)),
-  ]);
-  const check = checkTrailerChain(
-    rows.map((row) => ({
-      row,
-      items: items.filter((i) => i.handoffId === row.id),
-      photoSha256s: pics.filter((p) => p.handoffId === row.id && p.status === 'stored').map((p) => p.sha256),
-    })),
-  );
-  const brokenAt = check.ok ? null : (rows.find((r) => r.id === check.brokenAt)?.occurredAt ?? null);
-  return { check, brokenAt };
 }

@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, asc, eq, ilike, or, sql } from 'drizzle-orm';
+import { asc, eq, ilike, or, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { carriers, terminals, trailers, yardSpots } from '@/db/schema';
 
@@ -47,7 +47,7 @@ export async function countTrailersByStatus(terminalId?: string | null) {
   return db
     .select({ status: trailers.status, count: sql<number>`count(*)::int` })
     .from(trailers)
-    .where(terminalId ? and(eq(trailers.currentTerminalId, terminalId)) : undefined)
+    .where(terminalId ? eq(trailers.currentTerminalId, terminalId) : undefined)
     .groupBy(trailers.status);
 }
 

@@ -5,13 +5,13 @@
 import { and, desc, eq, inArray, like, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { caseEvents, cases, handoffs, trailers, users } from '@/db/schema';
-import { allOkObservations } from '@/lib/all-ok';
+import { allOkObservations } from '@/lib/handoffs/all-ok';
 import { priceNewCases } from '@/lib/server/desk/pricing';
-import { submitHandoff, type HandoffActor } from '@/lib/server/handoffs';
 import { checklistOf } from '@/lib/trailers/checklist';
 import type { ItemObservationInput } from '@/lib/validation/handoffs';
 import { demoPhoto } from './desk-photos';
 import { walkDemoCases } from './desk-walk';
+import { recordSeedHandoff, type HandoffActor } from './submit';
 
 const DAY = 86_400_000;
 
@@ -74,7 +74,7 @@ export async function seedDesk(now = new Date()) {
       items: Record<string, ItemObservationInput>,
       n: number,
     ) =>
-      submitHandoff(
+      recordSeedHandoff(
         {
           idempotencyKey: `seed-desk-${t.unitNumber}-${n}`,
           trailerId: t.id,

@@ -1,22 +1,20 @@
-// Weeks of demo handoff history, recorded through the real submit service (lib/server/handoffs.ts)
-// with `now` in the past, so findings, holds, cases and the hash chain are the engine's own.
+// Weeks of demo handoff history, recorded through the real submit service with `now` in the
+// past, so findings, holds, cases and the hash chain are the engine's own.
 // Invented scenario: home drivers run most trips; outside carriers' drivers run some, and a few
 // of their trips bring back new damage (→ cases); a few final drops find a pin not engaged or a
 // flat spare (→ holds). Photos are small generated PNGs stored in the object storage fake.
-import { createHash } from 'node:crypto';
 import { inArray } from 'drizzle-orm';
-import { PNG } from 'pngjs';
-import { buildChecklist, type Checklist } from '@/lib/engine';
-import { submitHandoff, type HandoffActor } from '@/lib/server/handoffs';
-import { putObject } from '@/lib/server/storage';
-import type { ItemObservationInput } from '@/lib/validation/handoffs';
 import { db } from '@/db';
-import { photos, trailers, users } from '@/db/schema';
+import { trailers, users } from '@/db/schema';
+import type { Checklist } from '@/lib/engine';
+import { allOkObservations } from '@/lib/handoffs/all-ok';
+import { checklistOf } from '@/lib/trailers/checklist';
+import type { ItemObservationInput } from '@/lib/validation/handoffs';
+import { demoPng, storeDemoPhoto } from './photos';
+import { recordSeedHandoff, type HandoffActor } from './submit';
 
 const HOUR = 3_600_000;
 type TrailerRow = typeof trailers.$inferSelect;
-import { allOkObservations } from '@/lib/all-ok';
-
 type Driver = HandoffActor & { name: string; driverNumber: string };
 
 const allOk = (checklist: Checklist) => allOkObservations(checklist, (key) => 8 + (key.length % 5));
@@ -47,43 +45,6 @@ const DAMAGE: { key: string; obs: ItemObservationInput }[] = [
     obs: { condition: 'damaged', note: 'Side skirt torn loose at two brackets.' },
   },
 ];
-
-/** A small PNG whose pixels depend on `seed`, so each demo photo has its own SHA-256. */
-function demoPng(seed: number): Uint8Array {
-  const png = new PNG({ width: 24, height: 16 });
-  for (let i = 0; i < png.data.length; i += 4) {
-    png.data[i] = (seed * 37 + i) % 256;
-    png.data[i + 1] = (seed * 11) % 256;
-    png.data[i + 2] = 90;
-    png.data[i + 3] = 255;
-  }
-  return new Uint8Array(PNG.sync.write(png));
-}
-
-async function demoPhoto(
-  trailerId: string,
-  itemKey: string,
-  uploader: string,
-  seed: number,
-): Promise<string> {
-  const bytes = demoPng(seed);
-  const objectKey = `photos/${trailerId}/seed-${seed}.png`;
-  await putObject(objectKey, bytes, 'image/png');
-  const [row] = await db
-    .insert(photos)
-    .values({
-      objectKey,
-      uploadedById: uploader,
-      trailerId,
-      itemKey,
-      status: 'stored',
-      contentType: 'image/png',
-      byteSize: bytes.length,
-      sha256: createHash('sha256').update(bytes).digest('hex'),
-    })
-    .returning({ id: photos.id });
-  return row.id;
-}
 
 function input(
   t: TrailerRow,
@@ -158,13 +119,7 @@ export async function seedHandoffs(plans: HandoffPlan[]): Promise<number> {
   let count = 0;
   for (const [j, p] of plans.entries()) {
     const t = p.trailer;
-    const checklist = buildChecklist({
-      kind: t.kind,
-      hingesPerDoor: t.hingesPerDoor === 5 ? 5 : 4,
-      axles: t.axleCount,
-      tireLayout: t.tireLayout,
-      fuelTankGallons: t.fuelTankGallons || undefined,
-    });
+    const checklist = checklistOf(t);
     const events = p.endsInYard ? 2 * p.cycles + 1 : 2 * p.cycles;
     // times backwards from the final event: yard stays of 10–60 h, trips of 30–100 h
     const times: Date[] = [p.finalAt];
@@ -189,8 +144,15 @@ export async function seedHandoffs(plans: HandoffPlan[]): Promise<number> {
       if (isLast && kind === 'drop') {
         if (isDamageTrip) {
           const d = DAMAGE[Math.floor(j / 5) % DAMAGE.length];
-          if (items[d.key])
-            items[d.key] = { ...d.obs, photoIds: [await demoPhoto(t.id, d.key, driver.id, p.index)] };
+          if (items[d.key]) {
+            const photo = {
+              trailerId: t.id,
+              uploadedById: driver.id,
+              itemKey: d.key,
+              name: `seed-${p.index}`,
+            };
+            items[d.key] = { ...d.obs, photoIds: [await storeDemoPhoto(photo, demoPng(p.index))] };
+          }
         } else if (j % 11 === 3) {
           items['undercarriage.tandem_pin.right_rear'] = { condition: 'ok', isEngaged: false };
         } else if (j % 11 === 7) {
@@ -202,7 +164,7 @@ export async function seedHandoffs(plans: HandoffPlan[]): Promise<number> {
           };
         }
       }
-      await submitHandoff(input(t, actor, kind, n, times[n], items), actor, {
+      await recordSeedHandoff(input(t, actor, kind, n, times[n], items), actor, {
         now: times[n],
         sendReceipt: false,
         isBulk: true,

@@ -4,23 +4,14 @@
 import { resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import bcrypt from 'bcryptjs';
-import { and, eq } from 'drizzle-orm';
-import { computeVinCheckDigit } from '@/lib/engine/identity';
-import { defaultPolicy } from '@/lib/engine/policy';
+import { eq } from 'drizzle-orm';
 import { db, pool } from '@/db';
-import {
-  carriers,
-  labels,
-  policies,
-  rateCard,
-  terminals,
-  trailers,
-  users,
-  yardRows,
-  yardSpots,
-} from '@/db/schema';
+import { carriers, rateCard, users } from '@/db/schema';
 import { seedDesk } from './desk';
+import { seedFleet } from './fleet';
 import { seedHistory } from './history';
+import { seedTerminals } from './terminals';
+import { upsertBy } from './upsert';
 
 export const DEMO_ACCOUNTS = [
   {
@@ -67,25 +58,6 @@ const CARRIERS = [
   { scac: 'VNTA', name: 'Vantorra Haulage', contactEmail: 'dispatch@vantorra.example', isHomeCarrier: false },
 ];
 
-const TERMINALS = [
-  {
-    code: 'RVB',
-    name: 'Riverbend terminal',
-    timeZone: 'America/Chicago',
-    rows: ['A', 'B', 'C', 'D', 'E', 'F'],
-    slotsPerRow: 24,
-    doors: 12,
-  },
-  {
-    code: 'HMS',
-    name: 'High Mesa terminal',
-    timeZone: 'America/Denver',
-    rows: ['A', 'B', 'C', 'D'],
-    slotsPerRow: 16,
-    doors: 8,
-  },
-];
-
 const EXTRA_DRIVERS = [
   { name: 'Ines Halvorsen', driverNumber: 'D1002', carrier: 'BRCL' },
   { name: 'Kwame Adeyemi-Fitch', driverNumber: 'D1003', carrier: 'BRCL' },
@@ -126,27 +98,6 @@ const RATES: {
   { itemPattern: 'nose', condition: 'unsafe', amountCents: 130_000 },
 ];
 
-const VIN_CHARS = '0123456789ABCDEFGHJKLMNPRSTUVWXYZ';
-
-/** A VIN with a valid 565.15 check digit; "1B9" is an invented small-manufacturer prefix. */
-export function demoVin(serial: number, yearCode: string): string {
-  const serialPart = String(100000 + serial).slice(-6);
-  const body = `1B9RF5322${yearCode}R${VIN_CHARS[serial % 10]}${serialPart.slice(1)}`.slice(0, 17);
-  const vin = body.split('');
-  vin[8] = computeVinCheckDigit(body);
-  return vin.join('');
-}
-
-async function upsertBy<T extends Record<string, unknown>>(
-  insert: () => Promise<T[]>,
-  find: () => Promise<T[]>,
-): Promise<T> {
-  const [row] = await insert();
-  if (row) return row;
-  const [existing] = await find();
-  return existing;
-}
-
 export async function seed() {
   const hashes = new Map<string, string>();
   const hash = async (s: string) => hashes.get(s) ?? hashes.set(s, await bcrypt.hash(s, 10)).get(s)!;
@@ -160,57 +111,7 @@ export async function seed() {
     carrierIds[c.scac] = row.id;
   }
 
-  const terminalIds: Record<string, string> = {};
-  for (const t of TERMINALS) {
-    const row = await upsertBy(
-      () =>
-        db
-          .insert(terminals)
-          .values({ code: t.code, name: t.name, timeZone: t.timeZone })
-          .onConflictDoNothing()
-          .returning({ id: terminals.id }),
-      () => db.select({ id: terminals.id }).from(terminals).where(eq(terminals.code, t.code)),
-    );
-    terminalIds[t.code] = row.id;
-    await db
-      .insert(policies)
-      .values({
-        terminalId: row.id,
-        data: { ...defaultPolicy, freeTimeHours: 48, disputeWindowDays: 14, lowFuelEighths: 4 },
-      })
-      .onConflictDoNothing();
-    for (const [i, name] of t.rows.entries()) {
-      const r = await upsertBy(
-        () =>
-          db
-            .insert(yardRows)
-            .values({ terminalId: row.id, name: `Row ${name}`, sortOrder: i })
-            .onConflictDoNothing()
-            .returning({ id: yardRows.id }),
-        () =>
-          db
-            .select({ id: yardRows.id })
-            .from(yardRows)
-            .where(and(eq(yardRows.terminalId, row.id), eq(yardRows.name, `Row ${name}`))),
-      );
-      const slots = Array.from({ length: t.slotsPerRow }, (_, s) => ({
-        terminalId: row.id,
-        rowId: r.id,
-        kind: 'slot' as const,
-        label: `${name}${String(s + 1).padStart(2, '0')}`,
-        sortOrder: s,
-      }));
-      await db.insert(yardSpots).values(slots).onConflictDoNothing();
-    }
-    const doors = Array.from({ length: t.doors }, (_, d) => ({
-      terminalId: row.id,
-      kind: 'door' as const,
-      label: `Door ${d + 1}`,
-      sortOrder: d,
-    }));
-    await db.insert(yardSpots).values(doors).onConflictDoNothing();
-  }
-
+  const terminalIds = await seedTerminals();
   const home = terminalIds.RVB;
   for (const a of DEMO_ACCOUNTS) {
     await db
@@ -242,31 +143,7 @@ export async function seed() {
 
   await db.insert(rateCard).values(RATES).onConflictDoNothing();
 
-  // 300 trailers: 270 of the home carrier, 30 owned by outside carriers (interchanged equipment).
-  const yearCodes = ['F', 'G', 'H', 'J', 'K', 'L', 'M', 'N', 'P', 'R'];
-  const rows = Array.from({ length: 300 }, (_, i) => {
-    const owner = i < 270 ? 'BRCL' : ['OSFW', 'PLRD', 'VNTA'][i % 3];
-    const isReefer = i % 10 !== 9;
-    return {
-      unitNumber: owner === 'BRCL' ? `R${53001 + i}` : `${owner.slice(0, 2)}${7100 + i}`,
-      vin: demoVin(i + 1, yearCodes[i % yearCodes.length]),
-      plate: `${['KX', 'TR', 'WM'][i % 3]}${String(40000 + i * 7).slice(-5)}`,
-      plateState: ['IL', 'MO', 'CO', 'KS'][i % 4],
-      kind: isReefer ? ('reefer' as const) : ('dry_van' as const),
-      ownerCarrierId: carrierIds[owner],
-      fuelTankGallons: isReefer ? [50, 50, 50, 55, 40][i % 5] : 0,
-      hingesPerDoor: i % 4 === 0 ? 5 : 4,
-      tireLayout: i % 7 === 0 ? ('wide_single' as const) : ('dual' as const),
-    };
-  });
-  await db.insert(trailers).values(rows).onConflictDoNothing();
-
-  const existingLabels = await db.select({ id: labels.id }).from(labels).limit(1);
-  if (existingLabels.length === 0) {
-    const all = await db.select({ id: trailers.id }).from(trailers);
-    await db.insert(labels).values(all.map((t) => ({ trailerId: t.id })));
-  }
-
+  await seedFleet(carrierIds);
   await seedHistory({ terminalIds, carrierIds });
   await seedDesk();
 }

@@ -1,6 +1,7 @@
-// No `server-only` marker: the demo seed stores its example photos through this under plain Node.
+import 'server-only';
 import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
+import { env } from './env';
 
 // Object storage for photos. S3_ENDPOINT is where the server reaches storage; S3_PUBLIC_ENDPOINT
 // is what the browser reaches for presigned uploads (the same locally, different behind a proxy).
@@ -11,17 +12,15 @@ function client(endpoint: string | undefined): S3Client {
   const key = endpoint ?? '';
   let c = clients.get(key);
   if (!c) {
+    const { S3_REGION, S3_ACCESS_KEY_ID, S3_SECRET_ACCESS_KEY } = env();
     c = new S3Client({
-      region: process.env.S3_REGION ?? 'us-east-1',
+      region: S3_REGION,
       endpoint,
       forcePathStyle: true,
       requestChecksumCalculation: 'WHEN_REQUIRED',
       responseChecksumValidation: 'WHEN_REQUIRED',
-      credentials: process.env.S3_ACCESS_KEY_ID
-        ? {
-            accessKeyId: process.env.S3_ACCESS_KEY_ID,
-            secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? '',
-          }
+      credentials: S3_ACCESS_KEY_ID
+        ? { accessKeyId: S3_ACCESS_KEY_ID, secretAccessKey: S3_SECRET_ACCESS_KEY ?? '' }
         : undefined,
     });
     clients.set(key, c);
@@ -29,9 +28,9 @@ function client(endpoint: string | undefined): S3Client {
   return c;
 }
 
-const bucket = () => process.env.S3_BUCKET ?? 'hitchmark-photos';
-const serverClient = () => client(process.env.S3_ENDPOINT);
-const publicClient = () => client(process.env.S3_PUBLIC_ENDPOINT ?? process.env.S3_ENDPOINT);
+const bucket = () => env().S3_BUCKET;
+const serverClient = () => client(env().S3_ENDPOINT);
+const publicClient = () => client(env().S3_PUBLIC_ENDPOINT ?? env().S3_ENDPOINT);
 
 /** A URL the browser PUTs the photo to, valid for `seconds`; the Content-Type header must match. */
 export function presignPhotoUpload(objectKey: string, contentType: string, seconds = 600): Promise<string> {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { CONDITIONS } from '@/lib/engine/conditions';
+import { noteText, plainText } from './text';
 
 // One schema for the gate form (client-side feedback), POST /api/handoffs and the seed.
 // The server stays the authority: item keys are checked against the trailer's checklist, and
@@ -8,11 +9,8 @@ import { CONDITIONS } from '@/lib/engine/conditions';
 export const CONDITION_VALUES = CONDITIONS;
 export const conditionSchema = z.enum(CONDITION_VALUES, { error: 'Choose a condition.' });
 
-const optionalText = (max: number, what: string) =>
-  z
-    .string()
-    .trim()
-    .max(max, { error: `${what} is at most ${max} characters.` })
+const optionalNote = (max: number, what: string) =>
+  noteText(max, `${what} is at most ${max} characters.`)
     .transform((s) => (s === '' ? null : s))
     .nullable()
     .optional();
@@ -33,7 +31,7 @@ export const itemObservationSchema = z.object({
   isInsulationShowing: z.boolean().optional(),
   isLeaking: z.boolean().optional(),
   cleanliness: z.enum(['clean', 'sweep', 'washout']).optional(),
-  note: optionalText(500, 'A note'),
+  note: optionalNote(500, 'A note'),
   photoIds: z
     .array(z.uuid({ error: 'A photo reference is not valid.' }))
     .max(6, { error: 'At most 6 photos per item.' })
@@ -74,11 +72,9 @@ export const handoffSubmitSchema = z
     trailerId: z.uuid({ error: 'Unknown trailer.' }),
     kind: z.enum(['drop', 'hook'], { error: 'Choose drop or hook.' }),
     carrierId: z.uuid({ error: 'Choose the carrier.' }),
-    driverName: z
-      .string()
-      .trim()
-      .min(2, { error: "Enter the driver's name." })
-      .max(80, { error: 'The name is at most 80 characters.' }),
+    driverName: plainText(80, 'The name is at most 80 characters.').min(2, {
+      error: "Enter the driver's name.",
+    }),
     tractorNumber: z
       .string()
       .trim()
@@ -104,7 +100,7 @@ export const handoffSubmitSchema = z
       .record(itemKeySchema, itemObservationSchema)
       .refine((r) => Object.keys(r).length <= 120, { error: 'Too many items.' }),
     spotId: z.uuid({ error: 'Choose a slot.' }).nullable().optional(),
-    note: optionalText(1000, 'The note'),
+    note: optionalNote(1000, 'The note'),
     correctsHandoffId: z.uuid().nullable().optional(),
   })
   .superRefine((v, ctx) => {

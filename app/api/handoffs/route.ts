@@ -1,45 +1,34 @@
 import { after } from 'next/server';
 import { CAUTIONS } from '@/app/_components/caution';
 import { SECTION_ROLES } from '@/lib/auth/roles';
-import { HandoffError } from '@/lib/handoff-errors';
-import { refuse } from '@/lib/result';
+import { refuse, type Refusal } from '@/lib/result';
 import { route } from '@/lib/server/api';
-import { submitHandoff } from '@/lib/server/handoffs';
+import { submitHandoff } from '@/lib/server/handoffs/submit';
 import { deliverDueEmails } from '@/lib/server/mail';
 import { handoffSubmitSchema } from '@/lib/validation/handoffs';
+
+/** A refused hook names its holds; the driver also reads the out-of-service and inspection cautions. */
+function withCautions(r: Refusal): Refusal {
+  const holds = r.detail?.holds;
+  if (!Array.isArray(holds) || !holds.length) return r;
+  return refuse(r.code, r.message, r.fieldErrors, {
+    holds,
+    cautions: [CAUTIONS.outOfService, CAUTIONS.inspection],
+  });
+}
 
 /** Records a drop or hook. 201 with the new handoff; 200 with the same one for a retried submit. */
 export const POST = route(
   { access: SECTION_ROLES.gate, body: handoffSubmitSchema },
   async ({ user, body }) => {
-    try {
-      const result = await submitHandoff(body, {
-        id: user.id,
-        role: user.role,
-        carrierId: user.carrierId,
-        terminalId: user.terminalId,
-      });
-      // the receipt e-mail was queued in the transaction; send it now rather than at the worker's next round
-      if (!result.isReplay) after(() => deliverDueEmails().catch(() => undefined));
-      return Response.json(
-        {
-          handoff: {
-            id: result.handoffId,
-            verificationCode: result.verificationCode,
-            receiptUrl: `/gate/receipts/${result.handoffId}`,
-          },
-        },
-        { status: result.isReplay ? 200 : 201 },
-      );
-    } catch (error) {
-      if (!(error instanceof HandoffError)) throw error;
-      const detail = error.holds?.length
-        ? {
-            holds: error.holds.map((h) => ({ reason: h.reason, severity: h.severity })),
-            cautions: [CAUTIONS.outOfService, CAUTIONS.inspection],
-          }
-        : undefined;
-      return refuse(error.holds?.length ? 'conflict' : error.code, error.message, error.fieldErrors, detail);
-    }
+    const result = await submitHandoff(body, user);
+    if (!result.ok) return withCautions(result);
+    const { handoffId, verificationCode, isReplay } = result.value;
+    // the receipt e-mail was queued in the transaction; send it now rather than at the worker's next round
+    if (!isReplay) after(() => deliverDueEmails().catch(() => undefined));
+    return Response.json(
+      { handoff: { id: handoffId, verificationCode, receiptUrl: `/gate/receipts/${handoffId}` } },
+      { status: isReplay ? 200 : 201 },
+    );
   },
 );

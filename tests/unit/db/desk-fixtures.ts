@@ -17,8 +17,8 @@ import {
   trailers,
   users,
 } from '@/db/schema';
-import { hashableFromRows } from '@/lib/handoff-canonical';
-import { handoffContentHash } from '@/lib/handoff-hash';
+import { hashableFromRows } from '@/lib/handoffs/canonical';
+import { handoffContentHash } from '@/lib/handoffs/hash';
 
 const tag = () => randomUUID().replace(/-/g, '').slice(0, 6).toUpperCase();
 

@@ -5,14 +5,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
 import { getCaseEvidence } from '@/db/queries/case-evidence';
 import { getCase } from '@/db/queries/cases';
-import { checkHandoffChain } from '@/db/queries/trailer-file';
 import { cases } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { priceNewCases } from '@/lib/server/desk/pricing';
-import { submitHandoff } from '@/lib/server/handoffs';
 import { buildChecklist } from '@/lib/engine';
 import { untouchedTrailer } from './desk-fixtures';
-import { actor, allOk, storedPhoto, submitInput } from './handoff-fixtures';
+import { actor, allOk, recorded, storedPhoto, submitInput } from './handoff-fixtures';
+import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 
 describe('desk over submitted handoffs', () => {
   beforeAll(async () => {
@@ -35,13 +34,13 @@ describe('desk over submitted handoffs', () => {
     });
     const ok = allOk(checklist);
     const t0 = new Date('2026-09-01T12:00:00Z');
-    await submitHandoff(submitInput(trailer.id, driver.carrierId!, 'drop', ok, t0), driver, {
+    await recorded(submitInput(trailer.id, driver.carrierId!, 'drop', ok, t0), driver, {
       now: t0,
       sendReceipt: false,
     });
     const before = await storedPhoto(trailer.id, driver.id);
     const t1 = new Date('2026-09-02T12:00:00Z');
-    await submitHandoff(
+    await recorded(
       submitInput(
         trailer.id,
         driver.carrierId!,
@@ -63,7 +62,7 @@ describe('desk over submitted handoffs', () => {
       },
     };
     const t2 = new Date('2026-09-05T08:00:00Z');
-    const { handoffId } = await submitHandoff(
+    const { handoffId } = await recorded(
       submitInput(trailer.id, driver.carrierId!, 'drop', damaged, t2),
       driver,
       { now: t2, sendReceipt: false },
@@ -86,6 +85,6 @@ describe('desk over submitted handoffs', () => {
     expect(photoOf(finding?.previousHandoffId)).toEqual([before]);
     expect(photoOf(handoffId)).toEqual([after]);
 
-    expect((await checkHandoffChain(trailer.id)).check).toEqual({ ok: true, count: 3 });
+    expect((await verifyTrailerChain(trailer.id)).check).toEqual({ ok: true, count: 3 });
   });
 });

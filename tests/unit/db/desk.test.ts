@@ -4,7 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
 import { getCase, listCaseEvents, listCases } from '@/db/queries/cases';
 import { getCaseEvidence } from '@/db/queries/case-evidence';
-import { checkHandoffChain, getTrailerFileRows } from '@/db/queries/trailer-file';
+import { getTrailerFileRows } from '@/db/queries/trailer-file';
 import { caseEvents, cases, emailOutbox, holds, photos, rateCard } from '@/db/schema';
 import { verifyCaseLink } from '@/lib/desk/case-link';
 import type { CaseCommand } from '@/lib/desk/case-state';
@@ -15,6 +15,7 @@ import { reloadEnv } from '@/lib/server/env';
 import { releaseHold } from '@/lib/server/holds/release';
 import { seed } from '@/db/seed';
 import { makeDeskFixture } from './desk-fixtures';
+import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 
 type Fixture = Awaited<ReturnType<typeof makeDeskFixture>>;
 let f: Fixture;
@@ -241,7 +242,7 @@ describe('desk in the database', () => {
   });
 
   it('the hash chain verifies, and detects a handoff row changed in the database', async () => {
-    expect((await checkHandoffChain(f.trailer.id)).check).toEqual({ ok: true, count: 2 });
+    expect((await verifyTrailerChain(f.trailer.id)).check).toEqual({ ok: true, count: 2 });
     // handoffs are append-only by trigger; as the table owner, switch it off to play the tamperer
     await pool.query('ALTER TABLE handoffs DISABLE TRIGGER handoffs_append_only');
     try {
@@ -249,7 +250,7 @@ describe('desk in the database', () => {
     } finally {
       await pool.query('ALTER TABLE handoffs ENABLE TRIGGER handoffs_append_only');
     }
-    const { check, brokenAt } = await checkHandoffChain(f.trailer.id);
+    const { check, brokenAt } = await verifyTrailerChain(f.trailer.id);
     expect(check).toEqual({ ok: false, brokenAt: f.hook.id, why: 'content_changed' });
     expect(brokenAt?.toISOString()).toBe('2026-10-20T14:00:00.000Z');
     // the append-only trigger raises its own SQLSTATE (db/migrations/0001_append-only-records.sql)

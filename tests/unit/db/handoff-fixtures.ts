@@ -1,12 +1,14 @@
-import { allOkObservations } from '@/lib/all-ok';
 // Helpers for the handoff database tests: a fresh trailer per test, the demo actors, a full
 // inspection with every item ok. Not a test file (no .test.ts).
 import { randomBytes, randomUUID } from 'node:crypto';
 import { and, desc, eq, sql } from 'drizzle-orm';
 import { db } from '@/db';
 import { carriers, photos, trailers, users } from '@/db/schema';
-import { buildChecklist, type Checklist } from '@/lib/engine';
-import type { HandoffActor } from '@/lib/server/handoffs';
+import type { Checklist } from '@/lib/engine';
+import { allOkObservations } from '@/lib/handoffs/all-ok';
+import { isRefusal, type Refusal } from '@/lib/result';
+import { submitHandoff, type HandoffActor } from '@/lib/server/handoffs/submit';
+import { checklistOf } from '@/lib/trailers/checklist';
 import type { HandoffSubmitInput, ItemObservationInput } from '@/lib/validation/handoffs';
 
 export async function actor(driverNumberOrEmail: string): Promise<HandoffActor & { carrierName: string }> {
@@ -45,14 +47,7 @@ export async function freshTrailer(kind: 'reefer' | 'dry_van' = 'reefer') {
   const t = rows.find((r) => !taken.has(r.id));
   if (!t) throw new Error('no unused on-road trailer left for this test run');
   taken.add(t.id);
-  const checklist = buildChecklist({
-    kind,
-    hingesPerDoor: t.hingesPerDoor === 5 ? 5 : 4,
-    axles: t.axleCount,
-    tireLayout: t.tireLayout,
-    fuelTankGallons: t.fuelTankGallons || undefined,
-  });
-  return { trailer: t, checklist };
+  return { trailer: t, checklist: checklistOf(t) };
 }
 
 /** Every inspectable item ok, with the fields its kind requires (pins engaged, spare usable, 10/32 in tread). */
@@ -110,4 +105,18 @@ export async function storedPhoto(
     })
     .returning({ id: photos.id });
   return p.id;
+}
+
+/** Submits a handoff the test expects recorded; a refusal fails the test with its reason. */
+export async function recorded(...args: Parameters<typeof submitHandoff>) {
+  const result = await submitHandoff(...args);
+  if (!result.ok) throw new Error(`handoff refused (${result.code}): ${result.message}`);
+  return result.value;
+}
+
+/** Submits a handoff the test expects refused, and returns the refusal. */
+export async function refused(...args: Parameters<typeof submitHandoff>): Promise<Refusal> {
+  const result = await submitHandoff(...args);
+  if (!isRefusal(result)) throw new Error(`handoff recorded (${result.value.handoffId}), expected a refusal`);
+  return result;
 }

@@ -1,9 +1,12 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { pool } from '@/db';
+import { eq } from 'drizzle-orm';
+import { db, pool } from '@/db';
+import { handoffs } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { handoffSubmitSchema, verificationCodeSchema } from '@/lib/validation/handoffs';
-import { actor, allOk, freshTrailer, submitInput } from './handoff-fixtures';
+import { CAUTIONS } from '@/app/_components/caution';
+import { actor, allOk, freshTrailer, recorded, submitInput } from './handoff-fixtures';
 
 // The route handler with a signed-in driver, without a running Next server: auth is replaced,
 // everything below it (zod, the submit service, the database) is real.
@@ -64,6 +67,10 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
       { ...good, carrierId: randomUUID() }, // not the driver's own carrier → 422
       { ...good, idempotencyKey: 'short' },
       { ...good, tractorNumber: '<script>' },
+      // PostgreSQL refuses NUL in text: it must be refused as input, not fail the insert
+      { ...good, driverName: 'Test\u0000Driver' },
+      { ...good, note: 'gate\u0000note' },
+      { ...good, items: { 'left_side.skin': { condition: 'ok', note: 'scuff\u0000' } } },
       { ...good, reefer: { ...good.reefer, setpointF: 'cold' } },
       { ...good, reefer: { ...good.reefer, preTripResult: 'pass', preTripAt: null } },
       {
@@ -79,6 +86,58 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
       expect(res.status).toBeLessThan(500);
       expect(await res.json()).toHaveProperty('message');
     }
+  });
+
+  it('a control character in a typed field is refused under that field', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const good = submitInput(trailer.id, carrierId, 'drop', allOk(checklist), new Date());
+    const res = await post(JSON.stringify({ ...good, driverName: 'Test\u0000Driver', note: 'a\u0007b' }));
+    expect(res.status).toBe(422);
+    const body = await res.json();
+    expect(body.fieldErrors.driverName).toEqual(['Remove the special characters from this field.']);
+    expect(body.fieldErrors.note).toEqual(['Remove the special characters from this note.']);
+  });
+
+  it('a hook of an out-of-service trailer is a 409 naming the holds, with the cautions to read', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    // 49 CFR 393.207(b): locking pins must not be disengaged
+    items['undercarriage.tandem_pin.left_front'] = { condition: 'ok', isEngaged: false };
+    const d = await actor('D1001');
+    await recorded(submitInput(trailer.id, carrierId, 'drop', items, new Date(Date.now() - 60_000)), d, {
+      now: new Date(Date.now() - 60_000),
+      sendReceipt: false,
+    });
+    const res = await post(
+      JSON.stringify(submitInput(trailer.id, carrierId, 'hook', allOk(checklist), new Date())),
+    );
+    expect(res.status).toBe(409);
+    const body = await res.json();
+    expect(body).toMatchObject({
+      code: 'conflict',
+      holds: [{ reason: 'Tandem locking pin, left front is not engaged.', severity: 'out_of_service' }],
+      cautions: [CAUTIONS.outOfService, CAUTIONS.inspection],
+    });
+  });
+
+  it('only gate roles record a handoff: a jockey gets 403, nobody signed in 401, and nothing is stored', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const body = JSON.stringify(submitInput(trailer.id, carrierId, 'drop', allOk(checklist), new Date()));
+    const driver = signedIn.user;
+    try {
+      const j = await actor('jockey@bramblecrest.example');
+      signedIn.user = { id: j.id, role: 'jockey', carrierId: j.carrierId, terminalId: j.terminalId };
+      const asJockey = await post(body);
+      expect(asJockey.status).toBe(403);
+      expect(await asJockey.json()).toMatchObject({ code: 'forbidden' });
+      signedIn.user = null;
+      const signedOut = await post(body);
+      expect(signedOut.status).toBe(401);
+      expect(await signedOut.json()).toMatchObject({ code: 'unauthenticated' });
+    } finally {
+      signedIn.user = driver;
+    }
+    expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(0);
   });
 
   it('a good body is 201, and the same body again is 200 with the same handoff', async () => {

@@ -1,7 +1,8 @@
+import { randomUUID } from 'node:crypto';
 import { and, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
-import { checkTrailerChain } from '@/db/queries/handoff-chain';
+import { isLockNotAvailable, isUniqueViolation } from '@/db/errors';
 import { getPhotoForViewer, getReceipt } from '@/db/queries/handoffs';
 import { seed } from '@/db/seed';
 import {
@@ -16,24 +17,16 @@ import {
   photos,
   trailers,
 } from '@/db/schema';
-import { hashableFromRows } from '@/lib/handoff-canonical';
-import { HandoffError } from '@/lib/handoff-errors';
-import { handoffContentHash, verifyChain } from '@/lib/handoff-hash';
-import { submitHandoff } from '@/lib/server/handoffs';
-import { actor, allOk, freshTrailer, storedPhoto, submitInput } from './handoff-fixtures';
+import { hashableFromRows } from '@/lib/handoffs/canonical';
+import { handoffContentHash, verifyChain } from '@/lib/handoffs/hash';
+import { isRefusal } from '@/lib/result';
+import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
+import { submitHandoff } from '@/lib/server/handoffs/submit';
+import { actor, allOk, freshTrailer, recorded, refused, storedPhoto, submitInput } from './handoff-fixtures';
 
 const HOUR = 3_600_000;
 const T0 = new Date('2026-11-02T15:00:00Z');
 const at = (h: number) => new Date(T0.getTime() + h * HOUR);
-
-async function refusal(p: Promise<unknown>): Promise<HandoffError> {
-  const e = await p.then(
-    () => null,
-    (x: unknown) => x,
-  );
-  expect(e).toBeInstanceOf(HandoffError);
-  return e as HandoffError;
-}
 
 describe('handoff submit service (real database)', () => {
   let d1: Awaited<ReturnType<typeof actor>>;
@@ -50,8 +43,8 @@ describe('handoff submit service (real database)', () => {
   it('a retried submit with the same key returns the same handoff and stores one', async () => {
     const { trailer, checklist } = await freshTrailer();
     const input = submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0));
-    const first = await submitHandoff(input, d1, { now: at(0) });
-    const second = await submitHandoff(input, d1, { now: at(0.1) });
+    const first = await recorded(input, d1, { now: at(0) });
+    const second = await recorded(input, d1, { now: at(0.1) });
     expect(first.isReplay).toBe(false);
     expect(second).toEqual({ ...first, isReplay: true });
     const rows = await db
@@ -79,11 +72,9 @@ describe('handoff submit service (real database)', () => {
     try {
       await client.query('begin');
       await client.query('select id from trailers where id = $1 for update', [trailer.id]);
-      const e = await refusal(
-        submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
-          now: at(0),
-        }),
-      );
+      const e = await refused(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
+        now: at(0),
+      });
       expect(e.code).toBe('conflict');
       expect(e.message).toMatch(/being recorded right now/);
     } finally {
@@ -95,7 +86,7 @@ describe('handoff submit service (real database)', () => {
 
   it('two simultaneous submits for one trailer: one succeeds, the other gets a conflict', async () => {
     const { trailer, checklist } = await freshTrailer();
-    const results = await Promise.allSettled([
+    const results = await Promise.all([
       submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
         now: at(0),
       }),
@@ -103,12 +94,11 @@ describe('handoff submit service (real database)', () => {
         now: at(0),
       }),
     ]);
-    const ok = results.filter((r) => r.status === 'fulfilled');
-    const refused = results.filter((r): r is PromiseRejectedResult => r.status === 'rejected');
+    const ok = results.filter((r) => r.ok);
+    const refusals = results.filter(isRefusal);
     expect(ok).toHaveLength(1);
-    expect(refused).toHaveLength(1);
-    expect(refused[0].reason).toBeInstanceOf(HandoffError);
-    expect((refused[0].reason as HandoffError).code).toBe('conflict');
+    expect(refusals).toHaveLength(1);
+    expect(refusals[0].code).toBe('conflict');
     expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(1);
   });
 
@@ -117,7 +107,7 @@ describe('handoff submit service (real database)', () => {
     const items = allOk(checklist);
     // 49 CFR 393.207(b): locking pins must not be disengaged; common practice: any one pin counts
     items['undercarriage.tandem_pin.left_rear'] = { condition: 'ok', isEngaged: false };
-    const drop = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, {
+    const drop = await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, {
       now: at(0),
     });
     const placed = await db.select().from(holds).where(eq(holds.handoffId, drop.handoffId));
@@ -128,13 +118,13 @@ describe('handoff submit service (real database)', () => {
       .where(and(eq(findings.handoffId, drop.handoffId), eq(findings.kind, 'pin_not_engaged')));
     expect(f).toHaveLength(1);
 
-    const e = await refusal(
-      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, {
-        now: at(2),
-      }),
-    );
+    const e = await refused(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, {
+      now: at(2),
+    });
     expect(e.code).toBe('conflict');
-    expect(e.holds?.map((h) => h.reason)).toEqual(['Tandem locking pin, left rear is not engaged.']);
+    expect(e.detail?.holds).toEqual([
+      { reason: 'Tandem locking pin, left rear is not engaged.', severity: 'out_of_service' },
+    ]);
     const [t] = await db.select().from(trailers).where(eq(trailers.id, trailer.id));
     expect(t.status).toBe('in_yard');
     expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(1);
@@ -142,16 +132,18 @@ describe('handoff submit service (real database)', () => {
 
   it('a hook whose own pickup report finds a pin not engaged is refused, and the trailer is held for the next driver', async () => {
     const { trailer, checklist } = await freshTrailer();
-    await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
+    await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
       now: at(0),
     });
     const items = allOk(checklist);
     // 49 CFR 393.207(b): locking pins must not be disengaged; 49 CFR 396.7: not operated likely to break down
     items['undercarriage.tandem_pin.right_front'] = { condition: 'ok', isEngaged: false };
-    const e = await refusal(
-      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', items, at(1)), d2, { now: at(1) }),
-    );
+    const e = await refused(submitInput(trailer.id, d2.carrierId!, 'hook', items, at(1)), d2, { now: at(1) });
     expect(e.code).toBe('conflict');
+    // the caller reads the reasons only; the holds themselves were placed by the service
+    expect(e.detail).toEqual({
+      holds: [{ reason: 'Tandem locking pin, right front is not engaged.', severity: 'out_of_service' }],
+    });
     const placed = await db
       .select()
       .from(holds)
@@ -160,27 +152,21 @@ describe('handoff submit service (real database)', () => {
       ['pin_not_engaged', 'out_of_service', null],
     ]);
     // the next driver's hook is refused by that stored hold, even with a clean report
-    const next = await refusal(
-      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, {
-        now: at(2),
-      }),
-    );
+    const next = await refused(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(2)), d2, {
+      now: at(2),
+    });
     expect(next.message).toMatch(/out of service/);
     expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(1);
   });
 
   it('new damage after another carrier held the trailer: finding attributed to them, one case, hash chain links', async () => {
     const { trailer, checklist } = await freshTrailer();
-    const h1 = await submitHandoff(
-      submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)),
-      d1,
-      { now: at(0) },
-    );
-    const h2 = await submitHandoff(
-      submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(5)),
-      d2,
-      { now: at(5) },
-    );
+    const h1 = await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
+      now: at(0),
+    });
+    const h2 = await recorded(submitInput(trailer.id, d2.carrierId!, 'hook', allOk(checklist), at(5)), d2, {
+      now: at(5),
+    });
 
     const damaged = allOk(checklist);
     damaged['left_side.skin'] = {
@@ -189,9 +175,9 @@ describe('handoff submit service (real database)', () => {
       note: 'Torn skin, 30 cm, insulation showing',
     };
     // damage without a photo is refused, and nothing is stored
-    const missing = await refusal(
-      submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, { now: at(30) }),
-    );
+    const missing = await refused(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, {
+      now: at(30),
+    });
     expect(missing.code).toBe('invalid');
     expect(missing.fieldErrors?.['items.left_side.skin']).toEqual([
       'New or worse damage needs at least one photo.',
@@ -199,7 +185,7 @@ describe('handoff submit service (real database)', () => {
 
     const photoId = await storedPhoto(trailer.id, d2.id);
     damaged['left_side.skin'].photoIds = [photoId];
-    const h3 = await submitHandoff(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, {
+    const h3 = await recorded(submitInput(trailer.id, d2.carrierId!, 'drop', damaged, at(30)), d2, {
       now: at(30),
     });
 
@@ -264,18 +250,64 @@ describe('handoff submit service (real database)', () => {
 
   it('the database refuses to change or delete a stored handoff', async () => {
     const { trailer, checklist } = await freshTrailer();
-    const h = await submitHandoff(
-      submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)),
-      d1,
-      { now: at(0) },
-    );
-    const refused = { cause: expect.objectContaining({ message: expect.stringMatching(/append-only/) }) };
+    const h = await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
+      now: at(0),
+    });
+    // HM001: the SQLSTATE the append-only trigger raises (db/migrations/0001_append-only-records.sql)
+    const refused = {
+      cause: expect.objectContaining({ code: 'HM001', message: expect.stringMatching(/append-only/) }),
+    };
     await expect(
       db.update(handoffs).set({ driverName: 'Someone else' }).where(eq(handoffs.id, h.handoffId)),
     ).rejects.toMatchObject(refused);
     await expect(
       db.delete(handoffItems).where(eq(handoffItems.handoffId, h.handoffId)),
     ).rejects.toMatchObject(refused);
+  });
+
+  it('a second row with the same draft key violates handoffs_idempotency_key_unique, the constraint the submit retries on', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const h = await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
+      now: at(0),
+    });
+    const [row] = await db.select().from(handoffs).where(eq(handoffs.id, h.handoffId));
+    const copy = { ...row, id: randomUUID(), verificationCode: 'ZZZZ0000', createdAt: new Date() };
+    const error = await db
+      .insert(handoffs)
+      .values(copy)
+      .then(
+        () => null,
+        (e: unknown) => e,
+      );
+    // 23505 is PostgreSQL's unique_violation (PostgreSQL manual, appendix "PostgreSQL Error Codes")
+    expect(error).toMatchObject({ cause: { code: '23505', constraint: 'handoffs_idempotency_key_unique' } });
+    expect(isUniqueViolation(error, 'handoffs_idempotency_key_unique')).toBe(true);
+    expect(isUniqueViolation(error, 'handoffs_verification_code_unique')).toBe(false);
+    expect(isLockNotAvailable(error)).toBe(false);
+  });
+
+  it('the chain counts the photos the submit hashed: a photo that stops being stored breaks it', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    const photoId = await storedPhoto(trailer.id, d1.id);
+    items['rear.door_right.panel'] = { condition: 'minor', note: 'Scuff', photoIds: [photoId] };
+    await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) });
+    const h = await recorded(submitInput(trailer.id, d1.carrierId!, 'hook', allOk(checklist), at(3)), d1, {
+      now: at(3),
+    });
+    expect(await verifyTrailerChain(trailer.id)).toEqual({ check: { ok: true, count: 2 }, brokenAt: null });
+    // the receipt no longer shows the photo, so the record is not what was hashed
+    await db.update(photos).set({ status: 'rejected' }).where(eq(photos.id, photoId));
+    const [drop] = await db.select().from(photos).where(eq(photos.id, photoId));
+    expect(await verifyTrailerChain(trailer.id)).toEqual({
+      check: { ok: false, brokenAt: drop.handoffId, why: 'content_changed' },
+      brokenAt: at(0),
+    });
+    // a photo pointed at a record afterwards, never stored, is not part of it
+    await db.update(photos).set({ status: 'stored' }).where(eq(photos.id, photoId));
+    const stray = await storedPhoto(trailer.id, d1.id);
+    await db.update(photos).set({ status: 'pending', handoffId: h.handoffId }).where(eq(photos.id, stray));
+    expect((await verifyTrailerChain(trailer.id)).check).toEqual({ ok: true, count: 2 });
   });
 
   it("a driver reads only their own carrier's receipts and photos; staff read all", async () => {
@@ -287,7 +319,7 @@ describe('handoff submit service (real database)', () => {
       note: 'Scuff on the left door',
       photoIds: [photoId],
     };
-    const h = await submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, {
+    const h = await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, {
       now: at(0),
     });
     const clerk = await actor('clerk@bramblecrest.example');
@@ -304,9 +336,7 @@ describe('handoff submit service (real database)', () => {
     const items = allOk(checklist);
     items['reefer_unit.housing'] = { condition: 'ok' }; // a dry van has no reefer unit
     items['undercarriage.tandem_pin.right_front'] = { condition: 'ok' };
-    const e = await refusal(
-      submitHandoff(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) }),
-    );
+    const e = await refused(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, { now: at(0) });
     expect(e.code).toBe('invalid');
     expect(Object.keys(e.fieldErrors ?? {}).sort()).toEqual([
       'items.reefer_unit.housing',
@@ -342,6 +372,6 @@ describe('handoff submit service (real database)', () => {
       .where(isNotNull(handoffs.prevHash))
       .limit(25);
     expect(withHistory.length).toBeGreaterThan(10);
-    for (const t of withHistory) expect((await checkTrailerChain(t.id)).ok).toBe(true);
+    for (const t of withHistory) expect((await verifyTrailerChain(t.id)).check.ok).toBe(true);
   });
 });

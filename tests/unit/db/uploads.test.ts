@@ -6,7 +6,8 @@ import { db, pool } from '@/db';
 import { seed } from '@/db/seed';
 import { photos } from '@/db/schema';
 import { readObject } from '@/lib/server/storage';
-import { completeUpload, createUpload, UploadError } from '@/lib/server/uploads';
+import { isRefusal, type Refusal } from '@/lib/result';
+import { completeUpload, createUpload } from '@/lib/server/photos/uploads';
 import { actor, freshTrailer } from './handoff-fixtures';
 
 // Runs against the real local S3 fake (scripts/fakes.sh start; scripts/test.sh starts it).
@@ -24,7 +25,9 @@ async function announceAndPut(
   declared: { contentType: string; byteSize: number; sha256: string },
   body: Uint8Array,
 ) {
-  const up = await createUpload({ trailerId, itemKey: 'left_side.skin', ...declared }, { id: userId });
+  const announced = await createUpload({ trailerId, itemKey: 'left_side.skin', ...declared }, { id: userId });
+  if (!announced.ok) throw new Error(`announcement refused: ${announced.message}`);
+  const up = announced.value;
   const put = await fetch(up.uploadUrl, {
     method: 'PUT',
     headers: up.headers,
@@ -34,13 +37,10 @@ async function announceAndPut(
   return up.photoId;
 }
 
-async function refusedWith(p: Promise<unknown>) {
-  const e = await p.then(
-    () => null,
-    (x: unknown) => x,
-  );
-  expect(e).toBeInstanceOf(UploadError);
-  return e as UploadError;
+async function refusedWith(p: Promise<unknown>): Promise<Refusal> {
+  const r = await p;
+  expect(isRefusal(r)).toBe(true);
+  return r as Refusal;
 }
 
 describe('photo uploads through presigned URLs (local S3 fake)', () => {
@@ -63,7 +63,10 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
       { contentType: 'image/png', byteSize: png.length, sha256: sha(png) },
       png,
     );
-    expect(await completeUpload(id, { id: userId })).toEqual({ photoId: id, status: 'stored' });
+    expect(await completeUpload(id, { id: userId })).toEqual({
+      ok: true,
+      value: { photoId: id, status: 'stored' },
+    });
     const [row] = await db.select().from(photos).where(eq(photos.id, id));
     expect(row.status).toBe('stored');
     expect(await readObject(row.objectKey, 1_000_000)).toEqual(png);

@@ -4,7 +4,7 @@ import { listOpenHolds } from '@/db/queries/handoffs';
 import { listCarriers } from '@/db/queries/trailers';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
-import { getTrailerCondition } from '@/lib/server/trailer-condition';
+import { getTrailerCondition } from '@/lib/server/handoffs/condition';
 import { idParamSchema } from '@/lib/validation/handoffs';
 import { HandoffForm } from './_components/handoff-form';
 import { HoldList, HookRefused } from './_components/hook-refused';

@@ -1,5 +1,5 @@
 import { formatTime } from '@/lib/format/time';
-import type { ChainCheck } from '@/lib/handoff-hash';
+import type { ChainCheck } from '@/lib/handoffs/hash';
 
 /** Whether the trailer's handoff records still hash to what was stored when they were made. */
 export function ChainStatus({

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { refuse } from '@/lib/result';
 import { route } from '@/lib/server/api';
-import { getTrailerCondition } from '@/lib/server/trailer-condition';
+import { getTrailerCondition } from '@/lib/server/handoffs/condition';
 import { idParamSchema } from '@/lib/validation/handoffs';
 
 const ROLES_AT_GATE_OR_YARD = [...new Set([...SECTION_ROLES.gate, ...SECTION_ROLES.yard])];

@@ -1,6 +1,6 @@
 import { ButtonLink } from '@/app/_components/button';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
-import { HOLD_WORDS, RESTRICTION_WORDS } from '@/lib/receipt';
+import { HOLD_WORDS, RESTRICTION_WORDS } from '@/lib/handoffs/receipt';
 
 type HoldRow = {
   id: string;

@@ -1,7 +1,7 @@
 'use client';
 
 import type { ItemKind } from '@/lib/engine';
-import type { DraftItem } from '@/lib/handoff-draft';
+import type { DraftItem } from '@/lib/handoffs/draft';
 import { Choice, YES_NO } from './choice';
 
 /** The extra answers an item's kind asks for (OBSERVATION_FIELDS in the engine). */

@@ -1,11 +1,11 @@
 'use client';
 
 import type { ChecklistItem, Condition } from '@/lib/engine';
-import { itemChange, needsEvidence, type DraftItem } from '@/lib/handoff-draft';
-import type { LastSeen } from '@/lib/last-condition';
+import { itemChange, needsEvidence, type DraftItem } from '@/lib/handoffs/draft';
+import type { LastSeen } from '@/lib/handoffs/last-condition';
 import { Choice } from './choice';
 import { ItemFields } from './item-fields';
-import { PhotoCapture } from './photo-capture';
+import { PhotoCapture } from '@/app/_components/photo-capture';
 
 const CONDITION_OPTIONS: {
   value: Exclude<Condition, 'not_checked'>;

@@ -1,18 +1,19 @@
 'use client';
 
-import type { Draft } from '@/lib/handoff-draft';
+import { Field, FieldError } from '@/app/_components/field';
+import type { Draft } from '@/lib/handoffs/draft';
 import { Choice, YES_NO } from './choice';
-
-const input = 'mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-gate';
 
 export function FuelButtons({
   value,
   onChange,
   last,
+  error,
 }: {
   value: number | null;
   onChange: (v: number) => void;
   last: number | null | undefined;
+  error?: string[];
 }) {
   return (
     <section aria-labelledby="fuel-title" className="space-y-1">
@@ -34,6 +35,7 @@ export function FuelButtons({
           tone: n >= 8 ? 'ok' : n >= 4 ? 'warn' : 'danger',
         }))}
       />
+      <FieldError id="fuelEighths-error" messages={error} />
     </section>
   );
 }
@@ -47,7 +49,7 @@ export function ReeferFields({
   set: (p: Partial<Draft['reefer']>) => void;
   errors: Record<string, string[]>;
 }) {
-  const err = (k: string) => errors[`reefer.${k}`]?.[0] ?? '';
+  const err = (k: string) => errors[`reefer.${k}`];
   return (
     <section aria-labelledby="reefer-title" className="space-y-3">
       <h2 id="reefer-title" className="text-gate-xl font-bold">
@@ -60,43 +62,38 @@ export function ReeferFields({
         onChange={(v) => set({ isUnitOn: v })}
         columns={2}
       />
+      <FieldError id="isUnitOn-error" messages={err('isUnitOn')} />
       <div className="grid grid-cols-2 gap-2">
-        <label className="block text-gate font-bold">
-          Setpoint °F
-          <input
-            type="number"
-            step="0.1"
-            value={reefer.setpointF}
-            onChange={(e) => set({ setpointF: e.target.value })}
-            className={input}
-          />
-        </label>
-        <label className="block text-gate font-bold">
-          Return air °F
-          <input
-            type="number"
-            step="0.1"
-            value={reefer.returnAirF}
-            onChange={(e) => set({ returnAirF: e.target.value })}
-            className={input}
-          />
-        </label>
-      </div>
-      <p aria-live="polite" className="text-gate-sm font-bold text-danger">
-        {err('setpointF') || err('returnAirF')}
-      </p>
-      <label className="block text-gate font-bold">
-        Engine hours
-        <input
+        <Field
+          label="Setpoint °F"
+          name="setpointF"
           type="number"
-          inputMode="decimal"
           step="0.1"
-          min={0}
-          value={reefer.engineHours}
-          onChange={(e) => set({ engineHours: e.target.value })}
-          className={input}
+          value={reefer.setpointF}
+          onChange={(e) => set({ setpointF: e.target.value })}
+          error={err('setpointF')}
         />
-      </label>
+        <Field
+          label="Return air °F"
+          name="returnAirF"
+          type="number"
+          step="0.1"
+          value={reefer.returnAirF}
+          onChange={(e) => set({ returnAirF: e.target.value })}
+          error={err('returnAirF')}
+        />
+      </div>
+      <Field
+        label="Engine hours"
+        name="engineHours"
+        type="number"
+        inputMode="decimal"
+        step="0.1"
+        min={0}
+        value={reefer.engineHours}
+        onChange={(e) => set({ engineHours: e.target.value })}
+        error={err('engineHours')}
+      />
       <Choice
         label="Last pre-trip"
         columns={3}
@@ -108,20 +105,17 @@ export function ReeferFields({
           { value: 'not_run', label: 'Not run', tone: 'warn' },
         ]}
       />
+      <FieldError id="preTripResult-error" messages={err('preTripResult')} />
       {reefer.preTripResult && reefer.preTripResult !== 'not_run' ? (
-        <label className="block text-gate font-bold">
-          When was it run?
-          <input
-            type="datetime-local"
-            value={reefer.preTripAt}
-            onChange={(e) => set({ preTripAt: e.target.value })}
-            className={input}
-          />
-        </label>
+        <Field
+          label="When was it run?"
+          name="preTripAt"
+          type="datetime-local"
+          value={reefer.preTripAt}
+          onChange={(e) => set({ preTripAt: e.target.value })}
+          error={err('preTripAt')}
+        />
       ) : null}
-      <p aria-live="polite" className="text-gate-sm font-bold text-danger">
-        {err('preTripResult') || err('preTripAt')}
-      </p>
     </section>
   );
 }

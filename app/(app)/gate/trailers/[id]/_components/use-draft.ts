@@ -1,7 +1,7 @@
 'use client';
 
-import { useEffect, useState } from 'react';
-import type { Draft } from '@/lib/handoff-draft';
+import { useCallback, useEffect, useState, useSyncExternalStore, type SetStateAction } from 'react';
+import type { Draft } from '@/lib/handoffs/draft';
 
 export type StoredDraft = Draft & { isQueued?: boolean };
 
@@ -11,29 +11,50 @@ export function newDraftKey(): string {
   return [...crypto.getRandomValues(new Uint8Array(16))].map((b) => b.toString(16).padStart(2, '0')).join('');
 }
 
+function readSaved(storageKey: string, trailerId: string): StoredDraft | null {
+  try {
+    const raw = localStorage.getItem(storageKey);
+    const parsed = raw ? (JSON.parse(raw) as StoredDraft) : null;
+    const isOurs =
+      parsed && typeof parsed.idempotencyKey === 'string' && parsed.trailerId === trailerId && parsed.items;
+    return isOurs ? parsed : null;
+  } catch {
+    return null;
+  }
+}
+
+const subscribeToNothing = () => () => {};
+
+/** False on the server and while hydrating (so both render the same), true in the browser after. */
+function useIsBrowser(): boolean {
+  return useSyncExternalStore(
+    subscribeToNothing,
+    () => true,
+    () => false,
+  );
+}
+
 /** The form's draft, kept in localStorage per trailer so it survives a reload or a lost connection. */
 export function useDraft(trailerId: string, kind: 'drop' | 'hook', make: () => Draft) {
   const storageKey = `hm-draft:${trailerId}`;
-  const [draft, setDraft] = useState<StoredDraft | null>(null);
-  useEffect(() => {
-    let saved: StoredDraft | null = null;
-    try {
-      const raw = localStorage.getItem(storageKey);
-      const parsed = raw ? (JSON.parse(raw) as StoredDraft) : null;
-      if (
-        parsed &&
-        typeof parsed.idempotencyKey === 'string' &&
-        parsed.trailerId === trailerId &&
-        parsed.items
-      )
-        saved = parsed;
-    } catch {
-      saved = null;
-    }
-    setDraft(saved ? { ...saved, kind } : make());
-    // make() is stable enough for a mount-time default; re-running on every render would reset the draft
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [storageKey, kind]);
+  const openedFor = `${storageKey}|${kind}`;
+  const isBrowser = useIsBrowser();
+  const [state, setState] = useState<{ openedFor: string; draft: StoredDraft } | null>(null);
+  // read once per trailer and kind, in the first browser render: the saved draft, or a new one
+  if (isBrowser && state?.openedFor !== openedFor) {
+    const saved = readSaved(storageKey, trailerId);
+    setState({ openedFor, draft: saved ? { ...saved, kind } : make() });
+  }
+  const draft = state?.openedFor === openedFor ? state.draft : null;
+  const setDraft = useCallback(
+    (next: SetStateAction<StoredDraft | null>) =>
+      setState((prev) => {
+        if (!prev) return prev;
+        const d = typeof next === 'function' ? next(prev.draft) : next;
+        return d ? { ...prev, draft: d } : prev;
+      }),
+    [],
+  );
   useEffect(() => {
     if (draft) localStorage.setItem(storageKey, JSON.stringify(draft));
   }, [draft, storageKey]);

@@ -1,14 +1,8 @@
 'use client';
 
-import type { Draft } from '@/lib/handoff-draft';
+import { Field, FieldError, Select } from '@/app/_components/field';
+import type { Draft } from '@/lib/handoffs/draft';
 import { Choice } from './choice';
-
-const input = 'mt-1 block min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-gate';
-const Err = ({ m }: { m?: string[] }) => (
-  <p aria-live="polite" className="min-h-6 text-gate-sm font-bold text-danger">
-    {m?.[0] ?? ''}
-  </p>
-);
 
 export function WhoFields({
   draft,
@@ -31,47 +25,44 @@ export function WhoFields({
         Driver and tractor
       </h2>
       {isDriver ? (
-        <p className="text-gate">
-          Carrier: <span className="font-bold">{carrierName}</span>
-        </p>
+        <>
+          <p className="text-gate">
+            Carrier: <span className="font-bold">{carrierName}</span>
+          </p>
+          <FieldError id="carrierId-error" messages={errors.carrierId} />
+        </>
       ) : (
-        <label className="block text-gate font-bold">
-          Carrier
-          <select
-            value={draft.carrierId}
-            onChange={(e) => set({ carrierId: e.target.value })}
-            className={input}
-          >
-            <option value="">Choose the carrier</option>
-            {carriers.map((c) => (
-              <option key={c.id} value={c.id}>
-                {c.name} ({c.scac})
-              </option>
-            ))}
-          </select>
-        </label>
+        <Select
+          label="Carrier"
+          name="carrierId"
+          value={draft.carrierId}
+          onChange={(e) => set({ carrierId: e.target.value })}
+          error={errors.carrierId}
+        >
+          <option value="">Choose the carrier</option>
+          {carriers.map((c) => (
+            <option key={c.id} value={c.id}>
+              {c.name} ({c.scac})
+            </option>
+          ))}
+        </Select>
       )}
-      <Err m={errors.carrierId} />
-      <label className="block text-gate font-bold">
-        Driver name
-        <input
-          value={draft.driverName}
-          onChange={(e) => set({ driverName: e.target.value })}
-          autoComplete="name"
-          className={input}
-        />
-      </label>
-      <Err m={errors.driverName} />
-      <label className="block text-gate font-bold">
-        Tractor number
-        <input
-          value={draft.tractorNumber}
-          onChange={(e) => set({ tractorNumber: e.target.value })}
-          autoCapitalize="characters"
-          className={input}
-        />
-      </label>
-      <Err m={errors.tractorNumber} />
+      <Field
+        label="Driver name"
+        name="driverName"
+        value={draft.driverName}
+        onChange={(e) => set({ driverName: e.target.value })}
+        autoComplete="name"
+        error={errors.driverName}
+      />
+      <Field
+        label="Tractor number"
+        name="tractorNumber"
+        value={draft.tractorNumber}
+        onChange={(e) => set({ tractorNumber: e.target.value })}
+        autoCapitalize="characters"
+        error={errors.tractorNumber}
+      />
       <Choice
         label="Loaded or empty?"
         columns={2}
@@ -82,17 +73,15 @@ export function WhoFields({
           { value: false, label: 'Empty' },
         ]}
       />
-      <Err m={errors.isLoaded} />
-      <label className="block text-gate font-bold">
-        Seal number
-        <input
-          value={draft.sealNumber}
-          onChange={(e) => set({ sealNumber: e.target.value })}
-          autoCapitalize="characters"
-          className={input}
-        />
-      </label>
-      <Err m={errors.sealNumber} />
+      <FieldError id="isLoaded-error" messages={errors.isLoaded} />
+      <Field
+        label="Seal number"
+        name="sealNumber"
+        value={draft.sealNumber}
+        onChange={(e) => set({ sealNumber: e.target.value })}
+        autoCapitalize="characters"
+        error={errors.sealNumber}
+      />
     </section>
   );
 }

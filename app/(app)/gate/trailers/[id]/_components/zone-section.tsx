@@ -2,8 +2,8 @@
 
 import { CAUTIONS, Caution } from '@/app/_components/caution';
 import type { ChecklistZone } from '@/lib/engine';
-import { unanswered, type Draft, type DraftItem } from '@/lib/handoff-draft';
-import type { LastSeen } from '@/lib/last-condition';
+import { unanswered, type Draft, type DraftItem } from '@/lib/handoffs/draft';
+import type { LastSeen } from '@/lib/handoffs/last-condition';
 import { ItemRow } from './item-row';
 
 export function ZoneSection({

@@ -1,5 +1,5 @@
 // The last known condition of each checklist item: what the gate form opens on. Pure.
-import type { Checklist, ItemObservation, TimelineEvent } from './engine';
+import type { Checklist, ItemObservation, TimelineEvent } from '@/lib/engine';
 
 export type LastSeen = {
   observation: ItemObservation;

@@ -1,6 +1,11 @@
 // Submitted observations → what the engine reads and what handoff_items stores. Pure.
-import { OBSERVATION_FIELDS, type Checklist, type ItemObservation, type ItemObservations } from './engine';
-import type { ItemObservationInput } from './validation/handoffs';
+import {
+  OBSERVATION_FIELDS,
+  type Checklist,
+  type ItemObservation,
+  type ItemObservations,
+} from '@/lib/engine';
+import type { ItemObservationInput } from '@/lib/validation/handoffs';
 
 export type ItemRowInput = {
   itemKey: string;

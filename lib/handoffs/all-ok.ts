@@ -1,8 +1,8 @@
 // A whole trailer recorded in good order: every inspectable item ok, with the answers its kind
 // asks for (pins engaged, spare usable, hinges locking, no insulation showing, no leak, clean).
 // Used by the demo seed and the tests to build handoffs; a real handoff is what the driver saw.
-import type { Checklist } from './engine';
-import type { ItemObservationInput } from './validation/handoffs';
+import type { Checklist } from '@/lib/engine';
+import type { ItemObservationInput } from '@/lib/validation/handoffs';
 
 /** `treadFor` gives each tire's tread in 32nds of an inch (default 10/32). */
 export function allOkObservations(

@@ -14,7 +14,7 @@ import {
   type Hold,
   type ItemFinding,
   type TimelineEvent,
-} from './engine';
+} from '@/lib/engine';
 import { isChargeableDamage } from './damage';
 
 export type FindingRow = {

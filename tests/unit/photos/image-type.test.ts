@@ -1,6 +1,6 @@
 import { PNG } from 'pngjs';
 import { describe, expect, it } from 'vitest';
-import { sniffImageType } from '@/lib/image-type';
+import { sniffImageType } from '@/lib/photos/image-type';
 
 const bytes = (...b: number[]) => new Uint8Array(b);
 

@@ -1,9 +1,9 @@
 // The gate form's draft: what is kept in localStorage, how it becomes the submit body, and the
 // immediate (client-side) comparison with the last record. The server's comparison is the authority.
-import { classifyChange, type ChecklistItem, type FindingKind } from './engine';
+import { classifyChange, type ChecklistItem, type FindingKind } from '@/lib/engine';
 import { isChargeableDamage } from './damage';
 import type { LastSeen } from './last-condition';
-import type { HandoffSubmitInput, ItemObservationInput } from './validation/handoffs';
+import type { HandoffSubmitInput, ItemObservationInput } from '@/lib/validation/handoffs';
 
 export type DraftPhoto = { id: string };
 export type DraftItem = ItemObservationInput & { photos?: DraftPhoto[] };

@@ -1,5 +1,5 @@
 // What a handoff receipt says, on screen, in the e-mail and on the public verify page. Pure.
-import { formatWhen } from './engine';
+import { formatWhen } from '@/lib/engine';
 import { formatVerificationCode } from './verification-code';
 
 export type ReceiptView = {

@@ -1,6 +1,6 @@
 // Which fields of a stored handoff the hash chain covers. The submit service hashes with this,
 // and the desk re-verifies a trailer's chain with the same function, so the two never drift.
-import type { HashableHandoff } from './handoff-hash';
+import type { HashableHandoff } from './hash';
 
 export type HandoffHashRow = {
   id: string;

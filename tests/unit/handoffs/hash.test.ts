@@ -5,7 +5,7 @@ import {
   sha256Hex,
   verifyChain,
   type HashableHandoff,
-} from '@/lib/handoff-hash';
+} from '@/lib/handoffs/hash';
 
 const base = (prevHash: string | null, fuel = 8): HashableHandoff => ({
   content: { kind: 'drop', trailerId: 't-1', fuelEighths: fuel, occurredAt: '2026-11-03T14:05:00.000Z' },

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildChecklist, type TimelineEvent } from '@/lib/engine';
-import { draftToInput, itemChange, newDraft, needsEvidence } from '@/lib/handoff-draft';
-import { lastKnownCondition } from '@/lib/last-condition';
+import { draftToInput, itemChange, newDraft, needsEvidence } from '@/lib/handoffs/draft';
+import { lastKnownCondition } from '@/lib/handoffs/last-condition';
 import { handoffSubmitSchema } from '@/lib/validation/handoffs';
 
 const checklist = buildChecklist({ kind: 'reefer', hingesPerDoor: 4, axles: 2, tireLayout: 'dual' });

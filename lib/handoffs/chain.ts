@@ -1,0 +1,38 @@
+// Re-checks a trailer's hash chain from its records as stored now, with the same hash input the
+// submit used (canonical.ts) and verifyChain (hash.ts). The one chain check: the trailer file
+// and the tests both come here.
+import { hashableFromRows, type HandoffHashRow, type HandoffItemHashRow } from './canonical';
+import { verifyChain, type ChainCheck } from './hash';
+
+export type ChainRecord = {
+  row: HandoffHashRow & { contentHash: string };
+  items: HandoffItemHashRow[];
+  /** Every photo attached to the handoff, with its status. */
+  photos: { sha256: string; status: string }[];
+};
+
+export type TrailerChain = { check: ChainCheck; brokenAt: Date | null };
+
+/**
+ * The submit hashed the photos it attached, which are all `stored` (it refuses any other), and
+ * the receipt shows the stored ones: so only stored photos count. A photo that stops being
+ * stored breaks the chain; one attached later without being stored changes nothing.
+ */
+export const hashedPhotos = (photos: ChainRecord['photos']) =>
+  photos.filter((p) => p.status === 'stored').map((p) => p.sha256);
+
+/** Verifies the records, given oldest first (the order the chain was written in). */
+export function checkTrailerChain(records: ChainRecord[]): TrailerChain {
+  const check = verifyChain(
+    records.map(({ row, items, photos }) => ({
+      id: row.id,
+      storedHash: row.contentHash,
+      storedPrevHash: row.prevHash,
+      recomputed: hashableFromRows(row, items, hashedPhotos(photos)),
+    })),
+  );
+  const brokenAt = check.ok
+    ? null
+    : (records.find((r) => r.row.id === check.brokenAt)?.row.occurredAt ?? null);
+  return { check, brokenAt };
+}

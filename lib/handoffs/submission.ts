@@ -1,0 +1,120 @@
+// A submitted handoff as the engine reads it and as it is stored. Pure: the submit service
+// passes the ids, the time and the looked-up carrier.
+import type { HandoffEvent, ItemObservations } from '@/lib/engine';
+import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
+import type { HandoffHashRow } from './canonical';
+
+type Party = { carrierId: string; carrierName: string; driverId: string | null };
+
+/** The submitted record as the engine's drop/hook event (reefer readings only for a reefer). */
+export function handoffEvent(
+  input: HandoffSubmitInput,
+  x: { id: string; at: Date; party: Party; isReefer: boolean; observations: ItemObservations },
+): HandoffEvent {
+  const r = x.isReefer ? input.reefer : null;
+  return {
+    type: input.kind,
+    id: x.id,
+    at: x.at,
+    party: {
+      carrierId: x.party.carrierId,
+      carrierName: x.party.carrierName,
+      ...(x.party.driverId ? { driverId: x.party.driverId } : {}),
+      driverName: input.driverName,
+    },
+    items: x.observations,
+    fuelEighths: x.isReefer ? input.fuelEighths : null,
+    reefer: r
+      ? {
+          isUnitOn: r.isUnitOn,
+          setpointF: r.setpointF,
+          returnAirF: r.returnAirF,
+          engineHours: r.engineHours,
+          preTrip:
+            r.preTripResult !== 'not_run' && r.preTripAt
+              ? { result: r.preTripResult === 'pass' ? 'passed' : 'failed', at: new Date(r.preTripAt) }
+              : null,
+        }
+      : null,
+    isLoaded: input.isLoaded,
+    sealNumber: input.sealNumber ?? null,
+  };
+}
+
+export type HandoffRow = HandoffHashRow & {
+  kind: 'drop' | 'hook';
+  level: 'full';
+  pretripResult: 'pass' | 'fail' | 'not_run' | null;
+  idempotencyKey: string;
+};
+
+const tenths = (v: number | null | undefined) => (v == null ? null : Math.round(v * 10));
+
+/** The handoffs row (without its content hash): readings in tenths, as the table keeps them. */
+export function handoffRow(
+  input: HandoffSubmitInput,
+  x: {
+    id: string;
+    trailerId: string;
+    terminalId: string;
+    event: HandoffEvent;
+    recordedById: string;
+    verificationCode: string;
+    prevHash: string | null;
+  },
+): HandoffRow {
+  const r = x.event.reefer ? input.reefer : null;
+  return {
+    id: x.id,
+    trailerId: x.trailerId,
+    terminalId: x.terminalId,
+    kind: input.kind,
+    level: 'full',
+    carrierId: x.event.party.carrierId,
+    driverId: x.event.party.driverId ?? null,
+    driverName: input.driverName,
+    tractorNumber: input.tractorNumber,
+    recordedById: x.recordedById,
+    isLoaded: input.isLoaded,
+    sealNumber: input.sealNumber ?? null,
+    fuelEighths: x.event.fuelEighths ?? null,
+    isReeferOn: r?.isUnitOn ?? null,
+    setpointTenthsF: tenths(r?.setpointF),
+    returnAirTenthsF: tenths(r?.returnAirF),
+    engineHoursTenths: tenths(r?.engineHours),
+    pretripResult: r?.preTripResult ?? null,
+    pretripAt: r?.preTripAt ? new Date(r.preTripAt) : null,
+    note: input.note ?? null,
+    occurredAt: x.event.at,
+    idempotencyKey: input.idempotencyKey,
+    correctsHandoffId: input.correctsHandoffId ?? null,
+    verificationCode: x.verificationCode,
+    prevHash: x.prevHash,
+  };
+}
+
+/** Where the trailer stands after the handoff: in the yard on its slot after a drop, on the road after a hook. */
+export function trailerAfter(row: HandoffRow, spotId: string | null) {
+  const readings = {
+    lastSeenAt: row.occurredAt,
+    isLoaded: row.isLoaded,
+    fuelEighths: row.fuelEighths,
+    isReeferOn: row.isReeferOn,
+    setpointTenthsF: row.setpointTenthsF,
+  };
+  return row.kind === 'drop'
+    ? {
+        status: 'in_yard' as const,
+        currentTerminalId: row.terminalId,
+        currentSpotId: spotId,
+        gateInAt: row.occurredAt,
+        ...readings,
+      }
+    : {
+        status: 'on_road' as const,
+        currentTerminalId: null,
+        currentSpotId: null,
+        gateInAt: null,
+        ...readings,
+      };
+}

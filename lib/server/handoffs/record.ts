@@ -1,0 +1,157 @@
+// The submit's transaction: checks the trailer and the record, runs the engine once, then hands
+// the outcome to store.ts. Every expected refusal aborts, so nothing is written.
+import 'server-only';
+import { randomUUID } from 'node:crypto';
+import type { Tx } from '@/db';
+import {
+  findHandoffByKey,
+  getCarrier,
+  getPolicyData,
+  getTerminal,
+  listOpenHoldRows,
+  listUnattachedPhotos,
+  lockTrailer,
+} from '@/db/queries/handoff-submit';
+import { skipCommitFlush } from '@/db/queries/handoff-writes';
+import { blocksHook } from '@/lib/engine';
+import { evaluateHandoff } from '@/lib/handoffs/evaluation';
+import { holdReasons } from '@/lib/handoffs/holds';
+import { damageEvidenceErrors, normalizeItems } from '@/lib/handoffs/items';
+import { handoffEvent } from '@/lib/handoffs/submission';
+import { abort, refuse } from '@/lib/result';
+import { terminalPolicyOf } from '@/lib/terminal/policy';
+import { checklistOf } from '@/lib/trailers/checklist';
+import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
+import { replay } from './replay';
+import { storeHandoff } from './store';
+import { loadTimeline } from './timeline';
+import type { HandoffActor, SubmitOptions, SubmitResult } from './types';
+
+/**
+ * Holds a NOWAIT row lock on the trailer for the whole transaction, so a concurrent submit for
+ * the same trailer fails fast (55P03) instead of recording against a stale timeline.
+ */
+export async function recordHandoff(
+  tx: Tx,
+  input: HandoffSubmitInput,
+  actor: HandoffActor,
+  now: Date,
+  opts: SubmitOptions,
+): Promise<SubmitResult> {
+  if (opts.isBulk) await skipCommitFlush(tx);
+  const trailer = await lockTrailer(tx, input.trailerId, { noWait: true });
+  if (!trailer) abort(refuse('not_found', 'No such trailer.'));
+  const again = await findHandoffByKey(tx, input.idempotencyKey);
+  if (again) {
+    const r = replay(again, input, actor);
+    return r.ok ? r.value : abort(r);
+  }
+
+  if (input.kind === 'drop' && trailer.status === 'in_yard') {
+    abort(
+      refuse(
+        'conflict',
+        `Trailer ${trailer.unitNumber} is already in the yard; record a hook to take it out.`,
+      ),
+    );
+  }
+  if (input.kind === 'hook' && trailer.status !== 'in_yard') {
+    abort(
+      refuse('conflict', `Trailer ${trailer.unitNumber} is not in the yard; record a drop to bring it in.`),
+    );
+  }
+  const terminalId = input.kind === 'drop' ? actor.terminalId : trailer.currentTerminalId;
+  if (!terminalId) abort(refuse('invalid', 'Your account has no home terminal; ask the terminal manager.'));
+  if (actor.role === 'driver' && input.carrierId !== actor.carrierId) {
+    abort(
+      refuse('invalid', 'A driver records handoffs for their own carrier.', {
+        carrierId: ['Choose your own carrier.'],
+      }),
+    );
+  }
+  const terminal = (await getTerminal(tx, terminalId))!;
+  const carrier = await getCarrier(tx, input.carrierId);
+  const policy = terminalPolicyOf(await getPolicyData(tx, terminalId)).engine;
+  const openHolds = await listOpenHoldRows(tx, trailer.id);
+  if (!carrier) abort(refuse('invalid', 'Unknown carrier.', { carrierId: ['Choose the carrier.'] }));
+  const held = openHolds.filter((h) => h.severity === 'out_of_service');
+  if (input.kind === 'hook' && held.length) {
+    abort(
+      refuse(
+        'conflict',
+        `Trailer ${trailer.unitNumber} is out of service and may not leave the gate.`,
+        undefined,
+        { holds: holdReasons(held) },
+      ),
+    );
+  }
+
+  const checklist = checklistOf(trailer);
+  const items = normalizeItems(checklist, input.items);
+  if (Object.keys(items.fieldErrors).length)
+    abort(refuse('invalid', 'Some items need attention.', items.fieldErrors));
+
+  const history = await loadTimeline(trailer.id, tx);
+  const last = history.at(-1);
+  if (last && last.at.getTime() > now.getTime())
+    abort(refuse('conflict', 'A later record of this trailer exists already.'));
+
+  const event = handoffEvent(input, {
+    id: randomUUID(),
+    at: now,
+    party: {
+      carrierId: carrier.id,
+      carrierName: carrier.name,
+      driverId: actor.role === 'driver' ? actor.id : null,
+    },
+    isReefer: trailer.kind === 'reefer',
+    observations: items.observations,
+  });
+  const ev = evaluateHandoff({
+    checklist,
+    history,
+    current: event,
+    policy,
+    now,
+    timeZone: terminal.timeZone,
+    terminalName: terminal.name,
+  });
+
+  if (input.kind === 'hook' && blocksHook(ev.holds)) {
+    // the holds this record found travel with the refusal: submit.ts places them on the trailer
+    abort(
+      refuse(
+        'conflict',
+        `What you recorded puts trailer ${trailer.unitNumber} out of service: it may not leave the gate. The trailer is now on hold; tell the terminal clerk.`,
+        undefined,
+        { holds: holdReasons(ev.holds.filter((h) => h.severity === 'out_of_service')), found: ev.holds },
+      ),
+    );
+  }
+  const evidence = damageEvidenceErrors(ev.damageKeys, items.rows, items.photoIds);
+  if (Object.keys(evidence).length)
+    abort(refuse('invalid', 'New or worse damage needs a photo and a note.', evidence));
+
+  const photoIds = [...items.photoIds.values()].flat();
+  const photos = await listUnattachedPhotos(tx, photoIds, { trailerId: trailer.id, uploadedById: actor.id });
+  if (photos.length !== photoIds.length) {
+    abort(
+      refuse('invalid', 'A photo is missing, still uploading, or belongs to another record. Take it again.'),
+    );
+  }
+
+  return storeHandoff(tx, {
+    input,
+    actor,
+    trailer,
+    terminal,
+    carrier,
+    event,
+    evaluation: ev,
+    items,
+    photos,
+    openHolds,
+    history,
+    sendReceipt: opts.sendReceipt !== false,
+  });
+}

@@ -1,0 +1,166 @@
+// What a checked handoff writes, in order: the record and its hash-chain link, items and photos,
+// a case for new or worse damage (priced from the rate card), findings, new holds, the trailer's
+// new state, the audit entry and the receipt e-mail. All in the submit's transaction.
+import 'server-only';
+import type { Tx } from '@/db';
+import { recordAudit } from '@/db/queries/audit';
+import { priceCase } from '@/lib/server/desk/pricing';
+import { getSpotLabel, getUserEmail, latestContentHash, type OpenHoldRow } from '@/db/queries/handoff-submit';
+import {
+  attachPhotos,
+  insertFindings,
+  insertHandoff,
+  insertHandoffItems,
+  insertHolds,
+  insertOpenedCase,
+  updateTrailer,
+} from '@/db/queries/handoff-writes';
+import type { HandoffEvent, TimelineEvent } from '@/lib/engine';
+import { hashableFromRows } from '@/lib/handoffs/canonical';
+import type { Evaluation } from '@/lib/handoffs/evaluation';
+import { handoffContentHash } from '@/lib/handoffs/hash';
+import { holdsNotYetOpen } from '@/lib/handoffs/holds';
+import type { normalizeItems } from '@/lib/handoffs/items';
+import { handoffRow, trailerAfter } from '@/lib/handoffs/submission';
+import { newVerificationCode } from '@/lib/handoffs/verification-code';
+import { abort } from '@/lib/result';
+import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
+import { enqueueReceiptEmail } from './receipt-mail';
+import { chooseSpot } from './slots';
+import type { HandoffActor, SubmitResult } from './types';
+
+export type CheckedHandoff = {
+  input: HandoffSubmitInput;
+  actor: HandoffActor;
+  trailer: { id: string; unitNumber: string };
+  terminal: { id: string; name: string; timeZone: string };
+  carrier: { id: string; name: string; contactEmail: string };
+  event: HandoffEvent;
+  evaluation: Evaluation;
+  items: ReturnType<typeof normalizeItems>;
+  photos: { id: string; sha256: string }[];
+  openHolds: OpenHoldRow[];
+  history: TimelineEvent[];
+  sendReceipt: boolean;
+};
+
+export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitResult> {
+  const { input, actor, trailer, terminal, event, evaluation: ev, items } = c;
+  const id = event.id;
+  const now = event.at;
+  let spotId: string | null = null;
+  if (input.kind === 'drop') {
+    const spot = await chooseSpot(tx, terminal.id, input.spotId);
+    spotId = spot.ok ? spot.value : abort(spot);
+  }
+  const row = handoffRow(input, {
+    id,
+    trailerId: trailer.id,
+    terminalId: terminal.id,
+    event,
+    recordedById: actor.id,
+    verificationCode: newVerificationCode(),
+    prevHash: await latestContentHash(tx, trailer.id),
+  });
+  const shas = c.photos.map((p) => p.sha256);
+  const contentHash = handoffContentHash(hashableFromRows(row, items.rows, shas));
+  await insertHandoff(tx, { ...row, contentHash });
+  await insertHandoffItems(
+    tx,
+    items.rows.map((i) => ({ ...i, handoffId: id })),
+  );
+  await attachPhotos(tx, id, items.photoIds);
+
+  const caseId = ev.damageKeys.length
+    ? await insertOpenedCase(
+        tx,
+        {
+          handoffId: id,
+          trailerId: trailer.id,
+          terminalId: terminal.id,
+          proposedCarrierId: ev.proposedCarrierId,
+          estimateCents: 0,
+          openedAt: now,
+        },
+        { actorId: actor.id, note: `Opened by the ${input.kind} of ${trailer.unitNumber}.` },
+      )
+    : null;
+  // a finding links to an earlier handoff only: the engine may also name a walk or a move
+  const handoffIds = new Set(
+    c.history.filter((e) => e.type === 'drop' || e.type === 'hook').map((e) => e.id),
+  );
+  await insertFindings(
+    tx,
+    ev.rows.map((f) => ({
+      handoffId: id,
+      trailerId: trailer.id,
+      itemKey: f.itemKey,
+      kind: f.kind,
+      condition: f.condition,
+      previousCondition: f.previousCondition,
+      previousHandoffId: f.previousEventId && handoffIds.has(f.previousEventId) ? f.previousEventId : null,
+      responsibleCarrierId: f.responsibleCarrierId,
+      responsibleParty: f.responsibleParty,
+      confidence: f.confidence,
+      candidates: f.candidates,
+      reason: f.reason,
+      caseId: f.isDamage ? caseId : null,
+    })),
+  );
+  // the repair estimate from the rate card, in the same transaction as the case
+  if (caseId) await priceCase(tx, caseId, now);
+  const newHolds = holdsNotYetOpen(ev.holds, c.openHolds);
+  await insertHolds(
+    tx,
+    newHolds.map((h) => ({
+      trailerId: trailer.id,
+      handoffId: id,
+      severity: h.severity,
+      restriction: h.restriction,
+      ruleKey: h.ruleKey,
+      itemKey: h.itemKey,
+      reason: h.reason,
+      source: h.source,
+      placedById: actor.id,
+      placedAt: now,
+    })),
+  );
+  await updateTrailer(tx, trailer.id, trailerAfter(row, spotId));
+  await recordAudit(
+    {
+      actorId: actor.id,
+      action: `handoff.${input.kind}`,
+      entityType: 'handoff',
+      entityId: id,
+      detail: { trailerId: trailer.id, findings: ev.rows.length, holds: newHolds.length, caseId },
+    },
+    tx,
+  );
+  if (c.sendReceipt) {
+    const driverEmail = row.driverId ? await getUserEmail(tx, row.driverId) : null;
+    await enqueueReceiptEmail(tx, driverEmail ?? c.carrier.contactEmail, {
+      handoffId: id,
+      unitNumber: trailer.unitNumber,
+      kind: input.kind,
+      occurredAt: now,
+      terminalName: terminal.name,
+      timeZone: terminal.timeZone,
+      carrierName: c.carrier.name,
+      driverName: input.driverName,
+      tractorNumber: input.tractorNumber,
+      isLoaded: input.isLoaded,
+      sealNumber: row.sealNumber,
+      fuelEighths: row.fuelEighths,
+      spotLabel: spotId ? await getSpotLabel(tx, spotId) : null,
+      verificationCode: row.verificationCode,
+      contentHash,
+      findings: ev.rows,
+      holds: [
+        ...c.openHolds.map((h) => ({ severity: h.severity, restriction: h.restriction, reason: h.reason })),
+        ...newHolds,
+      ],
+      photos: c.photos.map((p) => ({ id: p.id, itemKey: null })),
+    });
+  }
+  return { handoffId: id, verificationCode: row.verificationCode, isReplay: false };
+}

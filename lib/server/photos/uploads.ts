@@ -1,0 +1,73 @@
+// A photo reaches storage in two calls: the announcement (type, size, SHA-256) answers a presigned
+// PUT URL; after the browser's PUT, completion reads the object back and checks it.
+import 'server-only';
+import { randomUUID } from 'node:crypto';
+import { getOwnPhoto, insertPendingPhoto, setPhotoStatus } from '@/db/queries/photos';
+import { getTrailerForGate } from '@/db/queries/trailers';
+import { uploadProblem } from '@/lib/photos/check';
+import { isAllowedImageType, MAX_PHOTO_BYTES } from '@/lib/photos/image-type';
+import { done, refuse, type Result } from '@/lib/result';
+import { checklistOf } from '@/lib/trailers/checklist';
+import type { UploadRequestInput } from '@/lib/validation/handoffs';
+import { deleteObject, presignPhotoUpload, readObject } from '../storage';
+
+type Uploader = { id: string };
+type Stored = { photoId: string; status: 'stored' };
+const EXT = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp' } as const;
+
+/** Checks the declared type and size, records a pending photo and returns a presigned PUT URL. */
+export async function createUpload(input: UploadRequestInput, user: Uploader) {
+  if (!isAllowedImageType(input.contentType)) {
+    return refuse('unsupported_type', 'Photos must be JPEG, PNG or WebP.', {
+      contentType: ['Photos must be JPEG, PNG or WebP.'],
+    });
+  }
+  if (input.byteSize > MAX_PHOTO_BYTES) {
+    return refuse('too_large', `A photo may be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB.`, {
+      byteSize: ['The photo is too large.'],
+    });
+  }
+  const trailer = await getTrailerForGate(input.trailerId);
+  if (!trailer) return refuse('not_found', 'No such trailer.');
+  if (!checklistOf(trailer).items.some((i) => i.key === input.itemKey && i.kind !== 'reading')) {
+    return refuse('invalid', "That item is not on this trailer's checklist.", {
+      itemKey: ['Unknown checklist item.'],
+    });
+  }
+  const objectKey = `photos/${trailer.id}/${randomUUID()}.${EXT[input.contentType]}`;
+  const photoId = await insertPendingPhoto({
+    objectKey,
+    uploadedById: user.id,
+    trailerId: trailer.id,
+    itemKey: input.itemKey,
+    contentType: input.contentType,
+    byteSize: input.byteSize,
+    sha256: input.sha256,
+  });
+  return done({
+    photoId,
+    uploadUrl: await presignPhotoUpload(objectKey, input.contentType),
+    headers: { 'content-type': input.contentType },
+  });
+}
+
+/**
+ * After the browser's PUT: reads the object back and checks its type by content, its size and
+ * its SHA-256 against what was declared. Stored, or rejected and the object deleted.
+ */
+export async function completeUpload(photoId: string, user: Uploader): Promise<Result<Stored>> {
+  const p = await getOwnPhoto(photoId, user.id);
+  if (!p) return refuse('not_found', 'No such upload.');
+  if (p.status === 'stored') return done({ photoId: p.id, status: 'stored' });
+  if (p.status === 'rejected') return refuse('gone', 'This photo was refused; take it again.');
+  const bytes = await readObject(p.objectKey, MAX_PHOTO_BYTES);
+  if (!bytes) return refuse('conflict', 'The photo has not arrived yet; upload it again.');
+  const problem = uploadProblem(bytes, p);
+  if (problem) {
+    await setPhotoStatus(p.id, 'rejected');
+    await deleteObject(p.objectKey);
+    return refuse(problem.code, problem.message);
+  }
+  await setPhotoStatus(p.id, 'stored');
+  return done({ photoId: p.id, status: 'stored' });
+}

@@ -1,0 +1,83 @@
+import { describe, expect, it } from 'vitest';
+import { hashableFromRows, type HandoffHashRow } from '@/lib/handoffs/canonical';
+import { checkTrailerChain, type ChainRecord } from '@/lib/handoffs/chain';
+import { handoffContentHash, sha256Hex } from '@/lib/handoffs/hash';
+
+// Two stored handoffs hashed the way the submit does; the photo's bytes are the FIPS 180-2
+// example message "abc", whose SHA-256 is ba7816bf… (NIST FIPS 180-2, Appendix B.1).
+const PHOTO = sha256Hex('abc');
+
+const row = (id: string, at: string, prevHash: string | null): HandoffHashRow => ({
+  id,
+  trailerId: 't-1',
+  terminalId: 'term-1',
+  kind: 'drop',
+  level: 'full',
+  carrierId: 'c-1',
+  driverId: null,
+  driverName: 'Test Driver',
+  tractorNumber: 'TR-1',
+  recordedById: 'u-1',
+  isLoaded: false,
+  sealNumber: null,
+  fuelEighths: 8,
+  isReeferOn: null,
+  setpointTenthsF: null,
+  returnAirTenthsF: null,
+  engineHoursTenths: null,
+  pretripResult: null,
+  pretripAt: null,
+  note: null,
+  occurredAt: new Date(at),
+  correctsHandoffId: null,
+  verificationCode: `CODE${id}`,
+  prevHash,
+});
+const items = [
+  {
+    itemKey: 'left_side.skin',
+    condition: 'damaged',
+    treadThirtySeconds: null,
+    isHoldingAir: null,
+    note: 'Torn',
+  },
+];
+
+/** A chain whose first record was submitted with one stored photo. */
+function stored(): ChainRecord[] {
+  const first = row('h1', '2026-11-02T15:00:00Z', null);
+  const firstHash = handoffContentHash(hashableFromRows(first, items, [PHOTO]));
+  const second = row('h2', '2026-11-03T09:00:00Z', firstHash);
+  const secondHash = handoffContentHash(hashableFromRows(second, [], []));
+  return [
+    { row: { ...first, contentHash: firstHash }, items, photos: [{ sha256: PHOTO, status: 'stored' }] },
+    { row: { ...second, contentHash: secondHash }, items: [], photos: [] },
+  ];
+}
+
+describe('the one chain check', () => {
+  it('verifies the records as the submit hashed them', () => {
+    expect(checkTrailerChain(stored())).toEqual({ check: { ok: true, count: 2 }, brokenAt: null });
+  });
+
+  it('counts stored photos only: a photo no longer stored breaks the chain at its record', () => {
+    const records = stored();
+    records[0].photos = [{ sha256: PHOTO, status: 'rejected' }];
+    expect(checkTrailerChain(records)).toEqual({
+      check: { ok: false, brokenAt: 'h1', why: 'content_changed' },
+      brokenAt: new Date('2026-11-02T15:00:00Z'),
+    });
+  });
+
+  it('a photo attached later without being stored changes nothing; a stored one does', () => {
+    const pending = stored();
+    pending[1].photos = [{ sha256: sha256Hex('later'), status: 'pending' }];
+    expect(checkTrailerChain(pending).check.ok).toBe(true);
+    const added = stored();
+    added[1].photos = [{ sha256: sha256Hex('later'), status: 'stored' }];
+    expect(checkTrailerChain(added)).toEqual({
+      check: { ok: false, brokenAt: 'h2', why: 'content_changed' },
+      brokenAt: new Date('2026-11-03T09:00:00Z'),
+    });
+  });
+});
