@@ -112,7 +112,7 @@ test('a re-issued label’s old link says it was replaced; a forged link is refu
 
   await page.goto(new URL(oldLink).pathname);
   await expect(
-    page.getByText(/^This label was replaced on \d{1,2} \w{3} \d{4}; use the new label\.$/),
+    page.getByText(/^This label was replaced on \w{3} \d{1,2}, \d{4}; use the new label\.$/),
   ).toBeVisible();
 
   const token = new URL(newLink).pathname.slice(3);
