@@ -202,3 +202,18 @@ test('a label scanned while signed out opens sign-in first, then the trailer', a
     await context.close();
   }
 });
+
+test('the row chooser lists the clerk’s own terminal first, and its first row link prints that row', async ({
+  page,
+}) => {
+  // the clerk's home terminal is Riverbend; both terminals have a "Row A"
+  await signInAs(page, 'clerk');
+  await page.goto('/trailers/labels');
+  const terminals = page.getByRole('heading', { level: 2 });
+  await expect(terminals).toHaveText(['Riverbend terminal', 'High Mesa terminal']);
+  const first = page.getByRole('link', { name: /^Row / }).first();
+  await expect(first).toHaveAccessibleName(/^Row A, Riverbend terminal: \d+ trailers$/);
+  await first.click();
+  await expect(page.getByRole('heading', { name: 'Labels for Riverbend terminal, Row A' })).toBeVisible();
+  await expect(page.getByRole('figure', { name: /^Label for trailer / }).first()).toBeVisible();
+});
