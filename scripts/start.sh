@@ -5,7 +5,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 source scripts/env.sh
-STEPS=8
+STEPS=7
 source scripts/steps.sh
 source scripts/setup.sh
 
@@ -37,8 +37,9 @@ for _ in $(seq 1 120); do
 done
 echo "      done (server output in .data/app.log)"
 
-step "ready after $(elapsed)"
 cat <<INFO
+
+Ready after $(elapsed).
 
   Hitchmark      $APP_URL
                  sign in as clerk@bramblecrest.example / hitchmark-clerk, or as driver D1001 with
