@@ -29,7 +29,18 @@ export default defineConfig({
     trace: 'retain-on-failure',
     launchOptions: { executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium', args: chromiumArgs },
   },
-  projects: [{ name: 'phone', use: { ...devices['Pixel 7'], browserName: 'chromium' } }],
+  projects: [
+    // every journey on a phone: the gate and the yard are used on one
+    { name: 'phone', use: { ...devices['Pixel 7'], browserName: 'chromium' } },
+    // the screens also used at a desk: sign-in, the desk, the yard board, moves and the board's CSV.
+    // Not the walk with the fake camera (a phone job, and slow).
+    {
+      name: 'desktop',
+      use: { ...devices['Desktop Chrome'], browserName: 'chromium' },
+      testMatch: ['auth.spec.ts', 'desk-case.spec.ts', 'yard-walk.spec.ts'],
+      grepInvert: /jockey walks a row/,
+    },
+  ],
   webServer: {
     command: `node_modules/.bin/next start -p ${port}`,
     url: `${baseURL}/api/health`,

@@ -1,8 +1,8 @@
 import { NextResponse, type NextRequest } from 'next/server';
+import { SESSION_COOKIE } from '@/lib/auth/session-cookie';
 
 // Cheap redirects only: no session cookie → sign-in page (pages) or 401 (API). The real checks
-// sit next to the data (requireUser / apiUser); this never opens the cookie or touches the db.
-const SESSION_COOKIE = 'hm_session';
+// sit next to the data (requireUser, route(), formAction()); this never opens the cookie or touches the db.
 const PUBLIC_PREFIXES = ['/login', '/verify', '/api/verify', '/api/health', '/case-link/'];
 
 export function proxy(request: NextRequest) {

@@ -1,6 +1,8 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
+// Two projects sharing these settings: the pure tests, and the database tests (tests/unit/db),
+// each file of which gets its own copy of a template database made once per run.
 export default defineConfig({
   resolve: {
     alias: {
@@ -10,13 +12,23 @@ export default defineConfig({
     },
   },
   test: {
-    include: ['tests/**/*.test.ts'],
-    globalSetup: ['tests/unit/global-setup.ts'],
     environment: 'node',
-    // database tests use their own fresh database, made by the global setup
-    env: { HM_DB_NAME: process.env.HM_TEST_DB ?? 'hitchmark_test' },
-    fileParallelism: false,
     testTimeout: 20_000,
     hookTimeout: 60_000,
+    projects: [
+      {
+        extends: true,
+        test: { name: 'unit', include: ['tests/**/*.test.ts'], exclude: ['tests/unit/db/**'] },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'db',
+          include: ['tests/unit/db/**/*.test.ts'],
+          globalSetup: ['tests/unit/global-setup.ts'],
+          setupFiles: ['tests/unit/database-per-file.ts'],
+        },
+      },
+    ],
   },
 });

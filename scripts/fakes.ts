@@ -7,7 +7,7 @@ import http from 'node:http';
 import { simpleParser } from 'mailparser';
 import S3rver from 's3rver';
 import { SMTPServer } from 'smtp-server';
-import { fakes } from '../lib/fakes-config';
+import { fakes } from './fakes-config';
 
 const dataDir = new URL('../.data/s3', import.meta.url).pathname;
 mkdirSync(dataDir, { recursive: true });

@@ -1,8 +1,8 @@
 import Link from 'next/link';
-import { signOutAction } from '@/app/(auth)/actions';
 import { canOpen, SECTION_LABELS, type Section } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { NavLinks } from './_components/nav-links';
+import { signOutAction } from './_components/sign-out-action';
 
 const SECTIONS: Section[] = ['gate', 'yard', 'desk', 'trailers', 'admin'];
 

@@ -11,7 +11,6 @@ type Labelled = { label: string; name: string; error?: string[]; hint?: string; 
 /** Label, hint, the control and its first error, wired with aria-describedby and aria-invalid. */
 function Frame({
   label,
-  name,
   id,
   hint,
   messages,
@@ -19,7 +18,6 @@ function Frame({
   children,
 }: {
   label: string;
-  name: string;
   id: string;
   hint?: string;
   messages?: string[];
@@ -54,7 +52,7 @@ export function Field({ label, name, error, hint, className, ...input }: Compone
   const typed = useTypedValue(name);
   const id = input.id ?? name;
   return (
-    <Frame label={label} name={name} id={id} hint={hint} messages={messages} className={className}>
+    <Frame label={label} id={id} hint={hint} messages={messages} className={className}>
       {(aria) => (
         <input
           id={id}
@@ -84,7 +82,7 @@ export function Select({
   const typed = useTypedValue(name);
   const id = select.id ?? name;
   return (
-    <Frame label={label} name={name} id={id} hint={hint} messages={messages} className={className}>
+    <Frame label={label} id={id} hint={hint} messages={messages} className={className}>
       {(aria) => (
         <select
           // React applies a select's defaultValue only when it mounts, so a new typed value remounts it
@@ -115,7 +113,7 @@ export function Textarea({
   const typed = useTypedValue(name);
   const id = area.id ?? name;
   return (
-    <Frame label={label} name={name} id={id} hint={hint} messages={messages} className={className}>
+    <Frame label={label} id={id} hint={hint} messages={messages} className={className}>
       {(aria) => (
         <textarea
           id={id}

@@ -2,8 +2,6 @@ import 'server-only';
 import { and, asc, eq, lte, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { emailOutbox } from '@/db/schema';
-import { nextAttemptAt } from '@/lib/outbox-retry';
-
 
 export type OutgoingEmail = {
   to: string;
@@ -48,15 +46,19 @@ export async function markEmailSent(tx: Tx, id: string, now: Date) {
     .where(eq(emailOutbox.id, id));
 }
 
-export async function markEmailFailed(tx: Tx, id: string, attempts: number, error: string, now: Date) {
+/** Records a failed send: the attempt count, the error (cut to 500 characters) and when to try again. */
+export async function markEmailFailed(
+  tx: Tx,
+  failure: { id: string; attempts: number; error: string; nextAttemptAt: Date },
+) {
   await tx
     .update(emailOutbox)
     .set({
-      attempts: attempts + 1,
-      lastError: error.slice(0, 500),
-      nextAttemptAt: nextAttemptAt(attempts + 1, now),
+      attempts: failure.attempts,
+      lastError: failure.error.slice(0, 500),
+      nextAttemptAt: failure.nextAttemptAt,
     })
-    .where(eq(emailOutbox.id, id));
+    .where(eq(emailOutbox.id, failure.id));
 }
 
 export async function listEmailsFor(relatedType: string, relatedId: string) {

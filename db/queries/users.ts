@@ -1,6 +1,6 @@
 import 'server-only';
 import { eq, sql } from 'drizzle-orm';
-import { db } from '@/db';
+import { db, type Tx } from '@/db';
 import { carriers, terminals, users } from '@/db/schema';
 
 const signInColumns = {
@@ -29,20 +29,22 @@ export async function getUserForDriverSignIn(driverNumber: string) {
   return row ?? null;
 }
 
-/** Records a failed attempt and returns the new count. */
-export async function recordFailedSignIn(userId: string, lockedUntil: (count: number) => Date | null) {
-  const [row] = await db
+/** Counts one more failed attempt and returns the new count. */
+export async function countFailedSignIn(userId: string, tx: Tx) {
+  const [row] = await tx
     .update(users)
     .set({ failedSignIns: sql`${users.failedSignIns} + 1` })
     .where(eq(users.id, userId))
     .returning({ count: users.failedSignIns });
-  const until = lockedUntil(row.count);
-  if (until) await db.update(users).set({ lockedUntil: until }).where(eq(users.id, userId));
   return row.count;
 }
 
-export async function clearFailedSignIns(userId: string) {
-  await db.update(users).set({ failedSignIns: 0, lockedUntil: null }).where(eq(users.id, userId));
+export async function lockSignIns(userId: string, until: Date, tx: Tx) {
+  await tx.update(users).set({ lockedUntil: until }).where(eq(users.id, userId));
+}
+
+export async function clearFailedSignIns(userId: string, tx: Tx) {
+  await tx.update(users).set({ failedSignIns: 0, lockedUntil: null }).where(eq(users.id, userId));
 }
 
 /** The signed-in user as the shell and the checks need it; null when the account is gone or disabled. */

@@ -40,14 +40,17 @@ export function scannerReadsBack(link: string, mask?: Mask): boolean {
         );
     }
   }
+  return decodeQr(lum, n, n) === link;
+}
+
+/** The text the scanner's decoder reads from a grey image (one byte per pixel), or null. */
+export function decodeQr(luminance: Uint8ClampedArray, width: number, height: number): string | null {
   try {
-    return (
-      new QRCodeReader()
-        .decode(new BinaryBitmap(new HybridBinarizer(new RGBLuminanceSource(lum, n, n))))
-        .getText() === link
-    );
+    return new QRCodeReader()
+      .decode(new BinaryBitmap(new HybridBinarizer(new RGBLuminanceSource(luminance, width, height))))
+      .getText();
   } catch {
-    return false;
+    return null;
   }
 }
 

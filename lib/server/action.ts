@@ -26,6 +26,8 @@ type Spec<S extends z.ZodType, A extends Access> = {
   schema: S;
   /** How to read the form; the default takes each field's last value. */
   read?: (form: FormData) => unknown;
+  /** Summary when the input does not parse (default: the first whole-form issue, or a general one). */
+  invalidMessage?: string;
 };
 
 /** What the work of an action returns: a refusal, or success with an optional message. */
@@ -46,7 +48,7 @@ export function formAction<S extends z.ZodType, A extends Access = readonly Role
     const values = echo(Object.fromEntries(form));
     const parsed = spec.schema.safeParse(raw);
     if (!parsed.success) {
-      const { message, fieldErrors } = describeZodError(parsed.error);
+      const { message, fieldErrors } = describeZodError(parsed.error, spec.invalidMessage);
       return { ok: false, formError: message, fieldErrors, values };
     }
     const outcome = await work(user, parsed.data);

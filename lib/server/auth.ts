@@ -20,5 +20,3 @@ export async function requireUser(roles?: readonly Role[]): Promise<SessionUser>
   if (roles && !roles.includes(user.role)) forbidden();
   return user;
 }
-
-export const requireRole = (roles: readonly Role[]) => requireUser(roles);

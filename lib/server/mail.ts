@@ -1,22 +1,24 @@
+import 'server-only';
 // Sends what the outbox holds. Every e-mail is written to the outbox first (db/queries/outbox.ts,
 // in the same transaction as the record it is about), then delivered here and retried with
 // back-off until the SMTP server takes it, so none is lost while the mail server is down.
 import nodemailer, { type Transporter } from 'nodemailer';
 import { db } from '@/db';
 import { claimDueEmails, markEmailFailed, markEmailSent } from '@/db/queries/outbox';
+import { nextAttemptAt } from '@/lib/mail/retry';
+import { env } from './env';
 
 let transporter: Transporter | null = null;
 
 function getTransporter(): Transporter {
+  const settings = env();
   transporter ??= nodemailer.createTransport({
-    host: process.env.SMTP_HOST ?? '127.0.0.1',
-    port: Number(process.env.SMTP_PORT ?? 2525),
-    secure: process.env.SMTP_SECURE === '1',
-    auth: process.env.SMTP_USER
-      ? { user: process.env.SMTP_USER, pass: process.env.SMTP_PASSWORD ?? '' }
-      : undefined,
+    host: settings.SMTP_HOST,
+    port: settings.SMTP_PORT,
+    secure: settings.SMTP_SECURE,
+    auth: settings.SMTP_USER ? { user: settings.SMTP_USER, pass: settings.SMTP_PASSWORD ?? '' } : undefined,
     // the local fake speaks plain SMTP on loopback; a real server is expected to offer TLS
-    ignoreTLS: process.env.SMTP_HOST === undefined || process.env.SMTP_HOST === '127.0.0.1',
+    ignoreTLS: settings.SMTP_HOST === '127.0.0.1',
     connectionTimeout: 5_000,
     greetingTimeout: 5_000,
   });
@@ -32,7 +34,7 @@ export async function deliverDueEmails(now = new Date()): Promise<{ sent: number
     for (const email of due) {
       try {
         await getTransporter().sendMail({
-          from: process.env.MAIL_FROM ?? 'Hitchmark <no-reply@hitchmark.example>',
+          from: env().MAIL_FROM,
           to: email.toAddress,
           subject: email.subject,
           text: email.textBody,
@@ -41,13 +43,13 @@ export async function deliverDueEmails(now = new Date()): Promise<{ sent: number
         await markEmailSent(tx, email.id, now);
         sent++;
       } catch (error) {
-        await markEmailFailed(
-          tx,
-          email.id,
-          email.attempts,
-          error instanceof Error ? error.message : String(error),
-          now,
-        );
+        const attempts = email.attempts + 1;
+        await markEmailFailed(tx, {
+          id: email.id,
+          attempts,
+          error: error instanceof Error ? error.message : String(error),
+          nextAttemptAt: nextAttemptAt(attempts, now),
+        });
         failed++;
       }
     }
@@ -55,7 +57,7 @@ export async function deliverDueEmails(now = new Date()): Promise<{ sent: number
   return { sent, failed };
 }
 
-/** For tests: forget the cached transport (e.g. after changing SMTP_PORT). */
+/** For tests: forget the cached transport (e.g. after changing SMTP_PORT and calling reloadEnv()). */
 export function resetMailTransport() {
   transporter?.close();
   transporter = null;

@@ -2,6 +2,8 @@ import 'server-only';
 import { getIronSession, type SessionOptions } from 'iron-session';
 import { cookies } from 'next/headers';
 import type { Role } from '@/lib/auth/roles';
+import { SESSION_COOKIE } from '@/lib/auth/session-cookie';
+import { env } from './env';
 
 export type SessionData = {
   userId?: string;
@@ -10,19 +12,15 @@ export type SessionData = {
   terminalId?: string | null;
 };
 
-export const SESSION_COOKIE = 'hm_session';
 const DEV_SECRET = 'hitchmark-local-development-secret-not-for-production';
 
 function secret(): string {
-  const value = process.env.SESSION_SECRET;
-  if (value && value.length >= 32) return value;
-  if (process.env.NODE_ENV === 'production') {
-    throw new Error('SESSION_SECRET (32+ characters) must be set in production');
-  }
-  return DEV_SECRET;
+  // env() refuses to start production without SESSION_SECRET, so the fallback serves local runs only
+  return env().SESSION_SECRET ?? DEV_SECRET;
 }
 
 export function sessionOptions(): SessionOptions {
+  const settings = env();
   return {
     password: secret(),
     cookieName: SESSION_COOKIE,
@@ -31,7 +29,7 @@ export function sessionOptions(): SessionOptions {
       httpOnly: true,
       sameSite: 'lax',
       // A secure cookie is not sent back over plain http; local runs and tests set HM_INSECURE_COOKIES=1.
-      secure: process.env.NODE_ENV === 'production' && process.env.HM_INSECURE_COOKIES !== '1',
+      secure: settings.NODE_ENV === 'production' && !settings.HM_INSECURE_COOKIES,
       path: '/',
     },
   };

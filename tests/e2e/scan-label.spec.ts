@@ -112,7 +112,7 @@ test('a re-issued label’s old link says it was replaced; a forged link is refu
 
   await page.goto(new URL(oldLink).pathname);
   await expect(
-    page.getByText(/^This label was replaced on \d{1,2} \w{3} \d{4}; use the new label\.$/),
+    page.getByText(/^This label was replaced on \w{3} \d{1,2}, \d{4}; use the new label\.$/),
   ).toBeVisible();
 
   const token = new URL(newLink).pathname.slice(3);
@@ -201,4 +201,19 @@ test('a label scanned while signed out opens sign-in first, then the trailer', a
   } finally {
     await context.close();
   }
+});
+
+test('the row chooser lists the clerk’s own terminal first, and its first row link prints that row', async ({
+  page,
+}) => {
+  // the clerk's home terminal is Riverbend; both terminals have a "Row A"
+  await signInAs(page, 'clerk');
+  await page.goto('/trailers/labels');
+  const terminals = page.getByRole('heading', { level: 2 });
+  await expect(terminals).toHaveText(['Riverbend terminal', 'High Mesa terminal']);
+  const first = page.getByRole('link', { name: /^Row / }).first();
+  await expect(first).toHaveAccessibleName(/^Row A, Riverbend terminal: \d+ trailers$/);
+  await first.click();
+  await expect(page.getByRole('heading', { name: 'Labels for Riverbend terminal, Row A' })).toBeVisible();
+  await expect(page.getByRole('figure', { name: /^Label for trailer / }).first()).toBeVisible();
 });

@@ -6,7 +6,7 @@ import {
   lockAfterFailure,
   MAX_LOCK_SECONDS,
   secondsLocked,
-} from '@/lib/sign-in-throttle';
+} from '@/lib/auth/throttle';
 import { safeNext, signInSchema } from '@/lib/validation/auth';
 
 describe('sign-in input', () => {

@@ -1,14 +1,36 @@
-// Vitest global setup: a fresh database for this run, migrated from the committed migrations.
-// PostgreSQL itself is started by scripts/test.sh (or scripts/db.sh start).
-import { execFileSync } from 'node:child_process';
+// Vitest global setup, once per run: the template database every database test file copies,
+// migrated from the committed migrations and seeded with the demo data. PostgreSQL itself is
+// started by scripts/test.sh (or scripts/db.sh start).
+import type { TestProject } from 'vitest/node';
+import {
+  createDatabase,
+  dropDatabase,
+  dropLeftoverFileDatabases,
+  TEMPLATE_DB,
+  pointAtDatabase,
+} from './test-databases';
 
-export default async function setup() {
-  const name = process.env.HM_TEST_DB ?? 'hitchmark_test';
-  process.env.HM_DB_NAME = name;
-  if (!process.env.DATABASE_URL)
-    execFileSync('bash', ['scripts/db.sh', 'createdb', name], { stdio: 'inherit' });
+declare module 'vitest' {
+  export interface ProvidedContext {
+    templateDb: string;
+  }
+}
+
+export default async function setup(project: TestProject) {
+  await dropLeftoverFileDatabases();
+  await dropDatabase(TEMPLATE_DB);
+  await createDatabase(TEMPLATE_DB);
+  pointAtDatabase(TEMPLATE_DB);
   const { migrate } = await import('drizzle-orm/node-postgres/migrator');
   const { db, pool } = await import('../../db/index');
+  const { seed } = await import('../../db/seed');
   await migrate(db, { migrationsFolder: 'db/migrations' });
+  await seed();
+  // a template cannot be copied while anyone is connected to it
   await pool.end();
+  project.provide('templateDb', TEMPLATE_DB);
+  return async () => {
+    await dropLeftoverFileDatabases();
+    await dropDatabase(TEMPLATE_DB);
+  };
 }

@@ -6,7 +6,7 @@ import { resolve } from 'node:path';
 import { chromium, devices, type Browser, type BrowserContext, type Page } from '@playwright/test';
 import { PNG } from 'pngjs';
 import QRCode from 'qrcode';
-import { labelQrOptions } from '../../../lib/labels/qr';
+import { decodeQr, labelQrOptions } from '../../../lib/labels/qr';
 import { baseURL, chromiumArgs } from '../../../playwright.config';
 
 // 640×480 is the size Chromium captures at when the page asks for no resolution: a frame of that size reaches
@@ -107,19 +107,43 @@ export async function writeImageVideo(
   file: string,
   frame = FRAME,
 ): Promise<string> {
+  return writeFrame(toI420(image, frame), file, frame);
+}
+
+async function writeFrame(planes: Buffer, file: string, frame: { width: number; height: number }) {
   const path = resolve(file);
   const header = Buffer.from(`YUV4MPEG2 W${frame.width} H${frame.height} F30:1 Ip A1:1 C420jpeg\n`);
-  await writeFile(path, Buffer.concat([header, Buffer.from('FRAME\n'), toI420(image, frame)]));
+  await writeFile(path, Buffer.concat([header, Buffer.from('FRAME\n'), planes]));
   return path;
 }
 
-/** Writes a one-frame .y4m showing the QR of `text` (a label link, a slot code…); returns the absolute path. */
+/** Whole module sizes from `preferred` outwards: 6, 5, 7, 4, 8, 3, 9 … */
+function sizesNear(preferred: number): number[] {
+  const sizes = [preferred];
+  for (let d = 1; d <= 6; d++) sizes.push(preferred - d, preferred + d);
+  return sizes.filter((s) => s >= 3);
+}
+
+/**
+ * Writes a one-frame .y4m showing the QR of `text` (a label link, a slot code…); returns the
+ * absolute path. A phone moving towards a label sees it at many sizes, but the fake camera loops
+ * one frame, and the scanner's decoder misses some symbols at some module sizes (about one label
+ * link in eight at 6 px). So the frame uses the first whole module size, from `scale` outwards,
+ * at which that decoder reads the text back from this very frame.
+ */
 export async function writeLabelVideo(
   text: string,
   file: string,
   options?: { scale?: number },
 ): Promise<string> {
-  return writeImageVideo(await qrImage(text, options), file);
+  for (const scale of sizesNear(options?.scale ?? 6)) {
+    const image = await qrImage(text, { scale });
+    if (image.width > FRAME.width || image.height > FRAME.height) continue;
+    const planes = toI420(image, FRAME);
+    const luminance = new Uint8ClampedArray(planes.subarray(0, FRAME.width * FRAME.height));
+    if (decodeQr(luminance, FRAME.width, FRAME.height) === text) return writeFrame(planes, file, FRAME);
+  }
+  throw new Error(`the scanner's decoder reads "${text}" at no module size that fits the frame`);
 }
 
 /** A phone-sized Chromium whose camera shows `file`, with the camera permission granted. */

@@ -1,11 +1,18 @@
-import { count, eq, like, sql } from 'drizzle-orm';
+import { count, eq, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
 import { auditLog, carriers, trailers, users, yardSpots } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { validateVin } from '@/lib/engine/identity';
 
-describe('database foundation (fresh test database)', () => {
+// SQLSTATE 23505 unique_violation (PostgreSQL manual, Appendix A "PostgreSQL Error Codes").
+const UNIQUE_VIOLATION = '23505';
+/** The driver error drizzle wraps: which SQLSTATE, raised by which constraint or index. */
+const refusedBy = (code: string, constraint: string) => ({
+  cause: expect.objectContaining({ code, constraint }),
+});
+
+describe('database foundation (a fresh database of its own)', () => {
   beforeAll(async () => {
     await seed();
   });
@@ -13,15 +20,17 @@ describe('database foundation (fresh test database)', () => {
     await pool.end();
   });
 
-  it('is a fresh database of its own, not the demo one', async () => {
+  it('is a database of this file alone, not the demo one', async () => {
     const { rows } = await pool.query('select current_database() as name');
-    expect(rows[0].name).toBe('hitchmark_test');
+    expect(rows[0].name).toBe(process.env.HM_DB_NAME);
+    expect(rows[0].name).toMatch(/^hitchmark_test_file_[0-9a-f]{8}$/);
   });
 
   it('seeds two terminals worth of trailers, every VIN passing the 49 CFR 565.15 check digit', async () => {
-    // other test files add trailers of their own; the seed's VINs all start with its invented prefix 1B9
-    const rows = await db.select({ vin: trailers.vin }).from(trailers).where(like(trailers.vin, '1B9%'));
+    // no other test file writes here, so every trailer is the seed's (VINs with its invented prefix 1B9)
+    const rows = await db.select({ vin: trailers.vin }).from(trailers);
     expect(rows.length).toBe(300);
+    expect(rows.filter((r) => !r.vin.startsWith('1B9'))).toEqual([]);
     const bad = rows.filter((r) => !validateVin(r.vin).ok);
     expect(bad).toEqual([]);
   });
@@ -49,13 +58,15 @@ describe('database foundation (fresh test database)', () => {
       .limit(2);
     await expect(
       db.update(trailers).set({ currentSpotId: a.spot }).where(eq(trailers.id, b.id)),
-    ).rejects.toThrow();
+    ).rejects.toMatchObject(refusedBy(UNIQUE_VIOLATION, 'trailers_current_spot'));
   });
 
   it('keeps the audit log append-only: updates and deletes are refused by the database', async () => {
     await db.insert(auditLog).values({ actorId: null, action: 'test', entityType: 'test' });
-    // drizzle wraps the driver error; the database's own message is the cause
-    const refused = { cause: expect.objectContaining({ message: expect.stringMatching(/append-only/) }) };
+    // drizzle wraps the driver error; the database's own error is the cause
+    const refused = {
+      cause: expect.objectContaining({ code: 'HM001', message: expect.stringMatching(/append-only/) }),
+    };
     await expect(db.update(auditLog).set({ action: 'changed' })).rejects.toMatchObject(refused);
     await expect(db.delete(auditLog)).rejects.toMatchObject(refused);
   });
@@ -63,6 +74,6 @@ describe('database foundation (fresh test database)', () => {
   it('stores carriers by unique SCAC', async () => {
     await expect(
       db.insert(carriers).values({ scac: 'BRCL', name: 'Duplicate', contactEmail: 'x@example.com' }),
-    ).rejects.toThrow();
+    ).rejects.toMatchObject(refusedBy(UNIQUE_VIOLATION, 'carriers_scac_unique'));
   });
 });

@@ -1,15 +1,28 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
-import { getCurrentLabel, getLabelStanding, prepareLabelSheet, reissueLabel } from '@/db/queries/labels';
+import { getCurrentLabel, getLabel } from '@/db/queries/labels';
 import { getTrailerByUnit, getTrailerByVin } from '@/db/queries/trailer-lookup';
 import { auditLog, labels, trailers, users, yardRows, yardSpots } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { signLabelToken } from '@/lib/engine/identity/label-token';
-import { labelLink, labelToken, resolveLabelToken } from '@/lib/server/labels';
+import { labelStanding } from '@/lib/labels/standing';
+import {
+  labelLink,
+  labelToken,
+  prepareLabelSheet,
+  reissueLabel,
+  resolveLabelToken,
+} from '@/lib/server/labels';
 
 process.env.LABEL_SECRET ??= 'a-test-secret-for-hitchmark-labels-0123456789';
-let clerkId: string;
+let clerk: { id: string };
+
+async function reissue(trailerId: string) {
+  const result = await reissueLabel(clerk, { trailerId });
+  if (!result.ok) throw new Error(`re-issue refused: ${result.message}`);
+  return result.value;
+}
 
 async function trailerByUnit(unit: string) {
   const [t] = await db
@@ -22,11 +35,10 @@ async function trailerByUnit(unit: string) {
 describe('labels and trailer lookup (fresh test database)', () => {
   beforeAll(async () => {
     await seed();
-    const [clerk] = await db
+    [clerk] = await db
       .select({ id: users.id })
       .from(users)
       .where(eq(users.email, 'clerk@bramblecrest.example'));
-    clerkId = clerk.id;
   });
   afterAll(async () => {
     await pool.end();
@@ -36,14 +48,13 @@ describe('labels and trailer lookup (fresh test database)', () => {
     const t = await trailerByUnit('R53010');
     const before = await getCurrentLabel(t.id);
     expect(before).not.toBeNull();
-    const result = await reissueLabel(t.id, clerkId);
-    expect(result!.revokedLabelIds).toEqual([before!.id]);
+    const result = await reissue(t.id);
+    expect(result.revokedLabelIds).toEqual([before!.id]);
     const after = await getCurrentLabel(t.id);
-    expect(after!.id).toBe(result!.label.id);
+    expect(after!.id).toBe(result.label.id);
     expect(after!.id).not.toBe(before!.id);
-    const old = await getLabelStanding(before!.id);
-    expect(old).toMatchObject({ isCurrent: false });
-    expect(old!.replacedAt).toBeInstanceOf(Date);
+    const old = labelStanding((await getLabel(before!.id))!, after);
+    expect(old).toEqual({ isCurrent: false, replacedAt: expect.any(Date) });
     const audit = await db
       .select()
       .from(auditLog)
@@ -54,7 +65,7 @@ describe('labels and trailer lookup (fresh test database)', () => {
 
   it('two re-issues at once leave exactly one unrevoked label (row lock on the trailer)', async () => {
     const t = await trailerByUnit('R53011');
-    await Promise.all([reissueLabel(t.id, clerkId), reissueLabel(t.id, clerkId)]);
+    await Promise.all([reissue(t.id), reissue(t.id)]);
     const open = await db
       .select({ id: labels.id })
       .from(labels)
@@ -62,8 +73,11 @@ describe('labels and trailer lookup (fresh test database)', () => {
     expect(open).toHaveLength(1);
   });
 
-  it('re-issuing an unknown trailer does nothing', async () => {
-    expect(await reissueLabel('00000000-0000-4000-8000-000000000000', clerkId)).toBeNull();
+  it('re-issuing an unknown trailer is refused as not found and writes nothing', async () => {
+    const before = await db.select({ id: labels.id }).from(labels);
+    const result = await reissueLabel(clerk, { trailerId: '00000000-0000-4000-8000-000000000000' });
+    expect(result).toMatchObject({ ok: false, code: 'not_found' });
+    expect(await db.select({ id: labels.id }).from(labels)).toHaveLength(before.length);
   });
 
   it('resolves a current token, refuses a revoked one with its date and a forged one as not ours', async () => {
@@ -71,7 +85,7 @@ describe('labels and trailer lookup (fresh test database)', () => {
     const old = (await getCurrentLabel(t.id))!;
     const oldToken = labelToken({ id: old.id, trailerId: t.id });
     expect(await resolveLabelToken(oldToken)).toEqual({ ok: true, trailerId: t.id, labelId: old.id });
-    const { label } = (await reissueLabel(t.id, clerkId))!;
+    const { label } = await reissue(t.id);
     expect(await resolveLabelToken(oldToken)).toMatchObject({
       ok: false,
       error: 'revoked',
@@ -112,8 +126,8 @@ describe('labels and trailer lookup (fresh test database)', () => {
   it('a sheet issues a label for a trailer without a current one, and reuses it the second time', async () => {
     const t = await trailerByUnit('R53030');
     await db.update(labels).set({ revokedAt: new Date() }).where(eq(labels.trailerId, t.id));
-    const [first] = await prepareLabelSheet({ trailerIds: [t.id] }, clerkId);
-    const [again] = await prepareLabelSheet({ trailerIds: [t.id] }, clerkId);
+    const [first] = await prepareLabelSheet(clerk, { trailerIds: [t.id] });
+    const [again] = await prepareLabelSheet(clerk, { trailerIds: [t.id] });
     expect(first.labelId).toBe(again.labelId);
     expect((await getCurrentLabel(t.id))!.id).toBe(first.labelId);
   });
@@ -129,7 +143,7 @@ describe('labels and trailer lookup (fresh test database)', () => {
       .from(trailers)
       .innerJoin(yardSpots, eq(yardSpots.id, trailers.currentSpotId))
       .where(eq(yardSpots.rowId, row.id));
-    const sheet = await prepareLabelSheet({ rowId: row.id }, clerkId);
+    const sheet = await prepareLabelSheet(clerk, { rowId: row.id });
     expect(standing.length).toBeGreaterThan(0);
     expect(sheet.map((s) => s.id)).toEqual(standing.sort((a, b) => a.order - b.order).map((s) => s.id));
   });

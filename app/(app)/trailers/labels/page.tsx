@@ -3,30 +3,41 @@ import Link from 'next/link';
 import { ButtonLink } from '@/app/_components/button';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
-import { getRowName, prepareLabelSheet, listRowsForLabels } from '@/db/queries/labels';
+import { getRowName, listRowsForLabels } from '@/db/queries/labels';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
+import { prepareLabelSheet } from '@/lib/server/labels';
 import { labelSheetQuerySchema } from '@/lib/validation/labels';
 import { LabelSheet } from './_components/label-sheet';
 import { PrintButton } from './_components/print-button';
+import { RowChooser } from './_components/row-chooser';
 
 export const metadata: Metadata = { title: 'Trailer labels' };
 
 export default async function LabelsPage({ searchParams }: PageProps<'/trailers/labels'>) {
   const user = await requireUser(SECTION_ROLES.trailers);
   const sp = await searchParams;
-  if (sp.ids === undefined && sp.row === undefined) return <RowChooser />;
+  if (sp.ids === undefined && sp.row === undefined)
+    return <RowChooser rows={await listRowsForLabels()} homeTerminalId={user.terminalId} />;
 
   const parsed = labelSheetQuerySchema.safeParse({ ids: sp.ids, row: sp.row });
   if (!parsed.success) {
     return (
       <EmptyState title="Nothing to print">
-        {parsed.error.issues[0]?.message} Choose trailers on the Trailers page, or a row below.
+        {parsed.error.issues[0]?.message} Choose trailers on the{' '}
+        <Link href="/trailers" className="font-bold text-brand underline">
+          Trailers
+        </Link>{' '}
+        page, or{' '}
+        <Link href="/trailers/labels" className="font-bold text-brand underline">
+          a row
+        </Link>
+        .
       </EmptyState>
     );
   }
   const q = parsed.data;
-  const trailers = await prepareLabelSheet(q.row ? { rowId: q.row } : { trailerIds: q.ids! }, user.id);
+  const trailers = await prepareLabelSheet(user, q.row ? { rowId: q.row } : { trailerIds: q.ids! });
   const row = q.row ? await getRowName(q.row) : null;
   const title = row
     ? `Labels for ${row.terminalName}, ${row.name}`
@@ -57,37 +68,6 @@ export default async function LabelsPage({ searchParams }: PageProps<'/trailers/
       ) : (
         <LabelSheet trailers={trailers} />
       )}
-    </div>
-  );
-}
-
-async function RowChooser() {
-  const rows = await listRowsForLabels();
-  return (
-    <div className="space-y-4">
-      <h1 className="text-gate-xl font-bold">Print trailer labels</h1>
-      <p className="text-gate">
-        Pick a row to print a label for every trailer standing in it, or tick trailers on the{' '}
-        <Link href="/trailers" className="font-bold text-brand underline">
-          Trailers
-        </Link>{' '}
-        page.
-      </p>
-      <ul className="grid gap-2 sm:grid-cols-2">
-        {rows.map((r) => (
-          <li key={r.id}>
-            <Link
-              href={`/trailers/labels?row=${r.id}`}
-              className="flex min-h-tap items-center justify-between rounded-lg bg-paper px-4 text-gate font-bold"
-            >
-              <span>
-                {r.terminalName}, {r.name}
-              </span>
-              <span className="text-ink-soft">{r.trailerCount} trailers</span>
-            </Link>
-          </li>
-        ))}
-      </ul>
     </div>
   );
 }

@@ -3,15 +3,15 @@
 import { useActionState, useState } from 'react';
 import { Button } from '@/app/_components/button';
 import { Field, FormError } from '@/app/_components/field';
-import { signInAction, type SignInState } from '../../actions';
+import { FormStateProvider } from '@/app/_components/form-state';
+import { IDLE } from '@/lib/result';
+import { signInAction } from '../../actions';
+
+type Method = 'driver' | 'staff';
 
 export function SignInForm({ next }: { next?: string }) {
-  const [state, formAction, pending] = useActionState<SignInState, FormData>(signInAction, {
-    ok: false,
-    method: 'driver',
-  });
-  const [method, setMethod] = useState<'driver' | 'staff'>(state.method);
-  const errors = state.fieldErrors ?? {};
+  const [state, formAction, pending] = useActionState(signInAction, IDLE);
+  const [method, setMethod] = useState<Method>('driver');
   return (
     <div className="mt-6 rounded-xl bg-paper p-4 shadow">
       <div role="tablist" aria-label="How to sign in" className="grid grid-cols-2 gap-2">
@@ -28,56 +28,46 @@ export function SignInForm({ next }: { next?: string }) {
           </button>
         ))}
       </div>
-      <form action={formAction} noValidate className="mt-4 space-y-2" key={method}>
-        <input type="hidden" name="method" value={method} />
-        {next ? <input type="hidden" name="next" value={next} /> : null}
-        {method === 'driver' ? (
-          <>
-            <Field
-              label="Driver number"
-              name="driverNumber"
-              autoComplete="username"
-              autoCapitalize="characters"
-              required
-              defaultValue={state.values?.driverNumber}
-              error={errors.driverNumber}
-            />
-            <Field
-              label="PIN"
-              name="pin"
-              type="password"
-              inputMode="numeric"
-              autoComplete="current-password"
-              required
-              error={errors.pin}
-            />
-          </>
-        ) : (
-          <>
-            <Field
-              label="E-mail"
-              name="email"
-              type="email"
-              autoComplete="username"
-              required
-              defaultValue={state.values?.email}
-              error={errors.email}
-            />
-            <Field
-              label="Password"
-              name="password"
-              type="password"
-              autoComplete="current-password"
-              required
-              error={errors.password}
-            />
-          </>
-        )}
-        <FormError message={state.formError} />
-        <Button type="submit" disabled={pending} className="w-full">
-          {pending ? 'Signing in…' : 'Sign in'}
-        </Button>
-      </form>
+      <FormStateProvider value={state}>
+        <form action={formAction} noValidate className="mt-4 space-y-2" key={method}>
+          <input type="hidden" name="method" value={method} />
+          {next ? <input type="hidden" name="next" value={next} /> : null}
+          {method === 'driver' ? (
+            <>
+              <Field
+                label="Driver number"
+                name="driverNumber"
+                autoComplete="username"
+                autoCapitalize="characters"
+                required
+              />
+              <Field
+                label="PIN"
+                name="pin"
+                type="password"
+                inputMode="numeric"
+                autoComplete="current-password"
+                required
+              />
+            </>
+          ) : (
+            <>
+              <Field label="E-mail" name="email" type="email" autoComplete="username" required />
+              <Field
+                label="Password"
+                name="password"
+                type="password"
+                autoComplete="current-password"
+                required
+              />
+            </>
+          )}
+          <FormError message={state.formError} />
+          <Button type="submit" disabled={pending} className="w-full">
+            {pending ? 'Signing in…' : 'Sign in'}
+          </Button>
+        </form>
+      </FormStateProvider>
     </div>
   );
 }

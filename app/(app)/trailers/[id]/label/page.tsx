@@ -2,9 +2,9 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
 import { ButtonLink } from '@/app/_components/button';
-import { prepareLabelSheet } from '@/db/queries/labels';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
+import { prepareLabelSheet } from '@/lib/server/labels';
 import { LabelSheet } from '../../labels/_components/label-sheet';
 import { PrintButton } from '../../labels/_components/print-button';
 import { ReissueForm } from '../../labels/_components/reissue-form';
@@ -15,7 +15,7 @@ export default async function TrailerLabelPage({ params, searchParams }: PagePro
   const user = await requireUser(SECTION_ROLES.trailers);
   const id = z.uuid().safeParse((await params).id);
   if (!id.success) notFound();
-  const [trailer] = await prepareLabelSheet({ trailerIds: [id.data] }, user.id);
+  const [trailer] = await prepareLabelSheet(user, { trailerIds: [id.data] });
   if (!trailer) notFound();
   const wasReissued = (await searchParams).reissued === '1';
   return (

@@ -1,14 +1,6 @@
-import { labelLink } from '@/lib/server/labels';
 import { labelQrSvg } from '@/lib/labels/qr';
+import { labelLink, type SheetTrailer } from '@/lib/server/labels';
 import { LabelCard } from './label-card';
-
-export interface SheetTrailer {
-  id: string;
-  unitNumber: string;
-  vin: string;
-  ownerScac: string;
-  labelId: string;
-}
 
 /** The printable grid: one column on a phone, two per row on paper (four per Letter page). */
 export async function LabelSheet({ trailers }: { trailers: SheetTrailer[] }) {

@@ -1,9 +1,8 @@
-import { prepareLabelSheet } from '@/db/queries/labels';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { buildLabelPdf } from '@/lib/labels/label-pdf';
 import { refuse } from '@/lib/result';
 import { route } from '@/lib/server/api';
-import { labelLink } from '@/lib/server/labels';
+import { labelLink, prepareLabelSheet } from '@/lib/server/labels';
 import { labelSheetQuerySchema } from '@/lib/validation/labels';
 
 /** GET /trailers/labels/pdf?ids=…|row=… — the same labels as the printable sheet, as a PDF. */
@@ -14,7 +13,7 @@ export const GET = route(
     invalidMessage: 'Choose trailers or one row to print.',
   },
   async ({ user, query: q }) => {
-    const trailers = await prepareLabelSheet(q.row ? { rowId: q.row } : { trailerIds: q.ids! }, user.id);
+    const trailers = await prepareLabelSheet(user, q.row ? { rowId: q.row } : { trailerIds: q.ids! });
     if (trailers.length === 0)
       return refuse('not_found', 'None of those trailers are known, or the row is empty.');
     const pdf = await buildLabelPdf(

@@ -1,5 +1,5 @@
-// Ports and names of the local fakes (S3-compatible storage, SMTP inbox). One source for the
-// fakes script, the app's defaults and the tests. Real deployments set the S3_* and SMTP_* env vars.
+// Ports and names of the local fakes (S3-compatible storage, SMTP inbox), from scripts/env.sh.
+// The app reads its own S3_* and SMTP_* settings (lib/server/env.ts); these are only the fakes'.
 export const fakes = {
   s3Port: Number(process.env.HM_S3_PORT ?? 4569),
   smtpPort: Number(process.env.HM_SMTP_PORT ?? 2525),
