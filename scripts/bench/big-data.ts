@@ -188,18 +188,16 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
          FROM trailers t WHERE NOT EXISTS (SELECT 1 FROM handoffs h WHERE h.trailer_id = t.id)
         ORDER BY unit_number`,
     )
-  ).map(
-    (r, index): Trailer => ({
-      id: r.id,
-      unitNumber: r.unit_number,
-      kind: r.kind,
-      hingesPerDoor: r.hinges_per_door,
-      axleCount: r.axle_count,
-      tireLayout: r.tire_layout,
-      fuelTankGallons: r.fuel_tank_gallons,
-      index,
-    }),
-  );
+  ).map((r, index): Trailer => ({
+    id: r.id,
+    unitNumber: r.unit_number,
+    kind: r.kind,
+    hingesPerDoor: r.hinges_per_door,
+    axleCount: r.axle_count,
+    tireLayout: r.tire_layout,
+    fuelTankGallons: r.fuel_tank_gallons,
+    index,
+  }));
   const drivers = (
     await q<{ id: string; carrier_id: string; name: string }>(
       `SELECT id, carrier_id, name FROM users WHERE role = 'driver' ORDER BY driver_number`,
@@ -217,7 +215,10 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
       [t.id],
     );
     const share = t.id === rvb.id ? 0.9 : 0.66;
-    free.set(t.id, rows.slice(0, Math.floor(rows.length * share)).map((r) => r.id));
+    free.set(
+      t.id,
+      rows.slice(0, Math.floor(rows.length * share)).map((r) => r.id),
+    );
   }
   // which trailers end in a yard, and where
   const finalSpot = new Map<string, { terminalId: string; spotId: string }>();
@@ -359,18 +360,15 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
   await q(`CREATE TEMP TABLE bulk_trailer_final (trailer_id uuid, status trailer_status, terminal_id uuid,
              spot_id uuid, is_loaded boolean, fuel_eighths int, is_reefer_on boolean, setpoint_tenths_f int,
              gate_in_at timestamptz, last_seen_at timestamptz)`);
-  // the item table's indexes are rebuilt once after the load: far faster than 70 index updates per handoff
-  const itemIndexes = await q<{ name: string; def: string; isConstraint: boolean }>(
-    `SELECT i.relname AS name, pg_get_indexdef(x.indexrelid) AS def,
-            EXISTS (SELECT 1 FROM pg_constraint c WHERE c.conindid = x.indexrelid) AS "isConstraint"
-       FROM pg_index x JOIN pg_class i ON i.oid = x.indexrelid
-      WHERE x.indrelid = 'handoff_items'::regclass`,
-  );
-  for (const ix of itemIndexes)
-    await q(ix.isConstraint ? `ALTER TABLE handoff_items DROP CONSTRAINT ${ix.name}` : `DROP INDEX ${ix.name}`);
+  // the item table's indexes (as db/tables/gate.ts declares them) are built once after the load:
+  // far faster than 70 index updates per handoff. IF EXISTS: an interrupted run may have dropped them.
+  await q(`ALTER TABLE handoff_items DROP CONSTRAINT IF EXISTS handoff_items_pkey`);
+  await q(`DROP INDEX IF EXISTS handoff_items_handoff_item`);
+  await q(`DROP INDEX IF EXISTS handoff_items_item`);
   const totals: Record<string, number> = {};
   const flush = async () => {
-    for (const b of [H, I, P, C, E, F, HO, T]) totals[b.table] = (totals[b.table] ?? 0) + (await b.flush(client));
+    for (const b of [H, I, P, C, E, F, HO, T])
+      totals[b.table] = (totals[b.table] ?? 0) + (await b.flush(client));
   };
 
   const itemsByShape = new Map<string, ItemRowInput[]>();
@@ -406,7 +404,13 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
       const at = new Date(end - (n - 1 - k) * step + (k < n - 1 ? Math.floor(rand() * step * 0.3) : 0));
       const trip = Math.floor((k + (isDrop ? 1 : 0)) / 2);
       const driver = drivers[(t.index * 7 + trip * 3) % 5 === 0 ? 4 + (trip % 4) : (t.index + trip) % 4];
-      if (isDrop) terminalId = k === n - 1 && final ? final.terminalId : rand() < 0.7 ? home : terminals[Math.floor(rand() * terminals.length)].id;
+      if (isDrop)
+        terminalId =
+          k === n - 1 && final
+            ? final.terminalId
+            : rand() < 0.7
+              ? home
+              : terminals[Math.floor(rand() * terminals.length)].id;
       const id = randomUUID();
       seq++;
       const loaded = rand() < 0.55;
@@ -444,35 +448,134 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
       const pin = isDrop && !damage && r > 0.995 ? 'undercarriage.tandem_pin.right_rear' : null;
       if (damage && okRows.some((i) => i.itemKey === damage[0])) {
         items = okRows.map((i) =>
-          i.itemKey === damage[0]
-            ? { ...i, condition: 'damaged' as const, note: damage[1] }
-            : i,
+          i.itemKey === damage[0] ? { ...i, condition: 'damaged' as const, note: damage[1] } : i,
         );
         const sha = randomUUID().replace(/-/g, '') + randomUUID().replace(/-/g, '');
         shas.push(sha);
         const photoId = randomUUID();
-        P.push([photoId, `handoffs/${t.id}/${photoId}.jpg`, driver.id, t.id, id, damage[0], 'stored', 'image/jpeg', 180_000 + (seq % 90_000), sha, at]);
+        P.push([
+          photoId,
+          `handoffs/${t.id}/${photoId}.jpg`,
+          driver.id,
+          t.id,
+          id,
+          damage[0],
+          'stored',
+          'image/jpeg',
+          180_000 + (seq % 90_000),
+          sha,
+          at,
+        ]);
         const caseId = randomUUID();
         const age = now - at.getTime();
-        const state = age > 60 * DAY ? (rand() < 0.7 ? 'closed' : 'decided') : (['open', 'notified', 'disputed', 'decided'] as const)[seq % 4];
+        const state =
+          age > 60 * DAY
+            ? rand() < 0.7
+              ? 'closed'
+              : 'decided'
+            : (['open', 'notified', 'disputed', 'decided'] as const)[seq % 4];
         const decided = state === 'closed' || state === 'decided';
-        C.push([caseId, id, t.id, terminalId, driver.carrierId, state, 85_000, decided ? 'charge' : null, decided ? 85_000 : null, decided ? 'Damage found at the drop; the carrier held the trailer.' : null, state === 'open' ? null : new Date(at.getTime() + 14 * DAY), at, new Date(at.getTime() + (decided ? 10 : 1) * DAY), at]);
+        C.push([
+          caseId,
+          id,
+          t.id,
+          terminalId,
+          driver.carrierId,
+          state,
+          85_000,
+          decided ? 'charge' : null,
+          decided ? 85_000 : null,
+          decided ? 'Damage found at the drop; the carrier held the trailer.' : null,
+          state === 'open' ? null : new Date(at.getTime() + 14 * DAY),
+          at,
+          new Date(at.getTime() + (decided ? 10 : 1) * DAY),
+          at,
+        ]);
         E.push([caseId, 'opened', null, 'open', driver.id, `Opened by the drop of ${t.unitNumber}.`, at]);
-        if (state !== 'open') E.push([caseId, 'notified', 'open', 'notified', clerk.id, null, new Date(at.getTime() + HOUR)]);
-        F.push([id, t.id, damage[0], 'new', 'damaged', 'ok', prevId, driver.carrierId, driver.name, 'high', [], `${damage[0]}: ok at the previous handoff, damaged at this drop.`, caseId, at]);
+        if (state !== 'open')
+          E.push([caseId, 'notified', 'open', 'notified', clerk.id, null, new Date(at.getTime() + HOUR)]);
+        F.push([
+          id,
+          t.id,
+          damage[0],
+          'new',
+          'damaged',
+          'ok',
+          prevId,
+          driver.carrierId,
+          driver.name,
+          'high',
+          [],
+          `${damage[0]}: ok at the previous handoff, damaged at this drop.`,
+          caseId,
+          at,
+        ]);
       } else if (pin && okRows.some((i) => i.itemKey === pin)) {
         items = okRows.map((i) => (i.itemKey === pin ? { ...i, details: { isEngaged: false } } : i));
-        F.push([id, t.id, pin, 'pin_not_engaged', 'ok', null, null, null, null, null, null, 'Tandem locking pin, right rear is not engaged.', null, at]);
+        F.push([
+          id,
+          t.id,
+          pin,
+          'pin_not_engaged',
+          'ok',
+          null,
+          null,
+          null,
+          null,
+          null,
+          null,
+          'Tandem locking pin, right rear is not engaged.',
+          null,
+          at,
+        ]);
         openHold = { at: at.getTime() };
-        HO.push([t.id, id, 'out_of_service', 'pin_not_engaged', pin, 'Tandem locking pin, right rear is not engaged.', '49 CFR 393.207(b)', driver.id, at, k === n - 1 ? null : new Date(at.getTime() + HOUR), k === n - 1 ? null : jockey.id, k === n - 1 ? null : 'Pin engaged and checked.', k === n - 1 ? null : 'Yard mechanic', at]);
+        HO.push([
+          t.id,
+          id,
+          'out_of_service',
+          'pin_not_engaged',
+          pin,
+          'Tandem locking pin, right rear is not engaged.',
+          '49 CFR 393.207(b)',
+          driver.id,
+          at,
+          k === n - 1 ? null : new Date(at.getTime() + HOUR),
+          k === n - 1 ? null : jockey.id,
+          k === n - 1 ? null : 'Pin engaged and checked.',
+          k === n - 1 ? null : 'Yard mechanic',
+          at,
+        ]);
       }
       if (openHold && k < n - 1) openHold = null;
       const contentHash = handoffContentHash(hashableFromRows(row, items, shas));
       H.push([
-        id, t.id, terminalId, kind, 'full', row.carrierId, row.driverId, row.driverName, row.tractorNumber,
-        row.recordedById, row.isLoaded, row.sealNumber, row.fuelEighths, row.isReeferOn, row.setpointTenthsF,
-        row.returnAirTenthsF, row.engineHoursTenths, row.pretripResult, row.pretripAt, null, at,
-        `bulk-${id}`, null, row.verificationCode, prevHash, contentHash, at,
+        id,
+        t.id,
+        terminalId,
+        kind,
+        'full',
+        row.carrierId,
+        row.driverId,
+        row.driverName,
+        row.tractorNumber,
+        row.recordedById,
+        row.isLoaded,
+        row.sealNumber,
+        row.fuelEighths,
+        row.isReeferOn,
+        row.setpointTenthsF,
+        row.returnAirTenthsF,
+        row.engineHoursTenths,
+        row.pretripResult,
+        row.pretripAt,
+        null,
+        at,
+        `bulk-${id}`,
+        null,
+        row.verificationCode,
+        prevHash,
+        contentHash,
+        at,
       ]);
       for (const i of items)
         I.push([id, i.itemKey, i.condition, i.treadThirtySeconds, i.isHoldingAir, i.details, i.note, at]);
@@ -480,8 +583,18 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
       prevId = id;
       pending++;
       if (k === n - 1)
-        T.push([t.id, isDrop ? 'in_yard' : 'on_road', isDrop ? terminalId : null, isDrop ? (final?.spotId ?? null) : null,
-          row.isLoaded, row.fuelEighths, row.isReeferOn, row.setpointTenthsF, isDrop ? at : null, at]);
+        T.push([
+          t.id,
+          isDrop ? 'in_yard' : 'on_road',
+          isDrop ? terminalId : null,
+          isDrop ? (final?.spotId ?? null) : null,
+          row.isLoaded,
+          row.fuelEighths,
+          row.isReeferOn,
+          row.setpointTenthsF,
+          isDrop ? at : null,
+          at,
+        ]);
     }
     if (pending >= 2_000) {
       await flush();
@@ -495,14 +608,20 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
   await flush();
   log(`handoffs copied; rebuilding the item indexes (${Math.round((Date.now() - started) / 1000)} s)`);
   await q(`SET maintenance_work_mem = '512MB'`);
-  for (const ix of itemIndexes) {
-    if (ix.name.endsWith('_pkey')) await q(`ALTER TABLE handoff_items ADD CONSTRAINT ${ix.name} PRIMARY KEY (id)`);
-    else await q(ix.def);
-  }
+  await q(`ALTER TABLE handoff_items ADD CONSTRAINT handoff_items_pkey PRIMARY KEY (id)`);
+  await q(`CREATE UNIQUE INDEX handoff_items_handoff_item ON handoff_items (handoff_id, item_key)`);
+  await q(`CREATE INDEX handoff_items_item ON handoff_items (item_key)`);
   await q(`UPDATE trailers t SET status = f.status, current_terminal_id = f.terminal_id, current_spot_id = f.spot_id,
              is_loaded = f.is_loaded, fuel_eighths = f.fuel_eighths, is_reefer_on = f.is_reefer_on,
              setpoint_tenths_f = f.setpoint_tenths_f, gate_in_at = f.gate_in_at, last_seen_at = f.last_seen_at
              FROM bulk_trailer_final f WHERE f.trailer_id = t.id`);
+  // the current condition of every trailer (as migration 0004 fills it for stored handoffs)
+  if ((await q(`SELECT to_regclass('trailer_condition') AS t`))[0].t)
+    await q(`INSERT INTO trailer_condition (trailer_id, item_key, handoff_id, observed_at, condition)
+             SELECT DISTINCT ON (h.trailer_id, i.item_key) h.trailer_id, i.item_key, h.id, h.occurred_at, i.condition
+               FROM handoff_items i JOIN handoffs h ON h.id = i.handoff_id
+              ORDER BY h.trailer_id, i.item_key, h.occurred_at DESC, h.created_at DESC
+             ON CONFLICT DO NOTHING`);
   log(`handoffs written (${Math.round((Date.now() - started) / 1000)} s)`);
 
   // 4. yard moves and walks (no hash chain): one move per 10 handoffs, a walk a day at Riverbend

@@ -40,4 +40,5 @@ const counts = await addBigData(client, {
 });
 await client.end();
 console.log(`\nbig data set in database ${dbName}, made in ${seconds()}:`);
-for (const [table, n] of Object.entries(counts)) console.log(`  ${table.padEnd(14)} ${n.toLocaleString('en-US')}`);
+for (const [table, n] of Object.entries(counts))
+  console.log(`  ${table.padEnd(14)} ${n.toLocaleString('en-US')}`);

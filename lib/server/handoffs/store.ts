@@ -13,6 +13,7 @@ import {
   insertHandoffItems,
   insertHolds,
   insertOpenedCase,
+  recordCurrentCondition,
   updateTrailer,
 } from '@/db/queries/handoff-writes';
 import type { HandoffEvent, TimelineEvent } from '@/lib/engine';
@@ -70,6 +71,7 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
     items.rows.map((i) => ({ ...i, handoffId: id })),
   );
   await attachPhotos(tx, id, items.photoIds);
+  await recordCurrentCondition(tx, { trailerId: trailer.id, handoffId: id, observedAt: now }, items.rows);
 
   const caseId = ev.damageKeys.length
     ? await insertOpenedCase(
