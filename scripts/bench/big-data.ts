@@ -32,6 +32,8 @@ export type BigDataOptions = {
   /** Trailers with a very long history, and how many handoffs each. */
   heavyTrailers: number;
   heavyHandoffs: number;
+  /** Share of drops that find new damage (→ photo, finding, case). */
+  damageRate?: number;
   log?: (line: string) => void;
 };
 
@@ -444,8 +446,12 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
       let items = okRows;
       const shas: string[] = [];
       const r = rand();
-      const damage = isDrop && k > 0 && r < 0.012 ? DAMAGE_KEYS[seq % DAMAGE_KEYS.length] : null;
-      const pin = isDrop && !damage && r > 0.995 ? 'undercarriage.tandem_pin.right_rear' : null;
+      const damage =
+        isDrop && k > 0 && r < (o.damageRate ?? 0.012) ? DAMAGE_KEYS[seq % DAMAGE_KEYS.length] : null;
+      const pin =
+        isDrop && !damage && r > 1 - (o.damageRate ?? 0.012) / 2
+          ? 'undercarriage.tandem_pin.right_rear'
+          : null;
       if (damage && okRows.some((i) => i.itemKey === damage[0])) {
         items = okRows.map((i) =>
           i.itemKey === damage[0] ? { ...i, condition: 'damaged' as const, note: damage[1] } : i,
