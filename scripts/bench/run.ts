@@ -152,7 +152,11 @@ async function measure(
 ): Promise<Row> {
   const url = `${base}${o.path}`;
   // one warm-up request (compiles the route's code paths, fills caches)
-  if (!o.bodies) await (await fetch(url, { headers: { cookie: o.cookie ?? '' } })).arrayBuffer();
+  // (bounded: an endpoint that does not answer at all is reported as such, not waited for)
+  if (!o.bodies)
+    await fetch(url, { headers: { cookie: o.cookie ?? '' }, signal: AbortSignal.timeout(seconds * 2000) })
+      .then((r) => r.arrayBuffer())
+      .catch(() => undefined);
   const times: number[] = [];
   let errors = 0;
   let bytes = 0;
@@ -180,9 +184,9 @@ async function measure(
     name,
     connections: o.connections,
     rps: times.length / elapsed,
-    p50: pct(times, 50),
-    p95: pct(times, 95),
-    p99: pct(times, 99),
+    p50: Math.round(pct(times, 50)),
+    p95: Math.round(pct(times, 95)),
+    p99: Math.round(pct(times, 99)),
     errors,
     requests: times.length,
     kb: times.length ? bytes / times.length / 1024 : 0,
@@ -302,9 +306,10 @@ const table = [
   '',
   '| endpoint | conns | req/s | p50 ms | p95 ms | p99 ms | errors | KB/resp | p99 ÷ floor |',
   '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |',
-  ...rows.map(
-    (r) =>
-      `| ${r.name} | ${r.connections} | ${r.rps.toFixed(0)} | ${r.p50} | ${r.p95} | ${r.p99} | ${r.errors}/${r.requests} | ${r.kb.toFixed(1)} | ${(r.p99 / floor).toFixed(1)}× |`,
+  ...rows.map((r) =>
+    r.requests === 0
+      ? `| ${r.name} | ${r.connections} | 0 | — | — | — | no answer within ${seconds} s | — | — |`
+      : `| ${r.name} | ${r.connections} | ${r.rps.toFixed(1)} | ${r.p50} | ${r.p95} | ${r.p99} | ${r.errors}/${r.requests} | ${r.kb.toFixed(1)} | ${(r.p99 / floor).toFixed(1)}× |`,
   ),
   '',
 ].join('\n');

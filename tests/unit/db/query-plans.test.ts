@@ -101,7 +101,7 @@ describe('query plans on a generated data set', () => {
       const [q, v] = args as [string | { text: string; values?: unknown[] }, unknown[] | undefined];
       if (recording && this !== client) {
         const text = typeof q === 'string' ? q : q.text;
-        const values = (typeof q === 'string' ? v : q.values) ?? [];
+        const values = (typeof q === 'string' ? v : (q.values ?? v)) ?? [];
         if (/^\s*(select|with|insert|update|delete)\b/i.test(text))
           sent.push({ screen: recording, text, values });
       }
