@@ -57,9 +57,18 @@ function crossSite(request: Request): Refusal | null {
   return null;
 }
 
+/** A write sends JSON or no body at all: a form or text/plain post is refused even from our own pages. */
+function notJson(request: Request): Refusal | null {
+  const type = request.headers.get('content-type');
+  if (type && !JSON_TYPE.test(type)) return refuse('unsupported_type', 'Send the body as JSON.');
+  return null;
+}
+
+const JSON_TYPE = /^application\/json\b/i;
+
 async function readBody(request: Request, maxBytes: number): Promise<{ body: unknown } | Refusal> {
   const type = request.headers.get('content-type') ?? '';
-  if (!/^application\/json\b/i.test(type)) return refuse('unsupported_type', 'Send the body as JSON.');
+  if (!JSON_TYPE.test(type)) return refuse('unsupported_type', 'Send the body as JSON.');
   const declared = Number(request.headers.get('content-length') ?? 0);
   if (declared > maxBytes) return refuse('too_large', 'The request body is too large.');
   const text = await request.text();
@@ -132,7 +141,7 @@ export function route<
     let user: SessionUser | null = null;
     try {
       if (WRITES.has(request.method)) {
-        const refused = crossSite(request);
+        const refused = crossSite(request) ?? notJson(request);
         if (refused) return refusalResponse(refused);
       }
       user = await currentUser();
