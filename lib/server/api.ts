@@ -30,8 +30,13 @@ export function refusalResponse(r: Refusal, headers?: HeadersInit): Response {
     ...(r.fieldErrors ? { fieldErrors: r.fieldErrors } : {}),
     ...(r.detail ?? {}),
   };
-  return Response.json(body, { status: STATUS[r.code], headers });
+  const h = new Headers(headers);
+  // a refusal that passes with time says when to try again (RFC 9110 §10.2.3 Retry-After)
+  if (r.code === 'unavailable' && !h.has('retry-after')) h.set('retry-after', String(RETRY_AFTER_SECONDS));
+  return Response.json(body, { status: STATUS[r.code], headers: h });
 }
+
+const RETRY_AFTER_SECONDS = 30;
 
 export function apiError(code: RefusalCode, message: string, fieldErrors?: FieldErrors): Response {
   return refusalResponse(refuse(code, message, fieldErrors));
