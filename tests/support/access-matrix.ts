@@ -4,8 +4,9 @@
 // sends each page and route cell over HTTP to `next start`, and tests/unit/db/action-access.test.ts
 // calls each action as each visitor.
 //
-// Visitors: no session; a driver of the carrier that owns the record (D1001); a driver of another
-// carrier (D2001); the jockey; the clerk; the admin (all from the demo seed).
+// Visitors: no session; a driver of the carrier that owns the record (D2001, whose carrier has
+// cases and photos in the demo seed); a driver of another carrier (D1001); the jockey; the clerk;
+// the admin (all from the demo seed).
 
 export const VISITORS = ['none', 'driverOwn', 'driverOther', 'jockey', 'clerk', 'admin'] as const;
 export type Visitor = (typeof VISITORS)[number];

@@ -25,8 +25,8 @@ vi.mock('next/headers', () => ({ headers: async () => new Headers({ 'x-forwarded
 vi.mock('next/cache', () => ({ revalidatePath: () => undefined }));
 
 const ACCOUNTS: Record<Exclude<Visitor, 'none'>, { col: 'email' | 'driverNumber'; value: string }> = {
-  driverOwn: { col: 'driverNumber', value: 'D1001' },
-  driverOther: { col: 'driverNumber', value: 'D2001' },
+  driverOwn: { col: 'driverNumber', value: 'D2001' },
+  driverOther: { col: 'driverNumber', value: 'D1001' },
   jockey: { col: 'email', value: 'jockey@bramblecrest.example' },
   clerk: { col: 'email', value: 'clerk@bramblecrest.example' },
   admin: { col: 'email', value: 'admin@bramblecrest.example' },
