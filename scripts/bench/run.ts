@@ -26,7 +26,7 @@ const opt = (name: string) => {
 const label = opt('label') ?? 'latest';
 const seconds = Number(opt('seconds') ?? 8);
 const dbName = process.env.HM_BIG_DB ?? 'hitchmark_big';
-const port = Number(process.env.HM_BENCH_PORT ?? process.env.HM_E2E_PORT ?? 3301);
+const port = Number(process.env.HM_BENCH_PORT || process.env.HM_E2E_PORT || 3301);
 const base = opt('url') ?? `http://localhost:${port}`;
 const SUBMITS = Number(opt('submits') ?? 120);
 
