@@ -35,14 +35,19 @@ const client = new pg.Client({ connectionString: databaseUrl(dbName) });
 await client.connect();
 const one = async <T extends pg.QueryResultRow>(sql: string, params: unknown[] = []) =>
   (await client.query<T>(sql, params)).rows[0];
-const driver = await one<{ id: string; carrier_id: string; home_terminal_id: string; name: string }>(
-  `SELECT id, carrier_id, home_terminal_id, name FROM users WHERE driver_number = 'D1001'`,
+// session_version: a sealed cookie names the user's current one (lib/server/auth.ts)
+const driver = await one<{
+  id: string;
+  carrier_id: string;
+  home_terminal_id: string;
+  name: string;
+  session_version: number;
+}>(`SELECT id, carrier_id, home_terminal_id, name, session_version FROM users WHERE driver_number = 'D1001'`);
+const clerk = await one<{ id: string; home_terminal_id: string; session_version: number }>(
+  `SELECT id, home_terminal_id, session_version FROM users WHERE email = 'clerk@bramblecrest.example'`,
 );
-const clerk = await one<{ id: string; home_terminal_id: string }>(
-  `SELECT id, home_terminal_id FROM users WHERE email = 'clerk@bramblecrest.example'`,
-);
-const jockey = await one<{ id: string; home_terminal_id: string }>(
-  `SELECT id, home_terminal_id FROM users WHERE email = 'jockey@bramblecrest.example'`,
+const jockey = await one<{ id: string; home_terminal_id: string; session_version: number }>(
+  `SELECT id, home_terminal_id, session_version FROM users WHERE email = 'jockey@bramblecrest.example'`,
 );
 const longest = await one<{ trailer_id: string; n: string }>(
   `SELECT trailer_id, count(*) AS n FROM handoffs GROUP BY trailer_id ORDER BY count(*) DESC LIMIT 1`,
@@ -80,26 +85,34 @@ const onRoad = (
 await client.end();
 
 const secret = process.env.SESSION_SECRET ?? 'hitchmark-local-development-secret-not-for-production';
-const cookieFor = async (s: { userId: string; role: string; carrierId: string | null; terminalId: string }) =>
-  `hm_session=${await sealData(s, { password: secret, ttl: 60 * 60 * 12 })}`;
+const cookieFor = async (s: {
+  userId: string;
+  role: string;
+  carrierId: string | null;
+  terminalId: string;
+  version: number;
+}) => `hm_session=${await sealData(s, { password: secret, ttl: 60 * 60 * 12 })}`;
 const cookies = {
   driver: await cookieFor({
     userId: driver.id,
     role: 'driver',
     carrierId: driver.carrier_id,
     terminalId: driver.home_terminal_id,
+    version: driver.session_version,
   }),
   clerk: await cookieFor({
     userId: clerk.id,
     role: 'clerk',
     carrierId: null,
     terminalId: clerk.home_terminal_id,
+    version: clerk.session_version,
   }),
   jockey: await cookieFor({
     userId: jockey.id,
     role: 'jockey',
     carrierId: null,
     terminalId: jockey.home_terminal_id,
+    version: jockey.session_version,
   }),
 };
 const token = signLabelToken(
@@ -177,7 +190,8 @@ async function measure(
     if (status >= 400) errors++;
   });
   const result = await instance;
-  errors += result.errors + result.timeouts;
+  // autocannon counts a timed-out request among its errors too
+  errors += result.errors;
   times.sort((a, b) => a - b);
   const elapsed = result.duration || seconds;
   return {
@@ -308,7 +322,7 @@ const table = [
   '| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |',
   ...rows.map((r) =>
     r.requests === 0
-      ? `| ${r.name} | ${r.connections} | 0 | — | — | — | no answer within ${seconds} s | — | — |`
+      ? `| ${r.name} | ${r.connections} | 0 | — | — | — | no answer (${r.errors} errors or timeouts) | — | — |`
       : `| ${r.name} | ${r.connections} | ${r.rps.toFixed(1)} | ${r.p50} | ${r.p95} | ${r.p99} | ${r.errors}/${r.requests} | ${r.kb.toFixed(1)} | ${(r.p99 / floor).toFixed(1)}× |`,
   ),
   '',
