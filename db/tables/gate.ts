@@ -129,7 +129,12 @@ export const photos = pgTable(
     sha256: text('sha256').notNull(),
     createdAt: createdAt(),
   },
-  (t) => [index('photos_handoff').on(t.handoffId), index('photos_trailer').on(t.trailerId)],
+  (t) => [
+    index('photos_handoff').on(t.handoffId),
+    index('photos_trailer').on(t.trailerId),
+    // a case's history lists the photos attached to each of its events
+    index('photos_case_event').on(t.caseEventId),
+  ],
 );
 
 /** The engine's output for one handoff: one row per compared item or rule (fuel, pins, spare). */

@@ -34,6 +34,8 @@ export type BigDataOptions = {
   heavyHandoffs: number;
   /** Share of drops that find new damage (→ photo, finding, case). */
   damageRate?: number;
+  /** Days with a yard walk at Riverbend (default: one per 1,500 handoffs, at most 730). */
+  walkDays?: number;
   log?: (line: string) => void;
 };
 
@@ -640,7 +642,7 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
       WHERE h.kind = 'drop' AND h.idempotency_key LIKE 'bulk-%' AND abs(hashtext(h.id::text)) % 5 = 0`,
     [jockey.id],
   );
-  const days = Math.max(1, Math.min(730, Math.round(o.handoffs / 1500)));
+  const days = o.walkDays ?? Math.max(1, Math.min(730, Math.round(o.handoffs / 1500)));
   await q(
     `INSERT INTO yard_walks (terminal_id, started_by_id, row_ids, status, started_at, finished_at, summary)
      SELECT $1, $2, '[]'::jsonb, 'finished', now() - make_interval(days => d), now() - make_interval(days => d)
