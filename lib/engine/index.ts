@@ -31,6 +31,8 @@ export { assessFuel, eighthsToGallons, eighthsToLitres, expectedBurnGallons } fr
 export type { FuelInput } from './fuel';
 export { blocksHook, evaluateHolds, OUT_OF_SERVICE_CAUTION } from './holds';
 export type { HoldInput } from './holds';
+export { answerGroup, safetyGaps, safetyGroups, safetyItems, statedObservation } from './safety';
+export type { SafetyAnswers, SafetyGap, SafetyGroup, SafetyGroupKey } from './safety';
 export { reconcileWalk } from './reconcile';
 export type { ReconcileInput } from './reconcile';
 export { defaultPolicy, defaultPolicySources, makePolicy } from './policy';

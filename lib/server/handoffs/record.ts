@@ -13,7 +13,7 @@ import {
   lockTrailer,
 } from '@/db/queries/handoff-submit';
 import { skipCommitFlush } from '@/db/queries/handoff-writes';
-import { blocksHook } from '@/lib/engine';
+import { blocksHook, safetyGaps } from '@/lib/engine';
 import { evaluateHandoff } from '@/lib/handoffs/evaluation';
 import { holdReasons } from '@/lib/handoffs/holds';
 import { damageEvidenceErrors, normalizeItems } from '@/lib/handoffs/items';
@@ -88,8 +88,18 @@ export async function recordHandoff(
 
   const checklist = checklistOf(trailer);
   const items = normalizeItems(checklist, input.items);
-  if (Object.keys(items.fieldErrors).length)
-    abort(refuse('invalid', 'Some items need attention.', items.fieldErrors));
+  const gaps = safetyGaps(checklist, {
+    items: items.observations,
+    isLoaded: input.isLoaded,
+    isUnitOn: trailer.kind === 'reefer' ? input.reefer?.isUnitOn : null,
+  });
+  for (const g of gaps) items.fieldErrors[g.field] ??= [g.message];
+  if (Object.keys(items.fieldErrors).length) {
+    const message = gaps.length
+      ? `${gaps.length === 1 ? 'One safety item is' : `${gaps.length} safety items are`} not answered: look at each and answer it.`
+      : 'Some items need attention.';
+    abort(refuse('invalid', message, items.fieldErrors));
+  }
 
   const history = await loadTimeline(trailer.id, tx);
   const last = history.at(-1);

@@ -98,6 +98,30 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
     expect(body.fieldErrors.note).toEqual(['Remove the special characters from this note.']);
   });
 
+  it('a handoff with a safety item unanswered is a 422 naming that item, and nothing is stored', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    delete items['undercarriage.tandem_pin.right_rear'];
+    delete items['undercarriage.landing_gear.cross_shaft'];
+    items['undercarriage.fuel_tank.leaks'] = { condition: 'ok' }; // leaking or not: unanswered
+    const input = submitInput(trailer.id, carrierId, 'drop', items, new Date(), { isLoaded: true });
+    input.reefer = { ...input.reefer!, isUnitOn: null };
+    const res = await post(JSON.stringify(input));
+    expect(res.status).toBe(422);
+    const body = await res.json();
+    expect(body.message).toBe('4 safety items are not answered: look at each and answer it.');
+    expect(Object.keys(body.fieldErrors).sort()).toEqual([
+      'items.undercarriage.fuel_tank.leaks',
+      'items.undercarriage.landing_gear.cross_shaft',
+      'items.undercarriage.tandem_pin.right_rear',
+      'reefer.isUnitOn',
+    ]);
+    expect(body.fieldErrors['items.undercarriage.tandem_pin.right_rear']).toEqual([
+      'Tandem locking pin, right rear is a safety item: look at it and answer it in this handoff.',
+    ]);
+    expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(0);
+  });
+
   it('a hook of an out-of-service trailer is a 409 naming the holds, with the cautions to read', async () => {
     const { trailer, checklist } = await freshTrailer();
     const items = allOk(checklist);

@@ -4,6 +4,7 @@ import { useCallback } from 'react';
 import useSWR from 'swr';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
 import { Textarea } from '@/app/_components/field';
+import { safetyGroups } from '@/lib/engine';
 import { newDraft, type Draft, type DraftItem } from '@/lib/handoffs/draft';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { FuelButtons, ReeferFields } from './readings-fields';
@@ -29,6 +30,7 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
   const condition = data ?? initial;
   const { trailer, checklist, last } = condition;
   const isReefer = trailer.kind === 'reefer';
+  const groups = safetyGroups(checklist);
   const make = useCallback(
     () =>
       newDraft({
@@ -99,6 +101,7 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
             setItem={setItem}
             trailerId={trailer.id}
             fieldErrors={errors}
+            groups={groups}
           />
         ))}
       <Textarea
