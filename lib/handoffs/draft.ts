@@ -29,6 +29,8 @@ export type Draft = {
   items: Record<string, DraftItem>;
   spotId: string | null;
   note: string;
+  /** Asked at a hook of a "no perishable loads" trailer. */
+  isLoadPerishable?: boolean | null;
 };
 
 export function newDraft(init: {
@@ -91,6 +93,7 @@ export function draftToInput(d: Draft, isReefer: boolean): unknown {
     items,
     spotId: d.spotId,
     note: d.note,
+    isLoadPerishable: d.isLoadPerishable ?? null,
   };
 }
 

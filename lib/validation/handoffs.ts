@@ -124,6 +124,8 @@ export const handoffSubmitSchema = z
       .record(itemKeySchema, itemObservationSchema)
       .refine((r) => Object.keys(r).length <= 120, { error: 'Too many items.' }),
     spotId: z.uuid({ error: 'Choose a slot.' }).nullable().optional(),
+    /** Asked at a hook of a "no perishable loads" trailer. */
+    isLoadPerishable: z.boolean({ error: 'Say whether the load is perishable.' }).nullable().optional(),
     note: optionalNote(L.note, 'The note'),
     correctsHandoffId: z.uuid().nullable().optional(),
   })

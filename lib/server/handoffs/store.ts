@@ -42,6 +42,8 @@ export type CheckedHandoff = {
   openHolds: OpenHoldRow[];
   history: TimelineEvent[];
   sendReceipt: boolean;
+  /** The driver's answer at a hook of a "no perishable loads" trailer; null when not asked. */
+  isLoadPerishable: boolean | null;
 };
 
 export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitResult> {
@@ -64,7 +66,7 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
   });
   const shas = c.photos.map((p) => p.sha256);
   const contentHash = handoffContentHash(hashableFromRows(row, items.rows, shas));
-  await insertHandoff(tx, { ...row, contentHash });
+  await insertHandoff(tx, { ...row, contentHash, isLoadPerishable: c.isLoadPerishable });
   await insertHandoffItems(
     tx,
     items.rows.map((i) => ({ ...i, handoffId: id })),
@@ -121,6 +123,7 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
       itemKey: h.itemKey,
       reason: h.reason,
       source: h.source,
+      caution: h.caution,
       placedById: actor.id,
       placedAt: now,
     })),

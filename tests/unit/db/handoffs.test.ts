@@ -1,3 +1,4 @@
+import { OUT_OF_SERVICE_CAUTION } from '@/lib/engine';
 import { randomUUID } from 'node:crypto';
 import { and, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -123,7 +124,12 @@ describe('handoff submit service (real database)', () => {
     });
     expect(e.code).toBe('conflict');
     expect(e.detail?.holds).toEqual([
-      { reason: 'Tandem locking pin, left rear is not engaged.', severity: 'out_of_service' },
+      {
+        reason: 'Tandem locking pin, left rear is not engaged.',
+        severity: 'out_of_service',
+        restriction: null,
+        caution: OUT_OF_SERVICE_CAUTION,
+      },
     ]);
     const [t] = await db.select().from(trailers).where(eq(trailers.id, trailer.id));
     expect(t.status).toBe('in_yard');
@@ -142,7 +148,14 @@ describe('handoff submit service (real database)', () => {
     expect(e.code).toBe('conflict');
     // the caller reads the reasons only; the holds themselves were placed by the service
     expect(e.detail).toEqual({
-      holds: [{ reason: 'Tandem locking pin, right front is not engaged.', severity: 'out_of_service' }],
+      holds: [
+        {
+          reason: 'Tandem locking pin, right front is not engaged.',
+          severity: 'out_of_service',
+          restriction: null,
+          caution: OUT_OF_SERVICE_CAUTION,
+        },
+      ],
     });
     const placed = await db
       .select()

@@ -3,8 +3,10 @@
 import { useCallback } from 'react';
 import useSWR from 'swr';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
-import { Textarea } from '@/app/_components/field';
 import { safetyGroups } from '@/lib/engine';
+import { FieldError, Textarea } from '@/app/_components/field';
+import { HOOK_WORDS } from '@/lib/handoffs/holds';
+import { Choice } from './choice';
 import { newDraft, type Draft, type DraftItem } from '@/lib/handoffs/draft';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { FuelButtons, ReeferFields } from './readings-fields';
@@ -17,12 +19,14 @@ import { ZoneSection } from './zone-section';
 type Props = {
   condition: TrailerCondition;
   kind: 'drop' | 'hook';
+  /** A hook of a "no perishable loads" trailer asks whether the load is perishable. */
+  asksPerishable?: boolean;
   carriers: { id: string; name: string; scac: string }[];
   defaults: { carrierId: string; driverName: string; isDriver: boolean; carrierName?: string | null };
 };
 const fetcher = (url: string) => fetch(url).then((r) => r.json());
 
-export function HandoffForm({ condition: initial, kind, carriers, defaults }: Props) {
+export function HandoffForm({ condition: initial, kind, asksPerishable = false, carriers, defaults }: Props) {
   const { data } = useSWR<TrailerCondition>(`/api/trailers/${initial.trailer.id}/condition`, fetcher, {
     fallbackData: initial,
     revalidateOnMount: false,
@@ -67,6 +71,7 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
       }}
     >
       <Caution title="Your inspection">{CAUTIONS.inspection}</Caution>
+      {kind === 'hook' ? <Caution title="Coupling checks">{CAUTIONS.coupling}</Caution> : null}
       <WhoFields
         draft={draft}
         set={set}
@@ -75,6 +80,20 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
         carrierName={defaults.carrierName ?? null}
         errors={errors}
       />
+      {asksPerishable || errors.isLoadPerishable ? (
+        <div>
+          <Choice
+            label={HOOK_WORDS.perishableQuestion}
+            options={[
+              { value: true, label: 'Yes, perishable', tone: 'warn' },
+              { value: false, label: 'No, not perishable', tone: 'ok' },
+            ]}
+            value={draft.isLoadPerishable ?? null}
+            onChange={(v) => set({ isLoadPerishable: v })}
+          />
+          <FieldError id="isLoadPerishable-error" messages={errors.isLoadPerishable} />
+        </div>
+      ) : null}
       {isReefer ? (
         <FuelButtons
           value={draft.fuelEighths}
