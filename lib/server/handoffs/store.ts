@@ -73,20 +73,28 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
   );
   await attachPhotos(tx, id, items.photoIds);
 
-  const caseId = ev.damageKeys.length
-    ? await insertOpenedCase(
-        tx,
-        {
-          handoffId: id,
-          trailerId: trailer.id,
-          terminalId: terminal.id,
-          proposedCarrierId: ev.proposedCarrierId,
-          estimateCents: 0,
-          openedAt: now,
-        },
-        { actorId: actor.id, note: `Opened by the ${input.kind} of ${trailer.unitNumber}.` },
-      )
-    : null;
+  // new or worse damage, and damage no earlier inspection saw (followed, not attributed), open one case
+  const caseId =
+    ev.damageKeys.length || ev.unattributedKeys.length
+      ? await insertOpenedCase(
+          tx,
+          {
+            handoffId: id,
+            trailerId: trailer.id,
+            terminalId: terminal.id,
+            proposedCarrierId: ev.proposedCarrierId,
+            attributionNote: ev.attributionNote,
+            estimateCents: 0,
+            openedAt: now,
+          },
+          {
+            actorId: actor.id,
+            note:
+              `Opened by the ${input.kind} of ${trailer.unitNumber}.` +
+              (ev.attributionNote ? ` Marked "${ev.attributionNote}".` : ''),
+          },
+        )
+      : null;
   // a finding links to an earlier handoff only: the engine may also name a walk or a move
   const handoffIds = new Set(
     c.history.filter((e) => e.type === 'drop' || e.type === 'hook').map((e) => e.id),
