@@ -3,13 +3,14 @@
 import { useCallback } from 'react';
 import useSWR from 'swr';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
-import { safetyGroups } from '@/lib/engine';
 import { FieldError, Textarea } from '@/app/_components/field';
+import { safetyGroups } from '@/lib/engine';
+import { newDraft, sameAsLastForZone, type Draft, type DraftItem } from '@/lib/handoffs/draft';
 import { HOOK_WORDS } from '@/lib/handoffs/holds';
-import { Choice } from './choice';
-import { newDraft, type Draft, type DraftItem } from '@/lib/handoffs/draft';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
+import { Choice } from './choice';
 import { FuelButtons, ReeferFields } from './readings-fields';
+import { SAFETY_WORDS } from './safety-words';
 import { SubmitBar } from './submit-bar';
 import { newDraftKey, useDraft } from './use-draft';
 import { useSubmit } from './use-submit';
@@ -108,6 +109,19 @@ export function HandoffForm({ condition: initial, kind, asksPerishable = false, 
           set={(p) => setDraft((prev) => prev && { ...prev, reefer: { ...prev.reefer, ...p } })}
           errors={errors}
         />
+      ) : null}
+      {Object.keys(last).length ? (
+        <button
+          type="button"
+          onClick={() => {
+            for (const z of checklist.zones) {
+              for (const [key, v] of Object.entries(sameAsLastForZone(z.items, draft, last))) setItem(key, v);
+            }
+          }}
+          className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-white"
+        >
+          {SAFETY_WORDS.sameAsLastAll}
+        </button>
       ) : null}
       {checklist.zones
         .filter((z) => z.key !== 'readings')

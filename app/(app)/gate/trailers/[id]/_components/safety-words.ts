@@ -3,6 +3,7 @@ export const SAFETY_WORDS = {
   heading: 'Safety checks: look at each one',
   explain:
     'Pins, spare, tires, fuel leaks, door hinges and locks, and landing gear are never copied from the last record. Answer them from what you see now.',
+  sameAsLastAll: 'Same as last for every zone (safety items excluded)',
   notCopied: 'Safety item: answer from what you see now.',
   treadLabel: 'Shallowest tread you measured (32nds of an inch)',
   treadNeeded: 'Give the shallowest tread you measured first.',
