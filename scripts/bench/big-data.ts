@@ -623,7 +623,7 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
              is_loaded = f.is_loaded, fuel_eighths = f.fuel_eighths, is_reefer_on = f.is_reefer_on,
              setpoint_tenths_f = f.setpoint_tenths_f, gate_in_at = f.gate_in_at, last_seen_at = f.last_seen_at
              FROM bulk_trailer_final f WHERE f.trailer_id = t.id`);
-  // the current condition of every trailer (as migration 0007 fills it for stored handoffs)
+  // the current condition of every trailer (as migration 0008 fills it for stored handoffs)
   if ((await q(`SELECT to_regclass('trailer_condition') AS t`))[0].t)
     await q(`INSERT INTO trailer_condition (trailer_id, item_key, handoff_id, observed_at, condition)
              SELECT DISTINCT ON (h.trailer_id, i.item_key) h.trailer_id, i.item_key, h.id, h.occurred_at, i.condition
