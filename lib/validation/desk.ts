@@ -145,6 +145,8 @@ export const trailerFileQuerySchema = z.object({
     blankToUndefined,
     z.enum(TRAILER_FILE_KINDS, { error: 'Choose a kind from the list.' }).optional(),
   ),
+  /** `check`: re-hash the trailer's recorded photos against the record. */
+  photos: z.preprocess(blankToUndefined, z.enum(['check']).optional()),
 });
 
 export const reportQuerySchema = z.object({
