@@ -2,6 +2,8 @@
 // (the values the handoff chain hashes) and prints the counts; lists each photo that does not match.
 // Exit status: 0 all match, 1 some changed or missing, 2 bad usage or unknown terminal.
 // Usage: source scripts/env.sh && npx tsx --conditions=react-server scripts/check-photos.ts <terminal code>
+export {};
+
 const code = process.argv[2];
 if (!code || process.argv.length > 3) {
   console.error('usage: scripts/check-photos.ts <terminal code>');

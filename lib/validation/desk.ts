@@ -155,3 +155,6 @@ export const reportQuerySchema = z.object({
     z.coerce.number({ error: 'months must be a number' }).int().min(1).max(36).default(12),
   ),
 });
+
+/** Resend of a failed e-mail from the desk. */
+export const resendEmailSchema = z.object({ emailId: z.uuid({ error: 'Unknown e-mail.' }) });
