@@ -11,12 +11,15 @@ export const STALE_UPLOAD_MS = 24 * 60 * 60 * 1000;
 export async function removeStaleUploads(now = new Date()): Promise<{ expired: number; objects: number }> {
   const before = new Date(now.getTime() - STALE_UPLOAD_MS);
   const expired = await expirePendingPhotos(before);
+  const stale = new Set(expired.flatMap((p) => (p.pendingKey ? [p.pendingKey] : [])));
+  const stored = await listObjects(PENDING_PREFIX);
+  for (const o of stored) if (o.lastModified < before) stale.add(o.key);
+  const present = new Set(stored.map((o) => o.key));
   let objects = 0;
-  for (const o of await listObjects(PENDING_PREFIX)) {
-    if (o.lastModified < before) {
-      await deleteObject(o.key);
-      objects++;
-    }
+  for (const key of stale) {
+    if (!present.has(key)) continue; // never uploaded
+    await deleteObject(key);
+    objects++;
   }
   return { expired: expired.length, objects };
 }
