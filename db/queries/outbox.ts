@@ -17,7 +17,7 @@ export type OutgoingEmail = {
 };
 
 /** Sending attempts before an e-mail is marked failed (graphile-worker waits e^n seconds after the n-th). */
-export const MAIL_MAX_ATTEMPTS = 8;
+export const MAIL_MAX_ATTEMPTS = 10;
 export const SEND_EMAIL_TASK = 'send_email';
 const jobKey = (emailId: string) => `email:${emailId}`;
 
