@@ -4,7 +4,7 @@ const nextConfig = {
   poweredByHeader: false,
   // forbidden() renders app/forbidden.tsx with a 403 status.
   experimental: { authInterrupts: true, serverActions: { bodySizeLimit: '2mb' } },
-  serverExternalPackages: ['pg', 'nodemailer', 'pdf-lib'],
+  serverExternalPackages: ['pg', 'nodemailer', 'pdf-lib', 'graphile-worker'],
   // Static files skip proxy.ts (which sets the full set with the CSP nonce): they get these.
   async headers() {
     return [

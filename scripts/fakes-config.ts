@@ -5,4 +5,6 @@ export const fakes = {
   smtpPort: Number(process.env.HM_SMTP_PORT ?? 2525),
   mailHttpPort: Number(process.env.HM_MAIL_HTTP_PORT ?? 2580),
   bucket: process.env.S3_BUCKET ?? 'hitchmark-photos',
+  /** Where the S3 fake keeps objects (default .data/s3); tests give a folder of their own. */
+  s3Dir: process.env.HM_S3_DIR as string | undefined,
 };

@@ -2,6 +2,8 @@
 //  - s3rver: S3-compatible object storage on 127.0.0.1 (photos), bucket with CORS for browser PUTs
 //  - smtp-server + mailparser: an SMTP inbox; GET /messages on the HTTP port lists what arrived
 // Run: npx tsx scripts/fakes.ts   (scripts/start.sh and scripts/test.sh start it for you)
+// Each fake has its own error handlers: a client that drops its connection mid-send (ECONNRESET,
+// EPIPE) is logged and forgotten, so one fake's fault never stops the other.
 import { mkdirSync } from 'node:fs';
 import http from 'node:http';
 import { simpleParser } from 'mailparser';
@@ -9,7 +11,7 @@ import S3rver from 's3rver';
 import { SMTPServer } from 'smtp-server';
 import { fakes } from './fakes-config';
 
-const dataDir = new URL('../.data/s3', import.meta.url).pathname;
+const dataDir = fakes.s3Dir ?? new URL('../.data/s3', import.meta.url).pathname;
 mkdirSync(dataDir, { recursive: true });
 
 const cors = `<CORSConfiguration><CORSRule>
@@ -26,6 +28,12 @@ const s3 = new S3rver({
   configureBuckets: [{ name: fakes.bucket, configs: [cors] }],
 });
 await s3.run();
+const s3Server = s3.httpServer;
+s3Server.on('error', (error) => logFault('s3', error));
+s3Server.on('clientError', (error, socket) => {
+  logFault('s3', error);
+  socket.destroy();
+});
 
 type Message = {
   id: number;
@@ -60,6 +68,8 @@ const smtp = new SMTPServer({
       .catch((err: Error) => callback(err));
   },
 });
+// smtp-server re-emits every connection's socket error on the server: unhandled, it ends the process
+smtp.on('error', (error) => logFault('smtp', error));
 smtp.listen(fakes.smtpPort, '127.0.0.1');
 
 const inboxServer = http.createServer((req, res) => {
@@ -88,7 +98,35 @@ const inboxServer = http.createServer((req, res) => {
     );
   }
 });
+inboxServer.on('error', (error) => logFault('inbox', error));
+inboxServer.on('clientError', (error, socket) => {
+  logFault('inbox', error);
+  socket.destroy();
+});
 inboxServer.listen(fakes.mailHttpPort, '127.0.0.1');
+
+/** A dropped or broken client connection: logged, never fatal. */
+function logFault(fake: string, error: Error) {
+  console.error(`[${fake}] ${(error as NodeJS.ErrnoException).code ?? error.name}: ${error.message}`);
+}
+
+// Last resort: a connection error that escaped a handler (a stream inside a fake) is logged and
+// the fakes go on; any other error is a bug in this file and stops the process as usual.
+const CONNECTION_ERRORS = new Set([
+  'ECONNRESET',
+  'EPIPE',
+  'ECONNABORTED',
+  'ETIMEDOUT',
+  'ERR_STREAM_PREMATURE_CLOSE',
+]);
+process.on('uncaughtException', (error: NodeJS.ErrnoException) => {
+  if (error.code && CONNECTION_ERRORS.has(error.code)) {
+    logFault('connection', error);
+    return;
+  }
+  console.error(error);
+  process.exit(1);
+});
 
 function escape(s: string) {
   return s.replace(/[&<>"]/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;' })[c] ?? c);

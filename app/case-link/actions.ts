@@ -3,7 +3,6 @@
 import { revalidatePath } from 'next/cache';
 import { formAction } from '@/lib/server/action';
 import { disputeByLink } from '@/lib/server/desk/link-dispute';
-import { deliverDueEmails } from '@/lib/server/mail';
 import { linkDisputeSchema } from '@/lib/validation/desk';
 
 /** A dispute sent from the e-mailed link: no account; the signed token names the case and the carrier. */
@@ -12,7 +11,6 @@ export const disputeByLinkAction = formAction(
   async (_user, v) => {
     const result = await disputeByLink({ token: v.token, note: v.note });
     if (!result.ok) return result;
-    await deliverDueEmails().catch(() => undefined);
     revalidatePath(`/case-link/${v.token}`);
     return { ok: true, message: 'Your dispute is recorded. The terminal clerk will decide and e-mail you.' };
   },

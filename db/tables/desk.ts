@@ -1,4 +1,14 @@
-import { bigserial, index, integer, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import {
+  bigserial,
+  date,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import { at, caseStateEnum, conditionEnum, createdAt, decisionEnum, id, outboxStatusEnum } from './common';
 import { carriers, terminals, trailers, users } from './core';
 import { handoffs } from './gate';
@@ -116,4 +126,29 @@ export const auditLog = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index('audit_log_entity').on(t.entityType, t.entityId)],
+);
+
+/** One head of a trailer's handoff chain as anchored: its last record, that record's stored hash, how many records led to it. */
+export type AnchoredHead = { trailerId: string; handoffId: string; hash: string; count: number };
+
+/**
+ * A terminal's chain heads, fixed once a day and e-mailed to its managers (lib/server/jobs/anchor.ts).
+ * The e-mailed digest is the copy outside the database: a rewritten history no longer leads to it.
+ */
+export const chainAnchors = pgTable(
+  'chain_anchors',
+  {
+    id: id(),
+    terminalId: uuid('terminal_id')
+      .notNull()
+      .references(() => terminals.id),
+    /** The terminal's local day the anchor closes (anchored shortly after that day's midnight). */
+    day: date('day', { mode: 'string' }).notNull(),
+    digest: text('digest').notNull(),
+    heads: jsonb('heads').$type<AnchoredHead[]>().notNull(),
+    recordCount: integer('record_count').notNull(),
+    emailedTo: jsonb('emailed_to').$type<string[]>().notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('chain_anchors_terminal_day').on(t.terminalId, t.day)],
 );

@@ -115,7 +115,10 @@ export const photos = pgTable(
   'photos',
   {
     id: id(),
+    /** Where the checked photo lives; written only by the server at completion, never presigned. */
     objectKey: text('object_key').notNull().unique(),
+    /** Where the browser uploads it (a presigned PUT); read and deleted at completion. */
+    pendingKey: text('pending_key'),
     uploadedById: uuid('uploaded_by_id')
       .notNull()
       .references(() => users.id),

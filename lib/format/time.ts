@@ -48,3 +48,12 @@ export function fromLocalInput(value: string, timeZone: string): Date | null {
   const [y, mo, d, h, mi] = m.slice(1).map(Number);
   return new Date(new TZDate(y, mo - 1, d, h, mi, timeZone).getTime());
 }
+
+/** The terminal's local calendar day before the one `at` falls on, as `yyyy-MM-dd`. */
+export function previousLocalDay(at: Date, timeZone: string): string {
+  const local = new TZDate(at.getTime(), timeZone);
+  return format(
+    new TZDate(local.getFullYear(), local.getMonth(), local.getDate() - 1, 12, 0, timeZone),
+    'yyyy-MM-dd',
+  );
+}

@@ -31,3 +31,26 @@ export function uploadProblem(bytes: Uint8Array, announced: Announced): UploadPr
   }
   return null;
 }
+
+/** What re-reading a recorded photo from storage found. */
+export type PhotoCheckOutcome = 'matches' | 'changed' | 'missing';
+
+/**
+ * Whether the bytes in storage are still the photo the record hashed: `missing` when nothing is
+ * stored under its key, `changed` when the size or the SHA-256 (FIPS 180-4) differs.
+ */
+export function photoCheckOutcome(
+  bytes: Uint8Array | null,
+  recorded: { byteSize: number; sha256: string },
+): PhotoCheckOutcome {
+  if (bytes === null) return 'missing';
+  if (bytes.length !== recorded.byteSize) return 'changed';
+  return createHash('sha256').update(bytes).digest('hex') === recorded.sha256 ? 'matches' : 'changed';
+}
+
+/** How many photos came out each way. */
+export function countOutcomes(outcomes: readonly PhotoCheckOutcome[]): Record<PhotoCheckOutcome, number> {
+  const counts = { matches: 0, changed: 0, missing: 0 };
+  for (const o of outcomes) counts[o]++;
+  return counts;
+}

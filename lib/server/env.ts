@@ -34,8 +34,8 @@ const schema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   SMTP_SECURE: flag,
   MAIL_FROM: z.string().default('Hitchmark <no-reply@hitchmark.example>'),
-  HM_OUTBOX_WORKER: z.enum(['0', '1']).default('1'),
-  HM_OUTBOX_INTERVAL_MS: z.coerce.number().int().min(100).default(5_000),
+  /** '0': this server runs no job worker (e-mail, cleanup, anchors); another process must. */
+  HM_JOB_WORKER: z.enum(['0', '1']).default('1'),
 });
 
 export type Env = z.infer<typeof schema>;

@@ -1,11 +1,11 @@
 import 'server-only';
-// Sends what the outbox holds. Every e-mail is written to the outbox first (db/queries/outbox.ts,
-// in the same transaction as the record it is about), then delivered here and retried with
-// back-off until the SMTP server takes it, so none is lost while the mail server is down.
+// Sends one e-mail of the outbox. Every e-mail is written to the outbox first, with its sending
+// job, in the same transaction as the record it is about (db/queries/outbox.ts). The job queue
+// (lib/server/jobs) runs the `send_email` task, which comes here: the send happens outside any
+// database transaction, each attempt is written down, and the last allowed attempt marks the
+// e-mail failed for the desk to resend.
 import nodemailer, { type Transporter } from 'nodemailer';
-import { db } from '@/db';
-import { claimDueEmails, markEmailFailed, markEmailSent } from '@/db/queries/outbox';
-import { nextAttemptAt } from '@/lib/mail/retry';
+import { getEmail, markEmailAttemptFailed, markEmailSent } from '@/db/queries/outbox';
 import { env } from './env';
 
 let transporter: Transporter | null = null;
@@ -25,36 +25,36 @@ function getTransporter(): Transporter {
   return transporter;
 }
 
-/** Tries every due e-mail once. Returns how many were sent and how many failed this round. */
-export async function deliverDueEmails(now = new Date()): Promise<{ sent: number; failed: number }> {
-  let sent = 0;
-  let failed = 0;
-  await db.transaction(async (tx) => {
-    const due = await claimDueEmails(tx, now);
-    for (const email of due) {
-      try {
-        await getTransporter().sendMail({
-          from: env().MAIL_FROM,
-          to: email.toAddress,
-          subject: email.subject,
-          text: email.textBody,
-          html: email.htmlBody ?? undefined,
-        });
-        await markEmailSent(tx, email.id, now);
-        sent++;
-      } catch (error) {
-        const attempts = email.attempts + 1;
-        await markEmailFailed(tx, {
-          id: email.id,
-          attempts,
-          error: error instanceof Error ? error.message : String(error),
-          nextAttemptAt: nextAttemptAt(attempts, now),
-        });
-        failed++;
-      }
-    }
-  });
-  return { sent, failed };
+export type SendOutcome = 'sent' | 'already_sent' | 'unknown';
+
+/**
+ * One attempt at one outbox e-mail. `attempt` and `maxAttempts` are the job's: on a failed last
+ * attempt the e-mail is marked failed. A failure is rethrown so the queue schedules the next try.
+ */
+export async function sendOutboxEmail(
+  emailId: string,
+  attempt: { attempt: number; maxAttempts: number },
+): Promise<SendOutcome> {
+  const email = await getEmail(emailId);
+  if (!email) return 'unknown';
+  if (email.status === 'sent') return 'already_sent';
+  try {
+    await getTransporter().sendMail({
+      from: env().MAIL_FROM,
+      to: email.toAddress,
+      subject: email.subject,
+      text: email.textBody,
+      html: email.htmlBody ?? undefined,
+    });
+  } catch (error) {
+    await markEmailAttemptFailed(email.id, {
+      error: error instanceof Error ? error.message : String(error),
+      final: attempt.attempt >= attempt.maxAttempts,
+    });
+    throw error;
+  }
+  await markEmailSent(email.id);
+  return 'sent';
 }
 
 /** For tests: forget the cached transport (e.g. after changing SMTP_PORT and calling reloadEnv()). */

@@ -1,5 +1,11 @@
 import 'server-only';
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  ListObjectsV2Command,
+  PutObjectCommand,
+  S3Client,
+} from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { env } from './env';
 
@@ -32,12 +38,29 @@ const bucket = () => env().S3_BUCKET;
 const serverClient = () => client(env().S3_ENDPOINT);
 const publicClient = () => client(env().S3_PUBLIC_ENDPOINT ?? env().S3_ENDPOINT);
 
-/** A URL the browser PUTs the photo to, valid for `seconds`; the Content-Type header must match. */
-export function presignPhotoUpload(objectKey: string, contentType: string, seconds = 600): Promise<string> {
+/** How long a presigned upload URL stays valid: long enough for one photo on a slow yard network. */
+export const UPLOAD_URL_SECONDS = 120;
+
+/**
+ * A URL the browser PUTs the photo to, valid for `seconds`. Content-Type and Content-Length are
+ * signed: a PUT with another type or another length fails the signature (the browser sets
+ * Content-Length from the body itself). Only pending keys are ever presigned (see photos/uploads).
+ */
+export function presignPhotoUpload(
+  objectKey: string,
+  contentType: string,
+  byteSize: number,
+  seconds = UPLOAD_URL_SECONDS,
+): Promise<string> {
   return getSignedUrl(
     publicClient(),
-    new PutObjectCommand({ Bucket: bucket(), Key: objectKey, ContentType: contentType }),
-    { expiresIn: seconds },
+    new PutObjectCommand({
+      Bucket: bucket(),
+      Key: objectKey,
+      ContentType: contentType,
+      ContentLength: byteSize,
+    }),
+    { expiresIn: seconds, signableHeaders: new Set(['content-type', 'content-length']) },
   );
 }
 
@@ -96,4 +119,19 @@ export async function putObject(objectKey: string, body: Uint8Array, contentType
   await serverClient().send(
     new PutObjectCommand({ Bucket: bucket(), Key: objectKey, Body: body, ContentType: contentType }),
   );
+}
+
+/** Keys under `prefix` with when each was last written (every page of the listing). */
+export async function listObjects(prefix: string): Promise<{ key: string; lastModified: Date }[]> {
+  const out: { key: string; lastModified: Date }[] = [];
+  let token: string | undefined;
+  do {
+    const page = await serverClient().send(
+      new ListObjectsV2Command({ Bucket: bucket(), Prefix: prefix, ContinuationToken: token }),
+    );
+    for (const o of page.Contents ?? [])
+      if (o.Key) out.push({ key: o.Key, lastModified: o.LastModified ?? new Date(0) });
+    token = page.IsTruncated ? page.NextContinuationToken : undefined;
+  } while (token);
+  return out;
 }

@@ -179,6 +179,8 @@ export const trailerFileQuerySchema = z.object({
     blankToUndefined,
     z.enum(TRAILER_FILE_KINDS, { error: 'Choose a kind from the list.' }).optional(),
   ),
+  /** `check`: re-hash the trailer's recorded photos against the record. */
+  photos: z.preprocess(blankToUndefined, z.enum(['check']).optional()),
 });
 
 export const reportQuerySchema = z.object({
@@ -187,3 +189,6 @@ export const reportQuerySchema = z.object({
     z.coerce.number({ error: 'months must be a number' }).int().min(1).max(36).default(12),
   ),
 });
+
+/** Resend of a failed e-mail from the desk. */
+export const resendEmailSchema = z.object({ emailId: z.uuid({ error: 'Unknown e-mail.' }) });

@@ -25,6 +25,9 @@ export default async function setup(project: TestProject) {
   const { db, pool } = await import('../../db/index');
   const { seed } = await import('../../db/seed');
   await migrate(db, { migrationsFolder: 'db/migrations' });
+  const { runMigrations } = await import('graphile-worker');
+  const { databaseUrl } = await import('../../db/url');
+  await runMigrations({ connectionString: databaseUrl() });
   await seed();
   // a template cannot be copied while anyone is connected to it
   await pool.end();

@@ -25,6 +25,12 @@ export default async function AdminPage() {
         >
           Repair rate card
         </Link>
+        <Link
+          href="/admin/anchors"
+          className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand"
+        >
+          Record anchors
+        </Link>
       </nav>
       <section aria-labelledby="people">
         <h2 id="people" className="text-gate-lg font-bold">

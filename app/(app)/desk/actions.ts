@@ -7,13 +7,14 @@ import type { CaseCommand } from '@/lib/desk/case-state';
 import { formAction } from '@/lib/server/action';
 import type { SessionUser } from '@/lib/server/auth';
 import { runCaseCommand } from '@/lib/server/desk/case-command';
-import { deliverDueEmails } from '@/lib/server/mail';
+import { resendEmail } from '@/lib/server/jobs/mail-failures';
 import {
   closeCaseSchema,
   decideCaseSchema,
   disputeCaseSchema,
   notifyCaseSchema,
   overrideEstimateSchema,
+  resendEmailSchema,
 } from '@/lib/validation/desk';
 
 async function command(user: SessionUser, caseId: string, cmd: CaseCommand, message: string) {
@@ -22,8 +23,7 @@ async function command(user: SessionUser, caseId: string, cmd: CaseCommand, mess
     { caseId, command: cmd },
   );
   if (!result.ok) return result;
-  // the outbox worker retries anyway; this sends the e-mail at once when the mail server is up
-  await deliverDueEmails().catch(() => undefined);
+  // the e-mail and its sending job were queued with the case change; the job worker sends it
   revalidatePath(`/desk/cases/${caseId}`);
   revalidatePath('/desk');
   return { ok: true as const, message };
@@ -67,4 +67,15 @@ export const overrideEstimateAction = formAction(
 
 export const closeCaseAction = formAction({ roles: DESK_STAFF, schema: closeCaseSchema }, (user, v) =>
   command(user, v.caseId, { kind: 'close', note: v.note }, 'Case closed.'),
+);
+
+/** Queues a failed e-mail again (clerks and admins). */
+export const resendEmailAction = formAction(
+  { roles: DESK_STAFF, schema: resendEmailSchema },
+  async (_user, v) => {
+    const result = await resendEmail(v);
+    if (!result.ok) return result;
+    revalidatePath('/desk');
+    return { ok: true, message: 'Queued again; it goes out with the next attempt.' };
+  },
 );

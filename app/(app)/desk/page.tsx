@@ -7,9 +7,11 @@ import { isDeskStaff } from '@/lib/desk/access';
 import { formatMoney } from '@/lib/format/money';
 import { formatTime } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
+import { listFailedEmails } from '@/lib/server/jobs/mail-failures';
 import { CASE_PAGE_SIZE, caseCursor, caseQueueQuerySchema } from '@/lib/validation/desk';
 import { describeZodError } from '@/lib/validation/errors';
 import { CaseStateBadge } from './_components/case-state-badge';
+import { FailedMail } from './_components/failed-mail';
 import { QueueFilters } from './_components/queue-filters';
 
 export const metadata: Metadata = { title: 'Desk' };
@@ -28,11 +30,12 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
   const errors = parsed.success ? {} : describeZodError(parsed.error).fieldErrors;
   const isStaff = isDeskStaff(user.role);
   const now = new Date();
-  const [page, carriers] = await Promise.all([
+  const [page, carriers, failedMail] = await Promise.all([
     parsed.success
       ? listCases(user, { ...parsed.data, now, limit: CASE_PAGE_SIZE + 1 })
       : Promise.resolve([]),
     isStaff ? listCaseCarriers() : Promise.resolve([]),
+    isStaff ? listFailedEmails() : Promise.resolve([]),
   ]);
   const tz = user.terminalTimeZone ?? 'UTC';
   const rows = page.slice(0, CASE_PAGE_SIZE);
@@ -58,6 +61,7 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
           </Link>
         ) : null}
       </div>
+      {isStaff ? <FailedMail emails={failedMail} timeZone={tz} /> : null}
       {isStaff ? (
         <QueueFilters carriers={carriers} values={raw as Record<string, string>} errors={errors} />
       ) : null}

@@ -1,10 +1,8 @@
-import { after } from 'next/server';
 import { CAUTIONS } from '@/app/_components/caution';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { refuse, type Refusal } from '@/lib/result';
 import { route } from '@/lib/server/api';
 import { submitHandoff } from '@/lib/server/handoffs/submit';
-import { deliverDueEmails } from '@/lib/server/mail';
 import { handoffSubmitSchema } from '@/lib/validation/handoffs';
 
 type RefusedHold = { severity: string; restriction: string | null };
@@ -30,8 +28,7 @@ export const POST = route(
     const result = await submitHandoff(body, user);
     if (!result.ok) return withCautions(result);
     const { handoffId, verificationCode, isReplay } = result.value;
-    // the receipt e-mail was queued in the transaction; send it now rather than at the worker's next round
-    if (!isReplay) after(() => deliverDueEmails().catch(() => undefined));
+    // the receipt e-mail and its sending job were queued in the transaction; the job worker sends it
     return Response.json(
       { handoff: { id: handoffId, verificationCode, receiptUrl: `/gate/receipts/${handoffId}` } },
       { status: isReplay ? 200 : 201 },

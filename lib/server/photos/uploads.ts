@@ -1,5 +1,8 @@
 // A photo reaches storage in two calls: the announcement (type, size, SHA-256) answers a presigned
-// PUT URL; after the browser's PUT, completion reads the object back and checks it.
+// PUT URL to a pending key (short-lived, type and length signed); after the browser's PUT,
+// completion reads the pending object, checks it, and writes the very bytes it checked to the
+// photo's final key, which no presigned URL ever names. A later PUT to the old URL only reaches
+// the pending key, which nothing serves (and the daily cleanup removes).
 import 'server-only';
 import { randomUUID } from 'node:crypto';
 import { getOwnPhoto, insertPendingPhoto, setPhotoStatus } from '@/db/queries/photos';
@@ -9,10 +12,13 @@ import { isAllowedImageType, MAX_PHOTO_BYTES } from '@/lib/photos/image-type';
 import { done, refuse, type Result } from '@/lib/result';
 import { checklistOf } from '@/lib/trailers/checklist';
 import type { UploadRequestInput } from '@/lib/validation/handoffs';
-import { deleteObject, presignPhotoUpload, readObject } from '../storage';
+import { deleteObject, presignPhotoUpload, putObject, readObject } from '../storage';
 
 type Uploader = { id: string };
 type Stored = { photoId: string; status: 'stored' };
+/** Checked photos (written by the server only) and uploads waiting for their check (presigned). */
+export const PHOTO_PREFIX = 'photos/';
+export const PENDING_PREFIX = 'uploads/';
 const EXT = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp' } as const;
 
 /** Checks the declared type and size, records a pending photo and returns a presigned PUT URL. */
@@ -34,9 +40,12 @@ export async function createUpload(input: UploadRequestInput, user: Uploader) {
       itemKey: ['Unknown checklist item.'],
     });
   }
-  const objectKey = `photos/${trailer.id}/${randomUUID()}.${EXT[input.contentType]}`;
+  const name = `${randomUUID()}.${EXT[input.contentType]}`;
+  const objectKey = `${PHOTO_PREFIX}${trailer.id}/${name}`;
+  const pendingKey = `${PENDING_PREFIX}${trailer.id}/${name}`;
   const photoId = await insertPendingPhoto({
     objectKey,
+    pendingKey,
     uploadedById: user.id,
     trailerId: trailer.id,
     itemKey: input.itemKey,
@@ -46,7 +55,7 @@ export async function createUpload(input: UploadRequestInput, user: Uploader) {
   });
   return done({
     photoId,
-    uploadUrl: await presignPhotoUpload(objectKey, input.contentType),
+    uploadUrl: await presignPhotoUpload(pendingKey, input.contentType, input.byteSize),
     headers: { 'content-type': input.contentType },
   });
 }
@@ -60,14 +69,19 @@ export async function completeUpload(photoId: string, user: Uploader): Promise<R
   if (!p) return refuse('not_found', 'No such upload.');
   if (p.status === 'stored') return done({ photoId: p.id, status: 'stored' });
   if (p.status === 'rejected') return refuse('gone', 'This photo was refused; take it again.');
-  const bytes = await readObject(p.objectKey, MAX_PHOTO_BYTES);
+  if (!p.pendingKey) return refuse('conflict', 'This upload has no pending file; take the photo again.');
+  const bytes = await readObject(p.pendingKey, MAX_PHOTO_BYTES);
   if (!bytes) return refuse('conflict', 'The photo has not arrived yet; upload it again.');
   const problem = uploadProblem(bytes, p);
   if (problem) {
     await setPhotoStatus(p.id, 'rejected');
-    await deleteObject(p.objectKey);
+    await deleteObject(p.pendingKey);
     return refuse(problem.code, problem.message);
   }
+  // the bytes just checked, not a server-side copy of the pending key: a PUT racing this
+  // completion could change the pending object between the check and a copy
+  await putObject(p.objectKey, bytes, p.contentType);
   await setPhotoStatus(p.id, 'stored');
+  await deleteObject(p.pendingKey);
   return done({ photoId: p.id, status: 'stored' });
 }

@@ -25,7 +25,6 @@ vi.mock('next/navigation', () => ({
 }));
 vi.mock('next/cache', () => ({ revalidatePath: () => undefined }));
 // sending is the outbox's business; these tests look at the rows the actions write
-vi.mock('@/lib/server/mail', () => ({ deliverDueEmails: async () => ({ sent: 0, failed: 0 }) }));
 
 const desk = await import('@/app/(app)/desk/actions');
 const { releaseHoldAction } = await import('@/app/(app)/trailers/actions');

@@ -10,11 +10,23 @@ import { buildTrailerFile } from '@/lib/desk/trailer-file';
 import { formatTime, toLocalInput } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
+import { checkTrailerPhotos, type PhotoCheckReport } from '@/lib/server/photos/integrity';
 import { TRAILER_FILE_KINDS, trailerFileQuerySchema } from '@/lib/validation/desk';
 import { ChainStatus } from './_components/chain-status';
 import { HoldReleaseForm } from './_components/hold-release-form';
+import { PhotoCheckPanel } from './_components/photo-check';
 
 export const metadata: Metadata = { title: 'Trailer file' };
+
+/** The photo check, or `unavailable` when storage does not answer (the file itself still shows). */
+async function tryCheckPhotos(trailerId: string): Promise<PhotoCheckReport | 'unavailable'> {
+  try {
+    return await checkTrailerPhotos(trailerId);
+  } catch (error) {
+    console.error('[photos] check failed', error);
+    return 'unavailable';
+  }
+}
 
 const TONES = { danger: 'border-danger', ok: 'border-ok', hold: 'border-hold' } as const;
 
@@ -27,6 +39,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   const trailer = await getTrailerHeader(id);
   if (!trailer) notFound();
   const [rows, chain] = await Promise.all([getTrailerFileRows(id), verifyTrailerChain(id)]);
+  const photoCheck = query.success && query.data.photos === 'check' ? await tryCheckPhotos(id) : null;
   const zone = trailer.timeZone ?? user.terminalTimeZone ?? 'UTC';
   const entries = buildTrailerFile(rows, kind);
   const openHolds = rows.holds.filter((h) => !h.releasedAt);
@@ -47,6 +60,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
         </p>
       </header>
       <ChainStatus check={chain.check} brokenAt={chain.brokenAt} timeZone={zone} />
+      <PhotoCheckPanel trailerId={trailer.id} kind={kind} result={photoCheck} timeZone={zone} />
       {openHolds.length ? (
         <section aria-labelledby="holds" className="space-y-3 rounded-xl bg-hold-bg p-3">
           <h2 id="holds" className="text-gate-lg font-bold text-hold">

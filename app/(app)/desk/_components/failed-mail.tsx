@@ -1,0 +1,47 @@
+import { ActionForm } from '@/app/_components/action-form';
+import { formatTime } from '@/lib/format/time';
+import { resendEmailAction } from '../actions';
+
+type Failed = {
+  id: string;
+  to: string;
+  subject: string;
+  attempts: number;
+  lastError: string | null;
+  createdAt: Date;
+};
+
+/** E-mail the job queue gave up on after its attempts, each with a resend button (desk staff only). */
+export function FailedMail({ emails, timeZone }: { emails: Failed[]; timeZone: string }) {
+  if (!emails.length) return null;
+  return (
+    <section
+      aria-labelledby="failed-mail"
+      className="space-y-2 rounded-xl border-2 border-danger bg-danger-bg p-3"
+    >
+      <h2 id="failed-mail" className="text-gate-lg font-bold text-danger">
+        Mail that could not be sent ({emails.length})
+      </h2>
+      <ul className="space-y-2">
+        {emails.map((m) => (
+          <li key={m.id} className="space-y-1 rounded-lg bg-paper p-3" data-email-id={m.id}>
+            <p className="text-gate font-bold">{m.subject}</p>
+            <p className="text-gate-sm">
+              to {m.to} · queued {formatTime(m.createdAt, timeZone)} · {m.attempts}{' '}
+              {m.attempts === 1 ? 'attempt' : 'attempts'}
+            </p>
+            {m.lastError ? <p className="font-mono text-gate-sm text-ink-soft">{m.lastError}</p> : null}
+            <ActionForm
+              action={resendEmailAction}
+              hidden={{ emailId: m.id }}
+              submitLabel="Resend"
+              pendingLabel="Queueing…"
+              variant="secondary"
+              ariaLabel={`Resend: ${m.subject} to ${m.to}`}
+            />
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}
