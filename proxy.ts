@@ -6,6 +6,7 @@ import { env } from '@/lib/server/env';
 // Cheap redirects only: no session cookie → sign-in page (pages) or 401 (API). The real checks
 // sit next to the data (requireUser, route(), formAction()); this never opens the cookie or touches the db.
 // Every answer gets the security headers, with a fresh script nonce the pages render with.
+const WRITES = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 const PUBLIC_PREFIXES = ['/login', '/verify', '/api/verify', '/api/health', '/case-link/'];
 
 function uploadOrigin(): string | null {
@@ -32,6 +33,17 @@ export function proxy(request: NextRequest) {
   const pass = () => withHeaders(NextResponse.next({ request: { headers: forwarded } }));
 
   const { pathname, search } = request.nextUrl;
+  // The API takes JSON or no body (route() in lib/server/api.ts says the same). Refused here too, so
+  // a form-encoded post to an address with no handler (e.g. `/api/x/%2e%2e/y`) never reaches the
+  // framework's form parser, which answers a malformed one with a 500 (found by the fuzz suite).
+  if (pathname.startsWith('/api/') && WRITES.has(request.method)) {
+    const type = request.headers.get('content-type');
+    if (type && !/^application\/json\b/i.test(type)) {
+      return withHeaders(
+        NextResponse.json({ code: 'unsupported_type', message: 'Send the body as JSON.' }, { status: 415 }),
+      );
+    }
+  }
   if (PUBLIC_PREFIXES.some((p) => pathname === p.replace(/\/$/, '') || pathname.startsWith(p))) return pass();
   if (request.cookies.has(SESSION_COOKIE)) return pass();
   if (pathname.startsWith('/api/')) {

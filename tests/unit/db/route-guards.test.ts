@@ -122,3 +122,13 @@ describe('control characters in query and body fields are a 422 naming the field
     expect(changedTables(snapshot, await rowCounts(pool))).toEqual([]);
   });
 });
+
+describe('found by the fuzz suite', () => {
+  it('a stray % in a verification code is a 404, not a 500', async () => {
+    const { GET } = (await import('@/app/api/verify/[code]/route')) as unknown as { GET: Handler };
+    const res = await GET(new Request('http://localhost/api/verify/%25E'), {
+      params: Promise.resolve({ code: ' [wb%E' }),
+    });
+    expect(res.status).toBe(404);
+  });
+});

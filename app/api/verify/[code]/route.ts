@@ -7,7 +7,15 @@ import { verificationCodeSchema } from '@/lib/validation/handoffs';
 const paramsSchema = z.object({
   code: z
     .string()
-    .transform((c) => decodeURIComponent(c))
+    // a stray % in the path (found by the fuzz suite) is not a code, not a 500
+    .transform((c, ctx) => {
+      try {
+        return decodeURIComponent(c);
+      } catch {
+        ctx.addIssue({ code: 'custom', message: 'Not a verification code.' });
+        return z.NEVER;
+      }
+    })
     .pipe(verificationCodeSchema),
 });
 
