@@ -5,6 +5,7 @@ import { emailOutbox } from '@/db/schema';
 
 export type OutgoingEmail = {
   to: string;
+  cc?: string | null;
   subject: string;
   text: string;
   html?: string;
@@ -18,6 +19,7 @@ export async function enqueueEmail(email: OutgoingEmail, tx?: Tx): Promise<strin
     .insert(emailOutbox)
     .values({
       toAddress: email.to,
+      ccAddress: email.cc ?? null,
       subject: email.subject,
       textBody: email.text,
       htmlBody: email.html ?? null,

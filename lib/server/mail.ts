@@ -36,6 +36,7 @@ export async function deliverDueEmails(now = new Date()): Promise<{ sent: number
         await getTransporter().sendMail({
           from: env().MAIL_FROM,
           to: email.toAddress,
+          ...(email.ccAddress ? { cc: email.ccAddress } : {}),
           subject: email.subject,
           text: email.textBody,
           html: email.htmlBody ?? undefined,
