@@ -9,6 +9,7 @@ import { addJob } from './jobs';
 
 export type OutgoingEmail = {
   to: string;
+  cc?: string | null;
   subject: string;
   text: string;
   html?: string;
@@ -31,6 +32,7 @@ export async function enqueueEmail(email: OutgoingEmail, tx?: Tx): Promise<strin
       .insert(emailOutbox)
       .values({
         toAddress: email.to,
+        ccAddress: email.cc ?? null,
         subject: email.subject,
         textBody: email.text,
         htmlBody: email.html ?? null,

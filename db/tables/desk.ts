@@ -98,6 +98,8 @@ export const emailOutbox = pgTable(
   {
     id: id(),
     toAddress: text('to_address').notNull(),
+    /** One address in copy (a handoff receipt: the carrier's contact when it goes to the driver). */
+    ccAddress: text('cc_address'),
     subject: text('subject').notNull(),
     textBody: text('text_body').notNull(),
     htmlBody: text('html_body'),

@@ -23,6 +23,18 @@ export type ReceiptView = {
   photos: { id: string; itemKey: string | null }[];
 };
 
+/**
+ * Who gets a receipt: the driver when their account has an e-mail address, with the carrier's
+ * contact in copy; otherwise the carrier's contact alone. Pure.
+ */
+export function receiptRecipients(driverEmail: string | null, carrierEmail: string) {
+  if (!driverEmail) return { to: carrierEmail, cc: null };
+  return {
+    to: driverEmail,
+    cc: driverEmail.toLowerCase() === carrierEmail.toLowerCase() ? null : carrierEmail,
+  };
+}
+
 export const FINDING_WORDS: Record<string, string> = {
   new: 'New damage',
   worse: 'Worse than before',

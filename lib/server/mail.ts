@@ -42,6 +42,7 @@ export async function sendOutboxEmail(
     await getTransporter().sendMail({
       from: env().MAIL_FROM,
       to: email.toAddress,
+      ...(email.ccAddress ? { cc: email.ccAddress } : {}),
       subject: email.subject,
       text: email.textBody,
       html: email.htmlBody ?? undefined,

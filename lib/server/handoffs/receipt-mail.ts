@@ -5,10 +5,10 @@ import { enqueueEmail } from '@/db/queries/outbox';
 import { receiptSubject, receiptText, type ReceiptView } from '@/lib/handoffs/receipt';
 import { appUrl } from '../env';
 
-export async function enqueueReceiptEmail(tx: Tx, to: string, view: ReceiptView) {
+export async function enqueueReceiptEmail(tx: Tx, to: { to: string; cc: string | null }, view: ReceiptView) {
   await enqueueEmail(
     {
-      to,
+      ...to,
       subject: receiptSubject(view),
       text: receiptText(view, `${appUrl()}/verify`),
       relatedType: 'handoff',

@@ -21,6 +21,7 @@ import { hashableFromRows } from '@/lib/handoffs/canonical';
 import type { Evaluation } from '@/lib/handoffs/evaluation';
 import { handoffContentHash } from '@/lib/handoffs/hash';
 import { holdsNotYetOpen } from '@/lib/handoffs/holds';
+import { receiptRecipients } from '@/lib/handoffs/receipt';
 import type { normalizeItems } from '@/lib/handoffs/items';
 import { handoffRow, trailerAfter } from '@/lib/handoffs/submission';
 import { newVerificationCode } from '@/lib/handoffs/verification-code';
@@ -151,7 +152,7 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
   );
   if (c.sendReceipt) {
     const driverEmail = row.driverId ? await getUserEmail(tx, row.driverId) : null;
-    await enqueueReceiptEmail(tx, driverEmail ?? c.carrier.contactEmail, {
+    await enqueueReceiptEmail(tx, receiptRecipients(driverEmail, c.carrier.contactEmail), {
       handoffId: id,
       unitNumber: trailer.unitNumber,
       kind: input.kind,

@@ -58,7 +58,7 @@ export class HandoffFormPage {
     await this.page
       .getByLabel('Shallowest tread you measured (32nds of an inch)')
       .fill(String(treadThirtySeconds));
-    const statements = this.page.getByRole('button', { name: /: I looked at/ });
+    const statements = this.page.getByRole('button', { name: /: I looked/ });
     const n = await statements.count();
     expect(n).toBeGreaterThanOrEqual(5);
     for (let i = 0; i < n; i++) await statements.nth(i).click();

@@ -17,6 +17,7 @@ import {
   holds,
   photos,
   trailers,
+  users,
 } from '@/db/schema';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { handoffContentHash, verifyChain } from '@/lib/handoffs/hash';
@@ -96,10 +97,27 @@ describe('handoff submit service (real database)', () => {
     const mail = await db.select().from(emailOutbox).where(eq(emailOutbox.relatedId, first.handoffId));
     expect(mail).toHaveLength(1);
     expect(mail[0].toAddress).toBe('claims@bramblecrest.example');
+    expect(mail[0].ccAddress).toBeNull();
     expect(mail[0].textBody).toContain(trailer.unitNumber);
     expect(mail[0].textBody).toContain(
       `${first.verificationCode.slice(0, 4)}-${first.verificationCode.slice(4)}`,
     );
+  });
+
+  it('a driver with an e-mail address gets the receipt, with the carrier contact in copy', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const [carrier] = await db.select().from(carriers).where(eq(carriers.id, d2.carrierId!));
+    await db.update(users).set({ email: 'driver.d2001@example.test' }).where(eq(users.id, d2.id));
+    try {
+      const h = await recorded(submitInput(trailer.id, d2.carrierId!, 'drop', allOk(checklist), at(0)), d2, {
+        now: at(0),
+      });
+      const [mail] = await db.select().from(emailOutbox).where(eq(emailOutbox.relatedId, h.handoffId));
+      expect(mail.toAddress).toBe('driver.d2001@example.test');
+      expect(mail.ccAddress).toBe(carrier.contactEmail);
+    } finally {
+      await db.update(users).set({ email: null }).where(eq(users.id, d2.id));
+    }
   });
 
   it('refuses a second submit while another one holds the trailer row (55P03 → conflict)', async () => {

@@ -24,6 +24,13 @@ export default async function ReceiptPage({ params }: PageProps<'/gate/receipts/
         Recorded. A copy goes by e-mail; anyone holding it can check it on the verify page.
       </p>
       <ReceiptSummary receipt={receipt} showPhotos />
+      <a
+        href={`/gate/receipts/${receipt.handoffId}/pdf`}
+        download
+        className="block text-center text-gate font-bold text-brand underline"
+      >
+        Download the receipt (PDF)
+      </a>
       <ButtonLink href="/gate" className="w-full">
         Next trailer
       </ButtonLink>

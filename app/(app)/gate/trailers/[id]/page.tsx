@@ -43,6 +43,7 @@ export default async function HandoffStartPage({ params, searchParams }: PagePro
             kind={kind}
             asksPerishable={kind === 'hook' && restricted.some((h) => h.restriction === 'no_perishable')}
             carriers={carriers}
+            timeZone={user.terminalTimeZone ?? 'UTC'}
             defaults={{
               carrierId: user.role === 'driver' ? (user.carrierId ?? '') : '',
               driverName: user.role === 'driver' ? user.name : '',

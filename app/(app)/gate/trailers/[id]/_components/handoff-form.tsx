@@ -22,12 +22,21 @@ type Props = {
   kind: 'drop' | 'hook';
   /** A hook of a "no perishable loads" trailer asks whether the load is perishable. */
   asksPerishable?: boolean;
+  /** The terminal's IANA zone: the form's "Last:" times are read in it. */
+  timeZone: string;
   carriers: { id: string; name: string; scac: string }[];
   defaults: { carrierId: string; driverName: string; isDriver: boolean; carrierName?: string | null };
 };
 const fetcher = (url: string) => fetch(url).then((r) => r.json());
 
-export function HandoffForm({ condition: initial, kind, asksPerishable = false, carriers, defaults }: Props) {
+export function HandoffForm({
+  condition: initial,
+  kind,
+  asksPerishable = false,
+  timeZone,
+  carriers,
+  defaults,
+}: Props) {
   const { data } = useSWR<TrailerCondition>(`/api/trailers/${initial.trailer.id}/condition`, fetcher, {
     fallbackData: initial,
     revalidateOnMount: false,
@@ -135,6 +144,7 @@ export function HandoffForm({ condition: initial, kind, asksPerishable = false, 
             trailerId={trailer.id}
             fieldErrors={errors}
             groups={groups}
+            timeZone={timeZone}
           />
         ))}
       <Textarea

@@ -7,6 +7,7 @@ import { Choice } from './choice';
 import { ItemFields } from './item-fields';
 import { SAFETY_WORDS } from './safety-words';
 import { PhotoCapture } from '@/app/_components/photo-capture';
+import { formatTime } from '@/lib/format/time';
 
 const CONDITION_OPTIONS: {
   value: Exclude<Condition, 'not_checked'>;
@@ -41,14 +42,6 @@ export function describeObservation(o: DraftItem | LastSeen['observation']): str
   return parts.join(', ');
 }
 
-const when = (iso: string) =>
-  new Date(iso).toLocaleString(undefined, {
-    day: 'numeric',
-    month: 'short',
-    hour: '2-digit',
-    minute: '2-digit',
-  });
-
 export function ItemRow({
   item,
   value,
@@ -56,7 +49,10 @@ export function ItemRow({
   onChange,
   trailerId,
   errors,
+  timeZone,
 }: {
+  /** The terminal's zone: every time on the form is read in it (lib/format/time.ts). */
+  timeZone: string;
   item: ChecklistItem;
   value: DraftItem | undefined;
   last: LastSeen | undefined;
@@ -82,7 +78,7 @@ export function ItemRow({
       </div>
       {last && !isChanged ? (
         <p className="text-gate-sm text-ink-soft">
-          Last: {describeObservation(last.observation)} · {when(last.at)}, {last.by}
+          Last: {describeObservation(last.observation)} · {formatTime(last.at, timeZone)}, {last.by}
         </p>
       ) : null}
       {item.isSafety && !value ? (
@@ -117,7 +113,7 @@ export function ItemRow({
             <p className="font-bold">Last record</p>
             <p>{describeObservation(last.observation)}</p>
             <p className="text-ink-soft">
-              {when(last.at)}, {last.by}
+              {formatTime(last.at, timeZone)}, {last.by}
             </p>
           </div>
           <div className={`rounded p-2 ${evidence ? 'bg-danger-bg text-danger' : 'bg-ok-bg text-ok'}`}>

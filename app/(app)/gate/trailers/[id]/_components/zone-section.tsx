@@ -16,7 +16,9 @@ export function ZoneSection({
   trailerId,
   fieldErrors,
   groups,
+  timeZone,
 }: {
+  timeZone: string;
   groups: SafetyGroup[];
   zone: ChecklistZone;
   draft: Draft;
@@ -74,6 +76,7 @@ export function ZoneSection({
             trailerId={trailerId}
             errors={fieldErrors[`items.${i.key}`]}
             onChange={(v) => setItem(i.key, v)}
+            timeZone={timeZone}
           />
         ))}
       </ul>

@@ -1,0 +1,1 @@
+ALTER TABLE "email_outbox" ADD COLUMN "cc_address" text;

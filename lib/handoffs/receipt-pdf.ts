@@ -1,0 +1,96 @@
+// The handoff receipt as a PDF (US Letter): the receipt's own lines (times in the terminal's zone,
+// through formatWhen), the verification code, and a QR to the verify page with the code filled in.
+import { PDFDocument, rgb, StandardFonts, type PDFFont, type PDFPage } from 'pdf-lib';
+import QRCode from 'qrcode';
+import { receiptText, type ReceiptView } from './receipt';
+import { formatVerificationCode } from './verification-code';
+
+const PAGE = { width: 612, height: 792 }; // US Letter in points
+const MARGIN = 54;
+const SIZE = 10.5;
+const LEADING = 14;
+const QR_MARGIN = 4; // the quiet zone ISO/IEC 18004 asks for: four modules
+const INK = rgb(0, 0, 0);
+
+/** The link the receipt's QR encodes: the public verify page with this receipt's code. */
+export function receiptVerifyLink(verifyUrl: string, code: string): string {
+  return `${verifyUrl}?code=${encodeURIComponent(formatVerificationCode(code))}`;
+}
+
+// the standard PDF fonts encode WinAnsi only: anything else is written as a plain stand-in
+const winAnsi = (s: string) =>
+  s
+    .replace(/[‘’]/g, "'")
+    .replace(/[“”]/g, '"')
+    .replace(/[–—]/g, '-')
+    .replace(/…/g, '...')
+    .replace(/[^\x20-\x7e\xa0-\xff]/g, '?');
+
+function wrap(font: PDFFont, text: string, width: number): string[] {
+  const out: string[] = [];
+  let line = '';
+  for (const word of text.split(' ')) {
+    const next = line ? `${line} ${word}` : word;
+    if (font.widthOfTextAtSize(next, SIZE) <= width || !line) line = next;
+    else {
+      out.push(line);
+      line = word;
+    }
+  }
+  out.push(line);
+  return out;
+}
+
+function drawQr(page: PDFPage, link: string, x: number, y: number, target: number) {
+  const qr = QRCode.create(link, { errorCorrectionLevel: 'M' });
+  const { size, data } = qr.modules;
+  const m = Math.max(2, Math.floor(target / (size + 2 * QR_MARGIN)));
+  const side = (size + 2 * QR_MARGIN) * m;
+  page.drawRectangle({ x, y, width: side, height: side, color: rgb(1, 1, 1) });
+  for (let r = 0; r < size; r++)
+    for (let c = 0; c < size; c++)
+      if (data[r * size + c])
+        page.drawRectangle({
+          x: x + (c + QR_MARGIN) * m,
+          y: y + side - (r + 1 + QR_MARGIN) * m,
+          width: m,
+          height: m,
+          color: INK,
+        });
+  return side;
+}
+
+/** Builds the receipt PDF. `verifyUrl` is the app's public verify page (…/verify). */
+export async function buildReceiptPdf(view: ReceiptView, verifyUrl: string): Promise<Uint8Array> {
+  const doc = await PDFDocument.create();
+  doc.setTitle(`Hitchmark receipt ${formatVerificationCode(view.verificationCode)}`);
+  doc.setCreator('Hitchmark');
+  const font = await doc.embedFont(StandardFonts.Helvetica);
+  const bold = await doc.embedFont(StandardFonts.HelveticaBold);
+  let page = doc.addPage([PAGE.width, PAGE.height]);
+  let y = PAGE.height - MARGIN;
+  const link = receiptVerifyLink(verifyUrl, view.verificationCode);
+  const qrSide = drawQr(page, link, PAGE.width - MARGIN - 120, PAGE.height - MARGIN - 120, 120);
+  const textWidth = PAGE.width - 2 * MARGIN - qrSide - 12;
+  const lines = receiptText(view, verifyUrl).split('\n');
+  lines.forEach((raw, i) => {
+    const isTitle = i === 0;
+    const width = y > PAGE.height - MARGIN - qrSide - 8 ? textWidth : PAGE.width - 2 * MARGIN;
+    for (const line of raw ? wrap(isTitle ? bold : font, winAnsi(raw), width) : ['']) {
+      if (y < MARGIN) {
+        page = doc.addPage([PAGE.width, PAGE.height]);
+        y = PAGE.height - MARGIN;
+      }
+      if (line)
+        page.drawText(line, {
+          x: MARGIN,
+          y,
+          size: isTitle ? 14 : SIZE,
+          font: isTitle ? bold : font,
+          color: INK,
+        });
+      y -= isTitle ? 20 : LEADING;
+    }
+  });
+  return doc.save();
+}
