@@ -1,4 +1,6 @@
 import type { Metadata, Viewport } from 'next';
+import { cookies } from 'next/headers';
+import { parseTheme, THEME_COOKIE, themeAttribute } from '@/lib/theme/theme';
 import { hitchmarkFont } from './fonts';
 import './globals.css';
 
@@ -7,11 +9,20 @@ export const metadata: Metadata = {
   description: 'Trailer handoffs, holds, yard board and damage cases for a reefer terminal.',
 };
 
-export const viewport: Viewport = { width: 'device-width', initialScale: 1, themeColor: '#0b5c8a' };
+export const viewport: Viewport = {
+  width: 'device-width',
+  initialScale: 1,
+  themeColor: [
+    { media: '(prefers-color-scheme: light)', color: '#0b5c8a' },
+    { media: '(prefers-color-scheme: dark)', color: '#0b0f14' },
+  ],
+};
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // The theme switch's cookie, rendered on <html> by the server so a night page never flashes white.
+  const theme = parseTheme((await cookies()).get(THEME_COOKIE)?.value);
   return (
-    <html lang="en" className={hitchmarkFont.variable}>
+    <html lang="en" className={hitchmarkFont.variable} data-theme={themeAttribute(theme)}>
       <body className="min-h-screen">{children}</body>
     </html>
   );

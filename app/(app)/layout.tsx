@@ -1,6 +1,9 @@
 import Link from 'next/link';
+import { cookies } from 'next/headers';
+import { ThemeSwitch } from '@/app/_components/theme-switch';
 import { canOpen, SECTION_LABELS, type Section } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
+import { parseTheme, THEME_COOKIE } from '@/lib/theme/theme';
 import { NavLinks } from './_components/nav-links';
 import { signOutAction } from './_components/sign-out-action';
 
@@ -9,6 +12,7 @@ const SECTIONS: Section[] = ['gate', 'yard', 'desk', 'trailers', 'admin'];
 // The signed-in shell. Not a security check: every page and action checks for itself.
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const user = await requireUser();
+  const theme = parseTheme((await cookies()).get(THEME_COOKIE)?.value);
   const links = SECTIONS.filter((s) => canOpen(user.role, s)).map((s) => ({
     href: `/${s}`,
     label: SECTION_LABELS[s],
@@ -21,13 +25,14 @@ export default async function AppLayout({ children }: { children: React.ReactNod
       >
         Skip to content
       </a>
-      <header className="no-print bg-brand text-white">
+      <header className="no-print bg-brand text-on-fill">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2">
           <Link href="/" className="text-gate-lg font-bold">
             Hitchmark
           </Link>
           <NavLinks links={links} />
-          <div className="ml-auto flex items-center gap-3 text-gate-sm">
+          <div className="ml-auto flex flex-wrap items-center gap-3 text-gate-sm">
+            <ThemeSwitch initial={theme} onFill />
             <span>
               <span className="font-bold">{user.name}</span> · {user.role}
               {user.carrierScac ? ` · ${user.carrierScac}` : ''}
@@ -35,7 +40,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
             <form action={signOutAction}>
               <button
                 type="submit"
-                className="min-h-tap whitespace-nowrap rounded-lg border-2 border-white px-3 font-bold"
+                className="min-h-tap whitespace-nowrap rounded-lg border-2 border-on-fill px-3 font-bold"
               >
                 Sign out
               </button>

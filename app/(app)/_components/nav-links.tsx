@@ -17,7 +17,7 @@ export function NavLinks({ links }: { links: { href: string; label: string }[] }
             key={l.href}
             href={l.href}
             aria-current={active ? 'page' : undefined}
-            className={`flex min-h-tap items-center rounded-lg px-3 text-gate font-bold ${active ? 'bg-white text-brand' : 'hover:bg-brand-dark'}`}
+            className={`flex min-h-tap items-center rounded-lg px-3 text-gate font-bold ${active ? 'bg-paper text-brand' : 'hover:bg-brand-dark'}`}
           >
             {l.label}
           </Link>

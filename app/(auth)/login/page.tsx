@@ -1,7 +1,10 @@
 import type { Metadata } from 'next';
+import { cookies } from 'next/headers';
 import { redirect } from 'next/navigation';
+import { ThemeSwitch } from '@/app/_components/theme-switch';
 import { homeFor } from '@/lib/auth/roles';
 import { currentUser } from '@/lib/server/auth';
+import { parseTheme, THEME_COOKIE } from '@/lib/theme/theme';
 import { SignInForm } from './_components/sign-in-form';
 
 export const metadata: Metadata = { title: 'Sign in' };
@@ -10,6 +13,7 @@ export default async function LoginPage({ searchParams }: PageProps<'/login'>) {
   const user = await currentUser();
   if (user) redirect(homeFor(user.role));
   const params = await searchParams;
+  const theme = parseTheme((await cookies()).get(THEME_COOKIE)?.value);
   const next = typeof params.next === 'string' ? params.next : undefined;
   return (
     <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center p-4">
@@ -17,6 +21,7 @@ export default async function LoginPage({ searchParams }: PageProps<'/login'>) {
       <h1 className="mt-1 text-gate-lg font-bold">Sign in</h1>
       <p className="text-gate-sm text-ink-soft">Trailer handoffs, yard and desk for the terminal.</p>
       <SignInForm next={next} />
+      <ThemeSwitch initial={theme} className="mt-6" />
     </main>
   );
 }

@@ -19,14 +19,15 @@ function spotCell(spot: BoardSpot, policy: YardPolicy, isDimmed: boolean) {
   const low = isLowFuel(t, policy);
   // an empty reefer normally stands with its unit shut off (common practice); only a loaded one is a concern
   const off = isReeferOff(t) && t.isLoaded;
-  const tone = held ? ' h' : off ? ' o' : low ? ' f' : '';
+  // tones as in lib/theme/status.ts: out of service and reefer off red, restricted orange, low fuel amber
+  const tone = held === 'OOS' ? ' x' : off ? ' o' : held ? ' h' : low ? ' f' : '';
   return (
     <li key={spot.id} data-spot={spot.label} className={`ym-s${tone}${dim}`}>
       <b>{spot.label}</b>
       <strong>{t.unitNumber}</strong>
       {t.isLoaded ? 'Loaded' : 'Empty'}
       {held || low || off ? <br /> : null}
-      {held ? <i className="h">{held}</i> : null}
+      {held ? <i className={held === 'OOS' ? 'x' : 'h'}>{held}</i> : null}
       {low ? <i className="f">FUEL {t.fuelEighths}/8</i> : null}
       {off ? <i className="o">OFF</i> : null}
     </li>

@@ -22,7 +22,7 @@ export function SignInForm({ next }: { next?: string }) {
             role="tab"
             aria-selected={method === m}
             onClick={() => setMethod(m)}
-            className={`min-h-tap rounded-lg text-gate font-bold ${method === m ? 'bg-brand text-white' : 'bg-paper-dim text-ink'}`}
+            className={`min-h-tap rounded-lg text-gate font-bold ${method === m ? 'bg-brand text-on-fill' : 'bg-paper-dim text-ink'}`}
           >
             {m === 'driver' ? 'Driver' : 'Terminal staff'}
           </button>
