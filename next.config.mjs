@@ -1,3 +1,19 @@
+import withSerwistInit from '@serwist/next';
+import createNextIntlPlugin from 'next-intl/plugin';
+
+// English and Spanish: the reader's language from the hm-locale cookie (see docs/i18n.md).
+const withNextIntl = createNextIntlPlugin('./lib/server/i18n/request.ts');
+
+// The service worker (app/sw.ts → public/sw.js). Built by webpack: `next build --webpack`
+// (Serwist's Next plugin does not run under Turbopack). Off in `next dev`.
+const withSerwist = withSerwistInit({
+  swSrc: 'app/sw.ts',
+  swDest: 'public/sw.js',
+  cacheOnNavigation: true,
+  reloadOnOnline: false,
+  disable: process.env.NODE_ENV !== 'production',
+});
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   reactStrictMode: true,
@@ -7,4 +23,4 @@ const nextConfig = {
   serverExternalPackages: ['pg', 'nodemailer', 'pdf-lib'],
 };
 
-export default nextConfig;
+export default withSerwist(withNextIntl(nextConfig));

@@ -1,5 +1,7 @@
 import type { Metadata, Viewport } from 'next';
 import { cookies } from 'next/headers';
+import { NextIntlClientProvider } from 'next-intl';
+import { getLocale } from 'next-intl/server';
 import { parseTheme, THEME_COOKIE, themeAttribute } from '@/lib/theme/theme';
 import { hitchmarkFont } from './fonts';
 import './globals.css';
@@ -21,9 +23,12 @@ export const viewport: Viewport = {
 export default async function RootLayout({ children }: { children: React.ReactNode }) {
   // The theme switch's cookie, rendered on <html> by the server so a night page never flashes white.
   const theme = parseTheme((await cookies()).get(THEME_COOKIE)?.value);
+  const locale = await getLocale();
   return (
-    <html lang="en" className={hitchmarkFont.variable} data-theme={themeAttribute(theme)}>
-      <body className="min-h-screen">{children}</body>
+    <html lang={locale} className={hitchmarkFont.variable} data-theme={themeAttribute(theme)}>
+      <body className="min-h-screen">
+        <NextIntlClientProvider>{children}</NextIntlClientProvider>
+      </body>
     </html>
   );
 }

@@ -1,7 +1,9 @@
 import Link from 'next/link';
 import { cookies } from 'next/headers';
 import { ThemeSwitch } from '@/app/_components/theme-switch';
-import { canOpen, SECTION_LABELS, type Section } from '@/lib/auth/roles';
+import { getTranslations } from 'next-intl/server';
+import { LanguageSwitch } from '@/app/_components/language-switch';
+import { canOpen, type Section } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { parseTheme, THEME_COOKIE } from '@/lib/theme/theme';
 import { NavLinks } from './_components/nav-links';
@@ -13,9 +15,10 @@ const SECTIONS: Section[] = ['gate', 'yard', 'desk', 'trailers', 'admin'];
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const user = await requireUser();
   const theme = parseTheme((await cookies()).get(THEME_COOKIE)?.value);
+  const t = await getTranslations('Shell');
   const links = SECTIONS.filter((s) => canOpen(user.role, s)).map((s) => ({
     href: `/${s}`,
-    label: SECTION_LABELS[s],
+    label: t(`section.${s}`),
   }));
   return (
     <div className="min-h-screen">
@@ -23,18 +26,19 @@ export default async function AppLayout({ children }: { children: React.ReactNod
         href="#main"
         className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper focus:p-2"
       >
-        Skip to content
+        {t('skip')}
       </a>
       <header className="no-print bg-brand text-on-fill">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2">
           <Link href="/" className="text-gate-lg font-bold">
             Hitchmark
           </Link>
-          <NavLinks links={links} />
+          <NavLinks links={links} label={t('sections')} />
           <div className="ml-auto flex flex-wrap items-center gap-3 text-gate-sm">
             <ThemeSwitch initial={theme} onFill />
+            <LanguageSwitch onFill />
             <span>
-              <span className="font-bold">{user.name}</span> · {user.role}
+              <span className="font-bold">{user.name}</span> · {t(`role.${user.role}`)}
               {user.carrierScac ? ` · ${user.carrierScac}` : ''}
             </span>
             <form action={signOutAction}>
@@ -42,7 +46,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
                 type="submit"
                 className="min-h-tap whitespace-nowrap rounded-lg border-2 border-on-fill px-3 font-bold"
               >
-                Sign out
+                {t('signOut')}
               </button>
             </form>
           </div>

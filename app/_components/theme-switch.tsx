@@ -1,9 +1,8 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useState } from 'react';
-import { THEME_COOKIE, themeAttribute, type Theme } from '@/lib/theme/theme';
-
-const LABELS: Record<Theme, string> = { auto: 'Auto', light: 'Day', dark: 'Night' };
+import { THEME_COOKIE, THEMES, themeAttribute, type Theme } from '@/lib/theme/theme';
 
 function applyTheme(theme: Theme) {
   document.cookie = `${THEME_COOKIE}=${theme}; path=/; max-age=31536000; samesite=lax`;
@@ -26,22 +25,23 @@ export function ThemeSwitch({
   onFill?: boolean;
   className?: string;
 }) {
+  const t = useTranslations('Theme');
   const [theme, setTheme] = useState<Theme>(initial);
   function choose(next: Theme) {
     setTheme(next);
     applyTheme(next);
   }
   return (
-    <div role="group" aria-label="Screen" className={`flex gap-1 ${className}`}>
-      {(Object.keys(LABELS) as Theme[]).map((t) => (
+    <div role="group" aria-label={t('label')} className={`flex gap-1 ${className}`}>
+      {THEMES.map((option) => (
         <button
-          key={t}
+          key={option}
           type="button"
-          aria-pressed={theme === t}
-          onClick={() => choose(t)}
+          aria-pressed={theme === option}
+          onClick={() => choose(option)}
           className={`min-h-tap min-w-tap rounded-lg border-2 border-current px-2 text-gate-sm font-bold ${onFill ? 'aria-pressed:bg-paper aria-pressed:text-brand' : 'text-brand aria-pressed:border-brand aria-pressed:bg-brand aria-pressed:text-on-fill'}`}
         >
-          {LABELS[t]}
+          {t(option)}
         </button>
       ))}
     </div>
