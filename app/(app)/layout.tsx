@@ -30,7 +30,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
       </a>
       <header className="no-print bg-brand text-on-fill">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2">
-          <Link href="/" className="text-gate-lg font-bold">
+          <Link href="/" className="inline-flex min-h-tap items-center text-gate-lg font-bold">
             Hitchmark
           </Link>
           <NavLinks links={links} label={t('sections')} />
