@@ -18,6 +18,8 @@ const config: Config = {
         warn: { DEFAULT: 'var(--hm-warn)', bg: 'var(--hm-warn-bg)' },
         danger: { DEFAULT: 'var(--hm-danger)', bg: 'var(--hm-danger-bg)' },
         hold: { DEFAULT: 'var(--hm-hold)', bg: 'var(--hm-hold-bg)' },
+        // a loaded reefer whose unit is not running
+        off: { DEFAULT: 'var(--hm-off)', bg: 'var(--hm-off-bg)' },
       },
       fontFamily: { sans: ['var(--font-hitchmark)', 'system-ui', 'sans-serif'] },
       fontSize: {

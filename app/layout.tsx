@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from 'next';
 import { cookies } from 'next/headers';
+import { connection } from 'next/server';
 import { NextIntlClientProvider } from 'next-intl';
 import { getLocale } from 'next-intl/server';
 import { parseTheme, THEME_COOKIE, themeAttribute } from '@/lib/theme/theme';
@@ -21,6 +22,8 @@ export const viewport: Viewport = {
 };
 
 export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page renders per request: its scripts carry the nonce of that response's CSP (proxy.ts).
+  await connection();
   // The theme switch's cookie, rendered on <html> by the server so a night page never flashes white.
   const theme = parseTheme((await cookies()).get(THEME_COOKIE)?.value);
   const locale = await getLocale();

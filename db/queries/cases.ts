@@ -67,6 +67,7 @@ export async function getCase(id: string, viewer: CaseViewer) {
       trailerId: cases.trailerId,
       terminalId: cases.terminalId,
       proposedCarrierId: cases.proposedCarrierId,
+      attributionNote: cases.attributionNote,
       estimateCents: cases.estimateCents,
       overrideCents: cases.overrideCents,
       overrideReason: cases.overrideReason,

@@ -19,6 +19,8 @@ export const cases = pgTable(
       .notNull()
       .references(() => terminals.id),
     proposedCarrierId: uuid('proposed_carrier_id').references(() => carriers.id),
+    /** Set when the case holds damage with no earlier inspection: "no earlier inspection: not attributed". */
+    attributionNote: text('attribution_note'),
     state: caseStateEnum('state').notNull().default('open'),
     estimateCents: integer('estimate_cents').notNull().default(0),
     overrideCents: integer('override_cents'),

@@ -61,6 +61,8 @@ export const handoffs = pgTable(
     pretripResult: pretripEnum('pretrip_result'),
     pretripAt: at('pretrip_at'),
     note: text('note'),
+    /** A hook of a "no perishable loads" trailer: the driver's answer to "is the load perishable?" */
+    isLoadPerishable: boolean('is_load_perishable'),
     occurredAt: at('occurred_at').notNull(),
     idempotencyKey: text('idempotency_key').notNull().unique(),
     correctsHandoffId: uuid('corrects_handoff_id'),
@@ -167,6 +169,8 @@ export const holds = pgTable(
     itemKey: text('item_key'),
     reason: text('reason').notNull(),
     source: text('source').notNull(),
+    /** The safety caution shown with the hold (the engine's, at the time it was placed). */
+    caution: text('caution'),
     placedById: uuid('placed_by_id').references(() => users.id),
     placedAt: at('placed_at').notNull().defaultNow(),
     releasedAt: at('released_at'),

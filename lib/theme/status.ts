@@ -7,8 +7,8 @@ export const STATUS_TONES = {
   outOfService: 'danger',
   restricted: 'hold',
   lowFuel: 'warn',
-  // a loaded reefer whose unit is not running: the load warms (common practice: treat as urgent)
-  reeferOff: 'danger',
+  // a loaded reefer whose unit is not running: the load warms; its own violet, apart from the holds
+  reeferOff: 'off',
 } as const;
 
 export type TrailerStatus = keyof typeof STATUS_TONES;

@@ -3,17 +3,31 @@ import { CASE_STATES, DECISIONS } from '@/lib/desk/case-state';
 import { parseDollarsToCents } from '@/lib/desk/estimate';
 import { noteText, plainText } from './text';
 
+/** The largest amount a person may type: $1,000,000.00. */
+const MAX_CENTS = 100_000_000;
+
+/** What is actually wrong with a typed amount, in words a clerk can read out. */
+export function dollarsProblem(text: string, cents: number | null): string {
+  const t = text.trim();
+  if (t === '') return 'Enter an amount in dollars, like 425.00.';
+  if (/^-/.test(t)) return 'An amount cannot be negative.';
+  const rough = Number(t.replace(/[$,\s]/g, ''));
+  if ((cents !== null && cents > MAX_CENTS) || (Number.isFinite(rough) && rough * 100 > MAX_CENTS))
+    return 'An amount is at most $1,000,000.00.';
+  if (/^\$?\s*[\d,]+\.\d{3,}$/.test(t)) return 'Use at most two decimals (cents), like 425.50.';
+  if (/^\$?\s*[\d,]*\.?\d*$/.test(t) && /\d/.test(t))
+    return 'Put commas only between groups of three digits, like 1,250.00.';
+  return 'Enter an amount in dollars using digits only, like 425.00.';
+}
+
 /** A dollar amount typed by a person ("1,234.56"), read as whole cents without floating point. */
 export const dollarsSchema = z
   .string({ error: 'Enter an amount in dollars, like 425.00.' })
   .trim()
   .transform((text, ctx) => {
     const cents = parseDollarsToCents(text);
-    if (cents === null || cents > 100_000_000) {
-      ctx.addIssue({
-        code: 'custom',
-        message: 'Enter an amount in dollars, like 425.00 (at most two decimals).',
-      });
+    if (cents === null || cents > MAX_CENTS) {
+      ctx.addIssue({ code: 'custom', message: dollarsProblem(text, cents) });
       return z.NEVER;
     }
     return cents;
@@ -58,7 +72,13 @@ export const caseQueueQuerySchema = z.object({
 });
 export type CaseQueueQuery = z.infer<typeof caseQueueQuerySchema>;
 
-const reasonSchema = plainText(2000).min(3, { error: 'Give a reason (a few words at least).' });
+export const REASON_MAX = 2000;
+const reasonSchema = plainText(REASON_MAX, `A reason is at most ${REASON_MAX} characters; shorten it.`).min(
+  3,
+  {
+    error: 'Give a reason (a few words at least).',
+  },
+);
 const caseIdSchema = z.uuid({ error: 'This case does not exist.' });
 
 export const notifyCaseSchema = z.object({ caseId: caseIdSchema });
@@ -91,7 +111,7 @@ export const disputeCaseSchema = z.object({
 });
 export const linkDisputeSchema = disputeCaseSchema
   .omit({ caseId: true, photoIds: true })
-  .extend({ token: z.string().min(10).max(300) });
+  .extend({ token: plainText(300).min(10) });
 export const overrideEstimateSchema = z.object({
   caseId: caseIdSchema,
   amount: dollarsSchema,

@@ -42,6 +42,8 @@ export type CheckedHandoff = {
   openHolds: OpenHoldRow[];
   history: TimelineEvent[];
   sendReceipt: boolean;
+  /** The driver's answer at a hook of a "no perishable loads" trailer; null when not asked. */
+  isLoadPerishable: boolean | null;
 };
 
 export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitResult> {
@@ -64,27 +66,35 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
   });
   const shas = c.photos.map((p) => p.sha256);
   const contentHash = handoffContentHash(hashableFromRows(row, items.rows, shas));
-  await insertHandoff(tx, { ...row, contentHash });
+  await insertHandoff(tx, { ...row, contentHash, isLoadPerishable: c.isLoadPerishable });
   await insertHandoffItems(
     tx,
     items.rows.map((i) => ({ ...i, handoffId: id })),
   );
   await attachPhotos(tx, id, items.photoIds);
 
-  const caseId = ev.damageKeys.length
-    ? await insertOpenedCase(
-        tx,
-        {
-          handoffId: id,
-          trailerId: trailer.id,
-          terminalId: terminal.id,
-          proposedCarrierId: ev.proposedCarrierId,
-          estimateCents: 0,
-          openedAt: now,
-        },
-        { actorId: actor.id, note: `Opened by the ${input.kind} of ${trailer.unitNumber}.` },
-      )
-    : null;
+  // new or worse damage, and damage no earlier inspection saw (followed, not attributed), open one case
+  const caseId =
+    ev.damageKeys.length || ev.unattributedKeys.length
+      ? await insertOpenedCase(
+          tx,
+          {
+            handoffId: id,
+            trailerId: trailer.id,
+            terminalId: terminal.id,
+            proposedCarrierId: ev.proposedCarrierId,
+            attributionNote: ev.attributionNote,
+            estimateCents: 0,
+            openedAt: now,
+          },
+          {
+            actorId: actor.id,
+            note:
+              `Opened by the ${input.kind} of ${trailer.unitNumber}.` +
+              (ev.attributionNote ? ` Marked "${ev.attributionNote}".` : ''),
+          },
+        )
+      : null;
   // a finding links to an earlier handoff only: the engine may also name a walk or a move
   const handoffIds = new Set(
     c.history.filter((e) => e.type === 'drop' || e.type === 'hook').map((e) => e.id),
@@ -121,6 +131,7 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
       itemKey: h.itemKey,
       reason: h.reason,
       source: h.source,
+      caution: h.caution,
       placedById: actor.id,
       placedAt: now,
     })),

@@ -47,13 +47,19 @@ const TEXT: [string, string, string][] = [
   ['danger', 'paper-dim', 'field errors on the page'],
   ['hold', 'hold-bg', 'restricted holds'],
   ['hold', 'paper', 'hold text'],
+  ['off', 'off-bg', 'reefer-off tag'],
+  ['off', 'paper', 'reefer-off text'],
+  ['on-fill', 'danger', 'out-of-service tag on the yard map'],
+  ['danger', 'danger-bg', 'out-of-service slot'],
 ];
 // shapes that carry meaning: status borders, focus ring, outlined buttons (WCAG 1.4.11)
 const NON_TEXT: [string, string, string][] = [
   ['brand', 'paper', 'outlined button border, yard slot border'],
   ['brand', 'paper-dim', 'focus ring'],
   ['ink-soft', 'paper', 'answer button border'],
-  ['danger', 'paper', 'out-of-service / reefer-off border'],
+  ['danger', 'paper', 'out-of-service border'],
+  ['danger', 'danger-bg', 'out-of-service slot border on its fill'],
+  ['off', 'paper', 'reefer-off border'],
   ['hold', 'paper', 'restricted border'],
   ['warn', 'paper', 'low-fuel border, caution bar'],
   ['ok', 'paper', 'passed border'],
@@ -61,7 +67,7 @@ const NON_TEXT: [string, string, string][] = [
 
 describe('theme tokens', () => {
   it('gives the night theme the same values whether chosen on the switch or by the phone', () => {
-    expect(Object.keys(night).length).toBeGreaterThanOrEqual(18);
+    expect(Object.keys(night).length).toBeGreaterThanOrEqual(20);
     expect(nightBySystem).toEqual(night);
     expect(Object.keys(night).sort()).toEqual(Object.keys(light).sort());
   });
@@ -107,9 +113,9 @@ describe('status colours keep their meaning at night', () => {
       ).toBeLessThanOrEqual(15);
     }
   });
-  it('tells the four tones apart by hue in each theme (red, orange, amber, green)', () => {
+  it('tells the five tones apart by hue in each theme (red, orange, amber, green, violet)', () => {
     for (const t of Object.values(THEMES)) {
-      const hues = ['danger', 'hold', 'warn', 'ok'].map((k) => hue(t[k]));
+      const hues = ['danger', 'hold', 'warn', 'ok', 'off'].map((k) => hue(t[k]));
       for (let i = 0; i < hues.length; i++)
         for (let j = i + 1; j < hues.length; j++) expect(gap(hues[i], hues[j])).toBeGreaterThanOrEqual(10);
     }
