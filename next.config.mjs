@@ -11,7 +11,8 @@ const withSerwist = withSerwistInit({
   swDest: 'public/sw.js',
   cacheOnNavigation: true,
   reloadOnOnline: false,
-  disable: process.env.NODE_ENV !== 'production',
+  // off in `next dev` and under Turbopack (no worker then; the build scripts use webpack)
+  disable: process.env.NODE_ENV !== 'production' || Boolean(process.env.TURBOPACK),
 });
 
 /** @type {import('next').NextConfig} */
