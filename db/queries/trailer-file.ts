@@ -88,16 +88,17 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
     db
       .select({
         id: findings.id,
-        createdAt: sql<Date>`coalesce(${handoffs.occurredAt}, ${findings.createdAt})`.mapWith(
-          findings.createdAt,
-        ),
+        // one primary-key lookup per row, never a join over every handoff
+        createdAt:
+          sql<Date>`coalesce((select ${handoffs.occurredAt} from ${handoffs} where ${handoffs.id} = ${findings.handoffId}), ${findings.createdAt})`.mapWith(
+            findings.createdAt,
+          ),
         itemKey: findings.itemKey,
         kind: findings.kind,
         condition: findings.condition,
         reason: findings.reason,
       })
       .from(findings)
-      .leftJoin(handoffs, eq(handoffs.id, findings.handoffId))
       .where(eq(findings.trailerId, trailerId)),
     db
       .select({
@@ -127,12 +128,14 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
     db
       .select({
         id: photos.id,
-        createdAt: sql<Date>`coalesce(${handoffs.occurredAt}, ${photos.createdAt})`.mapWith(photos.createdAt),
+        createdAt:
+          sql<Date>`coalesce((select ${handoffs.occurredAt} from ${handoffs} where ${handoffs.id} = ${photos.handoffId}), ${photos.createdAt})`.mapWith(
+            photos.createdAt,
+          ),
         itemKey: photos.itemKey,
         handoffId: photos.handoffId,
       })
       .from(photos)
-      .leftJoin(handoffs, eq(handoffs.id, photos.handoffId))
       .where(eq(photos.trailerId, trailerId))
       .orderBy(desc(photos.createdAt)),
   ]);

@@ -33,7 +33,13 @@ export const cases = pgTable(
     updatedAt: at('updated_at').notNull().defaultNow(),
     createdAt: createdAt(),
   },
-  (t) => [index('cases_state').on(t.terminalId, t.state), index('cases_carrier').on(t.proposedCarrierId)],
+  (t) => [
+    index('cases_state').on(t.terminalId, t.state),
+    index('cases_carrier').on(t.proposedCarrierId),
+    // the desk queue pages through cases by opening time (keyset: opened_at, id)
+    index('cases_opened').on(t.openedAt, t.id),
+    index('cases_trailer').on(t.trailerId),
+  ],
 );
 
 export const caseEvents = pgTable(

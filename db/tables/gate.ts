@@ -1,4 +1,15 @@
-import { boolean, index, integer, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import {
+  boolean,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  primaryKey,
+  text,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import {
   at,
   conditionEnum,
@@ -120,7 +131,12 @@ export const photos = pgTable(
     sha256: text('sha256').notNull(),
     createdAt: createdAt(),
   },
-  (t) => [index('photos_handoff').on(t.handoffId), index('photos_trailer').on(t.trailerId)],
+  (t) => [
+    index('photos_handoff').on(t.handoffId),
+    index('photos_trailer').on(t.trailerId),
+    // a case's history lists the photos attached to each of its events
+    index('photos_case_event').on(t.caseEventId),
+  ],
 );
 
 /** The engine's output for one handoff: one row per compared item or rule (fuel, pins, spare). */
@@ -179,5 +195,32 @@ export const holds = pgTable(
     repairedBy: text('repaired_by'),
     createdAt: createdAt(),
   },
-  (t) => [index('holds_trailer_open').on(t.trailerId, t.releasedAt)],
+  (t) => [
+    index('holds_trailer_open').on(t.trailerId, t.releasedAt),
+    // the board and the gate ask for open holds only: a small partial index however many were ever placed
+    index('holds_open')
+      .on(t.trailerId)
+      .where(sql`${t.releasedAt} is null`),
+  ],
+);
+
+/**
+ * A trailer's current condition: per checklist item, the handoff that last observed it. Kept up
+ * to date in the submit's transaction (one row per recorded item), so the gate and the submit
+ * know how far back the engine must look (the oldest of these) without reading the whole history.
+ */
+export const trailerCondition = pgTable(
+  'trailer_condition',
+  {
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
+    itemKey: text('item_key').notNull(),
+    handoffId: uuid('handoff_id')
+      .notNull()
+      .references(() => handoffs.id),
+    observedAt: at('observed_at').notNull(),
+    condition: conditionEnum('condition').notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.trailerId, t.itemKey] })],
 );

@@ -69,7 +69,21 @@ export const caseQueueQuerySchema = z.object({
     blankToUndefined,
     z.enum(CASE_SORTS, { error: 'Choose a sort order from the list.' }).default('oldest'),
   ),
+  /** Keyset cursor of the oldest/newest sorts: the last row shown, as `<opened-at ISO>_<case id>`. */
+  after: z.preprocess(
+    blankToUndefined,
+    z
+      .string()
+      .regex(/^\d{4}-\d{2}-\d{2}T[\d:.]+Z_[0-9a-f-]{36}$/, { error: 'This page link is not valid.' })
+      .transform((v) => ({ openedAt: new Date(v.slice(0, v.indexOf('_'))), id: v.slice(v.indexOf('_') + 1) }))
+      .refine((v) => !Number.isNaN(v.openedAt.getTime()), { error: 'This page link is not valid.' })
+      .optional(),
+  ),
 });
+/** Cases per page of the desk queue. */
+export const CASE_PAGE_SIZE = 50;
+/** The cursor that continues the queue after this row. */
+export const caseCursor = (row: { openedAt: Date; id: string }) => `${row.openedAt.toISOString()}_${row.id}`;
 export type CaseQueueQuery = z.infer<typeof caseQueueQuerySchema>;
 
 export const REASON_MAX = 2000;

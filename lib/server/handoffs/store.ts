@@ -13,6 +13,7 @@ import {
   insertHandoffItems,
   insertHolds,
   insertOpenedCase,
+  recordCurrentCondition,
   updateTrailer,
 } from '@/db/queries/handoff-writes';
 import type { HandoffEvent, TimelineEvent } from '@/lib/engine';
@@ -72,6 +73,7 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
     items.rows.map((i) => ({ ...i, handoffId: id })),
   );
   await attachPhotos(tx, id, items.photoIds);
+  await recordCurrentCondition(tx, { trailerId: trailer.id, handoffId: id, observedAt: now }, items.rows);
 
   // new or worse damage, and damage no earlier inspection saw (followed, not attributed), open one case
   const caseId =

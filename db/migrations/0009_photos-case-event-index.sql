@@ -1,0 +1,1 @@
+CREATE INDEX "photos_case_event" ON "photos" USING btree ("case_event_id");
