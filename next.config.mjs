@@ -1,3 +1,20 @@
+import withSerwistInit from '@serwist/next';
+import createNextIntlPlugin from 'next-intl/plugin';
+
+// English and Spanish: the reader's language from the hm-locale cookie (see docs/i18n.md).
+const withNextIntl = createNextIntlPlugin('./lib/server/i18n/request.ts');
+
+// The service worker (app/sw.ts → public/sw.js). Built by webpack: `next build --webpack`
+// (Serwist's Next plugin does not run under Turbopack). Off in `next dev`.
+const withSerwist = withSerwistInit({
+  swSrc: 'app/sw.ts',
+  swDest: 'public/sw.js',
+  cacheOnNavigation: true,
+  reloadOnOnline: false,
+  // off in `next dev` and under Turbopack (no worker then; the build scripts use webpack)
+  disable: process.env.NODE_ENV !== 'production' || Boolean(process.env.TURBOPACK),
+});
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   reactStrictMode: true,
@@ -19,4 +36,4 @@ const nextConfig = {
   },
 };
 
-export default nextConfig;
+export default withSerwist(withNextIntl(nextConfig));

@@ -58,5 +58,8 @@ export function proxy(request: NextRequest) {
 }
 
 export const config = {
-  matcher: ['/((?!_next/static|_next/image|favicon.ico|fonts/|.*\\.(?:png|svg|jpg|ico|webmanifest)$).*)'],
+  // the service worker scripts (public/sw.js, public/swe-worker-*.js) load before anyone signs in
+  matcher: [
+    '/((?!_next/static|_next/image|favicon.ico|fonts/|sw\\.js$|swe-worker-.*\\.js$|.*\\.(?:png|svg|jpg|ico|webmanifest)$).*)',
+  ],
 };

@@ -9,7 +9,7 @@ export default function NotFound() {
       </p>
       <Link
         href="/"
-        className="mt-6 inline-flex min-h-tap items-center rounded-lg bg-brand px-5 text-gate font-bold text-white"
+        className="mt-6 inline-flex min-h-tap items-center rounded-lg bg-brand px-5 text-gate font-bold text-on-fill"
       >
         Back to Hitchmark
       </Link>

@@ -24,7 +24,7 @@ step "loading the invented demo data (about 30 s; safe to re-run)"
 quietly .data/seed.log node_modules/.bin/tsx --conditions=react-server db/seed/index.ts
 
 step "building the app (next build; 1 to 3 min)"
-quietly .data/build.log node_modules/.bin/next build
+quietly .data/build.log node_modules/.bin/next build --webpack
 
 step "starting Hitchmark on $APP_URL"
 node_modules/.bin/next start -p "$HM_APP_PORT" >.data/app.log 2>&1 &

@@ -30,7 +30,7 @@ step "unit and database tests (vitest; 1 to 2 min)"
 node_modules/.bin/vitest run
 
 step "building the app (next build; 1 to 3 min)"
-quietly .data/build.log node_modules/.bin/next build
+quietly .data/build.log node_modules/.bin/next build --webpack
 
 step "preparing the browser tests' database (hitchmark_e2e: migrate, seed; about 30 s)"
 export HM_DB_NAME=hitchmark_e2e

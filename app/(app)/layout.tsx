@@ -1,6 +1,11 @@
 import Link from 'next/link';
-import { canOpen, SECTION_LABELS, type Section } from '@/lib/auth/roles';
+import { cookies } from 'next/headers';
+import { ThemeSwitch } from '@/app/_components/theme-switch';
+import { getTranslations } from 'next-intl/server';
+import { LanguageSwitch } from '@/app/_components/language-switch';
+import { canOpen, type Section } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
+import { parseTheme, THEME_COOKIE } from '@/lib/theme/theme';
 import { NavLinks } from './_components/nav-links';
 import { signOutAction } from './_components/sign-out-action';
 
@@ -9,9 +14,11 @@ const SECTIONS: Section[] = ['gate', 'yard', 'desk', 'trailers', 'admin'];
 // The signed-in shell. Not a security check: every page and action checks for itself.
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
   const user = await requireUser();
+  const theme = parseTheme((await cookies()).get(THEME_COOKIE)?.value);
+  const t = await getTranslations('Shell');
   const links = SECTIONS.filter((s) => canOpen(user.role, s)).map((s) => ({
     href: `/${s}`,
-    label: SECTION_LABELS[s],
+    label: t(`section.${s}`),
   }));
   return (
     <div className="min-h-screen">
@@ -19,25 +26,27 @@ export default async function AppLayout({ children }: { children: React.ReactNod
         href="#main"
         className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper focus:p-2"
       >
-        Skip to content
+        {t('skip')}
       </a>
-      <header className="no-print bg-brand text-white">
+      <header className="no-print bg-brand text-on-fill">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2">
-          <Link href="/" className="text-gate-lg font-bold">
+          <Link href="/" className="inline-flex min-h-tap items-center text-gate-lg font-bold">
             Hitchmark
           </Link>
-          <NavLinks links={links} />
-          <div className="ml-auto flex items-center gap-3 text-gate-sm">
+          <NavLinks links={links} label={t('sections')} />
+          <div className="ml-auto flex flex-wrap items-center gap-3 text-gate-sm">
+            <ThemeSwitch initial={theme} onFill />
+            <LanguageSwitch onFill />
             <span>
-              <span className="font-bold">{user.name}</span> · {user.role}
+              <span className="font-bold">{user.name}</span> · {t(`role.${user.role}`)}
               {user.carrierScac ? ` · ${user.carrierScac}` : ''}
             </span>
             <form action={signOutAction}>
               <button
                 type="submit"
-                className="min-h-tap whitespace-nowrap rounded-lg border-2 border-white px-3 font-bold"
+                className="min-h-tap whitespace-nowrap rounded-lg border-2 border-on-fill px-3 font-bold"
               >
-                Sign out
+                {t('signOut')}
               </button>
             </form>
           </div>

@@ -29,7 +29,7 @@ export default async function TrailersPage({ searchParams }: PageProps<'/trailer
           placeholder="Unit number, VIN or plate"
           className="min-h-tap flex-1 rounded-lg border-2 border-paper-line px-3 text-gate"
         />
-        <button type="submit" className="min-h-tap rounded-lg bg-brand px-5 text-gate font-bold text-white">
+        <button type="submit" className="min-h-tap rounded-lg bg-brand px-5 text-gate font-bold text-on-fill">
           Find
         </button>
       </form>
@@ -42,7 +42,7 @@ export default async function TrailersPage({ searchParams }: PageProps<'/trailer
           <div className="flex flex-wrap gap-2">
             <button
               type="submit"
-              className="min-h-tap rounded-lg bg-brand px-5 text-gate font-bold text-white"
+              className="min-h-tap rounded-lg bg-brand px-5 text-gate font-bold text-on-fill"
             >
               Print labels for ticked trailers
             </button>

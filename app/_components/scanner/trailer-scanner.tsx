@@ -66,7 +66,7 @@ export function TrailerScanner({
           muted
           playsInline
           aria-label="Camera view"
-          className={isLive ? 'aspect-[4/3] w-full rounded-xl bg-ink object-cover' : 'hidden'}
+          className={isLive ? 'aspect-[4/3] w-full rounded-xl bg-black object-cover' : 'hidden'}
         />
         {isLive ? (
           <>

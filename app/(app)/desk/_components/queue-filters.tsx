@@ -61,7 +61,7 @@ export function QueueFilters({ carriers, values, errors }: Props) {
         <option value="amount_low">Smallest amount</option>
       </Select>
       <div className="col-span-2 flex gap-2 sm:col-span-6">
-        <button type="submit" className="min-h-tap rounded-lg bg-brand px-5 text-gate font-bold text-white">
+        <button type="submit" className="min-h-tap rounded-lg bg-brand px-5 text-gate font-bold text-on-fill">
           Show cases
         </button>
         <a

@@ -88,7 +88,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
             key={k ?? 'all'}
             href={k ? `/trailers/${id}?kind=${k}` : `/trailers/${id}`}
             aria-current={kind === k ? 'page' : undefined}
-            className="inline-flex min-h-tap items-center rounded-full border-2 border-brand px-4 text-gate-sm font-bold text-brand aria-[current=page]:bg-brand aria-[current=page]:text-white"
+            className="inline-flex min-h-tap items-center rounded-full border-2 border-brand px-4 text-gate-sm font-bold text-brand aria-[current=page]:bg-brand aria-[current=page]:text-on-fill"
           >
             {k ? `${k}s` : 'everything'}
           </Link>

@@ -19,7 +19,7 @@ export function CameraButton({ label, onText }: { label: string; onText: (text: 
         muted
         playsInline
         aria-label="Camera view"
-        className={isLive ? 'aspect-[4/3] w-full rounded-xl bg-ink object-cover' : 'hidden'}
+        className={isLive ? 'aspect-[4/3] w-full rounded-xl bg-black object-cover' : 'hidden'}
       />
       <button
         type="button"

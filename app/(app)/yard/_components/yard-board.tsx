@@ -68,7 +68,7 @@ export function YardBoard({ initial }: { initial: Board }) {
               role="tab"
               aria-selected={view === v}
               onClick={() => setView(v)}
-              className={`min-h-tap rounded-lg px-4 text-gate font-bold ${view === v ? 'bg-brand text-white' : 'bg-paper-dim text-ink'}`}
+              className={`min-h-tap rounded-lg px-4 text-gate font-bold ${view === v ? 'bg-brand text-on-fill' : 'bg-paper-dim text-ink'}`}
             >
               {v === 'map' ? 'Map' : 'Table'}
             </button>

@@ -16,7 +16,7 @@ export function YardNav({ current }: { current: (typeof LINKS)[number]['href'] }
           key={l.href}
           href={l.href}
           aria-current={l.href === current ? 'page' : undefined}
-          className={`flex min-h-tap items-center rounded-lg border-2 px-4 text-gate font-bold ${l.href === current ? 'border-brand bg-brand text-white' : 'border-paper-line bg-paper text-brand'}`}
+          className={`flex min-h-tap items-center rounded-lg border-2 px-4 text-gate font-bold ${l.href === current ? 'border-brand bg-brand text-on-fill' : 'border-paper-line bg-paper text-brand'}`}
         >
           {l.label}
         </Link>

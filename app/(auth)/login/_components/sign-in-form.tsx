@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useActionState, useState } from 'react';
 import { Button } from '@/app/_components/button';
 import { Field, FormError } from '@/app/_components/field';
@@ -12,9 +13,10 @@ type Method = 'driver' | 'staff';
 export function SignInForm({ next }: { next?: string }) {
   const [state, formAction, pending] = useActionState(signInAction, IDLE);
   const [method, setMethod] = useState<Method>('driver');
+  const t = useTranslations('Login');
   return (
     <div className="mt-6 rounded-xl bg-paper p-4 shadow">
-      <div role="tablist" aria-label="How to sign in" className="grid grid-cols-2 gap-2">
+      <div role="tablist" aria-label={t('how')} className="grid grid-cols-2 gap-2">
         {(['driver', 'staff'] as const).map((m) => (
           <button
             key={m}
@@ -22,9 +24,9 @@ export function SignInForm({ next }: { next?: string }) {
             role="tab"
             aria-selected={method === m}
             onClick={() => setMethod(m)}
-            className={`min-h-tap rounded-lg text-gate font-bold ${method === m ? 'bg-brand text-white' : 'bg-paper-dim text-ink'}`}
+            className={`min-h-tap rounded-lg text-gate font-bold ${method === m ? 'bg-brand text-on-fill' : 'bg-paper-dim text-ink'}`}
           >
-            {m === 'driver' ? 'Driver' : 'Terminal staff'}
+            {t(m)}
           </button>
         ))}
       </div>
@@ -35,14 +37,14 @@ export function SignInForm({ next }: { next?: string }) {
           {method === 'driver' ? (
             <>
               <Field
-                label="Driver number"
+                label={t('driverNumber')}
                 name="driverNumber"
                 autoComplete="username"
                 autoCapitalize="characters"
                 required
               />
               <Field
-                label="PIN"
+                label={t('pin')}
                 name="pin"
                 type="password"
                 inputMode="numeric"
@@ -52,9 +54,9 @@ export function SignInForm({ next }: { next?: string }) {
             </>
           ) : (
             <>
-              <Field label="E-mail" name="email" type="email" autoComplete="username" required />
+              <Field label={t('email')} name="email" type="email" autoComplete="username" required />
               <Field
-                label="Password"
+                label={t('password')}
                 name="password"
                 type="password"
                 autoComplete="current-password"
@@ -64,7 +66,7 @@ export function SignInForm({ next }: { next?: string }) {
           )}
           <FormError message={state.formError} />
           <Button type="submit" disabled={pending} className="w-full">
-            {pending ? 'Signing in…' : 'Sign in'}
+            {pending ? t('pending') : t('submit')}
           </Button>
         </form>
       </FormStateProvider>

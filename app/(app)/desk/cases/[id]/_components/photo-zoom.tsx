@@ -37,7 +37,7 @@ export function PhotoZoom({ photoId, alt }: { photoId: string; alt: string }) {
       </button>
       <dialog
         ref={dialog}
-        className="m-auto max-h-[95vh] max-w-[95vw] rounded-xl bg-ink p-2 backdrop:bg-ink/80"
+        className="m-auto max-h-[95vh] max-w-[95vw] rounded-xl bg-black p-2 backdrop:bg-black/80"
         aria-label={alt}
         onClick={() => dialog.current?.close()}
       >
