@@ -33,6 +33,7 @@ export async function findHandoffByKey(q: Db | Tx, idempotencyKey: string) {
       code: handoffs.verificationCode,
       trailerId: handoffs.trailerId,
       recordedById: handoffs.recordedById,
+      requestHash: handoffs.requestHash,
     })
     .from(handoffs)
     .where(eq(handoffs.idempotencyKey, idempotencyKey))

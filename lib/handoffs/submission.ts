@@ -3,6 +3,15 @@
 import type { HandoffEvent, ItemObservations } from '@/lib/engine';
 import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
 import type { HandoffHashRow } from './canonical';
+import { canonicalJson, sha256Hex } from './hash';
+
+/**
+ * The fingerprint of a submitted body (after parsing), stored with its draft key: a retry must
+ * send the same body, or it is a different handoff reusing the key.
+ */
+export function submissionHash(input: HandoffSubmitInput): string {
+  return sha256Hex(canonicalJson(input));
+}
 
 type Party = { carrierId: string; carrierName: string; driverId: string | null };
 

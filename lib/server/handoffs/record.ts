@@ -17,7 +17,7 @@ import { blocksHook } from '@/lib/engine';
 import { evaluateHandoff } from '@/lib/handoffs/evaluation';
 import { holdReasons } from '@/lib/handoffs/holds';
 import { damageEvidenceErrors, normalizeItems } from '@/lib/handoffs/items';
-import { handoffEvent } from '@/lib/handoffs/submission';
+import { handoffEvent, submissionHash } from '@/lib/handoffs/submission';
 import { abort, refuse } from '@/lib/result';
 import { terminalPolicyOf } from '@/lib/terminal/policy';
 import { checklistOf } from '@/lib/trailers/checklist';
@@ -153,5 +153,6 @@ export async function recordHandoff(
     openHolds,
     history,
     sendReceipt: opts.sendReceipt !== false,
+    requestHash: submissionHash(input),
   });
 }

@@ -18,12 +18,13 @@ import {
 import type { HandoffEvent, TimelineEvent } from '@/lib/engine';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
 import type { Evaluation } from '@/lib/handoffs/evaluation';
-import { handoffContentHash } from '@/lib/handoffs/hash';
+import { handoffContentHash, KEYED_HASH_VERSION } from '@/lib/handoffs/hash';
 import { holdsNotYetOpen } from '@/lib/handoffs/holds';
 import type { normalizeItems } from '@/lib/handoffs/items';
 import { handoffRow, trailerAfter } from '@/lib/handoffs/submission';
 import { newVerificationCode } from '@/lib/handoffs/verification-code';
 import { abort } from '@/lib/result';
+import { chainKey } from '@/lib/server/env';
 import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
 import { enqueueReceiptEmail } from './receipt-mail';
 import { chooseSpot } from './slots';
@@ -42,6 +43,8 @@ export type CheckedHandoff = {
   openHolds: OpenHoldRow[];
   history: TimelineEvent[];
   sendReceipt: boolean;
+  /** SHA-256 of the submitted body, kept with the draft key (replay.ts compares it). */
+  requestHash: string;
 };
 
 export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitResult> {
@@ -63,8 +66,13 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
     prevHash: await latestContentHash(tx, trailer.id),
   });
   const shas = c.photos.map((p) => p.sha256);
-  const contentHash = handoffContentHash(hashableFromRows(row, items.rows, shas));
-  await insertHandoff(tx, { ...row, contentHash });
+  const contentHash = handoffContentHash(hashableFromRows(row, items.rows, shas), chainKey());
+  await insertHandoff(tx, {
+    ...row,
+    contentHash,
+    hashVersion: KEYED_HASH_VERSION,
+    requestHash: c.requestHash,
+  });
   await insertHandoffItems(
     tx,
     items.rows.map((i) => ({ ...i, handoffId: id })),
