@@ -25,8 +25,8 @@ export function ChainStatus({
     >
       {check.why === 'unkeyed' ? (
         <>
-          Record of {brokenAt ? formatTime(brokenAt, timeZone) : 'an unknown date'} is linked without the chain
-          key, so Hitchmark cannot vouch for it. It and every later record are unproven.
+          Record of {brokenAt ? formatTime(brokenAt, timeZone) : 'an unknown date'} is linked without the
+          chain key, so Hitchmark cannot vouch for it. It and every later record are unproven.
         </>
       ) : (
         <>
