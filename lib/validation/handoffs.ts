@@ -101,9 +101,21 @@ export const handoffSubmitSchema = z
       .refine((r) => Object.keys(r).length <= 120, { error: 'Too many items.' }),
     spotId: z.uuid({ error: 'Choose a slot.' }).nullable().optional(),
     note: optionalNote(1000, 'The note'),
-    correctsHandoffId: z.uuid().nullable().optional(),
+    correctsHandoffId: z.uuid({ error: 'Name the handoff this corrects by its id.' }).nullable().optional(),
+    /** Why the record is corrected: required of a clerk, optional for the driver who recorded it. */
+    correctionReason: plainText(300, 'The reason is at most 300 characters.')
+      .transform((s) => (s === '' ? null : s))
+      .nullable()
+      .optional(),
   })
   .superRefine((v, ctx) => {
+    if (v.correctionReason && !v.correctsHandoffId) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['correctionReason'],
+        message: 'A reason goes with a correction only.',
+      });
+    }
     if (v.reefer && v.reefer.preTripResult !== 'not_run' && !v.reefer.preTripAt) {
       ctx.addIssue({
         code: 'custom',
