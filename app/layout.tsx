@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from 'next';
+import { connection } from 'next/server';
 import { hitchmarkFont } from './fonts';
 import './globals.css';
 
@@ -9,7 +10,9 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: 'device-width', initialScale: 1, themeColor: '#0b5c8a' };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page renders per request: its scripts carry the nonce of that response's CSP (proxy.ts).
+  await connection();
   return (
     <html lang="en" className={hitchmarkFont.variable}>
       <body className="min-h-screen">{children}</body>

@@ -1,5 +1,6 @@
 'use server';
 
+import { headers } from 'next/headers';
 import { redirect } from 'next/navigation';
 import type { ActionState } from '@/lib/result';
 import { signIn } from '@/lib/server/auth/sign-in';
@@ -20,7 +21,16 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
     const formError = fieldErrors.method?.[0] ?? (Object.keys(fieldErrors).length ? undefined : message);
     return { ok: false, formError, fieldErrors, values };
   }
-  const result = await signIn(parsed.data);
+  const result = await signIn(parsed.data, new Date(), clientAddress(await headers()));
   if (!result.ok) return { ok: false, formError: result.message, fieldErrors: result.fieldErrors, values };
   redirect(result.value.next);
+}
+
+/**
+ * The address the request came from, as the nearest proxy saw it: the last X-Forwarded-For entry
+ * (`next start` adds the socket's address when no proxy did). Deploy behind a proxy that sets it.
+ */
+function clientAddress(h: Headers): string {
+  const hops = (h.get('x-forwarded-for') ?? '').split(',').map((s) => s.trim()).filter(Boolean);
+  return hops.at(-1)?.slice(0, 64) ?? 'unknown';
 }

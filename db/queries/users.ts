@@ -1,6 +1,6 @@
 import 'server-only';
 import { eq, sql } from 'drizzle-orm';
-import { db, type Tx } from '@/db';
+import { db } from '@/db';
 import { carriers, terminals, users } from '@/db/schema';
 
 const signInColumns = {
@@ -11,8 +11,7 @@ const signInColumns = {
   carrierId: users.carrierId,
   homeTerminalId: users.homeTerminalId,
   isActive: users.isActive,
-  failedSignIns: users.failedSignIns,
-  lockedUntil: users.lockedUntil,
+  sessionVersion: users.sessionVersion,
 };
 
 export async function getUserForStaffSignIn(email: string) {
@@ -29,22 +28,12 @@ export async function getUserForDriverSignIn(driverNumber: string) {
   return row ?? null;
 }
 
-/** Counts one more failed attempt and returns the new count. */
-export async function countFailedSignIn(userId: string, tx: Tx) {
-  const [row] = await tx
+/** Ends every session of the user: cookies carrying an older version are no longer accepted. */
+export async function bumpSessionVersion(userId: string) {
+  await db
     .update(users)
-    .set({ failedSignIns: sql`${users.failedSignIns} + 1` })
-    .where(eq(users.id, userId))
-    .returning({ count: users.failedSignIns });
-  return row.count;
-}
-
-export async function lockSignIns(userId: string, until: Date, tx: Tx) {
-  await tx.update(users).set({ lockedUntil: until }).where(eq(users.id, userId));
-}
-
-export async function clearFailedSignIns(userId: string, tx: Tx) {
-  await tx.update(users).set({ failedSignIns: 0, lockedUntil: null }).where(eq(users.id, userId));
+    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId));
 }
 
 /** The signed-in user as the shell and the checks need it; null when the account is gone or disabled. */
@@ -61,6 +50,7 @@ export async function getSessionUser(userId: string) {
       terminalName: terminals.name,
       terminalTimeZone: terminals.timeZone,
       isActive: users.isActive,
+      sessionVersion: users.sessionVersion,
     })
     .from(users)
     .leftJoin(carriers, eq(carriers.id, users.carrierId))

@@ -74,12 +74,23 @@ export const users = pgTable(
     homeTerminalId: uuid('home_terminal_id').references(() => terminals.id),
     carrierId: uuid('carrier_id').references(() => carriers.id),
     isActive: boolean('is_active').notNull().default(true),
-    failedSignIns: integer('failed_sign_ins').notNull().default(0),
-    lockedUntil: at('locked_until'),
+    /** Carried in the session cookie; a cookie with an older number is signed out (trigger bumps it on secret, role or active changes). */
+    sessionVersion: integer('session_version').notNull().default(1),
     createdAt: createdAt(),
   },
   (t) => [index('users_carrier').on(t.carrierId), index('users_terminal').on(t.homeTerminalId)],
 );
+
+/**
+ * Sign-in attempts per key (an account, an address, or an account from one address): counted
+ * atomically in one INSERT … ON CONFLICT, so parallel tries cannot slip past the count.
+ */
+export const signInThrottle = pgTable('sign_in_throttle', {
+  key: text('key').primaryKey(),
+  tries: integer('tries').notNull(),
+  blockedUntil: at('blocked_until'),
+  updatedAt: at('updated_at').notNull(),
+});
 
 export const trailers = pgTable(
   'trailers',

@@ -30,8 +30,13 @@ export function refusalResponse(r: Refusal, headers?: HeadersInit): Response {
     ...(r.fieldErrors ? { fieldErrors: r.fieldErrors } : {}),
     ...(r.detail ?? {}),
   };
-  return Response.json(body, { status: STATUS[r.code], headers });
+  const h = new Headers(headers);
+  // a refusal that passes with time says when to try again (RFC 9110 §10.2.3 Retry-After)
+  if (r.code === 'unavailable' && !h.has('retry-after')) h.set('retry-after', String(RETRY_AFTER_SECONDS));
+  return Response.json(body, { status: STATUS[r.code], headers: h });
 }
+
+const RETRY_AFTER_SECONDS = 30;
 
 export function apiError(code: RefusalCode, message: string, fieldErrors?: FieldErrors): Response {
   return refusalResponse(refuse(code, message, fieldErrors));
@@ -57,9 +62,18 @@ function crossSite(request: Request): Refusal | null {
   return null;
 }
 
+/** A write sends JSON or no body at all: a form or text/plain post is refused even from our own pages. */
+function notJson(request: Request): Refusal | null {
+  const type = request.headers.get('content-type');
+  if (type && !JSON_TYPE.test(type)) return refuse('unsupported_type', 'Send the body as JSON.');
+  return null;
+}
+
+const JSON_TYPE = /^application\/json\b/i;
+
 async function readBody(request: Request, maxBytes: number): Promise<{ body: unknown } | Refusal> {
   const type = request.headers.get('content-type') ?? '';
-  if (!/^application\/json\b/i.test(type)) return refuse('unsupported_type', 'Send the body as JSON.');
+  if (!JSON_TYPE.test(type)) return refuse('unsupported_type', 'Send the body as JSON.');
   const declared = Number(request.headers.get('content-length') ?? 0);
   if (declared > maxBytes) return refuse('too_large', 'The request body is too large.');
   const text = await request.text();
@@ -132,7 +146,7 @@ export function route<
     let user: SessionUser | null = null;
     try {
       if (WRITES.has(request.method)) {
-        const refused = crossSite(request);
+        const refused = crossSite(request) ?? notJson(request);
         if (refused) return refusalResponse(refused);
       }
       user = await currentUser();

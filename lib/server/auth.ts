@@ -6,11 +6,16 @@ import { getSession } from './session';
 
 export type { SessionUser };
 
-/** The signed-in user, or null. Reads the sealed cookie, then checks the account still exists and is active. */
+/**
+ * The signed-in user, or null. Reads the sealed cookie, then checks the account still exists, is
+ * active, and has not ended its sessions since (sign-out, a new PIN or password, a new role).
+ */
 export async function currentUser(): Promise<SessionUser | null> {
   const session = await getSession();
   if (!session.userId) return null;
-  return getSessionUser(session.userId);
+  const user = await getSessionUser(session.userId);
+  if (!user || user.sessionVersion !== session.version) return null;
+  return user;
 }
 
 /** Pages and server actions: no session → sign-in page; wrong role → 403 page. */

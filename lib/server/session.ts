@@ -10,6 +10,8 @@ export type SessionData = {
   role?: Role;
   carrierId?: string | null;
   terminalId?: string | null;
+  /** users.session_version when the cookie was sealed: an older one is signed out. */
+  version?: number;
 };
 
 const DEV_SECRET = 'hitchmark-local-development-secret-not-for-production';

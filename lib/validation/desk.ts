@@ -91,7 +91,7 @@ export const disputeCaseSchema = z.object({
 });
 export const linkDisputeSchema = disputeCaseSchema
   .omit({ caseId: true, photoIds: true })
-  .extend({ token: z.string().min(10).max(300) });
+  .extend({ token: plainText(300).min(10) });
 export const overrideEstimateSchema = z.object({
   caseId: caseIdSchema,
   amount: dollarsSchema,

@@ -5,6 +5,9 @@ import { z } from 'zod';
 const CONTROL = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f]/;
 const CONTROL_OR_BREAK = /[\u0000-\u001f\u007f]/;
 
+/** True when `s` holds a control character other than tab, line feed or carriage return. */
+export const hasControl = (s: string) => CONTROL.test(s);
+
 /** One line of text: trimmed, at most `max` characters, no control characters. */
 export const plainText = (max: number, message = `At most ${max} characters.`) =>
   z

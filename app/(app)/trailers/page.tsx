@@ -5,10 +5,11 @@ import { EmptyState } from '@/app/_components/empty-state';
 import { listTrailers } from '@/db/queries/trailers';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
+import { plainText } from '@/lib/validation/text';
 
 export const metadata: Metadata = { title: 'Trailers' };
 
-const searchSchema = z.object({ q: z.string().trim().max(40).optional().catch(undefined) });
+const searchSchema = z.object({ q: plainText(40).optional().catch(undefined) });
 
 export default async function TrailersPage({ searchParams }: PageProps<'/trailers'>) {
   await requireUser(SECTION_ROLES.trailers);

@@ -20,8 +20,12 @@ vi.mock('@/lib/server/session', () => ({
       destroy: () => void session.destroyed++,
     }),
 }));
+vi.mock('next/headers', () => ({
+  headers: async () => new Headers({ 'x-forwarded-for': '203.0.113.200, 192.0.2.99' }),
+}));
 const { signIn } = await import('@/lib/server/auth/sign-in');
 const { signOut } = await import('@/lib/server/auth/sign-out');
+const { currentUser } = await import('@/lib/server/auth');
 const { signInAction } = await import('@/app/(auth)/actions');
 
 type Account = { id: string; email: string; driverNumber: string };
@@ -42,8 +46,6 @@ async function account(role: 'clerk' | 'driver', secret: string, isActive = true
     .returning({ id: users.id, email: users.email, driverNumber: users.driverNumber });
   return row as Account;
 }
-
-const state = async (id: string) => (await db.select().from(users).where(eq(users.id, id)))[0];
 
 function form(fields: Record<string, string>) {
   const data = new FormData();
@@ -94,31 +96,106 @@ describe('signing in (service)', () => {
     expect(await signIn({ method: 'driver', driverNumber: disabled.driverNumber, pin: '1357' })).toEqual(
       wrong,
     );
-    expect((await state(driver.id)).failedSignIns).toBe(1);
     expect(session.saved).toBe(0);
   });
 
-  it('locks after five failures (even the right password waits), then lets the right password in and clears the count', async () => {
+  it('waits after five failures (even the right password waits), then lets the right password in and starts again', async () => {
     const clerk = await account('clerk', 'the-right-one');
     const now = new Date('2026-12-01T12:00:00Z');
     const attempt = (password: string, at = now) =>
-      signIn({ method: 'staff', email: clerk.email, password }, at);
-    for (let i = 0; i < 4; i++) expect(await attempt('wrong')).toMatchObject({ code: 'unauthenticated' });
-    expect((await state(clerk.id)).lockedUntil).toBeNull();
-    await attempt('wrong');
-    expect((await state(clerk.id)).lockedUntil).toEqual(new Date('2026-12-01T12:00:30Z'));
+      signIn({ method: 'staff', email: clerk.email, password }, at, '192.0.2.10');
+    for (let i = 0; i < 5; i++) expect(await attempt('wrong')).toMatchObject({ code: 'unauthenticated' });
     expect(await attempt('the-right-one')).toEqual({
       ok: false,
       code: 'locked',
       message: 'Too many failed attempts. Try again in 30 seconds.',
     });
     expect(await attempt('the-right-one', new Date('2026-12-01T12:00:31Z'))).toMatchObject({ ok: true });
-    expect(await state(clerk.id)).toMatchObject({ failedSignIns: 0, lockedUntil: null });
+    // the success cleared the account's counters: five free tries again
+    const later = new Date('2026-12-01T12:01:00Z');
+    for (let i = 0; i < 5; i++)
+      expect(await attempt('wrong', later)).toMatchObject({ code: 'unauthenticated' });
   });
 
-  it('signing out ends the session', async () => {
+  it('30 parallel wrong PINs from one address: only 5 are checked, the rest wait', async () => {
+    const driver = await account('driver', '8642');
+    const now = new Date();
+    const answers = await Promise.all(
+      Array.from({ length: 30 }, (_, i) =>
+        signIn(
+          { method: 'driver', driverNumber: driver.driverNumber, pin: String(1000 + i) },
+          now,
+          '192.0.2.20',
+        ),
+      ),
+    );
+    const codes = answers.map((a) => (a.ok ? 'ok' : a.code));
+    expect(codes.filter((c) => c === 'unauthenticated')).toHaveLength(5);
+    expect(codes.filter((c) => c === 'locked')).toHaveLength(25);
+  });
+
+  it('a stranger failing on purpose cannot keep the driver out: the right PIN from another address works after a short wait', async () => {
+    const driver = await account('driver', '9753');
+    const now = new Date();
+    // a stranger tries from six addresses, 30 wrong PINs each, in parallel
+    const strangers = [
+      '198.51.100.1',
+      '198.51.100.2',
+      '198.51.100.3',
+      '198.51.100.4',
+      '198.51.100.5',
+      '198.51.100.6',
+    ];
+    await Promise.all(
+      strangers.flatMap((address) =>
+        Array.from({ length: 30 }, (_, i) =>
+          signIn(
+            { method: 'driver', driverNumber: driver.driverNumber, pin: String(2000 + i) },
+            now,
+            address,
+          ),
+        ),
+      ),
+    );
+    const mine = (at: Date) =>
+      signIn({ method: 'driver', driverNumber: driver.driverNumber, pin: '9753' }, at, '203.0.113.7');
+    // 30 tries reached the account (5 per address); past its 10 free ones it asks for a wait of at most a minute
+    const first = await mine(now);
+    expect(first).toMatchObject({ ok: false, code: 'locked' });
+    const seconds = Number(/(\d+) seconds/.exec((first as { message: string }).message)?.[1]);
+    expect(seconds).toBeGreaterThan(0);
+    expect(seconds).toBeLessThanOrEqual(60);
+    expect(await mine(new Date(now.getTime() + 61_000))).toMatchObject({ ok: true });
+  });
+
+  it('signing out ends the session, and an old copy of the cookie no longer works', async () => {
+    const clerk = await account('clerk', 'right-password');
+    await signIn({ method: 'staff', email: clerk.email, password: 'right-password' });
+    const copy = { ...session.data };
+    expect((await currentUser())?.id).toBe(clerk.id);
     await signOut();
     expect(session.destroyed).toBe(1);
+    session.data = { ...copy }; // someone kept the old cookie
+    expect(await currentUser()).toBeNull();
+  });
+
+  it('a new password, a new role or disabling the account ends older sessions', async () => {
+    for (const change of [
+      { secretHash: await bcrypt.hash('new-password', 4) },
+      { role: 'admin' as const },
+      { isActive: false },
+    ]) {
+      const clerk = await account('clerk', 'right-password');
+      await signIn({ method: 'staff', email: clerk.email, password: 'right-password' });
+      expect((await currentUser())?.id).toBe(clerk.id);
+      await db.update(users).set(change).where(eq(users.id, clerk.id));
+      expect(await currentUser(), JSON.stringify(Object.keys(change))).toBeNull();
+    }
+    // an unrelated change (the name) keeps the session
+    const clerk = await account('clerk', 'right-password');
+    await signIn({ method: 'staff', email: clerk.email, password: 'right-password' });
+    await db.update(users).set({ name: 'Renamed Clerk' }).where(eq(users.id, clerk.id));
+    expect((await currentUser())?.id).toBe(clerk.id);
   });
 });
 

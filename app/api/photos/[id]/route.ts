@@ -12,7 +12,14 @@ export const GET = route(
   async ({ user, params }) => {
     const photo = await getPhotoForViewer(params.id, user);
     if (!photo) return refuse('not_found', 'No such photo.');
-    const body = await streamObject(photo.objectKey);
+    let body: ReadableStream | null;
+    try {
+      body = await streamObject(photo.objectKey);
+    } catch (error) {
+      // storage down or unreachable: the record is fine, the picture is just not reachable now
+      console.error(`[photos] storage unavailable for photo ${params.id}`, error);
+      return refuse('unavailable', 'Photo storage cannot be reached right now. Try again in a minute.');
+    }
     if (!body) return refuse('not_found', 'The photo file is missing.');
     return new Response(body, {
       headers: {
