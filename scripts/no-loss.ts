@@ -24,7 +24,8 @@ const HANDOFFS = arg('handoffs', 300);
 const PHONES = arg('phones', 20);
 const RESTARTS = arg('restarts', 2);
 const PORT = Number(process.env.HM_NOLOSS_PORT ?? 3190);
-const BASE = `http://127.0.0.1:${PORT}`;
+// the app's own address (APP_URL below): the same-site check compares Origin with it
+const BASE = `http://localhost:${PORT}`;
 const DB = 'hitchmark_noloss';
 const DRIVERS = ['D1001', 'D1002', 'D1003', 'D1004', 'D2001', 'D2002', 'D3001', 'D4001'];
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
@@ -118,8 +119,15 @@ async function startServer() {
   }
   throw new Error('the app server did not come up in 60 s');
 }
+process.on('exit', () => killServer());
+process.on('SIGINT', () => process.exit(130));
+process.on('SIGTERM', () => process.exit(143));
 function killServer() {
-  if (server?.pid) process.kill(-server.pid, 'SIGKILL');
+  try {
+    if (server?.pid) process.kill(-server.pid, 'SIGKILL');
+  } catch {
+    /* gone already */
+  }
   server = null;
 }
 
@@ -242,11 +250,15 @@ const perPhone = Array.from(
   { length: PHONES },
   (_, i) => Math.floor(HANDOFFS / PHONES) + (i < HANDOFFS % PHONES ? 1 : 0),
 );
-const run = Promise.all(perPhone.map((n, i) => phone(i, n)));
+let phonesDone = false;
+const run = Promise.all(perPhone.map((n, i) => phone(i, n))).finally(() => {
+  phonesDone = true;
+});
 let restarts = 0;
 const killer = (async () => {
   for (let k = 1; k <= RESTARTS; k++) {
-    while (recorded < (HANDOFFS * k) / (RESTARTS + 1)) await sleep(50);
+    while (!phonesDone && recorded < (HANDOFFS * k) / (RESTARTS + 1)) await sleep(50);
+    if (phonesDone) break;
     killServer();
     console.log(`no-loss: killed the app server after ${recorded} recorded handoffs`);
     await sleep(1000);
