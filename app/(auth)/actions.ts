@@ -31,6 +31,9 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
  * (`next start` adds the socket's address when no proxy did). Deploy behind a proxy that sets it.
  */
 function clientAddress(h: Headers): string {
-  const hops = (h.get('x-forwarded-for') ?? '').split(',').map((s) => s.trim()).filter(Boolean);
+  const hops = (h.get('x-forwarded-for') ?? '')
+    .split(',')
+    .map((s) => s.trim())
+    .filter(Boolean);
   return hops.at(-1)?.slice(0, 64) ?? 'unknown';
 }

@@ -15,7 +15,16 @@ export async function listCases(
   q: Partial<CaseQueueQuery> & { now?: Date; limit?: number },
 ) {
   const now = q.now ?? new Date();
+  const sort = q.sort ?? 'oldest';
+  // keyset paging on (opened_at, id) for the time sorts: the index cases_opened serves any page
+  const after =
+    q.after && (sort === 'oldest' || sort === 'newest')
+      ? sort === 'oldest'
+        ? sql`(${cases.openedAt}, ${cases.id}) > (${q.after.openedAt.toISOString()}::timestamptz, ${q.after.id}::uuid)`
+        : sql`(${cases.openedAt}, ${cases.id}) < (${q.after.openedAt.toISOString()}::timestamptz, ${q.after.id}::uuid)`
+      : undefined;
   const where = and(
+    after,
     caseVisibleTo(viewer),
     q.state ? eq(cases.state, q.state) : undefined,
     q.carrier ? eq(cases.proposedCarrierId, q.carrier) : undefined,
@@ -26,11 +35,11 @@ export async function listCases(
     q.maxAmount !== undefined ? lte(amount, q.maxAmount) : undefined,
   );
   const order = {
-    oldest: [asc(cases.openedAt)],
-    newest: [desc(cases.openedAt)],
+    oldest: [asc(cases.openedAt), asc(cases.id)],
+    newest: [desc(cases.openedAt), desc(cases.id)],
     amount_high: [desc(amount), asc(cases.openedAt)],
     amount_low: [asc(amount), asc(cases.openedAt)],
-  }[q.sort ?? 'oldest'];
+  }[sort];
   return db
     .select({
       id: cases.id,
@@ -45,12 +54,14 @@ export async function listCases(
       carrierScac: carriers.scac,
       carrierName: carriers.name,
       terminalCode: terminals.code,
-      handoffKind: handoffs.kind,
+      // one primary-key lookup per listed case, never a join over every handoff
+      handoffKind: sql<
+        'drop' | 'hook'
+      >`(select ${handoffs.kind} from ${handoffs} where ${handoffs.id} = ${cases.handoffId})`,
     })
     .from(cases)
     .innerJoin(trailers, eq(trailers.id, cases.trailerId))
     .innerJoin(terminals, eq(terminals.id, cases.terminalId))
-    .innerJoin(handoffs, eq(handoffs.id, cases.handoffId))
     .leftJoin(carriers, eq(carriers.id, cases.proposedCarrierId))
     .where(where)
     .orderBy(...order)
@@ -67,6 +78,7 @@ export async function getCase(id: string, viewer: CaseViewer) {
       trailerId: cases.trailerId,
       terminalId: cases.terminalId,
       proposedCarrierId: cases.proposedCarrierId,
+      attributionNote: cases.attributionNote,
       estimateCents: cases.estimateCents,
       overrideCents: cases.overrideCents,
       overrideReason: cases.overrideReason,

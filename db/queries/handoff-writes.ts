@@ -1,7 +1,17 @@
 import 'server-only';
 import { eq, inArray, sql } from 'drizzle-orm';
 import type { Tx } from '@/db';
-import { caseEvents, cases, findings, handoffItems, handoffs, holds, photos, trailers } from '@/db/schema';
+import {
+  caseEvents,
+  cases,
+  findings,
+  handoffItems,
+  handoffs,
+  holds,
+  photos,
+  trailerCondition,
+  trailers,
+} from '@/db/schema';
 
 // The rows a handoff submit writes, one function per table. The service decides what and in
 // which order; these only write.
@@ -40,6 +50,26 @@ export async function insertOpenedCase(
     .returning({ id: cases.id });
   await tx.insert(caseEvents).values({ caseId: c.id, kind: 'opened', toState: 'open', ...event });
   return c.id;
+}
+
+/** The trailer's current condition: these items were last observed by this handoff. */
+export async function recordCurrentCondition(
+  tx: Tx,
+  x: { trailerId: string; handoffId: string; observedAt: Date },
+  items: { itemKey: string; condition: Insert<typeof trailerCondition>['condition'] }[],
+) {
+  if (!items.length) return;
+  await tx
+    .insert(trailerCondition)
+    .values(items.map((i) => ({ ...x, itemKey: i.itemKey, condition: i.condition })))
+    .onConflictDoUpdate({
+      target: [trailerCondition.trailerId, trailerCondition.itemKey],
+      set: {
+        handoffId: sql`excluded.handoff_id`,
+        observedAt: sql`excluded.observed_at`,
+        condition: sql`excluded.condition`,
+      },
+    });
 }
 
 export async function insertFindings(tx: Tx, rows: Insert<typeof findings>[]) {

@@ -143,6 +143,7 @@ export function listOpenHolds(trailerId: string) {
       severity: holds.severity,
       restriction: holds.restriction,
       reason: holds.reason,
+      caution: holds.caution,
       placedAt: holds.placedAt,
     })
     .from(holds)

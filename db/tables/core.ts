@@ -1,3 +1,4 @@
+import { sql } from 'drizzle-orm';
 import { boolean, index, integer, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import {
   at,
@@ -123,5 +124,7 @@ export const trailers = pgTable(
     uniqueIndex('trailers_current_spot').on(t.currentSpotId),
     index('trailers_terminal_status').on(t.currentTerminalId, t.status),
     index('trailers_owner').on(t.ownerCarrierId),
+    // typed lookups match unit numbers without regard to case (db/queries/trailer-lookup.ts)
+    index('trailers_unit_upper').on(sql`upper(${t.unitNumber})`),
   ],
 );

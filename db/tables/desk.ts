@@ -19,6 +19,8 @@ export const cases = pgTable(
       .notNull()
       .references(() => terminals.id),
     proposedCarrierId: uuid('proposed_carrier_id').references(() => carriers.id),
+    /** Set when the case holds damage with no earlier inspection: "no earlier inspection: not attributed". */
+    attributionNote: text('attribution_note'),
     state: caseStateEnum('state').notNull().default('open'),
     estimateCents: integer('estimate_cents').notNull().default(0),
     overrideCents: integer('override_cents'),
@@ -31,7 +33,13 @@ export const cases = pgTable(
     updatedAt: at('updated_at').notNull().defaultNow(),
     createdAt: createdAt(),
   },
-  (t) => [index('cases_state').on(t.terminalId, t.state), index('cases_carrier').on(t.proposedCarrierId)],
+  (t) => [
+    index('cases_state').on(t.terminalId, t.state),
+    index('cases_carrier').on(t.proposedCarrierId),
+    // the desk queue pages through cases by opening time (keyset: opened_at, id)
+    index('cases_opened').on(t.openedAt, t.id),
+    index('cases_trailer').on(t.trailerId),
+  ],
 );
 
 export const caseEvents = pgTable(

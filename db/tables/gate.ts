@@ -1,4 +1,15 @@
-import { boolean, index, integer, jsonb, pgTable, text, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { sql } from 'drizzle-orm';
+import {
+  boolean,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  primaryKey,
+  text,
+  uniqueIndex,
+  uuid,
+} from 'drizzle-orm/pg-core';
 import {
   at,
   conditionEnum,
@@ -61,6 +72,8 @@ export const handoffs = pgTable(
     pretripResult: pretripEnum('pretrip_result'),
     pretripAt: at('pretrip_at'),
     note: text('note'),
+    /** A hook of a "no perishable loads" trailer: the driver's answer to "is the load perishable?" */
+    isLoadPerishable: boolean('is_load_perishable'),
     occurredAt: at('occurred_at').notNull(),
     idempotencyKey: text('idempotency_key').notNull().unique(),
     correctsHandoffId: uuid('corrects_handoff_id'),
@@ -176,6 +189,8 @@ export const holds = pgTable(
     itemKey: text('item_key'),
     reason: text('reason').notNull(),
     source: text('source').notNull(),
+    /** The safety caution shown with the hold (the engine's, at the time it was placed). */
+    caution: text('caution'),
     placedById: uuid('placed_by_id').references(() => users.id),
     placedAt: at('placed_at').notNull().defaultNow(),
     releasedAt: at('released_at'),
@@ -184,5 +199,32 @@ export const holds = pgTable(
     repairedBy: text('repaired_by'),
     createdAt: createdAt(),
   },
-  (t) => [index('holds_trailer_open').on(t.trailerId, t.releasedAt)],
+  (t) => [
+    index('holds_trailer_open').on(t.trailerId, t.releasedAt),
+    // the board and the gate ask for open holds only: a small partial index however many were ever placed
+    index('holds_open')
+      .on(t.trailerId)
+      .where(sql`${t.releasedAt} is null`),
+  ],
+);
+
+/**
+ * A trailer's current condition: per checklist item, the handoff that last observed it. Kept up
+ * to date in the submit's transaction (one row per recorded item), so the gate and the submit
+ * know how far back the engine must look (the oldest of these) without reading the whole history.
+ */
+export const trailerCondition = pgTable(
+  'trailer_condition',
+  {
+    trailerId: uuid('trailer_id')
+      .notNull()
+      .references(() => trailers.id),
+    itemKey: text('item_key').notNull(),
+    handoffId: uuid('handoff_id')
+      .notNull()
+      .references(() => handoffs.id),
+    observedAt: at('observed_at').notNull(),
+    condition: conditionEnum('condition').notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.trailerId, t.itemKey] })],
 );

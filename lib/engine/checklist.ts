@@ -1,3 +1,4 @@
+import { isSafetyKey } from './safety-keys';
 import type {
   Checklist,
   ChecklistItem,
@@ -181,9 +182,14 @@ export function buildChecklist(spec: TrailerSpec): Checklist {
   const zones: ChecklistZone[] = defs.map(([zone, items]) => ({
     key: zone,
     label: ZONE_LABELS[zone],
-    items: items.map(([key, label, kind, reading]): ChecklistItem =>
-      reading ? { key, label, zone, kind, reading } : { key, label, zone, kind },
-    ),
+    items: items.map(([key, label, kind, reading]): ChecklistItem => ({
+      key,
+      label,
+      zone,
+      kind,
+      ...(reading ? { reading } : {}),
+      ...(isSafetyKey(key, kind) ? { isSafety: true as const } : {}),
+    })),
   }));
   return { spec, zones, items: zones.flatMap((z) => z.items) };
 }

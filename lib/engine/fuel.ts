@@ -36,13 +36,16 @@ export interface FuelInput {
  * Fuel at one drop, hook or walk: gallons and litres, shortfall against the policy's required
  * eighths (drops and hooks only), and the drop since the last reading against the burn the
  * engine hours explain. Flags a possible leak or theft only when the drop exceeds expected burn
- * plus the policy tolerance (a drop exactly at the tolerance is not flagged). Null when the
+ * plus the policy tolerance, in eighths of this trailer's tank (a drop exactly at the tolerance
+ * is not flagged). Null when the
  * current event has no fuel reading.
  */
 export function assessFuel({ trailer, history, current, policy }: FuelInput): FuelAssessment | null {
   if (typeof current.fuelEighths !== 'number') return null;
   const tank = trailer.fuelTankGallons ?? policy.defaultTankGallons;
   const eighths = current.fuelEighths;
+  // the gauge reads in eighths of this tank, so the tolerance scales with the tank
+  const tolerance = (policy.fuelDropToleranceEighths / 8) * tank;
   const gallons = eighthsToGallons(eighths, tank);
   const required =
     current.type === 'drop'
@@ -89,6 +92,7 @@ export function assessFuel({ trailer, history, current, policy }: FuelInput): Fu
     engineHoursRun: hoursRun,
     expectedBurnGallons: burn,
     unexplainedGallons: unexplained,
-    isPossibleLeakOrTheft: unexplained !== null && unexplained > policy.fuelDropToleranceGallons + EPSILON,
+    toleranceGallons: tolerance,
+    isPossibleLeakOrTheft: unexplained !== null && unexplained > tolerance + EPSILON,
   };
 }

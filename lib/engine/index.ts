@@ -29,8 +29,17 @@ export { attributeFindings } from './responsibility';
 export type { AttributeInput } from './responsibility';
 export { assessFuel, eighthsToGallons, eighthsToLitres, expectedBurnGallons } from './fuel';
 export type { FuelInput } from './fuel';
-export { blocksHook, evaluateHolds, OUT_OF_SERVICE_CAUTION } from './holds';
-export type { HoldInput } from './holds';
+export {
+  blocksHook,
+  decideHook,
+  evaluateHolds,
+  NO_PERISHABLE_CAUTION,
+  OUT_OF_SERVICE_CAUTION,
+  YARD_ONLY_CAUTION,
+} from './holds';
+export type { HoldInput, HookDecision } from './holds';
+export { answerGroup, safetyGaps, safetyGroups, safetyItems, statedObservation } from './safety';
+export type { SafetyAnswers, SafetyGap, SafetyGroup, SafetyGroupKey } from './safety';
 export { reconcileWalk } from './reconcile';
 export type { ReconcileInput } from './reconcile';
 export { defaultPolicy, defaultPolicySources, makePolicy } from './policy';

@@ -8,7 +8,7 @@ export const defaultPolicy: EnginePolicy = {
   requiredFuelEighthsAtDrop: 8,
   requiredFuelEighthsAtHook: 8,
   reeferBurnGallonsPerHour: 0.8,
-  fuelDropToleranceGallons: 6.25,
+  fuelDropToleranceEighths: 1,
   defaultTankGallons: 50,
   preTripMaxAgeHours: 72,
   minTreadThirtySeconds: 2,
@@ -21,8 +21,8 @@ export const defaultPolicySources: Record<keyof EnginePolicy, string> = {
   requiredFuelEighthsAtHook: 'common practice: a reefer tank is expected full at every drop and hook',
   reeferBurnGallonsPerHour:
     'secondary source: modern trailer refrigeration units burn about 0.4–1.1 US gal/h; 0.8 is a middle figure',
-  fuelDropToleranceGallons:
-    'terminal policy: one gauge eighth of a 50 gal tank, because the gauge reads only in eighths',
+  fuelDropToleranceEighths:
+    "terminal policy: one gauge eighth of the trailer's own tank, because the gauge reads only in eighths",
   defaultTankGallons: 'secondary source: reefer tanks are commonly about 50 US gal (25–120 seen)',
   preTripMaxAgeHours: 'terminal policy: no published figure; 72 h is a starting value',
   minTreadThirtySeconds: '49 CFR 393.75(c): at least 2/32 inch on trailer tires',

@@ -13,3 +13,19 @@ export function isChargeableDamage(
   const s = current ? severityOf(current) : null;
   return s !== null && s > MINOR;
 }
+
+/** How a case with damage no earlier inspection saw is marked: followed, never attributed. */
+export const NOT_ATTRIBUTED_NOTE = 'no earlier inspection: not attributed';
+
+/**
+ * Damage past cosmetic found at an item's first inspection on record: nobody can be charged
+ * for it, but it opens a case so the repair and the hold are followed.
+ */
+export function isUnattributedDamage(
+  kind: FindingKind | string,
+  current: Condition | null | undefined,
+): boolean {
+  if (kind !== 'first_record') return false;
+  const s = current ? severityOf(current) : null;
+  return s !== null && s > MINOR;
+}

@@ -29,6 +29,8 @@ export type Draft = {
   items: Record<string, DraftItem>;
   spotId: string | null;
   note: string;
+  /** Asked at a hook of a "no perishable loads" trailer. */
+  isLoadPerishable?: boolean | null;
 };
 
 export function newDraft(init: {
@@ -91,6 +93,7 @@ export function draftToInput(d: Draft, isReefer: boolean): unknown {
     items,
     spotId: d.spotId,
     note: d.note,
+    isLoadPerishable: d.isLoadPerishable ?? null,
   };
 }
 
@@ -103,10 +106,28 @@ export function itemChange(current: DraftItem | undefined, last: LastSeen | unde
 export const needsEvidence = (k: FindingKind, current: DraftItem | undefined) =>
   isChargeableDamage(k, current?.condition);
 
-/** "Same as last": the last observation's condition and kind fields, without its note or photos. */
+/**
+ * "Same as last": the last observation's condition and kind fields, without its note or photos.
+ * Never for a safety item: those are looked at and answered in every handoff (null).
+ */
 export function sameAsLast(item: ChecklistItem, last: LastSeen | undefined): DraftItem | null {
-  if (!last) return null;
+  if (!last || item.isSafety) return null;
   return { ...last.observation };
+}
+
+/** "Same as last" for a whole zone: answers for its unanswered items, safety items left out. */
+export function sameAsLastForZone(
+  items: readonly ChecklistItem[],
+  d: Draft,
+  last: Record<string, LastSeen>,
+): Record<string, DraftItem> {
+  const out: Record<string, DraftItem> = {};
+  for (const i of items) {
+    if (d.items[i.key]) continue;
+    const copy = sameAsLast(i, last[i.key]);
+    if (copy) out[i.key] = copy;
+  }
+  return out;
 }
 
 /** Items of a zone still to answer (not yet given a condition). */

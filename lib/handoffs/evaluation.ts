@@ -15,7 +15,7 @@ import {
   type ItemFinding,
   type TimelineEvent,
 } from '@/lib/engine';
-import { isChargeableDamage } from './damage';
+import { isChargeableDamage, isUnattributedDamage, NOT_ATTRIBUTED_NOTE } from './damage';
 
 export type FindingRow = {
   itemKey: string;
@@ -39,8 +39,12 @@ export type Evaluation = {
   rows: FindingRow[];
   /** Item keys with new or worse damage: each needs a photo and a note, and together they open one case. */
   damageKeys: string[];
+  /** Item keys with damage no earlier inspection saw: they open a case too, marked not attributed. */
+  unattributedKeys: string[];
   /** The carrier to propose on the case: set only when every damage attribution names the same single carrier. */
   proposedCarrierId: string | null;
+  /** `NOT_ATTRIBUTED_NOTE` when the case holds damage with no earlier inspection, else null. */
+  attributionNote: string | null;
 };
 
 const frac = (n: number) => `${n}/8`;
@@ -67,7 +71,7 @@ function attributionRow(f: ItemFinding, a: Attribution | undefined, terminalName
       (f.finding === 'repaired'
         ? `${f.label}: was ${f.previous}, now ${f.current}: repaired since the last inspection.`
         : `${f.label}: ${f.finding}.`),
-    isDamage: isChargeableDamage(f.finding, f.current),
+    isDamage: isChargeableDamage(f.finding, f.current) || isUnattributedDamage(f.finding, f.current),
   };
 }
 
@@ -147,7 +151,22 @@ export function evaluateHandoff(input: {
       return r?.type === 'carrier' && byKey.get(f.itemKey)?.status === 'single' ? r.carrierId : '';
     }),
   );
+  const unattributedKeys = compared
+    .filter((f) => isUnattributedDamage(f.finding, f.current))
+    .map((f) => f.itemKey);
   const [only] = [...parties];
-  const proposedCarrierId = parties.size === 1 && only ? only : null;
-  return { compared, attributions, fuel, holds, rows, damageKeys, proposedCarrierId };
+  // damage nobody can be charged for leaves the case with no single carrier to propose
+  const proposedCarrierId = parties.size === 1 && only && !unattributedKeys.length ? only : null;
+  const attributionNote = unattributedKeys.length ? NOT_ATTRIBUTED_NOTE : null;
+  return {
+    compared,
+    attributions,
+    fuel,
+    holds,
+    rows,
+    damageKeys,
+    unattributedKeys,
+    proposedCarrierId,
+    attributionNote,
+  };
 }

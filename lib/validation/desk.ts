@@ -3,17 +3,31 @@ import { CASE_STATES, DECISIONS } from '@/lib/desk/case-state';
 import { parseDollarsToCents } from '@/lib/desk/estimate';
 import { noteText, plainText } from './text';
 
+/** The largest amount a person may type: $1,000,000.00. */
+const MAX_CENTS = 100_000_000;
+
+/** What is actually wrong with a typed amount, in words a clerk can read out. */
+export function dollarsProblem(text: string, cents: number | null): string {
+  const t = text.trim();
+  if (t === '') return 'Enter an amount in dollars, like 425.00.';
+  if (/^-/.test(t)) return 'An amount cannot be negative.';
+  const rough = Number(t.replace(/[$,\s]/g, ''));
+  if ((cents !== null && cents > MAX_CENTS) || (Number.isFinite(rough) && rough * 100 > MAX_CENTS))
+    return 'An amount is at most $1,000,000.00.';
+  if (/^\$?\s*[\d,]+\.\d{3,}$/.test(t)) return 'Use at most two decimals (cents), like 425.50.';
+  if (/^\$?\s*[\d,]*\.?\d*$/.test(t) && /\d/.test(t))
+    return 'Put commas only between groups of three digits, like 1,250.00.';
+  return 'Enter an amount in dollars using digits only, like 425.00.';
+}
+
 /** A dollar amount typed by a person ("1,234.56"), read as whole cents without floating point. */
 export const dollarsSchema = z
   .string({ error: 'Enter an amount in dollars, like 425.00.' })
   .trim()
   .transform((text, ctx) => {
     const cents = parseDollarsToCents(text);
-    if (cents === null || cents > 100_000_000) {
-      ctx.addIssue({
-        code: 'custom',
-        message: 'Enter an amount in dollars, like 425.00 (at most two decimals).',
-      });
+    if (cents === null || cents > MAX_CENTS) {
+      ctx.addIssue({ code: 'custom', message: dollarsProblem(text, cents) });
       return z.NEVER;
     }
     return cents;
@@ -55,10 +69,30 @@ export const caseQueueQuerySchema = z.object({
     blankToUndefined,
     z.enum(CASE_SORTS, { error: 'Choose a sort order from the list.' }).default('oldest'),
   ),
+  /** Keyset cursor of the oldest/newest sorts: the last row shown, as `<opened-at ISO>_<case id>`. */
+  after: z.preprocess(
+    blankToUndefined,
+    z
+      .string()
+      .regex(/^\d{4}-\d{2}-\d{2}T[\d:.]+Z_[0-9a-f-]{36}$/, { error: 'This page link is not valid.' })
+      .transform((v) => ({ openedAt: new Date(v.slice(0, v.indexOf('_'))), id: v.slice(v.indexOf('_') + 1) }))
+      .refine((v) => !Number.isNaN(v.openedAt.getTime()), { error: 'This page link is not valid.' })
+      .optional(),
+  ),
 });
+/** Cases per page of the desk queue. */
+export const CASE_PAGE_SIZE = 50;
+/** The cursor that continues the queue after this row. */
+export const caseCursor = (row: { openedAt: Date; id: string }) => `${row.openedAt.toISOString()}_${row.id}`;
 export type CaseQueueQuery = z.infer<typeof caseQueueQuerySchema>;
 
-const reasonSchema = plainText(2000).min(3, { error: 'Give a reason (a few words at least).' });
+export const REASON_MAX = 2000;
+const reasonSchema = plainText(REASON_MAX, `A reason is at most ${REASON_MAX} characters; shorten it.`).min(
+  3,
+  {
+    error: 'Give a reason (a few words at least).',
+  },
+);
 const caseIdSchema = z.uuid({ error: 'This case does not exist.' });
 
 export const notifyCaseSchema = z.object({ caseId: caseIdSchema });

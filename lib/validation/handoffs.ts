@@ -6,6 +6,24 @@ import { noteText, plainText } from './text';
 // The server stays the authority: item keys are checked against the trailer's checklist, and
 // the photo-and-note rule for new or worse damage is enforced after the engine's comparison.
 
+/**
+ * The limits of the gate form's fields: the schema below and the browser's own limits
+ * (maxLength, min, max) both read them, so the two never disagree.
+ */
+export const HANDOFF_LIMITS = {
+  tread: { min: 0, max: 32 },
+  setpointF: { min: -40, max: 90 },
+  returnAirF: { min: -60, max: 140 },
+  engineHours: { min: 0, max: 200_000 },
+  itemNote: 500,
+  note: 1000,
+  driverName: 80,
+  tractorNumber: 20,
+  sealNumber: 30,
+} as const;
+export const TREAD_LIMITS = HANDOFF_LIMITS.tread;
+const L = HANDOFF_LIMITS;
+
 export const CONDITION_VALUES = CONDITIONS;
 export const conditionSchema = z.enum(CONDITION_VALUES, { error: 'Choose a condition.' });
 
@@ -21,8 +39,8 @@ export const itemObservationSchema = z.object({
   treadThirtySeconds: z
     .number({ error: 'Tread is a whole number of 32nds of an inch.' })
     .int({ error: 'Tread is a whole number of 32nds of an inch.' })
-    .min(0, { error: 'Tread cannot be below 0/32 in.' })
-    .max(32, { error: 'Tread above 32/32 in is not a trailer tire.' })
+    .min(L.tread.min, { error: 'Tread cannot be below 0/32 in.' })
+    .max(L.tread.max, { error: 'Tread above 32/32 in is not a trailer tire.' })
     .optional(),
   isHoldingAir: z.boolean().optional(),
   isEngaged: z.boolean().optional(),
@@ -31,7 +49,7 @@ export const itemObservationSchema = z.object({
   isInsulationShowing: z.boolean().optional(),
   isLeaking: z.boolean().optional(),
   cleanliness: z.enum(['clean', 'sweep', 'washout']).optional(),
-  note: optionalNote(500, 'A note'),
+  note: optionalNote(L.itemNote, 'A note'),
   photoIds: z
     .array(z.uuid({ error: 'A photo reference is not valid.' }))
     .max(6, { error: 'At most 6 photos per item.' })
@@ -47,18 +65,20 @@ export const reeferReadingsSchema = z.object({
   isUnitOn: z.boolean().nullable(),
   setpointF: z
     .number({ error: 'Setpoint is a number in °F.' })
-    .min(-40, { error: 'Setpoint is -40 °F or above.' })
-    .max(90, { error: 'Setpoint is 90 °F or below.' })
+    .min(L.setpointF.min, { error: `Setpoint is ${L.setpointF.min} °F or above.` })
+    .max(L.setpointF.max, { error: `Setpoint is ${L.setpointF.max} °F or below.` })
     .nullable(),
   returnAirF: z
     .number({ error: 'Return air is a number in °F.' })
-    .min(-60, { error: 'Return air is -60 °F or above.' })
-    .max(140, { error: 'Return air is 140 °F or below.' })
+    .min(L.returnAirF.min, { error: `Return air is ${L.returnAirF.min} °F or above.` })
+    .max(L.returnAirF.max, { error: `Return air is ${L.returnAirF.max} °F or below.` })
     .nullable(),
   engineHours: z
     .number({ error: 'Engine hours is a number.' })
-    .min(0, { error: 'Engine hours cannot be negative.' })
-    .max(200_000, { error: 'Engine hours look too large.' })
+    .min(L.engineHours.min, { error: 'Engine hours cannot be negative.' })
+    .max(L.engineHours.max, {
+      error: `Engine hours are at most ${L.engineHours.max.toLocaleString('en-US')}.`,
+    })
     .nullable(),
   preTripResult: z.enum(['pass', 'fail', 'not_run'], { error: 'Choose the last pre-trip result.' }),
   preTripAt: z.iso.datetime({ offset: true, error: 'Give the time of the last pre-trip.' }).nullable(),
@@ -72,20 +92,24 @@ export const handoffSubmitSchema = z
     trailerId: z.uuid({ error: 'Unknown trailer.' }),
     kind: z.enum(['drop', 'hook'], { error: 'Choose drop or hook.' }),
     carrierId: z.uuid({ error: 'Choose the carrier.' }),
-    driverName: plainText(80, 'The name is at most 80 characters.').min(2, {
+    driverName: plainText(L.driverName, `The name is at most ${L.driverName} characters.`).min(2, {
       error: "Enter the driver's name.",
     }),
     tractorNumber: z
       .string()
       .trim()
       .toUpperCase()
-      .regex(/^[A-Z0-9-]{1,20}$/, { error: 'Enter the tractor number (letters, digits, dashes).' }),
+      .regex(new RegExp(`^[A-Z0-9-]{1,${L.tractorNumber}}$`), {
+        error: `Enter the tractor number: up to ${L.tractorNumber} letters, digits or dashes.`,
+      }),
     isLoaded: z.boolean({ error: 'Say whether the trailer is loaded or empty.' }),
     sealNumber: z
       .string()
       .trim()
       .toUpperCase()
-      .regex(/^[A-Z0-9-]{0,30}$/, { error: 'A seal number is letters, digits and dashes.' })
+      .regex(new RegExp(`^[A-Z0-9-]{0,${L.sealNumber}}$`), {
+        error: `A seal number is up to ${L.sealNumber} letters, digits and dashes.`,
+      })
       .transform((s) => (s === '' ? null : s))
       .nullable()
       .optional(),
@@ -100,7 +124,9 @@ export const handoffSubmitSchema = z
       .record(itemKeySchema, itemObservationSchema)
       .refine((r) => Object.keys(r).length <= 120, { error: 'Too many items.' }),
     spotId: z.uuid({ error: 'Choose a slot.' }).nullable().optional(),
-    note: optionalNote(1000, 'The note'),
+    /** Asked at a hook of a "no perishable loads" trailer. */
+    isLoadPerishable: z.boolean({ error: 'Say whether the load is perishable.' }).nullable().optional(),
+    note: optionalNote(L.note, 'The note'),
     correctsHandoffId: z.uuid({ error: 'Name the handoff this corrects by its id.' }).nullable().optional(),
     /** Why the record is corrected: required of a clerk, optional for the driver who recorded it. */
     correctionReason: plainText(300, 'The reason is at most 300 characters.')

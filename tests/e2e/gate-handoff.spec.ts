@@ -51,6 +51,7 @@ test('drop with new damage and a photo, receipt with findings and holds, refused
     await form.fillReefer({ fuel: 'Full 8/8', setpoint: '34', returnAir: '36', engineHours: '9100' });
     await expect(driver.getByRole('note', { name: 'Before going under the trailer' }).first()).toBeVisible();
     await form.sameAsLastEverywhere();
+    await form.answerSafety(10);
 
     const skin = form.item('Left side skin');
     await form.choose('Left side skin: condition', 'Damaged', skin);
@@ -149,6 +150,7 @@ test('a draft survives a reload, and a drop submitted offline is sent when the c
   await page.getByLabel('Seal number').fill('SL-88123');
   await form.fillReefer({ fuel: '6/8', setpoint: '-10', returnAir: '-8', engineHours: '9400' });
   await form.sameAsLastEverywhere();
+  await form.answerSafety(9);
 
   await page.reload();
   await expect(page.getByLabel('Tractor number')).toHaveValue('T-5120');

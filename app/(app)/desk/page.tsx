@@ -7,7 +7,7 @@ import { isDeskStaff } from '@/lib/desk/access';
 import { formatMoney } from '@/lib/format/money';
 import { formatTime } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
-import { caseQueueQuerySchema } from '@/lib/validation/desk';
+import { CASE_PAGE_SIZE, caseCursor, caseQueueQuerySchema } from '@/lib/validation/desk';
 import { describeZodError } from '@/lib/validation/errors';
 import { CaseStateBadge } from './_components/case-state-badge';
 import { QueueFilters } from './_components/queue-filters';
@@ -28,11 +28,24 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
   const errors = parsed.success ? {} : describeZodError(parsed.error).fieldErrors;
   const isStaff = isDeskStaff(user.role);
   const now = new Date();
-  const [rows, carriers] = await Promise.all([
-    parsed.success ? listCases(user, { ...parsed.data, now }) : Promise.resolve([]),
+  const [page, carriers] = await Promise.all([
+    parsed.success
+      ? listCases(user, { ...parsed.data, now, limit: CASE_PAGE_SIZE + 1 })
+      : Promise.resolve([]),
     isStaff ? listCaseCarriers() : Promise.resolve([]),
   ]);
   const tz = user.terminalTimeZone ?? 'UTC';
+  const rows = page.slice(0, CASE_PAGE_SIZE);
+  // the time sorts page by keyset (the last case shown); the amount sorts show their first page only
+  const sort = parsed.success ? parsed.data.sort : 'oldest';
+  const last = rows.at(-1);
+  const nextHref =
+    page.length > CASE_PAGE_SIZE && last && (sort === 'oldest' || sort === 'newest')
+      ? `/desk?${new URLSearchParams([
+          ...Object.entries(raw).filter((e): e is [string, string] => e[0] !== 'after' && e[1] !== undefined),
+          ['after', caseCursor(last)],
+        ])}`
+      : null;
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -84,6 +97,11 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
           ))}
         </ul>
       )}
+      {nextHref ? (
+        <Link href={nextHref} className="inline-block min-h-tap text-gate font-bold text-brand underline">
+          Next {CASE_PAGE_SIZE} cases
+        </Link>
+      ) : null}
     </div>
   );
 }

@@ -7,14 +7,20 @@ import { submitHandoff } from '@/lib/server/handoffs/submit';
 import { deliverDueEmails } from '@/lib/server/mail';
 import { handoffSubmitSchema } from '@/lib/validation/handoffs';
 
-/** A refused hook names its holds; the driver also reads the out-of-service and inspection cautions. */
+type RefusedHold = { severity: string; restriction: string | null };
+
+/** A refused hook names its holds (each with its caution); the driver also reads the cautions that fit them. */
 function withCautions(r: Refusal): Refusal {
-  const holds = r.detail?.holds;
+  const holds = r.detail?.holds as RefusedHold[] | undefined;
   if (!Array.isArray(holds) || !holds.length) return r;
-  return refuse(r.code, r.message, r.fieldErrors, {
-    holds,
-    cautions: [CAUTIONS.outOfService, CAUTIONS.inspection],
-  });
+  const has = (test: (h: RefusedHold) => boolean) => holds.some(test);
+  const cautions: string[] = [
+    has((h) => h.severity === 'out_of_service') ? CAUTIONS.outOfService : null,
+    has((h) => h.restriction === 'yard_only') ? CAUTIONS.yardOnly : null,
+    has((h) => h.restriction === 'no_perishable') ? CAUTIONS.noPerishable : null,
+    CAUTIONS.inspection,
+  ].flatMap((c) => (c === null ? [] : [c]));
+  return refuse(r.code, r.message, r.fieldErrors, { holds, cautions });
 }
 
 /** Records a drop or hook. 201 with the new handoff; 200 with the same one for a retried submit. */

@@ -54,6 +54,11 @@ export interface ChecklistItem {
   kind: ItemKind;
   /** Only for `kind: 'reading'`. */
   reading?: ReadingField;
+  /**
+   * A safety item: it must be looked at and answered in every handoff, never copied from the
+   * last record ("Same as last" skips it). See `lib/engine/safety.ts`.
+   */
+  isSafety?: true;
 }
 
 export interface ChecklistZone {

@@ -8,8 +8,11 @@ export interface EnginePolicy {
   requiredFuelEighthsAtDrop: number;
   requiredFuelEighthsAtHook: number;
   reeferBurnGallonsPerHour: number;
-  /** Allowed fuel drop beyond expected burn before flagging a possible leak or theft. */
-  fuelDropToleranceGallons: number;
+  /**
+   * Allowed fuel drop beyond expected burn before flagging a possible leak or theft, in gauge
+   * eighths of this trailer's own tank (1 = one eighth: 6.25 gal of a 50 gal tank, 15 gal of 120).
+   */
+  fuelDropToleranceEighths: number;
   defaultTankGallons: number;
   preTripMaxAgeHours: number;
   minTreadThirtySeconds: number;

@@ -81,6 +81,8 @@ export interface FuelAssessment {
   expectedBurnGallons: number | null;
   /** Drop beyond expected burn; positive means more fuel gone than the unit could burn. */
   unexplainedGallons: number | null;
+  /** Gallons the policy tolerates beyond expected burn: its eighths of this tank. */
+  toleranceGallons: number;
   isPossibleLeakOrTheft: boolean;
 }
 

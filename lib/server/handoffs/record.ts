@@ -16,10 +16,10 @@ import {
   lockTrailer,
 } from '@/db/queries/handoff-submit';
 import { skipCommitFlush } from '@/db/queries/handoff-writes';
-import { blocksHook } from '@/lib/engine';
+import { decideHook, safetyGaps } from '@/lib/engine';
 import { correctionRefusal } from '@/lib/handoffs/correction';
 import { evaluateHandoff } from '@/lib/handoffs/evaluation';
-import { holdReasons } from '@/lib/handoffs/holds';
+import { HOOK_WORDS, holdReasons } from '@/lib/handoffs/holds';
 import { damageEvidenceErrors, normalizeItems } from '@/lib/handoffs/items';
 import { handoffEvent, submissionHash } from '@/lib/handoffs/submission';
 import { abort, refuse } from '@/lib/result';
@@ -85,22 +85,36 @@ export async function recordHandoff(
   const policy = terminalPolicyOf(await getPolicyData(tx, terminalId)).engine;
   const openHolds = await listOpenHoldRows(tx, trailer.id);
   if (!carrier) abort(refuse('invalid', 'Unknown carrier.', { carrierId: ['Choose the carrier.'] }));
-  const held = openHolds.filter((h) => h.severity === 'out_of_service');
-  if (!original && input.kind === 'hook' && held.length) {
+  const before = !original && input.kind === 'hook' ? decideHook(openHolds, input.isLoadPerishable) : null;
+  if (before?.outcome === 'refused') {
     abort(
-      refuse(
-        'conflict',
-        `Trailer ${trailer.unitNumber} is out of service and may not leave the gate.`,
-        undefined,
-        { holds: holdReasons(held) },
-      ),
+      refuse('conflict', HOOK_WORDS.refused(trailer.unitNumber, before.because, false), undefined, {
+        holds: holdReasons(before.holds),
+      }),
+    );
+  }
+  if (before?.outcome === 'ask_perishable') {
+    abort(
+      refuse('invalid', HOOK_WORDS.perishableAsk(trailer.unitNumber), {
+        isLoadPerishable: [HOOK_WORDS.perishableField],
+      }),
     );
   }
 
   const checklist = checklistOf(trailer);
   const items = normalizeItems(checklist, input.items);
-  if (Object.keys(items.fieldErrors).length)
-    abort(refuse('invalid', 'Some items need attention.', items.fieldErrors));
+  const gaps = safetyGaps(checklist, {
+    items: items.observations,
+    isLoaded: input.isLoaded,
+    isUnitOn: trailer.kind === 'reefer' ? input.reefer?.isUnitOn : null,
+  });
+  for (const g of gaps) items.fieldErrors[g.field] ??= [g.message];
+  if (Object.keys(items.fieldErrors).length) {
+    const message = gaps.length
+      ? `${gaps.length === 1 ? 'One safety item is' : `${gaps.length} safety items are`} not answered: look at each and answer it.`
+      : 'Some items need attention.';
+    abort(refuse('invalid', message, items.fieldErrors));
+  }
 
   const timeline = await loadTimeline(trailer.id, tx);
   const last = timeline.at(-1);
@@ -132,17 +146,26 @@ export async function recordHandoff(
     terminalName: terminal.name,
   });
 
-  if (!original && input.kind === 'hook' && blocksHook(ev.holds)) {
+  const found = !original && input.kind === 'hook' ? decideHook(ev.holds, input.isLoadPerishable) : null;
+  if (found?.outcome === 'refused') {
     // the holds this record found travel with the refusal: submit.ts places them on the trailer
     abort(
-      refuse(
-        'conflict',
-        `What you recorded puts trailer ${trailer.unitNumber} out of service: it may not leave the gate. The trailer is now on hold; tell the terminal clerk.`,
-        undefined,
-        { holds: holdReasons(ev.holds.filter((h) => h.severity === 'out_of_service')), found: ev.holds },
-      ),
+      refuse('conflict', HOOK_WORDS.refused(trailer.unitNumber, found.because, true), undefined, {
+        holds: holdReasons(found.holds),
+        found: ev.holds,
+      }),
     );
   }
+  if (found?.outcome === 'ask_perishable') {
+    abort(
+      refuse('invalid', HOOK_WORDS.perishableAsk(trailer.unitNumber), {
+        isLoadPerishable: [HOOK_WORDS.perishableField],
+      }),
+    );
+  }
+  const askedPerishable =
+    (before?.outcome === 'allowed' && before.askedPerishable) ||
+    (found?.outcome === 'allowed' && found.askedPerishable);
   const evidence = damageEvidenceErrors(ev.damageKeys, items.rows, items.photoIds);
   if (Object.keys(evidence).length)
     abort(refuse('invalid', 'New or worse damage needs a photo and a note.', evidence));
@@ -171,6 +194,7 @@ export async function recordHandoff(
     requestHash: submissionHash(input),
     recordedAt: now,
     correction: original ? { isOfLatest: (await latestHandoffId(tx, trailer.id)) === original.id } : null,
+    isLoadPerishable: askedPerishable ? (input.isLoadPerishable ?? null) : null,
   });
 }
 

@@ -51,6 +51,7 @@ export async function settleRefusedHook(
         itemKey: h.itemKey,
         reason: `${h.reason} (found at a refused hook)`,
         source: h.source,
+        caution: h.caution,
         placedById: actor.id,
         placedAt: now,
       })),

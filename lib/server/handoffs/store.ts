@@ -13,6 +13,7 @@ import {
   insertHandoffItems,
   insertHolds,
   insertOpenedCase,
+  recordCurrentCondition,
   updateTrailer,
 } from '@/db/queries/handoff-writes';
 import type { HandoffEvent, TimelineEvent } from '@/lib/engine';
@@ -49,6 +50,8 @@ export type CheckedHandoff = {
   recordedAt: Date;
   /** Set for a correction: whether the record it corrects is the trailer's latest. */
   correction: { isOfLatest: boolean } | null;
+  /** The driver's answer at a hook of a "no perishable loads" trailer; null when not asked. */
+  isLoadPerishable: boolean | null;
 };
 
 export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitResult> {
@@ -77,27 +80,37 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
     contentHash,
     hashVersion: KEYED_HASH_VERSION,
     requestHash: c.requestHash,
+    isLoadPerishable: c.isLoadPerishable,
   });
   await insertHandoffItems(
     tx,
     items.rows.map((i) => ({ ...i, handoffId: id })),
   );
   await attachPhotos(tx, id, items.photoIds);
+  await recordCurrentCondition(tx, { trailerId: trailer.id, handoffId: id, observedAt: now }, items.rows);
 
-  const caseId = ev.damageKeys.length
-    ? await insertOpenedCase(
-        tx,
-        {
-          handoffId: id,
-          trailerId: trailer.id,
-          terminalId: terminal.id,
-          proposedCarrierId: ev.proposedCarrierId,
-          estimateCents: 0,
-          openedAt: now,
-        },
-        { actorId: actor.id, note: `Opened by the ${input.kind} of ${trailer.unitNumber}.` },
-      )
-    : null;
+  // new or worse damage, and damage no earlier inspection saw (followed, not attributed), open one case
+  const caseId =
+    ev.damageKeys.length || ev.unattributedKeys.length
+      ? await insertOpenedCase(
+          tx,
+          {
+            handoffId: id,
+            trailerId: trailer.id,
+            terminalId: terminal.id,
+            proposedCarrierId: ev.proposedCarrierId,
+            attributionNote: ev.attributionNote,
+            estimateCents: 0,
+            openedAt: now,
+          },
+          {
+            actorId: actor.id,
+            note:
+              `Opened by the ${input.kind} of ${trailer.unitNumber}.` +
+              (ev.attributionNote ? ` Marked "${ev.attributionNote}".` : ''),
+          },
+        )
+      : null;
   // a finding links to an earlier handoff only: the engine may also name a walk or a move
   const handoffIds = new Set(
     c.history.filter((e) => e.type === 'drop' || e.type === 'hook').map((e) => e.id),
@@ -134,6 +147,7 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
       itemKey: h.itemKey,
       reason: h.reason,
       source: h.source,
+      caution: h.caution,
       placedById: actor.id,
       placedAt: now,
     })),

@@ -46,13 +46,23 @@ export class HandoffFormPage {
     await this.page.getByLabel('When was it run?').fill(when);
   }
 
-  /** One tap per zone: every item with an earlier record takes its last condition. */
+  /** One tap: every item with an earlier record takes its last condition, safety items excepted. */
   async sameAsLastEverywhere() {
-    const buttons = this.page.getByRole('button', { name: /^Same as last for / });
-    await expect(buttons.first()).toBeVisible();
-    const n = await buttons.count();
-    expect(n).toBeGreaterThan(3);
-    for (let i = 0; i < n; i++) await buttons.nth(i).click();
+    await this.page
+      .getByRole('button', { name: 'Same as last for every zone (safety items excluded)' })
+      .click();
+  }
+
+  /** The explicit statement of each safety group ("… I looked at each"), tires with the tread given. */
+  async answerSafety(treadThirtySeconds: number) {
+    await this.page
+      .getByLabel('Shallowest tread you measured (32nds of an inch)')
+      .fill(String(treadThirtySeconds));
+    const statements = this.page.getByRole('button', { name: /: I looked at/ });
+    const n = await statements.count();
+    expect(n).toBeGreaterThanOrEqual(5);
+    for (let i = 0; i < n; i++) await statements.nth(i).click();
+    return n;
   }
 
   async submit(kind: 'drop' | 'hook') {

@@ -12,7 +12,8 @@ import { priceNewCases } from '@/lib/server/desk/pricing';
 import { caseLinkSecret, reloadEnv } from '@/lib/server/env';
 import { makeDeskFixture } from './desk-fixtures';
 
-const session = vi.hoisted(() => ({ userId: undefined as string | undefined }));
+// version 1: the seeded accounts have never ended their sessions (users.session_version starts at 1)
+const session = vi.hoisted(() => ({ userId: undefined as string | undefined, version: 1 }));
 vi.mock('@/lib/server/session', () => ({ getSession: async () => session }));
 vi.mock('next/navigation', () => ({
   forbidden: () => {

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { eq } from 'drizzle-orm';
 import { db, pool } from '@/db';
-import { handoffs } from '@/db/schema';
+import { handoffs, holds } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { handoffSubmitSchema, verificationCodeSchema } from '@/lib/validation/handoffs';
 import { CAUTIONS } from '@/app/_components/caution';
@@ -98,6 +98,30 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
     expect(body.fieldErrors.note).toEqual(['Remove the special characters from this note.']);
   });
 
+  it('a handoff with a safety item unanswered is a 422 naming that item, and nothing is stored', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    delete items['undercarriage.tandem_pin.right_rear'];
+    delete items['undercarriage.landing_gear.cross_shaft'];
+    items['undercarriage.fuel_tank.leaks'] = { condition: 'ok' }; // leaking or not: unanswered
+    const input = submitInput(trailer.id, carrierId, 'drop', items, new Date(), { isLoaded: true });
+    input.reefer = { ...input.reefer!, isUnitOn: null };
+    const res = await post(JSON.stringify(input));
+    expect(res.status).toBe(422);
+    const body = await res.json();
+    expect(body.message).toBe('4 safety items are not answered: look at each and answer it.');
+    expect(Object.keys(body.fieldErrors).sort()).toEqual([
+      'items.undercarriage.fuel_tank.leaks',
+      'items.undercarriage.landing_gear.cross_shaft',
+      'items.undercarriage.tandem_pin.right_rear',
+      'reefer.isUnitOn',
+    ]);
+    expect(body.fieldErrors['items.undercarriage.tandem_pin.right_rear']).toEqual([
+      'Tandem locking pin, right rear is a safety item: look at it and answer it in this handoff.',
+    ]);
+    expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(0);
+  });
+
   it('a hook of an out-of-service trailer is a 409 naming the holds, with the cautions to read', async () => {
     const { trailer, checklist } = await freshTrailer();
     const items = allOk(checklist);
@@ -118,6 +142,82 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
       holds: [{ reason: 'Tandem locking pin, left front is not engaged.', severity: 'out_of_service' }],
       cautions: [CAUTIONS.outOfService, CAUTIONS.inspection],
     });
+    expect(body.holds[0].caution).toContain('qualified technician');
+  });
+
+  it('a "yard moves only" trailer is refused at the hook like out of service, with reason and cautions', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    // common practice: a trailer without a usable spare stays in the yard (default policy: restricted, yard only)
+    items['undercarriage.spare_tire'] = { condition: 'missing' };
+    const d = await actor('D1001');
+    await recorded(submitInput(trailer.id, carrierId, 'drop', items, new Date(Date.now() - 60_000)), d, {
+      now: new Date(Date.now() - 60_000),
+      sendReceipt: false,
+    });
+    const [stored] = await db.select().from(holds).where(eq(holds.trailerId, trailer.id));
+    expect(stored).toMatchObject({ restriction: 'yard_only' });
+    expect(stored.caution).toContain('Chock the wheels'); // the hold's caution is kept with it
+    const res = await post(
+      JSON.stringify(submitInput(trailer.id, carrierId, 'hook', allOk(checklist), new Date())),
+    );
+    expect(res.status).toBe(409);
+    const body = await res.json();
+    expect(body.message).toBe(
+      `Trailer ${trailer.unitNumber} is restricted to yard moves only and may not leave the gate.`,
+    );
+    expect(body.holds).toEqual([
+      {
+        reason: 'Spare tire is missing.',
+        severity: 'restricted',
+        restriction: 'yard_only',
+        caution: stored.caution,
+      },
+    ]);
+    expect(body.cautions).toEqual([CAUTIONS.yardOnly, CAUTIONS.inspection]);
+    expect(await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id))).toHaveLength(1);
+  });
+
+  it('a "no perishable loads" trailer: the hook asks, refuses a perishable load, records "not perishable"', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    // common practice: a hinge that does not lock leaves an air gap at the door
+    items['rear.door_left.hinge_2'] = { condition: 'ok', isLocking: false };
+    const d = await actor('D1001');
+    await recorded(submitInput(trailer.id, carrierId, 'drop', items, new Date(Date.now() - 60_000)), d, {
+      now: new Date(Date.now() - 60_000),
+      sendReceipt: false,
+    });
+    const hook = (extra: object) =>
+      post(JSON.stringify(submitInput(trailer.id, carrierId, 'hook', allOk(checklist), new Date(), extra)));
+
+    const asked = await hook({});
+    expect(asked.status).toBe(422);
+    expect((await asked.json()).fieldErrors).toEqual({
+      isLoadPerishable: [
+        'This trailer may not carry a perishable load: say whether this load is perishable.',
+      ],
+    });
+
+    const perishable = await hook({ isLoadPerishable: true });
+    expect(perishable.status).toBe(409);
+    const refusal = await perishable.json();
+    expect(refusal.message).toContain('may not carry a perishable load');
+    expect(refusal.holds[0]).toMatchObject({
+      restriction: 'no_perishable',
+      reason: 'Left door hinge 2 (from top) does not lock.',
+    });
+    expect(refusal.cautions).toEqual([CAUTIONS.noPerishable, CAUTIONS.inspection]);
+
+    const dry = await hook({ isLoadPerishable: false });
+    expect(dry.status).toBe(201);
+    const rows = await db.select().from(handoffs).where(eq(handoffs.trailerId, trailer.id));
+    expect(rows.map((r) => [r.kind, r.isLoadPerishable])).toEqual(
+      expect.arrayContaining([
+        ['drop', null],
+        ['hook', false],
+      ]),
+    );
   });
 
   it('only gate roles record a handoff: a jockey gets 403, nobody signed in 401, and nothing is stored', async () => {

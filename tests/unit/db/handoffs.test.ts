@@ -1,3 +1,4 @@
+import { OUT_OF_SERVICE_CAUTION } from '@/lib/engine';
 import { randomUUID } from 'node:crypto';
 import { and, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -39,6 +40,41 @@ describe('handoff submit service (real database)', () => {
   });
   afterAll(async () => {
     await pool.end();
+  });
+
+  it('damage with no earlier inspection opens a case marked "no earlier inspection: not attributed"', async () => {
+    const { trailer, checklist } = await freshTrailer();
+    const items = allOk(checklist);
+    items['rear.door_right.panel'] = { condition: 'damaged', note: 'Panel bent at the bottom corner' };
+    items['left_side.rivets'] = { condition: 'minor', note: 'A few rivets dull' }; // cosmetic: no case
+    const h = await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, {
+      now: at(0),
+      sendReceipt: false,
+    });
+    const [c] = await db.select().from(cases).where(eq(cases.handoffId, h.handoffId));
+    expect(c).toMatchObject({
+      state: 'open',
+      proposedCarrierId: null,
+      attributionNote: 'no earlier inspection: not attributed',
+    });
+    const rows = await db.select().from(findings).where(eq(findings.handoffId, h.handoffId));
+    const panel = rows.find((f) => f.itemKey === 'rear.door_right.panel')!;
+    expect(panel).toMatchObject({ kind: 'first_record', caseId: c.id, responsibleParty: null });
+    expect(panel.reason).toContain('cannot be attributed to anyone');
+    expect(rows.find((f) => f.itemKey === 'left_side.rivets')?.caseId).toBeNull();
+    const [opened] = await db.select().from(caseEvents).where(eq(caseEvents.caseId, c.id));
+    expect(opened.note).toContain('Marked "no earlier inspection: not attributed"');
+  });
+
+  it('a first record with every item ok or only cosmetic marks opens no case', async () => {
+    const { trailer, checklist } = await freshTrailer('dry_van');
+    const items = allOk(checklist);
+    items['left_side.skin'] = { condition: 'minor' };
+    const h = await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', items, at(0)), d1, {
+      now: at(0),
+      sendReceipt: false,
+    });
+    expect(await db.select().from(cases).where(eq(cases.handoffId, h.handoffId))).toHaveLength(0);
   });
 
   it('a retried submit with the same key returns the same handoff and stores one', async () => {
@@ -124,7 +160,12 @@ describe('handoff submit service (real database)', () => {
     });
     expect(e.code).toBe('conflict');
     expect(e.detail?.holds).toEqual([
-      { reason: 'Tandem locking pin, left rear is not engaged.', severity: 'out_of_service' },
+      {
+        reason: 'Tandem locking pin, left rear is not engaged.',
+        severity: 'out_of_service',
+        restriction: null,
+        caution: OUT_OF_SERVICE_CAUTION,
+      },
     ]);
     const [t] = await db.select().from(trailers).where(eq(trailers.id, trailer.id));
     expect(t.status).toBe('in_yard');
@@ -143,7 +184,14 @@ describe('handoff submit service (real database)', () => {
     expect(e.code).toBe('conflict');
     // the caller reads the reasons only; the holds themselves were placed by the service
     expect(e.detail).toEqual({
-      holds: [{ reason: 'Tandem locking pin, right front is not engaged.', severity: 'out_of_service' }],
+      holds: [
+        {
+          reason: 'Tandem locking pin, right front is not engaged.',
+          severity: 'out_of_service',
+          restriction: null,
+          caution: OUT_OF_SERVICE_CAUTION,
+        },
+      ],
     });
     const placed = await db
       .select()

@@ -10,7 +10,8 @@ import { IDLE } from '@/lib/result';
 // session cookie is replaced; the role check, zod, the service and the database are real.
 // next.config.mjs turns on authInterrupts, which is how Next lets forbidden() run; the test does the same.
 process.env.__NEXT_EXPERIMENTAL_AUTH_INTERRUPTS = 'true';
-const session = vi.hoisted(() => ({ userId: undefined as string | undefined }));
+// version 1: the seeded accounts have never ended their sessions (users.session_version starts at 1)
+const session = vi.hoisted(() => ({ userId: undefined as string | undefined, version: 1 }));
 vi.mock('@/lib/server/session', () => ({ getSession: async () => session }));
 vi.mock('next/cache', () => ({ revalidatePath: () => undefined }));
 const { reissueLabelAction } = await import('@/app/(app)/trailers/labels/actions');

@@ -15,8 +15,11 @@ import {
 // The yard's entry points without a running Next server. Only the sealed session cookie is
 // replaced: it names a user of this database, and everything above it (the account lookup, the
 // role check of requireUser and route(), the schemas, the services) is real.
-const session = vi.hoisted(() => ({ userId: undefined as string | undefined }));
-vi.mock('@/lib/server/session', () => ({ getSession: async () => ({ userId: session.userId }) }));
+// version 1: the seeded accounts have never ended their sessions (users.session_version starts at 1)
+const session = vi.hoisted(() => ({ userId: undefined as string | undefined, version: 1 }));
+vi.mock('@/lib/server/session', () => ({
+  getSession: async () => ({ userId: session.userId, version: session.version }),
+}));
 vi.mock('next/cache', () => ({ revalidatePath: () => undefined }));
 // next.config.mjs enables experimental.authInterrupts, which the Next build passes to forbidden()
 // through this variable; without it forbidden() throws a different error.

@@ -115,7 +115,8 @@ describe('fuel', () => {
 
   it('flags fuel that fell more than engine hours explain; exactly at tolerance is not flagged', () => {
     // 50 gal tank: 8/8 → 4/8 is 25 gal gone. 10 engine hours × 0.8 gal/h = 8 gal burn.
-    const policy = makePolicy({ fuelDropToleranceGallons: 17 });
+    // Tolerance 2.72 eighths of 50 gal = 2.72 / 8 × 50 = 17 gal.
+    const policy = makePolicy({ fuelDropToleranceEighths: 2.72 });
     const before = drop(
       '2026-11-04T14:00:00Z',
       northwind,
@@ -188,5 +189,65 @@ describe('fuel', () => {
     expect(f.previousEventId).toBe(w.id);
     expect(f.dropGallons).toBe(6.25);
     expect(f.expectedBurnGallons).toBe(4);
+  });
+});
+
+describe('fuel tolerance scales with the tank (terminal policy: one gauge eighth of this tank)', () => {
+  // No engine hours run between the readings (1200 h both times), so no burn explains any drop.
+  const tank = (gallons: number): TrailerSpec => ({ ...spec, fuelTankGallons: gallons });
+  const reading = (eighths: number, hours = 1200) => ({
+    fuelEighths: eighths,
+    reefer: { engineHours: hours },
+  });
+  const fall = (gallons: number, from: number, to: number, hoursAfter = 1200) =>
+    assessFuel({
+      trailer: tank(gallons),
+      history: [drop('2026-11-04T14:00:00Z', northwind, {}, reading(from))],
+      current: hook('2026-11-05T14:00:00Z', bluefield, {}, reading(to, hoursAfter)),
+      policy: defaultPolicy,
+    })!;
+
+  it('50 gal tank: one eighth is 50 / 8 = 6.25 gal, exactly the tolerance: not flagged; two eighths are', () => {
+    const one = fall(50, 8, 7);
+    expect(one.toleranceGallons).toBe(6.25); // 1/8 × 50 = 6.25 gal
+    expect(one.dropGallons).toBe(6.25);
+    expect(one.isPossibleLeakOrTheft).toBe(false);
+    const two = fall(50, 8, 6); // 2/8 × 50 = 12.5 gal gone, 12.5 − 0 burn = 12.5 > 6.25
+    expect(two.unexplainedGallons).toBe(12.5);
+    expect(two.isPossibleLeakOrTheft).toBe(true);
+  });
+
+  it('55 gal tank: one eighth is 55 / 8 = 6.875 gal, within its own tolerance (a fixed 6.25 gal flagged it)', () => {
+    const one = fall(55, 8, 7);
+    expect(one.toleranceGallons).toBe(6.875); // 1/8 × 55 = 6.875 gal
+    expect(one.dropGallons).toBe(6.875);
+    expect(one.isPossibleLeakOrTheft).toBe(false);
+    // 8/8 → 6/8 of 55 gal: 2 × 6.875 = 13.75 gal unexplained > 6.875
+    expect(fall(55, 8, 6)).toMatchObject({ unexplainedGallons: 13.75, isPossibleLeakOrTheft: true });
+  });
+
+  it('120 gal tank: one eighth is 120 / 8 = 15 gal: not flagged; a quarter with 5 h run is', () => {
+    const one = fall(120, 8, 7);
+    expect(one.toleranceGallons).toBe(15); // 1/8 × 120 = 15 gal
+    expect(one.dropGallons).toBe(15);
+    expect(one.isPossibleLeakOrTheft).toBe(false);
+    // NIST HB 44 (Appendix C): 1 US gal = 3.785 411 784 L; 7/8 × 120 = 105 gal = 397.468 237 32 L
+    expect(one.litres).toBeCloseTo(397.46823732, 8);
+    // 8/8 → 6/8 = 30 gal gone; 5 h × 0.8 gal/h = 4 gal burn; 30 − 4 = 26 gal unexplained > 15
+    const quarter = fall(120, 8, 6, 1205);
+    expect(quarter).toMatchObject({ dropGallons: 30, engineHoursRun: 5, isPossibleLeakOrTheft: true });
+    expect(quarter.expectedBurnGallons).toBeCloseTo(4, 9);
+    expect(quarter.unexplainedGallons).toBeCloseTo(26, 9);
+  });
+
+  it('the tolerance follows the policy’s eighths: two eighths of 120 gal are 30 gal', () => {
+    const r = assessFuel({
+      trailer: tank(120),
+      history: [drop('2026-11-04T14:00:00Z', northwind, {}, reading(8))],
+      current: hook('2026-11-05T14:00:00Z', bluefield, {}, reading(6, 1205)),
+      policy: makePolicy({ fuelDropToleranceEighths: 2 }),
+    })!;
+    expect(r.toleranceGallons).toBe(30); // 2/8 × 120 = 30 gal; 26 gal unexplained is within it
+    expect(r.isPossibleLeakOrTheft).toBe(false);
   });
 });

@@ -2,10 +2,13 @@ import { describe, expect, it } from 'vitest';
 import {
   blocksHook,
   buildChecklist,
+  decideHook,
   defaultPolicy,
   evaluateHolds,
   makePolicy,
+  NO_PERISHABLE_CAUTION,
   OUT_OF_SERVICE_CAUTION,
+  YARD_ONLY_CAUTION,
 } from '@/lib/engine';
 import type { HandoffEvent, ItemObservations, ReeferReadings } from '@/lib/engine';
 import { drop, northwind, walk } from './fixtures';
@@ -166,5 +169,62 @@ describe('evaluateHolds', () => {
     });
     const hs = evaluateHolds({ checklist: reefer, event: w, now: NOW, policy: defaultPolicy });
     expect(rules(hs)).toEqual(['tire_not_holding_air']);
+  });
+});
+
+describe('decideHook: what the gate does with a trailer’s holds', () => {
+  const oos = { severity: 'out_of_service' as const, restriction: null, reason: 'pin' };
+  const yard = { severity: 'restricted' as const, restriction: 'yard_only', reason: 'spare' };
+  const cold = { severity: 'restricted' as const, restriction: 'no_perishable', reason: 'hinge' };
+
+  it('no hold: allowed, nothing asked', () => {
+    expect(decideHook([], null)).toEqual({ outcome: 'allowed', askedPerishable: false });
+  });
+
+  it('out of service refuses first, whatever else holds the trailer', () => {
+    expect(decideHook([cold, yard, oos], false)).toEqual({
+      outcome: 'refused',
+      because: 'out_of_service',
+      holds: [oos],
+    });
+  });
+
+  it('"yard moves only" refuses a hook like out of service (common practice: no trip until fixed)', () => {
+    expect(decideHook([cold, yard], false)).toEqual({
+      outcome: 'refused',
+      because: 'yard_only',
+      holds: [yard],
+    });
+  });
+
+  it('"no perishable loads" asks, refuses a perishable load and allows another, recording that it asked', () => {
+    expect(decideHook([cold], undefined)).toEqual({ outcome: 'ask_perishable', holds: [cold] });
+    expect(decideHook([cold], null)).toEqual({ outcome: 'ask_perishable', holds: [cold] });
+    expect(decideHook([cold], true)).toEqual({
+      outcome: 'refused',
+      because: 'perishable_load',
+      holds: [cold],
+    });
+    expect(decideHook([cold], false)).toEqual({ outcome: 'allowed', askedPerishable: true });
+  });
+
+  it('every restricted hold carries a caution that fits its restriction', () => {
+    const hs = holdsFor({
+      'rear.door_left.hinge_2': { condition: 'ok', isLocking: false },
+      'undercarriage.spare_tire': { condition: 'missing' },
+    });
+    const hinge = hs.find((h) => h.ruleKey === 'hinge_not_locking')!;
+    expect(hinge.caution).toBe(NO_PERISHABLE_CAUTION);
+    const spare = hs.find((h) => h.ruleKey === 'spare_unusable')!;
+    expect(spare.caution).toContain('Chock the wheels');
+    const yardOnly = holdsFor(
+      { 'undercarriage.spare_tire': { condition: 'missing' } },
+      {},
+      reefer,
+      makePolicy({ spareHoldSeverity: 'restricted' }),
+    );
+    expect(yardOnly[0].restriction).toBe('yard_only');
+    expect(hs.every((h) => typeof h.caution === 'string' && h.caution.length > 20)).toBe(true);
+    expect(YARD_ONLY_CAUTION).toContain('tug test');
   });
 });

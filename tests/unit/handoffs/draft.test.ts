@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { buildChecklist, type TimelineEvent } from '@/lib/engine';
-import { draftToInput, itemChange, newDraft, needsEvidence } from '@/lib/handoffs/draft';
+import {
+  draftToInput,
+  itemChange,
+  needsEvidence,
+  newDraft,
+  sameAsLast,
+  sameAsLastForZone,
+} from '@/lib/handoffs/draft';
 import { lastKnownCondition } from '@/lib/handoffs/last-condition';
 import { handoffSubmitSchema } from '@/lib/validation/handoffs';
 
@@ -116,5 +123,50 @@ describe('which changes need a photo and a note', () => {
     expect(needsEvidence('new', { condition: 'damaged' })).toBe(true);
     expect(needsEvidence('worse', { condition: 'unsafe' })).toBe(true);
     expect(needsEvidence('unchanged', { condition: 'damaged' })).toBe(false);
+  });
+});
+
+describe('"Same as last" never copies a safety item', () => {
+  const seen = (observation: Record<string, unknown>) => ({
+    observation: observation as { condition: 'ok' },
+    at: t(1).toISOString(),
+    eventType: 'drop' as const,
+    by: 'drop by Osterlind Freightways',
+  });
+  const undercarriage = checklist.zones.find((z) => z.key === 'undercarriage')!.items;
+  const last = {
+    'undercarriage.cross_members': seen({ condition: 'ok' }),
+    'undercarriage.air_lines': seen({ condition: 'minor' }),
+    'undercarriage.tandem_pin.left_front': seen({ condition: 'ok', isEngaged: true }),
+    'undercarriage.spare_tire': seen({ condition: 'ok', isMounted: true, isHoldingAir: true }),
+    'undercarriage.landing_gear.cross_shaft': seen({ condition: 'ok' }),
+    'undercarriage.fuel_tank.leaks': seen({ condition: 'ok', isLeaking: false }),
+  };
+  const draft = () =>
+    newDraft({
+      idempotencyKey: 'k'.repeat(20),
+      trailerId: '3f1c2b7e-8a4d-4c1e-9b2a-6d5e4f3a2b1c',
+      kind: 'hook',
+      carrierId: '3f1c2b7e-8a4d-4c1e-9b2a-6d5e4f3a2b1d',
+      driverName: 'Dana O.',
+    });
+
+  it('copies the zone’s other items and leaves pins, spare, landing gear and fuel leak unanswered', () => {
+    const copied = sameAsLastForZone(undercarriage, draft(), last);
+    expect(Object.keys(copied).sort()).toEqual(['undercarriage.air_lines', 'undercarriage.cross_members']);
+    expect(copied['undercarriage.air_lines']).toEqual({ condition: 'minor' });
+  });
+
+  it('keeps what the driver already answered', () => {
+    const d = draft();
+    d.items['undercarriage.cross_members'] = { condition: 'damaged' };
+    expect(Object.keys(sameAsLastForZone(undercarriage, d, last))).toEqual(['undercarriage.air_lines']);
+  });
+
+  it('the one-item "Same as last" refuses a safety item too', () => {
+    const pin = undercarriage.find((i) => i.key === 'undercarriage.tandem_pin.left_front')!;
+    expect(sameAsLast(pin, last['undercarriage.tandem_pin.left_front'])).toBeNull();
+    const floor = undercarriage.find((i) => i.key === 'undercarriage.cross_members')!;
+    expect(sameAsLast(floor, last['undercarriage.cross_members'])).toEqual({ condition: 'ok' });
   });
 });

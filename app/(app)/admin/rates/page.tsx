@@ -16,7 +16,7 @@ export default async function RatesPage() {
       <p className="text-gate">
         A rate applies to a damaged item when its key is the item key or a prefix of it at a dot (
         <code>rear</code> prices every rear item, <code>rear.door_left</code> only the left door); the longest
-        matching key wins. Amounts are whole cents.
+        matching key wins. Type amounts in dollars and cents, like 425.00.
       </p>
       <AddRateForm />
       <ul className="divide-y divide-paper-line rounded-xl bg-paper" aria-label="Rates">

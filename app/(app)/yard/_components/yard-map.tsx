@@ -1,6 +1,22 @@
-import { isLowFuel, isReeferOff } from '@/lib/yard/board';
+import { SLOT_WORDS, slotFlags, type SlotTone } from '@/lib/yard/map-signal';
 import type { Board, BoardSpot, YardPolicy } from '@/lib/yard/types';
 import './yard-map.css';
+
+const TONE_CLASS: Record<NonNullable<SlotTone> | 'none', string> = {
+  out_of_service: ' x',
+  reefer_off: ' o',
+  restricted: ' h',
+  low_fuel: ' f',
+  none: '',
+};
+const WORD_CLASS = (w: string) =>
+  w === SLOT_WORDS.out_of_service
+    ? 'x'
+    : w === SLOT_WORDS.restricted
+      ? 'h'
+      : w === SLOT_WORDS.reefer_off
+        ? 'o'
+        : 'f';
 
 /**
  * One slot or door: unit number, loaded/empty and the flags in words as well as colour. A plain
@@ -15,20 +31,18 @@ function spotCell(spot: BoardSpot, policy: YardPolicy, isDimmed: boolean) {
         <b>{spot.label}</b>free
       </li>
     );
-  const held = t.holds.some((h) => h.severity === 'out_of_service') ? 'OOS' : t.holds.length ? 'HOLD' : null;
-  const low = isLowFuel(t, policy);
-  // an empty reefer normally stands with its unit shut off (common practice); only a loaded one is a concern
-  const off = isReeferOff(t) && t.isLoaded;
-  const tone = held ? ' h' : off ? ' o' : low ? ' f' : '';
+  const { tone, words } = slotFlags(t, policy);
   return (
-    <li key={spot.id} data-spot={spot.label} className={`ym-s${tone}${dim}`}>
+    <li key={spot.id} data-spot={spot.label} className={`ym-s${TONE_CLASS[tone ?? 'none']}${dim}`}>
       <b>{spot.label}</b>
       <strong>{t.unitNumber}</strong>
       {t.isLoaded ? 'Loaded' : 'Empty'}
-      {held || low || off ? <br /> : null}
-      {held ? <i className="h">{held}</i> : null}
-      {low ? <i className="f">FUEL {t.fuelEighths}/8</i> : null}
-      {off ? <i className="o">OFF</i> : null}
+      {words.length ? <br /> : null}
+      {words.map((w) => (
+        <i key={w} className={WORD_CLASS(w)}>
+          {w}
+        </i>
+      ))}
     </li>
   );
 }
@@ -66,10 +80,7 @@ export function YardMap({
           </ul>
         </section>
       ))}
-      <p className="text-gate-sm text-ink-soft">
-        OOS: out of service · HOLD: restricted · FUEL: at or below {policy.lowFuelEighths}/8 · OFF: reefer
-        unit not running on a loaded trailer
-      </p>
+      <p className="text-gate-sm text-ink-soft">{SLOT_WORDS.legend(policy.lowFuelEighths)}</p>
     </div>
   );
 }

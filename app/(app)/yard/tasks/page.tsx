@@ -21,6 +21,7 @@ export default async function TasksPage() {
       <YardNav current="/yard/tasks" />
       <h1 className="text-gate-xl font-bold">Yard tasks</h1>
       <Caution title="Reefer units">{CAUTIONS.reefer}</Caution>
+      <Caution title="Walking the yard">{CAUTIONS.yardWalk}</Caution>
       {tasks.length === 0 ? (
         <EmptyState title="Nothing to do">
           Tasks appear here when a yard walk finds low fuel, a unit off on a loaded reefer, open doors or a
@@ -37,6 +38,7 @@ export default async function TasksPage() {
               <p className="text-gate-sm text-ink-soft">
                 {t.note} Found {formatTime(t.createdAt, tz)}.
               </p>
+              {t.kind === 'low_fuel' ? <Caution title="Fuelling">{CAUTIONS.fuelling}</Caution> : null}
               <ActionForm
                 action={clearTaskAction}
                 submitLabel="Clear"

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { ActionForm } from '@/app/_components/action-form';
+import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listLayout } from '@/db/queries/yard-layout';
 import { listRecentWalks } from '@/db/queries/yard-walks';
@@ -26,6 +27,7 @@ export default async function WalksPage() {
     <div className="space-y-4">
       <YardNav current="/yard/walks" />
       <h1 className="text-gate-xl font-bold">Yard walk</h1>
+      <Caution title="Walking the yard">{CAUTIONS.yardWalk}</Caution>
       <section aria-labelledby="start-title" className="rounded-xl bg-paper p-4 shadow">
         <h2 id="start-title" className="text-gate-lg font-bold">
           Start a walk

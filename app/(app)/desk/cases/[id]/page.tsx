@@ -55,6 +55,9 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
           {after ? `${after.kind === 'drop' ? 'drop' : 'hook'} on ${formatTime(after.occurredAt, tz)}` : ''} ·
           proposed: <span className="font-bold">{c.carrierName ?? 'no single carrier'}</span>
         </p>
+        {c.attributionNote ? (
+          <p className="text-gate font-bold text-warn">Marked: {c.attributionNote}</p>
+        ) : null}
         <p className="text-gate">
           Estimate <span className="font-bold">{formatMoney(amount)}</span>
           {c.overrideCents !== null

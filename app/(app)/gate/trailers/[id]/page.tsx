@@ -24,20 +24,24 @@ export default async function HandoffStartPage({ params, searchParams }: PagePro
   const kind = asked === 'drop' || asked === 'hook' ? asked : suggested;
   const holds = await listOpenHolds(trailer.id);
   const outOfService = holds.filter((h) => h.severity === 'out_of_service');
+  const yardOnly = holds.filter((h) => h.severity === 'restricted' && h.restriction === 'yard_only');
   const restricted = holds.filter((h) => h.severity === 'restricted');
+  // out of service first; a "yard moves only" hold refuses a hook the same way
+  const refusing = outOfService.length ? outOfService : yardOnly;
   const carriers = user.role === 'driver' ? [] : await listCarriers();
 
   return (
     <div className="mx-auto max-w-xl space-y-4">
       <TrailerSummary trailer={trailer} kind={kind} suggested={suggested} />
-      {kind === 'hook' && outOfService.length ? (
-        <HookRefused unitNumber={trailer.unitNumber} holds={outOfService} />
+      {kind === 'hook' && refusing.length ? (
+        <HookRefused unitNumber={trailer.unitNumber} holds={refusing} />
       ) : (
         <>
           {restricted.length ? <HoldList title="Restricted" holds={restricted} /> : null}
           <HandoffForm
             condition={condition}
             kind={kind}
+            asksPerishable={kind === 'hook' && restricted.some((h) => h.restriction === 'no_perishable')}
             carriers={carriers}
             defaults={{
               carrierId: user.role === 'driver' ? (user.carrierId ?? '') : '',

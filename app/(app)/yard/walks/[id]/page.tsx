@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
+import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { listWalkOutcomes } from '@/db/queries/yard-outcomes';
 import { getWalk } from '@/db/queries/yard-walks';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -22,6 +23,7 @@ export default async function WalkPage({ params }: { params: Promise<{ id: strin
     <div className="space-y-3">
       <YardNav current="/yard/walks" />
       <h1 className="text-gate-xl font-bold">Yard walk: {rowNames}</h1>
+      {walk.status === 'in_progress' ? <Caution title="Walking the yard">{CAUTIONS.yardWalk}</Caution> : null}
       {walk.status === 'in_progress' ? (
         <WalkScanner
           walkId={walk.id}

@@ -44,7 +44,8 @@ function Record({ side, itemName, timeZone }: { side: Side; itemName: string; ti
 const CONFIDENCE_WORDS: Record<string, string> = {
   high: 'high confidence',
   medium: 'medium confidence',
-  none: 'no single party',
+  // `none`: the party line already says there is no single party; the confidence adds nothing
+  none: '',
 };
 
 /** One damaged item: the before record (the inspection the engine compared against) and the after record, side by side. */
@@ -83,7 +84,10 @@ export function EvidencePair({
       <p className="rounded-lg bg-brand-light p-2 text-gate">
         <span className="font-bold">
           {finding.responsibleCarrierName ?? finding.responsibleParty ?? 'No single party'}
-          {finding.confidence ? ` · ${CONFIDENCE_WORDS[finding.confidence] ?? finding.confidence}` : ''}:
+          {finding.confidence && CONFIDENCE_WORDS[finding.confidence] !== ''
+            ? ` · ${CONFIDENCE_WORDS[finding.confidence] ?? finding.confidence}`
+            : ''}
+          :
         </span>{' '}
         {finding.reason}
       </p>

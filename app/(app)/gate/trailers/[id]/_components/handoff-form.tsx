@@ -3,10 +3,14 @@
 import { useCallback } from 'react';
 import useSWR from 'swr';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
-import { Textarea } from '@/app/_components/field';
-import { newDraft, type Draft, type DraftItem } from '@/lib/handoffs/draft';
+import { FieldError, Textarea } from '@/app/_components/field';
+import { safetyGroups } from '@/lib/engine';
+import { newDraft, sameAsLastForZone, type Draft, type DraftItem } from '@/lib/handoffs/draft';
+import { HOOK_WORDS } from '@/lib/handoffs/holds';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
+import { Choice } from './choice';
 import { FuelButtons, ReeferFields } from './readings-fields';
+import { SAFETY_WORDS } from './safety-words';
 import { SubmitBar } from './submit-bar';
 import { newDraftKey, useDraft } from './use-draft';
 import { useSubmit } from './use-submit';
@@ -16,12 +20,14 @@ import { ZoneSection } from './zone-section';
 type Props = {
   condition: TrailerCondition;
   kind: 'drop' | 'hook';
+  /** A hook of a "no perishable loads" trailer asks whether the load is perishable. */
+  asksPerishable?: boolean;
   carriers: { id: string; name: string; scac: string }[];
   defaults: { carrierId: string; driverName: string; isDriver: boolean; carrierName?: string | null };
 };
 const fetcher = (url: string) => fetch(url).then((r) => r.json());
 
-export function HandoffForm({ condition: initial, kind, carriers, defaults }: Props) {
+export function HandoffForm({ condition: initial, kind, asksPerishable = false, carriers, defaults }: Props) {
   const { data } = useSWR<TrailerCondition>(`/api/trailers/${initial.trailer.id}/condition`, fetcher, {
     fallbackData: initial,
     revalidateOnMount: false,
@@ -29,6 +35,7 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
   const condition = data ?? initial;
   const { trailer, checklist, last } = condition;
   const isReefer = trailer.kind === 'reefer';
+  const groups = safetyGroups(checklist);
   const make = useCallback(
     () =>
       newDraft({
@@ -65,6 +72,7 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
       }}
     >
       <Caution title="Your inspection">{CAUTIONS.inspection}</Caution>
+      {kind === 'hook' ? <Caution title="Coupling checks">{CAUTIONS.coupling}</Caution> : null}
       <WhoFields
         draft={draft}
         set={set}
@@ -73,6 +81,20 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
         carrierName={defaults.carrierName ?? null}
         errors={errors}
       />
+      {asksPerishable || errors.isLoadPerishable ? (
+        <div>
+          <Choice
+            label={HOOK_WORDS.perishableQuestion}
+            options={[
+              { value: true, label: 'Yes, perishable', tone: 'warn' },
+              { value: false, label: 'No, not perishable', tone: 'ok' },
+            ]}
+            value={draft.isLoadPerishable ?? null}
+            onChange={(v) => set({ isLoadPerishable: v })}
+          />
+          <FieldError id="isLoadPerishable-error" messages={errors.isLoadPerishable} />
+        </div>
+      ) : null}
       {isReefer ? (
         <FuelButtons
           value={draft.fuelEighths}
@@ -88,6 +110,19 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
           errors={errors}
         />
       ) : null}
+      {Object.keys(last).length ? (
+        <button
+          type="button"
+          onClick={() => {
+            for (const z of checklist.zones) {
+              for (const [key, v] of Object.entries(sameAsLastForZone(z.items, draft, last))) setItem(key, v);
+            }
+          }}
+          className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-white"
+        >
+          {SAFETY_WORDS.sameAsLastAll}
+        </button>
+      ) : null}
       {checklist.zones
         .filter((z) => z.key !== 'readings')
         .map((z) => (
@@ -99,6 +134,7 @@ export function HandoffForm({ condition: initial, kind, carriers, defaults }: Pr
             setItem={setItem}
             trailerId={trailer.id}
             fieldErrors={errors}
+            groups={groups}
           />
         ))}
       <Textarea

@@ -5,6 +5,7 @@ import { itemChange, needsEvidence, type DraftItem } from '@/lib/handoffs/draft'
 import type { LastSeen } from '@/lib/handoffs/last-condition';
 import { Choice } from './choice';
 import { ItemFields } from './item-fields';
+import { SAFETY_WORDS } from './safety-words';
 import { PhotoCapture } from '@/app/_components/photo-capture';
 
 const CONDITION_OPTIONS: {
@@ -84,7 +85,10 @@ export function ItemRow({
           Last: {describeObservation(last.observation)} · {when(last.at)}, {last.by}
         </p>
       ) : null}
-      {last && (!value || isChanged) ? (
+      {item.isSafety && !value ? (
+        <p className="text-gate-sm font-bold text-warn">{SAFETY_WORDS.notCopied}</p>
+      ) : null}
+      {last && !item.isSafety && (!value || isChanged) ? (
         <button
           type="button"
           onClick={() => onChange({ ...last.observation })}

@@ -1,10 +1,12 @@
 'use client';
 
 import { CAUTIONS, Caution } from '@/app/_components/caution';
-import type { ChecklistZone } from '@/lib/engine';
-import { unanswered, type Draft, type DraftItem } from '@/lib/handoffs/draft';
+import type { ChecklistZone, SafetyGroup } from '@/lib/engine';
+import { sameAsLastForZone, unanswered, type Draft, type DraftItem } from '@/lib/handoffs/draft';
 import type { LastSeen } from '@/lib/handoffs/last-condition';
 import { ItemRow } from './item-row';
+import { SafetyGroupAnswer } from './safety-group';
+import { SAFETY_WORDS } from './safety-words';
 
 export function ZoneSection({
   zone,
@@ -13,7 +15,9 @@ export function ZoneSection({
   setItem,
   trailerId,
   fieldErrors,
+  groups,
 }: {
+  groups: SafetyGroup[];
   zone: ChecklistZone;
   draft: Draft;
   last: Record<string, LastSeen>;
@@ -22,7 +26,9 @@ export function ZoneSection({
   fieldErrors: Record<string, string[]>;
 }) {
   const items = zone.items.filter((i) => i.kind !== 'reading');
-  const withLast = items.filter((i) => last[i.key]);
+  const withLast = items.filter((i) => last[i.key] && !i.isSafety);
+  const keys = new Set(items.map((i) => i.key));
+  const here = groups.filter((g) => keys.has(g.itemKeys[0]));
   const left = unanswered(items, draft);
   return (
     <section aria-labelledby={`zone-${zone.key}`} className="space-y-3">
@@ -40,7 +46,7 @@ export function ZoneSection({
         <button
           type="button"
           onClick={() => {
-            for (const i of withLast) if (!draft.items[i.key]) setItem(i.key, { ...last[i.key].observation });
+            for (const [key, v] of Object.entries(sameAsLastForZone(items, draft, last))) setItem(key, v);
           }}
           className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-white"
         >
@@ -49,6 +55,15 @@ export function ZoneSection({
       ) : (
         <p className="text-gate-sm text-ink-soft">No earlier record of this zone: check each item.</p>
       )}
+      {here.length ? (
+        <div className="space-y-2">
+          <h3 className="text-gate-lg font-bold">{SAFETY_WORDS.heading}</h3>
+          <p className="text-gate-sm">{SAFETY_WORDS.explain}</p>
+          {here.map((g) => (
+            <SafetyGroupAnswer key={g.key} group={g} items={items} answered={draft.items} setItem={setItem} />
+          ))}
+        </div>
+      ) : null}
       <ul className="space-y-3">
         {items.map((i) => (
           <ItemRow
