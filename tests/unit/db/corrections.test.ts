@@ -223,9 +223,13 @@ describe('corrections of stored handoffs', () => {
       note: 'Torn skin, 30 cm, insulation showing',
       photoIds: [await storedPhoto(trailer.id, d2.id)],
     };
-    const hook = await recorded(submitInput(trailer.id, d2.carrierId!, 'hook', damaged, at(180)), d2, {
-      now: at(180),
-    });
+    const hook = await recorded(
+      submitInput(trailer.id, d2.carrierId!, 'hook', damaged, at(180), { isLoadPerishable: false }),
+      d2,
+      {
+        now: at(180),
+      },
+    );
     const [f] = await db
       .select()
       .from(findings)
