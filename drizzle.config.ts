@@ -5,7 +5,7 @@ export default defineConfig({
   dialect: 'postgresql',
   schema: './db/schema.ts',
   out: './db/migrations',
-  dbCredentials: { url: databaseUrl() },
+  dbCredentials: { url: databaseUrl(undefined, 'owner') },
   strict: true,
   verbose: false,
 });

@@ -19,7 +19,10 @@ const JOCKEY = { email: 'bench-jockey@bench.example', password: 'hitchmark-bench
 process.env.HM_DB_NAME = DB;
 execFileSync('bash', ['scripts/db.sh', 'createdb', DB], { stdio: 'ignore' });
 execFileSync('node_modules/.bin/tsx', ['db/migrate.ts'], { stdio: 'ignore', env: process.env });
-execFileSync('node_modules/.bin/tsx', ['db/seed.ts'], { stdio: 'ignore', env: process.env });
+execFileSync('node_modules/.bin/tsx', ['db/seed.ts'], {
+  stdio: 'ignore',
+  env: { ...process.env, HM_DB_ROLE: 'owner' },
+});
 
 const { db, pool } = await import('../db/index');
 const { users } = await import('../db/schema');

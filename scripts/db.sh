@@ -1,6 +1,10 @@
 #!/usr/bin/env bash
 # PostgreSQL on loopback in a project-local data folder.
-#   scripts/db.sh start        install (if missing), init, start, create role + database
+#   scripts/db.sh start        install (if missing), init, start, create the two roles + database
+# Roles: `hitchmark` owns the tables and runs migrations and the seed; `hitchmark_app` is what the
+# app and the tests connect as (no UPDATE, DELETE or TRUNCATE on the record tables: the grants
+# are in a migration). The owner is a member of the app role only so that the test scripts can
+# close the app's connections before dropping a test database.
 #   scripts/db.sh stop         stop cleanly
 #   scripts/db.sh status
 #   scripts/db.sh createdb N   (re)create database N, empty
@@ -59,6 +63,8 @@ case "${1:-start}" in
     fi
     for _ in $(seq 1 50); do "$BIN/pg_isready" -q -h 127.0.0.1 -p "$PORT" && break; sleep 0.2; done
     psql_admin -c "DO \$\$BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname='hitchmark') THEN CREATE ROLE hitchmark LOGIN PASSWORD 'hitchmark' CREATEDB; END IF; END\$\$;"
+    psql_admin -c "DO \$\$BEGIN IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname='hitchmark_app') THEN CREATE ROLE hitchmark_app LOGIN PASSWORD 'hitchmark_app' NOCREATEDB NOCREATEROLE; END IF; END\$\$;"
+    psql_admin -c "GRANT hitchmark_app TO hitchmark"
     if [ -z "$(psql_admin -c "SELECT 1 FROM pg_database WHERE datname='$DBNAME'")" ]; then
       psql_admin -c "CREATE DATABASE \"$DBNAME\" OWNER hitchmark"
     fi

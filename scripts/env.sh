@@ -17,6 +17,8 @@ secret_file() { [ -s "$1" ] || head -c 48 /dev/urandom | base64 | tr -d '\n/+=' 
 export SESSION_SECRET=${SESSION_SECRET:-$(secret_file "$ROOT/.data/session-secret")}
 export LABEL_SECRET=${LABEL_SECRET:-$(secret_file "$ROOT/.data/label-secret")}
 export RECEIPT_SECRET=${RECEIPT_SECRET:-$(secret_file "$ROOT/.data/receipt-secret")}
+# The key of the handoff hash chain (HMAC): kept outside the database, so its owner cannot re-link a rewritten chain.
+export CHAIN_KEY=${CHAIN_KEY:-$(secret_file "$ROOT/.data/chain-key")}
 # Object storage: the s3rver fake unless S3_ENDPOINT points elsewhere (s3rver's fixed key pair).
 export S3_ENDPOINT=${S3_ENDPOINT:-http://127.0.0.1:$HM_S3_PORT}
 export S3_PUBLIC_ENDPOINT=${S3_PUBLIC_ENDPOINT:-$S3_ENDPOINT}

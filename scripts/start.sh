@@ -21,7 +21,7 @@ step "applying database migrations"
 quietly .data/migrate.log node_modules/.bin/tsx db/migrate.ts
 
 step "loading the invented demo data (about 30 s; safe to re-run)"
-quietly .data/seed.log node_modules/.bin/tsx --conditions=react-server db/seed/index.ts
+quietly .data/seed.log env HM_DB_ROLE=owner node_modules/.bin/tsx --conditions=react-server db/seed/index.ts
 
 step "building the app (next build; 1 to 3 min)"
 quietly .data/build.log node_modules/.bin/next build --webpack

@@ -34,7 +34,7 @@ quietly .data/build.log node_modules/.bin/next build --webpack
 
 step "preparing the browser tests' database (hitchmark_e2e: migrate, seed; about 30 s)"
 export HM_DB_NAME=hitchmark_e2e
-quietly .data/e2e-db.log sh -c "bash scripts/db.sh createdb $HM_DB_NAME && node_modules/.bin/tsx db/migrate.ts && node_modules/.bin/tsx --conditions=react-server db/seed/index.ts"
+quietly .data/e2e-db.log sh -c "bash scripts/db.sh createdb $HM_DB_NAME && node_modules/.bin/tsx db/migrate.ts && HM_DB_ROLE=owner node_modules/.bin/tsx --conditions=react-server db/seed/index.ts"
 
 step "browser tests (Playwright, Debian chromium, phone and desktop; 4 to 6 min)"
 node_modules/.bin/playwright test "$@"

@@ -1,21 +1,22 @@
 import type { Metadata } from 'next';
 import { Button } from '@/app/_components/button';
 import { ReceiptSummary } from '@/app/_components/receipt-summary';
-import { getReceiptByCode } from '@/db/queries/handoffs';
+import { checkReceipt } from '@/lib/server/handoffs/verify';
 import { verificationCodeSchema } from '@/lib/validation/handoffs';
 
 export const metadata: Metadata = { title: 'Verify a receipt' };
 
-// Public, no sign-in: shows what the receipt itself shows, nothing more (no photos, no history).
+// Public, no sign-in: shows what the receipt itself shows, nothing more (no photos, no history),
+// and only when the stored record still matches what was receipted.
 export default async function VerifyPage({ searchParams }: PageProps<'/verify'>) {
   const raw = (await searchParams).code;
   const typed = typeof raw === 'string' ? raw : '';
   const parsed = typed ? verificationCodeSchema.safeParse(typed) : null;
-  const receipt = parsed?.success ? await getReceiptByCode(parsed.data) : null;
+  const checked = parsed?.success ? await checkReceipt(parsed.data) : null;
   const error =
     parsed && !parsed.success
       ? parsed.error.issues[0].message
-      : parsed?.success && !receipt
+      : parsed?.success && !checked
         ? 'No receipt has this code. Check the code on the receipt.'
         : null;
   return (
@@ -41,13 +42,20 @@ export default async function VerifyPage({ searchParams }: PageProps<'/verify'>)
           Check
         </Button>
       </form>
-      {receipt ? (
+      {checked?.status === 'genuine' ? (
         <>
           <p role="status" className="rounded-lg bg-ok-bg p-3 text-gate font-bold text-ok">
-            This receipt is genuine: Hitchmark holds this record.
+            This receipt is genuine: Hitchmark holds this record, and it still matches what was receipted.
           </p>
-          <ReceiptSummary receipt={receipt} showPhotos={false} />
+          <ReceiptSummary receipt={checked.receipt} showPhotos={false} />
         </>
+      ) : checked ? (
+        <p
+          role="alert"
+          className="rounded-lg border-l-8 border-danger bg-danger-bg p-3 text-gate font-bold text-danger"
+        >
+          {checked.message}
+        </p>
       ) : null}
     </main>
   );

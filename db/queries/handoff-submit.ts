@@ -33,6 +33,7 @@ export async function findHandoffByKey(q: Db | Tx, idempotencyKey: string) {
       code: handoffs.verificationCode,
       trailerId: handoffs.trailerId,
       recordedById: handoffs.recordedById,
+      requestHash: handoffs.requestHash,
     })
     .from(handoffs)
     .where(eq(handoffs.idempotencyKey, idempotencyKey))
@@ -87,6 +88,43 @@ export async function listUnattachedPhotos(
         eq(photos.uploadedById, by.uploadedById),
       ),
     );
+}
+
+/** The handoff a correction names, with what the correction rules read; null when none has this id. */
+export async function getHandoffForCorrection(tx: Tx, id: string) {
+  const [row] = await tx
+    .select({
+      id: handoffs.id,
+      trailerId: handoffs.trailerId,
+      terminalId: handoffs.terminalId,
+      kind: handoffs.kind,
+      recordedById: handoffs.recordedById,
+      occurredAt: handoffs.occurredAt,
+    })
+    .from(handoffs)
+    .where(eq(handoffs.id, id));
+  return row ?? null;
+}
+
+/** The verification code of a record that corrects `id`, or null. */
+export async function findCorrectionOf(tx: Tx, id: string): Promise<string | null> {
+  const [row] = await tx
+    .select({ code: handoffs.verificationCode })
+    .from(handoffs)
+    .where(eq(handoffs.correctsHandoffId, id))
+    .limit(1);
+  return row?.code ?? null;
+}
+
+/** The id of the trailer's latest handoff (the chain's head), or null. */
+export async function latestHandoffId(tx: Tx, trailerId: string): Promise<string | null> {
+  const [row] = await tx
+    .select({ id: handoffs.id })
+    .from(handoffs)
+    .where(eq(handoffs.trailerId, trailerId))
+    .orderBy(desc(handoffs.occurredAt), desc(handoffs.createdAt))
+    .limit(1);
+  return row?.id ?? null;
 }
 
 /** The content hash of the trailer's latest handoff: the next one links to it. */

@@ -97,6 +97,16 @@ export function getReceipt(handoffId: string, viewer: Viewer) {
   return receiptWhere(and(eq(handoffs.id, handoffId), handoffVisibleTo(viewer)));
 }
 
+/** Which handoff and trailer a verification code names, or null. */
+export async function findHandoffByCode(code: string) {
+  const [row] = await db
+    .select({ id: handoffs.id, trailerId: handoffs.trailerId })
+    .from(handoffs)
+    .where(eq(handoffs.verificationCode, code))
+    .limit(1);
+  return row ?? null;
+}
+
 /** The receipt a verification code stands for (public verify page: shows only what the receipt shows). */
 export function getReceiptByCode(code: string) {
   return receiptWhere(eq(handoffs.verificationCode, code));

@@ -55,6 +55,8 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
         carrierScac: carriers.scac,
         level: handoffs.level,
         verificationCode: handoffs.verificationCode,
+        correctsHandoffId: handoffs.correctsHandoffId,
+        correctionReason: handoffs.correctionReason,
       })
       .from(handoffs)
       .innerJoin(carriers, eq(carriers.id, handoffs.carrierId))

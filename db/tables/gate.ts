@@ -77,9 +77,18 @@ export const handoffs = pgTable(
     occurredAt: at('occurred_at').notNull(),
     idempotencyKey: text('idempotency_key').notNull().unique(),
     correctsHandoffId: uuid('corrects_handoff_id'),
+    /** Why a clerk corrected the record named by correctsHandoffId (the recorder may leave it empty). */
+    correctionReason: text('correction_reason'),
     verificationCode: text('verification_code').notNull().unique(),
     prevHash: text('prev_hash'),
     contentHash: text('content_hash').notNull(),
+    /**
+     * How content_hash was made: 1 = plain SHA-256 (rows from before the chain was keyed; they
+     * cannot be vouched for), 2 = HMAC-SHA-256 with CHAIN_KEY. The submit always writes 2.
+     */
+    hashVersion: integer('hash_version').notNull().default(1),
+    /** SHA-256 of the submitted body: a retry with the same draft key must send the same body. */
+    requestHash: text('request_hash'),
     createdAt: createdAt(),
   },
   (t) => [

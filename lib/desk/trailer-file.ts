@@ -22,6 +22,9 @@ export type FileRows = {
     carrierScac: string;
     level: string;
     verificationCode: string;
+    /** Set on a correction: the record it stands in for, and the clerk's reason. */
+    correctsHandoffId?: string | null;
+    correctionReason?: string | null;
   }[];
   moves: { id: string; movedAt: Date; fromSpot: string | null; toSpot: string; jockeyName: string | null }[];
   walks: { id: string; scannedAt: Date; spot: string | null; jockeyName: string | null }[];
@@ -49,15 +52,31 @@ export type FileRows = {
 
 const SHOWN_FINDINGS = new Set(['new', 'worse', 'repaired']);
 
+/** A stored handoff's file entry: a corrected one stays, marked with the record that corrects it. */
+function handoffEntry(h: FileRows['handoffs'][number], all: FileRows['handoffs']): FileEntry {
+  const correctedBy = all.find((o) => o.correctsHandoffId === h.id);
+  const corrects = h.correctsHandoffId ? all.find((o) => o.id === h.correctsHandoffId) : undefined;
+  const what = `${h.kind === 'drop' ? 'Drop' : 'Hook'} by ${h.driverName} (${h.carrierScac})`;
+  const parts = [`${h.level === 'full' ? 'Full inspection' : 'Quick check'} · receipt ${h.verificationCode}`];
+  if (h.correctsHandoffId) {
+    parts.push(`corrects receipt ${corrects?.verificationCode ?? 'of another trailer'}`);
+    if (h.correctionReason) parts.push(`reason: ${h.correctionReason}`);
+  }
+  if (correctedBy)
+    parts.push(`corrected by receipt ${correctedBy.verificationCode}; the correction stands in for it`);
+  return {
+    id: h.id,
+    kind: 'handoff',
+    at: h.occurredAt,
+    title: h.correctsHandoffId ? `Correction: ${what}` : correctedBy ? `${what} (corrected)` : what,
+    detail: parts.join(' · '),
+    ...(correctedBy ? { tone: 'hold' as const } : {}),
+  };
+}
+
 export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
   const entries: FileEntry[] = [
-    ...rows.handoffs.map((h): FileEntry => ({
-      id: h.id,
-      kind: 'handoff',
-      at: h.occurredAt,
-      title: `${h.kind === 'drop' ? 'Drop' : 'Hook'} by ${h.driverName} (${h.carrierScac})`,
-      detail: `${h.level === 'full' ? 'Full inspection' : 'Quick check'} · receipt ${h.verificationCode}`,
-    })),
+    ...rows.handoffs.map((h) => handoffEntry(h, rows.handoffs)),
     ...rows.moves.map((m): FileEntry => ({
       id: m.id,
       kind: 'move',

@@ -20,7 +20,10 @@ export function conditionWords(c: Condition): string {
   return CONDITION_WORDS[c];
 }
 
-/** "the drop on 3 Nov 2026 14:05 by driver D. Example (Carrier X)". */
+/**
+ * "the drop on 3 Nov 2026 14:05 by driver D. Example (Carrier X)"; a correction standing in for
+ * it adds ", as corrected on 3 Nov 2026 14:20", so a reason names the record it used.
+ */
 export function describeEvent(e: InspectionEvent, timeZone: string): string {
   const when = formatWhen(e.at, timeZone);
   if (e.type === 'walk') {
@@ -30,7 +33,8 @@ export function describeEvent(e: InspectionEvent, timeZone: string): string {
   const by = e.party.driverName
     ? ` by driver ${e.party.driverName} (${e.party.carrierName})`
     : ` by ${e.party.carrierName}`;
-  return `the ${e.type} on ${when}${by}`;
+  const corrected = e.correctedAt ? `, as corrected on ${formatWhen(e.correctedAt, timeZone)}` : '';
+  return `the ${e.type} on ${when}${by}${corrected}`;
 }
 
 /** "A", "A and B", "A, B and C". */

@@ -25,6 +25,8 @@ export type HandoffHashRow = {
   note: string | null;
   occurredAt: Date;
   correctsHandoffId: string | null;
+  /** Absent or null leaves the hash of a record without one as it was. */
+  correctionReason?: string | null;
   verificationCode: string;
   prevHash: string | null;
 };
@@ -67,6 +69,7 @@ export function hashableFromRows(
       note: h.note,
       occurredAt: h.occurredAt.toISOString(),
       correctsHandoffId: h.correctsHandoffId,
+      ...(h.correctionReason ? { correctionReason: h.correctionReason } : {}),
       verificationCode: h.verificationCode,
     },
     items: items.map((i) => ({

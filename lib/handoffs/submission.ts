@@ -3,6 +3,15 @@
 import type { HandoffEvent, ItemObservations } from '@/lib/engine';
 import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
 import type { HandoffHashRow } from './canonical';
+import { canonicalJson, sha256Hex } from './hash';
+
+/**
+ * The fingerprint of a submitted body (after parsing), stored with its draft key: a retry must
+ * send the same body, or it is a different handoff reusing the key.
+ */
+export function submissionHash(input: HandoffSubmitInput): string {
+  return sha256Hex(canonicalJson(input));
+}
 
 type Party = { carrierId: string; carrierName: string; driverId: string | null };
 
@@ -58,6 +67,8 @@ export function handoffRow(
     trailerId: string;
     terminalId: string;
     event: HandoffEvent;
+    /** When it is stored; the chain orders by it. Defaults to the event's time. */
+    occurredAt?: Date;
     recordedById: string;
     verificationCode: string;
     prevHash: string | null;
@@ -85,23 +96,28 @@ export function handoffRow(
     pretripResult: r?.preTripResult ?? null,
     pretripAt: r?.preTripAt ? new Date(r.preTripAt) : null,
     note: input.note ?? null,
-    occurredAt: x.event.at,
+    occurredAt: x.occurredAt ?? x.event.at,
     idempotencyKey: input.idempotencyKey,
     correctsHandoffId: input.correctsHandoffId ?? null,
+    correctionReason: input.correctsHandoffId ? (input.correctionReason ?? null) : null,
     verificationCode: x.verificationCode,
     prevHash: x.prevHash,
   };
 }
 
-/** Where the trailer stands after the handoff: in the yard on its slot after a drop, on the road after a hook. */
-export function trailerAfter(row: HandoffRow, spotId: string | null) {
-  const readings = {
-    lastSeenAt: row.occurredAt,
+/** The trailer's last readings as a handoff recorded them. */
+export function readingsOf(row: HandoffRow) {
+  return {
     isLoaded: row.isLoaded,
     fuelEighths: row.fuelEighths,
     isReeferOn: row.isReeferOn,
     setpointTenthsF: row.setpointTenthsF,
   };
+}
+
+/** Where the trailer stands after the handoff: in the yard on its slot after a drop, on the road after a hook. */
+export function trailerAfter(row: HandoffRow, spotId: string | null) {
+  const readings = { lastSeenAt: row.occurredAt, ...readingsOf(row) };
   return row.kind === 'drop'
     ? {
         status: 'in_yard' as const,

@@ -92,19 +92,45 @@ export function handoffEventFromRow(h: StoredHandoff, items: StoredItem[]): Time
 }
 
 /**
+ * The record a correction stands in for, followed back through corrections of corrections; null
+ * when the corrected record is not one of this trailer's (such a row counts as a plain record).
+ */
+export function correctedRoot(h: StoredHandoff, byId: Map<string, StoredHandoff>): StoredHandoff | null {
+  let root: StoredHandoff | null = null;
+  let at: StoredHandoff | undefined = h;
+  for (let hops = 0; at?.correctsHandoffId && hops < 100; hops++) {
+    const target = byId.get(at.correctsHandoffId);
+    if (!target) break;
+    root = target;
+    at = target;
+  }
+  return root;
+}
+
+/**
  * The whole timeline, oldest first: handoffs with their items, yard moves and yard-walk scans.
- * A handoff that a later correction replaces is left out (the correction stands in its place).
+ * A handoff that a later correction of the same trailer replaces is left out: the correction
+ * stands in its place, at its time, and says when it was recorded (`correctedAt`).
  * Walk scans carry fuel and unit readings but no item observations (the walk's quick checks
  * are not checklist items).
  */
 export function timelineOf(rows: TimelineRows): TimelineEvent[] {
   const itemsBy = new Map<string, StoredItem[]>();
   for (const i of rows.items) itemsBy.set(i.handoffId, [...(itemsBy.get(i.handoffId) ?? []), i]);
-  const corrected = new Set(rows.handoffs.map((h) => h.correctsHandoffId).filter((v) => v !== null));
+  const byId = new Map(rows.handoffs.map((h) => [h.id, h]));
+  const corrected = new Set(
+    rows.handoffs.filter((h) => correctedRoot(h, byId)).map((h) => h.correctsHandoffId as string),
+  );
 
   const events: TimelineEvent[] = [];
   for (const h of rows.handoffs) {
-    if (!corrected.has(h.id)) events.push(handoffEventFromRow(h, itemsBy.get(h.id) ?? []));
+    if (corrected.has(h.id)) continue;
+    const root = correctedRoot(h, byId);
+    const event = handoffEventFromRow(
+      root ? { ...h, occurredAt: root.occurredAt } : h,
+      itemsBy.get(h.id) ?? [],
+    );
+    events.push(root ? ({ ...event, correctedAt: h.occurredAt } as TimelineEvent) : event);
   }
   for (const m of rows.moves) {
     events.push({

@@ -21,6 +21,7 @@ const schema = z.object({
   LABEL_SECRET: secret(32, 'LABEL_SECRET').optional(),
   RECEIPT_SECRET: secret(16, 'RECEIPT_SECRET').optional(),
   CASE_LINK_SECRET: secret(16, 'CASE_LINK_SECRET').optional(),
+  CHAIN_KEY: secret(32, 'CHAIN_KEY').optional(),
   HM_INSECURE_COOKIES: flag,
   S3_ENDPOINT: z.url().optional(),
   S3_PUBLIC_ENDPOINT: z.url().optional(),
@@ -51,8 +52,12 @@ export function env(): Env {
     throw new Error(`Hitchmark settings are not valid:\n${lines.join('\n')}`);
   }
   const value = parsed.data;
-  if (value.NODE_ENV === 'production' && !value.SESSION_SECRET) {
-    throw new Error('Hitchmark settings are not valid:\n  SESSION_SECRET must be set in production');
+  if (value.NODE_ENV === 'production') {
+    const missing = (['SESSION_SECRET', 'CHAIN_KEY'] as const).filter((k) => !value[k]);
+    if (missing.length)
+      throw new Error(
+        `Hitchmark settings are not valid:\n${missing.map((k) => `  ${k} must be set in production`).join('\n')}`,
+      );
   }
   cached = value;
   return value;
@@ -75,6 +80,8 @@ function required(value: string | undefined, name: string): string {
 
 export const labelSecret = () => required(env().LABEL_SECRET, 'LABEL_SECRET');
 export const receiptSecret = () => required(env().RECEIPT_SECRET, 'RECEIPT_SECRET');
+/** The HMAC key of the handoff hash chain. Lives outside the database; losing it means old links can no longer be checked. */
+export const chainKey = () => required(env().CHAIN_KEY, 'CHAIN_KEY');
 /** Signed case links: CASE_LINK_SECRET when set, else RECEIPT_SECRET. */
 export const caseLinkSecret = () =>
   required(env().CASE_LINK_SECRET ?? env().RECEIPT_SECRET, 'CASE_LINK_SECRET or RECEIPT_SECRET');

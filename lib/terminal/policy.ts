@@ -10,7 +10,14 @@ export type DeskPolicy = { disputeWindowDays: number };
 /** common practice: two weeks to answer a damage notice; a terminal may change it. */
 export const DEFAULT_DESK_POLICY: DeskPolicy = { disputeWindowDays: 14 };
 
-export type TerminalPolicy = { engine: EnginePolicy; yard: YardPolicy; desk: DeskPolicy };
+export type GatePolicy = { correctionWindowMinutes: number };
+/**
+ * common practice: the driver who recorded a handoff may correct it while still at the gate,
+ * about half an hour; later corrections go through the clerk, with a reason.
+ */
+export const DEFAULT_GATE_POLICY: GatePolicy = { correctionWindowMinutes: 30 };
+
+export type TerminalPolicy = { engine: EnginePolicy; yard: YardPolicy; desk: DeskPolicy; gate: GatePolicy };
 
 const d = defaultPolicy;
 const eighths = (fallback: number) => z.number().int().min(0).max(8).catch(fallback);
@@ -28,6 +35,12 @@ const schema = z.object({
   freeTimeHours: positive(DEFAULT_YARD_POLICY.freeTimeHours, 24 * 365),
   lowFuelEighths: eighths(DEFAULT_YARD_POLICY.lowFuelEighths),
   disputeWindowDays: z.number().int().min(1).max(365).catch(DEFAULT_DESK_POLICY.disputeWindowDays),
+  correctionWindowMinutes: z
+    .number()
+    .int()
+    .min(0)
+    .max(24 * 60)
+    .catch(DEFAULT_GATE_POLICY.correctionWindowMinutes),
 });
 
 /** The terminal's policy from its stored document (`null` when the terminal has none yet). */
@@ -47,5 +60,6 @@ export function terminalPolicyOf(data: unknown): TerminalPolicy {
     },
     yard: { freeTimeHours: p.freeTimeHours, lowFuelEighths: p.lowFuelEighths },
     desk: { disputeWindowDays: p.disputeWindowDays },
+    gate: { correctionWindowMinutes: p.correctionWindowMinutes },
   };
 }

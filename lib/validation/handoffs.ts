@@ -127,9 +127,21 @@ export const handoffSubmitSchema = z
     /** Asked at a hook of a "no perishable loads" trailer. */
     isLoadPerishable: z.boolean({ error: 'Say whether the load is perishable.' }).nullable().optional(),
     note: optionalNote(L.note, 'The note'),
-    correctsHandoffId: z.uuid().nullable().optional(),
+    correctsHandoffId: z.uuid({ error: 'Name the handoff this corrects by its id.' }).nullable().optional(),
+    /** Why the record is corrected: required of a clerk, optional for the driver who recorded it. */
+    correctionReason: plainText(300, 'The reason is at most 300 characters.')
+      .transform((s) => (s === '' ? null : s))
+      .nullable()
+      .optional(),
   })
   .superRefine((v, ctx) => {
+    if (v.correctionReason && !v.correctsHandoffId) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['correctionReason'],
+        message: 'A reason goes with a correction only.',
+      });
+    }
     if (v.reefer && v.reefer.preTripResult !== 'not_run' && !v.reefer.preTripAt) {
       ctx.addIssue({
         code: 'custom',

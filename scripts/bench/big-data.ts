@@ -15,10 +15,13 @@ import { pipeline } from 'node:stream/promises';
 import { Readable } from 'node:stream';
 import { allOkObservations } from '@/lib/handoffs/all-ok';
 import { hashableFromRows, type HandoffHashRow } from '@/lib/handoffs/canonical';
-import { handoffContentHash } from '@/lib/handoffs/hash';
+import { handoffContentHash, KEYED_HASH_VERSION } from '@/lib/handoffs/hash';
 import { normalizeItems, type ItemRowInput } from '@/lib/handoffs/items';
 import { CROCKFORD } from '@/lib/handoffs/verification-code';
 import { checklistOf, type TrailerShape } from '@/lib/trailers/checklist';
+
+// the chain key the app will check these links with (scripts/env.sh sets it)
+const CHAIN_KEY = process.env.CHAIN_KEY ?? '';
 
 export type BigDataOptions = {
   /** Total trailers after the run (the demo's are counted). */
@@ -267,6 +270,7 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
     'verification_code',
     'prev_hash',
     'content_hash',
+    'hash_version',
     'created_at',
   ]);
   const I = new CopyBuffer('handoff_items', [
@@ -555,7 +559,7 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
         ]);
       }
       if (openHold && k < n - 1) openHold = null;
-      const contentHash = handoffContentHash(hashableFromRows(row, items, shas));
+      const contentHash = handoffContentHash(hashableFromRows(row, items, shas), CHAIN_KEY);
       H.push([
         id,
         t.id,
@@ -583,6 +587,7 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
         row.verificationCode,
         prevHash,
         contentHash,
+        KEYED_HASH_VERSION,
         at,
       ]);
       for (const i of items)

@@ -39,6 +39,11 @@ export interface HandoffEvent {
   reefer?: ReeferReadings | null;
   isLoaded?: boolean;
   sealNumber?: string | null;
+  /**
+   * Set when this record is a correction standing in for an earlier one: `at` is then the time
+   * of the record it corrects, and this is when the correction was recorded.
+   */
+  correctedAt?: Date | null;
 }
 
 /** A yard jockey moving the trailer; custody stays with the terminal. */

@@ -4,8 +4,11 @@ import 'server-only';
 import { randomUUID } from 'node:crypto';
 import type { Tx } from '@/db';
 import {
+  findCorrectionOf,
   findHandoffByKey,
   getCarrier,
+  getHandoffForCorrection,
+  latestHandoffId,
   getPolicyData,
   getTerminal,
   listOpenHoldRows,
@@ -14,10 +17,11 @@ import {
 } from '@/db/queries/handoff-submit';
 import { skipCommitFlush } from '@/db/queries/handoff-writes';
 import { decideHook, safetyGaps } from '@/lib/engine';
+import { correctionRefusal } from '@/lib/handoffs/correction';
 import { evaluateHandoff } from '@/lib/handoffs/evaluation';
 import { HOOK_WORDS, holdReasons } from '@/lib/handoffs/holds';
 import { damageEvidenceErrors, normalizeItems } from '@/lib/handoffs/items';
-import { handoffEvent } from '@/lib/handoffs/submission';
+import { handoffEvent, submissionHash } from '@/lib/handoffs/submission';
 import { abort, refuse } from '@/lib/result';
 import { terminalPolicyOf } from '@/lib/terminal/policy';
 import { checklistOf } from '@/lib/trailers/checklist';
@@ -47,7 +51,10 @@ export async function recordHandoff(
     return r.ok ? r.value : abort(r);
   }
 
-  if (input.kind === 'drop' && trailer.status === 'in_yard') {
+  // a correction stands in for an earlier record: it neither moves the trailer nor follows its state
+  const original = input.correctsHandoffId ? await correctionTarget(tx, input, actor, now) : null;
+
+  if (!original && input.kind === 'drop' && trailer.status === 'in_yard') {
     abort(
       refuse(
         'conflict',
@@ -55,12 +62,16 @@ export async function recordHandoff(
       ),
     );
   }
-  if (input.kind === 'hook' && trailer.status !== 'in_yard') {
+  if (!original && input.kind === 'hook' && trailer.status !== 'in_yard') {
     abort(
       refuse('conflict', `Trailer ${trailer.unitNumber} is not in the yard; record a drop to bring it in.`),
     );
   }
-  const terminalId = input.kind === 'drop' ? actor.terminalId : trailer.currentTerminalId;
+  const terminalId = original
+    ? original.terminalId
+    : input.kind === 'drop'
+      ? actor.terminalId
+      : trailer.currentTerminalId;
   if (!terminalId) abort(refuse('invalid', 'Your account has no home terminal; ask the terminal manager.'));
   if (actor.role === 'driver' && input.carrierId !== actor.carrierId) {
     abort(
@@ -74,7 +85,7 @@ export async function recordHandoff(
   const policy = terminalPolicyOf(await getPolicyData(tx, terminalId)).engine;
   const openHolds = await listOpenHoldRows(tx, trailer.id);
   if (!carrier) abort(refuse('invalid', 'Unknown carrier.', { carrierId: ['Choose the carrier.'] }));
-  const before = input.kind === 'hook' ? decideHook(openHolds, input.isLoadPerishable) : null;
+  const before = !original && input.kind === 'hook' ? decideHook(openHolds, input.isLoadPerishable) : null;
   if (before?.outcome === 'refused') {
     abort(
       refuse('conflict', HOOK_WORDS.refused(trailer.unitNumber, before.because, false), undefined, {
@@ -105,14 +116,18 @@ export async function recordHandoff(
     abort(refuse('invalid', message, items.fieldErrors));
   }
 
-  const history = await loadTimeline(trailer.id, tx);
-  const last = history.at(-1);
-  if (last && last.at.getTime() > now.getTime())
+  const timeline = await loadTimeline(trailer.id, tx);
+  const last = timeline.at(-1);
+  if (!original && last && last.at.getTime() > now.getTime())
     abort(refuse('conflict', 'A later record of this trailer exists already.'));
+  // a correction is compared with what came before the record it corrects, at that record's time
+  const standing = original ? timeline.findIndex((e) => e.id === original.id) : -1;
+  const history = original && standing >= 0 ? timeline.slice(0, standing) : timeline;
+  const at = original && standing >= 0 ? timeline[standing].at : now;
 
   const event = handoffEvent(input, {
     id: randomUUID(),
-    at: now,
+    at,
     party: {
       carrierId: carrier.id,
       carrierName: carrier.name,
@@ -124,14 +139,14 @@ export async function recordHandoff(
   const ev = evaluateHandoff({
     checklist,
     history,
-    current: event,
+    current: original ? { ...event, correctedAt: now } : event,
     policy,
-    now,
+    now: at,
     timeZone: terminal.timeZone,
     terminalName: terminal.name,
   });
 
-  const found = input.kind === 'hook' ? decideHook(ev.holds, input.isLoadPerishable) : null;
+  const found = !original && input.kind === 'hook' ? decideHook(ev.holds, input.isLoadPerishable) : null;
   if (found?.outcome === 'refused') {
     // the holds this record found travel with the refusal: submit.ts places them on the trailer
     abort(
@@ -176,6 +191,25 @@ export async function recordHandoff(
     openHolds,
     history,
     sendReceipt: opts.sendReceipt !== false,
+    requestHash: submissionHash(input),
+    recordedAt: now,
+    correction: original ? { isOfLatest: (await latestHandoffId(tx, trailer.id)) === original.id } : null,
     isLoadPerishable: askedPerishable ? (input.isLoadPerishable ?? null) : null,
   });
+}
+
+/** The record a correction names, checked against the rules (lib/handoffs/correction.ts); aborts when refused. */
+async function correctionTarget(tx: Tx, input: HandoffSubmitInput, actor: HandoffActor, now: Date) {
+  const original = await getHandoffForCorrection(tx, input.correctsHandoffId!);
+  const policy = original ? terminalPolicyOf(await getPolicyData(tx, original.terminalId)) : null;
+  const refused = correctionRefusal({
+    original,
+    actor,
+    input,
+    now,
+    windowMinutes: policy?.gate.correctionWindowMinutes ?? 0,
+    correctedByCode: original ? await findCorrectionOf(tx, original.id) : null,
+  });
+  if (refused) abort(refused);
+  return original!;
 }

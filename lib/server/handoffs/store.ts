@@ -19,13 +19,14 @@ import {
 import type { HandoffEvent, TimelineEvent } from '@/lib/engine';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
 import type { Evaluation } from '@/lib/handoffs/evaluation';
-import { handoffContentHash } from '@/lib/handoffs/hash';
+import { handoffContentHash, KEYED_HASH_VERSION } from '@/lib/handoffs/hash';
 import { holdsNotYetOpen } from '@/lib/handoffs/holds';
 import { receiptRecipients } from '@/lib/handoffs/receipt';
 import type { normalizeItems } from '@/lib/handoffs/items';
-import { handoffRow, trailerAfter } from '@/lib/handoffs/submission';
+import { handoffRow, readingsOf, trailerAfter } from '@/lib/handoffs/submission';
 import { newVerificationCode } from '@/lib/handoffs/verification-code';
 import { abort } from '@/lib/result';
+import { chainKey } from '@/lib/server/env';
 import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
 import { enqueueReceiptEmail } from './receipt-mail';
 import { chooseSpot } from './slots';
@@ -44,6 +45,12 @@ export type CheckedHandoff = {
   openHolds: OpenHoldRow[];
   history: TimelineEvent[];
   sendReceipt: boolean;
+  /** SHA-256 of the submitted body, kept with the draft key (replay.ts compares it). */
+  requestHash: string;
+  /** When the record is stored; the event's time differs only for a correction (the corrected record's time). */
+  recordedAt: Date;
+  /** Set for a correction: whether the record it corrects is the trailer's latest. */
+  correction: { isOfLatest: boolean } | null;
   /** The driver's answer at a hook of a "no perishable loads" trailer; null when not asked. */
   isLoadPerishable: boolean | null;
 };
@@ -51,9 +58,9 @@ export type CheckedHandoff = {
 export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitResult> {
   const { input, actor, trailer, terminal, event, evaluation: ev, items } = c;
   const id = event.id;
-  const now = event.at;
+  const now = c.recordedAt;
   let spotId: string | null = null;
-  if (input.kind === 'drop') {
+  if (input.kind === 'drop' && !c.correction) {
     const spot = await chooseSpot(tx, terminal.id, input.spotId);
     spotId = spot.ok ? spot.value : abort(spot);
   }
@@ -62,13 +69,20 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
     trailerId: trailer.id,
     terminalId: terminal.id,
     event,
+    occurredAt: now,
     recordedById: actor.id,
     verificationCode: newVerificationCode(),
     prevHash: await latestContentHash(tx, trailer.id),
   });
   const shas = c.photos.map((p) => p.sha256);
-  const contentHash = handoffContentHash(hashableFromRows(row, items.rows, shas));
-  await insertHandoff(tx, { ...row, contentHash, isLoadPerishable: c.isLoadPerishable });
+  const contentHash = handoffContentHash(hashableFromRows(row, items.rows, shas), chainKey());
+  await insertHandoff(tx, {
+    ...row,
+    contentHash,
+    hashVersion: KEYED_HASH_VERSION,
+    requestHash: c.requestHash,
+    isLoadPerishable: c.isLoadPerishable,
+  });
   await insertHandoffItems(
     tx,
     items.rows.map((i) => ({ ...i, handoffId: id })),
@@ -139,14 +153,24 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
       placedAt: now,
     })),
   );
-  await updateTrailer(tx, trailer.id, trailerAfter(row, spotId));
+  // a correction leaves the trailer where it is; it updates the readings only if it corrects the latest record
+  if (!c.correction) await updateTrailer(tx, trailer.id, trailerAfter(row, spotId));
+  else if (c.correction.isOfLatest) await updateTrailer(tx, trailer.id, readingsOf(row));
   await recordAudit(
     {
       actorId: actor.id,
-      action: `handoff.${input.kind}`,
+      action: c.correction ? `handoff.${input.kind}.correction` : `handoff.${input.kind}`,
       entityType: 'handoff',
       entityId: id,
-      detail: { trailerId: trailer.id, findings: ev.rows.length, holds: newHolds.length, caseId },
+      detail: {
+        trailerId: trailer.id,
+        findings: ev.rows.length,
+        holds: newHolds.length,
+        caseId,
+        ...(input.correctsHandoffId
+          ? { corrects: input.correctsHandoffId, reason: row.correctionReason }
+          : {}),
+      },
     },
     tx,
   );

@@ -40,6 +40,12 @@ export async function submitHandoff(
       const row = await findHandoffByKey(db, input.idempotencyKey);
       if (row) return replay(row, input, actor);
     }
+    // the last wall behind slots.ts's locks: a slot filled under us is a conflict to retry, never a 500
+    if (isUniqueViolation(error, 'trailers_current_spot')) {
+      return refuse('conflict', 'That slot was taken a moment ago. Submit again to get another slot.', {
+        spotId: ['That slot was taken a moment ago.'],
+      });
+    }
     throw error;
   }
   if (!isRefusal(outcome)) return done(outcome);

@@ -12,5 +12,10 @@ import { timelineOf } from '@/lib/handoffs/timeline';
  */
 export async function loadTimeline(trailerId: string, q?: Db | Tx): Promise<TimelineEvent[]> {
   const since = await conditionWindowStart(trailerId, q);
-  return timelineOf(await listTimelineRows(trailerId, q, since));
+  const rows = await listTimelineRows(trailerId, q, since);
+  // a correction stands in for its original at the original's time: if that lies before the
+  // window, read the whole history so the correction is placed (corrections are rare)
+  const ids = new Set(rows.handoffs.map((h) => h.id));
+  const outside = since && rows.handoffs.some((h) => h.correctsHandoffId && !ids.has(h.correctsHandoffId));
+  return timelineOf(outside ? await listTimelineRows(trailerId, q, null) : rows);
 }

@@ -2,7 +2,7 @@
 // sends and the scheduled jobs of tasks.ts. Several app servers may each run one: graphile-worker
 // hands every job to one worker only.
 import 'server-only';
-import { run, runMigrations, type Runner } from 'graphile-worker';
+import { run, type Runner } from 'graphile-worker';
 import { databaseUrl } from '@/db/url';
 import { cronItems, taskList } from './tasks';
 
@@ -16,9 +16,4 @@ export async function startJobWorker(): Promise<Runner> {
     taskList,
     parsedCronItems: cronItems(),
   });
-}
-
-/** Creates or updates the queue's own tables (schema graphile_worker); db/migrate.ts calls it. */
-export async function migrateJobQueue(connectionString = databaseUrl()): Promise<void> {
-  await runMigrations({ connectionString });
 }

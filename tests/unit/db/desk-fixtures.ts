@@ -18,7 +18,8 @@ import {
   users,
 } from '@/db/schema';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
-import { handoffContentHash } from '@/lib/handoffs/hash';
+import { handoffContentHash, KEYED_HASH_VERSION } from '@/lib/handoffs/hash';
+import { chainKey } from '@/lib/server/env';
 
 const tag = () => randomUUID().replace(/-/g, '').slice(0, 6).toUpperCase();
 
@@ -136,8 +137,8 @@ export async function makeDeskFixture() {
         note: null,
       },
     ];
-    const contentHash = handoffContentHash(hashableFromRows(row, items, []));
-    await db.insert(handoffs).values({ ...row, contentHash });
+    const contentHash = handoffContentHash(hashableFromRows(row, items, []), chainKey());
+    await db.insert(handoffs).values({ ...row, contentHash, hashVersion: KEYED_HASH_VERSION });
     await db.insert(handoffItems).values(items.map((i) => ({ ...i, handoffId: row.id })));
     prevHash = contentHash;
     return row;

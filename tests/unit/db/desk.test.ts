@@ -16,6 +16,7 @@ import { releaseHold } from '@/lib/server/holds/release';
 import { seed } from '@/db/seed';
 import { makeDeskFixture } from './desk-fixtures';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
+import { asOwner } from './owner-connection';
 
 type Fixture = Awaited<ReturnType<typeof makeDeskFixture>>;
 let f: Fixture;
@@ -243,19 +244,28 @@ describe('desk in the database', () => {
 
   it('the hash chain verifies, and detects a handoff row changed in the database', async () => {
     expect((await verifyTrailerChain(f.trailer.id)).check).toEqual({ ok: true, count: 2 });
-    // handoffs are append-only by trigger; as the table owner, switch it off to play the tamperer
-    await pool.query('ALTER TABLE handoffs DISABLE TRIGGER handoffs_append_only');
-    try {
-      await pool.query('UPDATE handoffs SET driver_name = $1 WHERE id = $2', ['Somebody Else', f.hook.id]);
-    } finally {
-      await pool.query('ALTER TABLE handoffs ENABLE TRIGGER handoffs_append_only');
-    }
+    // handoffs are append-only by trigger and the app's role may not update them; as the table
+    // owner, switch the trigger off to play the tamperer
+    await asOwner(async (owner) => {
+      await owner.query('ALTER TABLE handoffs DISABLE TRIGGER handoffs_append_only');
+      try {
+        await owner.query('UPDATE handoffs SET driver_name = $1 WHERE id = $2', ['Somebody Else', f.hook.id]);
+      } finally {
+        await owner.query('ALTER TABLE handoffs ENABLE TRIGGER handoffs_append_only');
+      }
+    });
     const { check, brokenAt } = await verifyTrailerChain(f.trailer.id);
     expect(check).toEqual({ ok: false, brokenAt: f.hook.id, why: 'content_changed' });
     expect(brokenAt?.toISOString()).toBe('2026-10-20T14:00:00.000Z');
-    // the append-only trigger raises its own SQLSTATE (db/migrations/0001_append-only-records.sql)
+    // the app's role is refused by its grants (42501); the owner by the append-only trigger (HM001,
+    // db/migrations/0001_append-only-records.sql)
     await expect(
       pool.query('UPDATE handoffs SET driver_name = $1 WHERE id = $2', ['Again', f.hook.id]),
-    ).rejects.toMatchObject({ code: 'HM001', message: expect.stringMatching(/append-only/) });
+    ).rejects.toMatchObject({ code: '42501' });
+    await asOwner(async (owner) => {
+      await expect(
+        owner.query('UPDATE handoffs SET driver_name = $1 WHERE id = $2', ['Again', f.hook.id]),
+      ).rejects.toMatchObject({ code: 'HM001', message: expect.stringMatching(/append-only/) });
+    });
   });
 });

@@ -4,6 +4,7 @@ import { db, pool } from '@/db';
 import { auditLog, carriers, trailers, users, yardSpots } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { validateVin } from '@/lib/engine/identity';
+import { asOwner } from './owner-connection';
 
 // SQLSTATE 23505 unique_violation (PostgreSQL manual, Appendix A "PostgreSQL Error Codes").
 const UNIQUE_VIOLATION = '23505';
@@ -63,12 +64,21 @@ describe('database foundation (a fresh database of its own)', () => {
 
   it('keeps the audit log append-only: updates and deletes are refused by the database', async () => {
     await db.insert(auditLog).values({ actorId: null, action: 'test', entityType: 'test' });
-    // drizzle wraps the driver error; the database's own error is the cause
-    const refused = {
-      cause: expect.objectContaining({ code: 'HM001', message: expect.stringMatching(/append-only/) }),
+    // the app's role has no UPDATE or DELETE there (42501 insufficient_privilege, PostgreSQL
+    // Appendix A); drizzle wraps the driver error, the database's own error is the cause
+    const denied = {
+      cause: expect.objectContaining({ code: '42501', message: expect.stringMatching(/permission denied/) }),
     };
-    await expect(db.update(auditLog).set({ action: 'changed' })).rejects.toMatchObject(refused);
-    await expect(db.delete(auditLog)).rejects.toMatchObject(refused);
+    await expect(db.update(auditLog).set({ action: 'changed' })).rejects.toMatchObject(denied);
+    await expect(db.delete(auditLog)).rejects.toMatchObject(denied);
+    // behind the grants, the append-only trigger stops even the owner (HM001, migration 0001)
+    await asOwner(async (owner) => {
+      await expect(owner.query("update audit_log set action = 'changed'")).rejects.toMatchObject({
+        code: 'HM001',
+        message: expect.stringMatching(/append-only/),
+      });
+      await expect(owner.query('delete from audit_log')).rejects.toMatchObject({ code: 'HM001' });
+    });
   });
 
   it('stores carriers by unique SCAC', async () => {

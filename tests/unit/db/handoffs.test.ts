@@ -22,6 +22,7 @@ import {
 import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { handoffContentHash, verifyChain } from '@/lib/handoffs/hash';
 import { isRefusal } from '@/lib/result';
+import { chainKey } from '@/lib/server/env';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 import { submitHandoff } from '@/lib/server/handoffs/submit';
 import { actor, allOk, freshTrailer, recorded, refused, storedPhoto, submitInput } from './handoff-fixtures';
@@ -296,6 +297,7 @@ describe('handoff submit service (real database)', () => {
           id: r.id,
           storedHash: r.contentHash,
           storedPrevHash: r.prevHash,
+          hashVersion: r.hashVersion,
           recomputed: hashableFromRows(
             r,
             it,
@@ -304,14 +306,18 @@ describe('handoff submit service (real database)', () => {
         };
       }),
     );
-    expect(verifyChain(links)).toEqual({ ok: true, count: 3 });
+    expect(verifyChain(links, chainKey())).toEqual({ ok: true, count: 3 });
     // a changed pin reading in the middle record would not match its stored hash
     const tampered = structuredClone(links);
     tampered[1].recomputed.items = tampered[1].recomputed.items.map((i) =>
       i.itemKey === 'undercarriage.tandem_pin.left_front' ? { ...i, details: { isEngaged: false } } : i,
     );
-    expect(handoffContentHash(tampered[1].recomputed)).not.toBe(rows[1].contentHash);
-    expect(verifyChain(tampered)).toEqual({ ok: false, brokenAt: rows[1].id, why: 'content_changed' });
+    expect(handoffContentHash(tampered[1].recomputed, chainKey())).not.toBe(rows[1].contentHash);
+    expect(verifyChain(tampered, chainKey())).toEqual({
+      ok: false,
+      brokenAt: rows[1].id,
+      why: 'content_changed',
+    });
   });
 
   it('the database refuses to change or delete a stored handoff', async () => {
@@ -319,9 +325,10 @@ describe('handoff submit service (real database)', () => {
     const h = await recorded(submitInput(trailer.id, d1.carrierId!, 'drop', allOk(checklist), at(0)), d1, {
       now: at(0),
     });
-    // HM001: the SQLSTATE the append-only trigger raises (db/migrations/0001_append-only-records.sql)
+    // 42501 insufficient_privilege: the app's role has no UPDATE or DELETE on record tables
+    // (db/migrations/0004_app-role-grants.sql); the owner meets the append-only trigger (HM001) behind it
     const refused = {
-      cause: expect.objectContaining({ code: 'HM001', message: expect.stringMatching(/append-only/) }),
+      cause: expect.objectContaining({ code: '42501', message: expect.stringMatching(/permission denied/) }),
     };
     await expect(
       db.update(handoffs).set({ driverName: 'Someone else' }).where(eq(handoffs.id, h.handoffId)),

@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { hashableFromRows, type HandoffHashRow } from '@/lib/handoffs/canonical';
-import { checkTrailerChain, type ChainRecord } from '@/lib/handoffs/chain';
+import { checkOneRecord, checkTrailerChain, type ChainRecord } from '@/lib/handoffs/chain';
 import { handoffContentHash, sha256Hex } from '@/lib/handoffs/hash';
 
 // Two stored handoffs hashed the way the submit does; the photo's bytes are the FIPS 180-2
 // example message "abc", whose SHA-256 is ba7816bf… (NIST FIPS 180-2, Appendix B.1).
 const PHOTO = sha256Hex('abc');
+const KEY = 'a-test-chain-key-of-at-least-32-characters';
 
 const row = (id: string, at: string, prevHash: string | null): HandoffHashRow => ({
   id,
@@ -46,24 +47,28 @@ const items = [
 /** A chain whose first record was submitted with one stored photo. */
 function stored(): ChainRecord[] {
   const first = row('h1', '2026-11-02T15:00:00Z', null);
-  const firstHash = handoffContentHash(hashableFromRows(first, items, [PHOTO]));
+  const firstHash = handoffContentHash(hashableFromRows(first, items, [PHOTO]), KEY);
   const second = row('h2', '2026-11-03T09:00:00Z', firstHash);
-  const secondHash = handoffContentHash(hashableFromRows(second, [], []));
+  const secondHash = handoffContentHash(hashableFromRows(second, [], []), KEY);
   return [
-    { row: { ...first, contentHash: firstHash }, items, photos: [{ sha256: PHOTO, status: 'stored' }] },
-    { row: { ...second, contentHash: secondHash }, items: [], photos: [] },
+    {
+      row: { ...first, contentHash: firstHash, hashVersion: 2 },
+      items,
+      photos: [{ sha256: PHOTO, status: 'stored' }],
+    },
+    { row: { ...second, contentHash: secondHash, hashVersion: 2 }, items: [], photos: [] },
   ];
 }
 
 describe('the one chain check', () => {
   it('verifies the records as the submit hashed them', () => {
-    expect(checkTrailerChain(stored())).toEqual({ check: { ok: true, count: 2 }, brokenAt: null });
+    expect(checkTrailerChain(stored(), KEY)).toEqual({ check: { ok: true, count: 2 }, brokenAt: null });
   });
 
   it('counts stored photos only: a photo no longer stored breaks the chain at its record', () => {
     const records = stored();
     records[0].photos = [{ sha256: PHOTO, status: 'rejected' }];
-    expect(checkTrailerChain(records)).toEqual({
+    expect(checkTrailerChain(records, KEY)).toEqual({
       check: { ok: false, brokenAt: 'h1', why: 'content_changed' },
       brokenAt: new Date('2026-11-02T15:00:00Z'),
     });
@@ -72,12 +77,25 @@ describe('the one chain check', () => {
   it('a photo attached later without being stored changes nothing; a stored one does', () => {
     const pending = stored();
     pending[1].photos = [{ sha256: sha256Hex('later'), status: 'pending' }];
-    expect(checkTrailerChain(pending).check.ok).toBe(true);
+    expect(checkTrailerChain(pending, KEY).check.ok).toBe(true);
     const added = stored();
     added[1].photos = [{ sha256: sha256Hex('later'), status: 'stored' }];
-    expect(checkTrailerChain(added)).toEqual({
+    expect(checkTrailerChain(added, KEY)).toEqual({
       check: { ok: false, brokenAt: 'h2', why: 'content_changed' },
       brokenAt: new Date('2026-11-03T09:00:00Z'),
     });
+  });
+
+  it('one record: matches, altered, or unproven because an earlier record broke the chain', () => {
+    expect(checkOneRecord(stored(), 'h1', KEY)).toBe('matches');
+    expect(checkOneRecord(stored(), 'h2', KEY)).toBe('matches');
+    const edited = stored();
+    edited[1].row = { ...edited[1].row, fuelEighths: 2 };
+    expect(checkOneRecord(edited, 'h2', KEY)).toBe('altered');
+    expect(checkOneRecord(edited, 'h1', KEY)).toBe('matches');
+    const earlier = stored();
+    earlier[0].row = { ...earlier[0].row, driverName: 'Someone Else' };
+    expect(checkOneRecord(earlier, 'h2', KEY)).toBe('earlier_broken');
+    expect(checkOneRecord(stored(), 'h9', KEY)).toBe('altered');
   });
 });

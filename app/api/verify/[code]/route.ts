@@ -1,7 +1,7 @@
 import { z } from 'zod';
-import { getReceiptByCode } from '@/db/queries/handoffs';
 import { refuse } from '@/lib/result';
 import { route } from '@/lib/server/api';
+import { checkReceipt } from '@/lib/server/handoffs/verify';
 import { verificationCodeSchema } from '@/lib/validation/handoffs';
 
 const paramsSchema = z.object({
@@ -19,13 +19,20 @@ const paramsSchema = z.object({
     .pipe(verificationCodeSchema),
 });
 
-/** Public: what the receipt with this verification code shows, photo count but no photos. */
+/**
+ * Public: whether the record still matches what was receipted (recomputed from what is stored
+ * now), and only when it does, what the receipt shows (photo count but no photos).
+ */
 export const GET = route(
   { access: 'public', params: paramsSchema, notFound: 'No receipt has this code.' },
   async ({ params }) => {
-    const r = await getReceiptByCode(params.code);
-    if (!r) return refuse('not_found', 'No receipt has this code.');
+    const checked = await checkReceipt(params.code);
+    if (!checked) return refuse('not_found', 'No receipt has this code.');
+    if (checked.status !== 'genuine')
+      return Response.json({ status: checked.status, message: checked.message });
+    const r = checked.receipt;
     return Response.json({
+      status: 'genuine',
       receipt: {
         unitNumber: r.unitNumber,
         kind: r.kind,

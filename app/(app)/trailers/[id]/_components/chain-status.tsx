@@ -23,9 +23,18 @@ export function ChainStatus({
       role="alert"
       className="rounded-lg border-l-8 border-danger bg-danger-bg p-3 text-gate font-bold text-danger"
     >
-      Record of {brokenAt ? formatTime(brokenAt, timeZone) : 'an unknown date'} changed after the fact
-      {check.why === 'link_broken' ? ' (its link to the record before it is broken)' : ''}. Every later record
-      is unproven.
+      {check.why === 'unkeyed' ? (
+        <>
+          Record of {brokenAt ? formatTime(brokenAt, timeZone) : 'an unknown date'} is linked without the
+          chain key, so Hitchmark cannot vouch for it. It and every later record are unproven.
+        </>
+      ) : (
+        <>
+          Record of {brokenAt ? formatTime(brokenAt, timeZone) : 'an unknown date'} changed after the fact
+          {check.why === 'link_broken' ? ' (its link to the record before it is broken)' : ''}. Every later
+          record is unproven.
+        </>
+      )}
     </p>
   );
 }
