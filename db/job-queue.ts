@@ -10,6 +10,17 @@ export async function migrateJobQueue(ownerConnectionString: string): Promise<vo
   const client = new Client({ connectionString: ownerConnectionString });
   await client.connect();
   try {
+    // graphile-worker turns row-level security on for its private tables, which only the table
+    // owner passes; the app's role works the queue too, so the owner turns it off again here.
+    const { rows } = await client.query<{ name: string }>(
+      `SELECT c.relname AS name FROM pg_class c JOIN pg_namespace n ON n.oid = c.relnamespace
+        WHERE n.nspname = 'graphile_worker' AND c.relkind = 'r' AND c.relrowsecurity`,
+    );
+    for (const { name } of rows) {
+      await client.query(
+        `ALTER TABLE graphile_worker.${client.escapeIdentifier(name)} DISABLE ROW LEVEL SECURITY`,
+      );
+    }
     await client.query(`GRANT USAGE ON SCHEMA graphile_worker TO ${APP_ROLE}`);
     await client.query(
       `GRANT SELECT, INSERT, UPDATE, DELETE ON ALL TABLES IN SCHEMA graphile_worker TO ${APP_ROLE}`,

@@ -1,33 +1,7 @@
-import type {
-  Checklist,
-  EnginePolicy,
-  Hold,
-  HoldSeverity,
-  InspectionEvent,
-  ItemObservation,
-  Restriction,
-} from './types';
-
-/** Shown with every out-of-service hold. */
-export const OUT_OF_SERVICE_CAUTION =
-  'Do not move this trailer on a public road until a qualified technician has repaired it. ' +
-  "Chock the wheels and set the brakes before going under it. Hitchmark's checks support, " +
-  "and do not replace, the driver's inspection under 49 CFR 396.11 and 396.13.";
-
-/** Shown with a "yard moves only" hold. */
-export const YARD_ONLY_CAUTION =
-  'Yard moves only: this trailer does not leave the gate until the fault is fixed. In the yard, ' +
-  'couple with the usual checks (tug test, kingpin locked, landing gear up, air and electrical lines) ' +
-  'and move it slowly. Local codes, company policy and licensed mechanics decide.';
-
-/** Shown with a "no perishable loads" hold. */
-export const NO_PERISHABLE_CAUTION =
-  'No perishable load until the repair is made: the box may not hold its temperature. ' +
-  'A licensed mechanic or the refrigeration shop decides when it is fixed.';
-
-const UNDER_TRAILER_CAUTION =
-  'Chock the wheels and set the brakes before going under the trailer; never crawl under one ' +
-  'that is not coupled or on its landing gear on firm ground.';
+// Turns one inspection into holds: per item (tires, pins, spare, doors, landing gear, reefer) and,
+// for a reefer's full handoff, the pre-trip. The caution each hold carries comes from hold-parts.ts.
+import type { Checklist, EnginePolicy, Hold, InspectionEvent, ItemObservation } from './types';
+import { hold, UNDER_TRAILER_CAUTION } from './hold-parts';
 
 export interface HoldInput {
   checklist: Checklist;
@@ -35,29 +9,6 @@ export interface HoldInput {
   event: InspectionEvent;
   now: Date;
   policy: EnginePolicy;
-}
-
-function hold(
-  ruleKey: string,
-  itemKey: string | null,
-  reason: string,
-  severity: HoldSeverity,
-  restriction: Restriction | null,
-  source: string,
-  caution: string | null = null,
-): Hold {
-  return {
-    ruleKey,
-    itemKey,
-    reason,
-    severity,
-    restriction,
-    source,
-    caution:
-      severity === 'out_of_service'
-        ? OUT_OF_SERVICE_CAUTION
-        : (caution ?? (restriction === 'yard_only' ? YARD_ONLY_CAUTION : NO_PERISHABLE_CAUTION)),
-  };
 }
 
 function itemHolds(
@@ -233,37 +184,4 @@ export function evaluateHolds({ checklist, event, now, policy }: HoldInput): Hol
   if (checklist.spec.kind === 'reefer' && event.type !== 'walk')
     holds.push(...preTripHolds(event, now, policy));
   return holds;
-}
-
-/** True when any hold blocks a hook (severity `out_of_service`). */
-export function blocksHook(holds: readonly Hold[]): boolean {
-  return holds.some((h) => h.severity === 'out_of_service');
-}
-
-/** What the gate decides about a hook from the trailer's holds (open ones and those this record found). */
-export type HookDecision<H> =
-  | { outcome: 'allowed'; askedPerishable: boolean }
-  | { outcome: 'refused'; because: 'out_of_service' | 'yard_only' | 'perishable_load'; holds: H[] }
-  | { outcome: 'ask_perishable'; holds: H[] };
-
-type HoldLike = { severity: HoldSeverity; restriction: string | null };
-
-/**
- * A hook is refused by any out-of-service hold, then by any "yard moves only" hold; a
- * "no perishable loads" hold asks whether the load is perishable (`isLoadPerishable` null or
- * undefined: ask) and refuses a perishable one. `askedPerishable` says the answer is to be recorded.
- */
-export function decideHook<H extends HoldLike>(
-  holds: readonly H[],
-  isLoadPerishable: boolean | null | undefined,
-): HookDecision<H> {
-  const oos = holds.filter((h) => h.severity === 'out_of_service');
-  if (oos.length) return { outcome: 'refused', because: 'out_of_service', holds: oos };
-  const yard = holds.filter((h) => h.severity === 'restricted' && h.restriction === 'yard_only');
-  if (yard.length) return { outcome: 'refused', because: 'yard_only', holds: yard };
-  const cold = holds.filter((h) => h.severity === 'restricted' && h.restriction === 'no_perishable');
-  if (!cold.length) return { outcome: 'allowed', askedPerishable: false };
-  if (typeof isLoadPerishable !== 'boolean') return { outcome: 'ask_perishable', holds: cold };
-  if (isLoadPerishable) return { outcome: 'refused', because: 'perishable_load', holds: cold };
-  return { outcome: 'allowed', askedPerishable: true };
 }

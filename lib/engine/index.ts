@@ -29,15 +29,11 @@ export { attributeFindings } from './responsibility';
 export type { AttributeInput } from './responsibility';
 export { assessFuel, eighthsToGallons, eighthsToLitres, expectedBurnGallons } from './fuel';
 export type { FuelInput } from './fuel';
-export {
-  blocksHook,
-  decideHook,
-  evaluateHolds,
-  NO_PERISHABLE_CAUTION,
-  OUT_OF_SERVICE_CAUTION,
-  YARD_ONLY_CAUTION,
-} from './holds';
-export type { HoldInput, HookDecision } from './holds';
+export { evaluateHolds } from './holds';
+export type { HoldInput } from './holds';
+export { NO_PERISHABLE_CAUTION, OUT_OF_SERVICE_CAUTION, YARD_ONLY_CAUTION } from './hold-parts';
+export { blocksHook, decideHook } from './hook';
+export type { HookDecision } from './hook';
 export { answerGroup, safetyGaps, safetyGroups, safetyItems, statedObservation } from './safety';
 export type { SafetyAnswers, SafetyGap, SafetyGroup, SafetyGroupKey } from './safety';
 export { reconcileWalk } from './reconcile';

@@ -42,6 +42,7 @@ export type AnchorCheck = { ok: boolean; digestMatches: boolean; problems: Ancho
 export function checkAnchor(
   anchor: { digest: string; heads: readonly ChainHead[] },
   chains: ReadonlyMap<string, ChainRecord[]>,
+  chainKey: string,
 ): AnchorCheck {
   const problems: AnchorProblem[] = [];
   const found: ChainHead[] = [];
@@ -62,7 +63,7 @@ export function checkAnchor(
     if (record.row.contentHash !== head.hash)
       problems.push({ trailerId: head.trailerId, why: 'head_changed' });
     else if (at + 1 !== head.count) problems.push({ trailerId: head.trailerId, why: 'count_changed' });
-    else if (!checkTrailerChain(records.slice(0, at + 1)).check.ok)
+    else if (!checkTrailerChain(records.slice(0, at + 1), chainKey).check.ok)
       problems.push({ trailerId: head.trailerId, why: 'chain_broken' });
   }
   const digestMatches = anchorDigest(found) === anchor.digest;

@@ -75,6 +75,7 @@ export const PAGES: PageRow[] = [
   { file: 'app/(app)/admin/page.tsx', url: () => '/admin', expect: only(['admin']) },
   { file: 'app/(app)/admin/rates/page.tsx', url: () => '/admin/rates', expect: only(['admin']) },
   { file: 'app/(app)/admin/yard/page.tsx', url: () => '/admin/yard', expect: only(['admin']) },
+  { file: 'app/(app)/admin/anchors/page.tsx', url: () => '/admin/anchors', expect: only(['admin']) },
   { file: 'app/(app)/desk/page.tsx', url: () => '/desk', expect: only(DESK) },
   { file: 'app/(app)/desk/reports/page.tsx', url: () => '/desk/reports', expect: only(DESK_STAFF) },
   {
@@ -234,6 +235,12 @@ export const ROUTES: RouteRow[] = [
     url: (i) => `/trailers/labels/pdf?ids=${i.trailerId}`,
     expect: only(TRAILERS, OK),
   },
+  {
+    file: 'app/(app)/gate/receipts/[id]/pdf/route.ts',
+    method: 'GET',
+    url: (i) => `/gate/receipts/${i.receiptId}/pdf`,
+    expect: { ...only(GATE, OK), driverOther: NOT_FOUND },
+  },
 ];
 
 const act = (allowed: Exclude<Visitor, 'none'>[]): ActionRow['expect'] => {
@@ -257,6 +264,7 @@ export const ACTIONS: ActionRow[] = [
   { file: 'app/(app)/admin/yard/actions.ts', name: 'renameSpotAction', expect: act(ADMIN) },
   { file: 'app/(app)/admin/yard/actions.ts', name: 'retireSpotAction', expect: act(ADMIN) },
   { file: 'app/(app)/desk/actions.ts', name: 'notifyCaseAction', expect: act(DESK_STAFF) },
+  { file: 'app/(app)/desk/actions.ts', name: 'resendEmailAction', expect: act(DESK_STAFF) },
   { file: 'app/(app)/desk/actions.ts', name: 'disputeCaseAction', expect: act(DESK) },
   { file: 'app/(app)/desk/actions.ts', name: 'decideCaseAction', expect: act(DESK_STAFF) },
   { file: 'app/(app)/desk/actions.ts', name: 'overrideEstimateAction', expect: act(DESK_STAFF) },

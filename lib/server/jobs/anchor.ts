@@ -10,7 +10,7 @@ import { enqueueEmail } from '@/db/queries/outbox';
 import { listTerminals } from '@/db/queries/terminals';
 import { previousLocalDay } from '@/lib/format/time';
 import { anchorDigest, chainHeads, checkAnchor, type AnchorCheck } from '@/lib/handoffs/anchor';
-import { appUrl } from '../env';
+import { appUrl, chainKey } from '../env';
 
 type Terminal = { id: string; code: string; name: string; timeZone: string };
 
@@ -76,5 +76,5 @@ export async function checkTerminalAnchors(terminalId: string): Promise<AnchorRo
   const anchors = await listAnchors(terminalId);
   const trailerIds = [...new Set(anchors.flatMap((a) => a.heads.map((h) => h.trailerId)))];
   const chains = await listChainsOf(trailerIds);
-  return anchors.map((a) => ({ ...a, check: checkAnchor(a, chains) }));
+  return anchors.map((a) => ({ ...a, check: checkAnchor(a, chains, chainKey()) }));
 }

@@ -23,7 +23,11 @@ describe('anchor digest', () => {
 
   it('finds a missing head without throwing', () => {
     const heads = [{ trailerId: 't', handoffId: 'h', hash: 'x', count: 1 }];
-    const check = checkAnchor({ digest: anchorDigest(heads), heads }, new Map<string, ChainRecord[]>());
+    const check = checkAnchor(
+      { digest: anchorDigest(heads), heads },
+      new Map<string, ChainRecord[]>(),
+      'test-chain-key',
+    );
     expect(check).toEqual({
       ok: false,
       digestMatches: false,

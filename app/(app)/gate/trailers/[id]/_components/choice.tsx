@@ -37,7 +37,7 @@ export function Choice<T extends string | number | boolean>({
             type="button"
             aria-pressed={value === o.value}
             onClick={() => onChange(o.value)}
-            className={`min-h-tap min-w-tap rounded-lg border-2 border-ink-soft bg-paper px-3 text-gate font-bold text-ink aria-pressed:text-white ${o.tone ? TONES[o.tone] : 'aria-pressed:border-brand aria-pressed:bg-brand'}`}
+            className={`min-h-tap min-w-tap rounded-lg border-2 border-ink-soft bg-paper px-3 text-gate font-bold text-ink aria-pressed:text-on-fill ${o.tone ? TONES[o.tone] : 'aria-pressed:border-brand aria-pressed:bg-brand'}`}
           >
             {o.label}
           </button>

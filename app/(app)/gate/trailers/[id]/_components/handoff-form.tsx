@@ -127,7 +127,7 @@ export function HandoffForm({
               for (const [key, v] of Object.entries(sameAsLastForZone(z.items, draft, last))) setItem(key, v);
             }
           }}
-          className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-white"
+          className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-on-fill"
         >
           {SAFETY_WORDS.sameAsLastAll}
         </button>

@@ -80,7 +80,7 @@ export function SafetyGroupAnswer({
             setItem(key, statedObservation(byKey.get(key)!.kind, depth) as DraftItem);
           }
         }}
-        className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate font-bold text-white"
+        className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate font-bold text-on-fill"
       >
         {group.statement}
       </button>

@@ -50,7 +50,7 @@ export function ZoneSection({
           onClick={() => {
             for (const [key, v] of Object.entries(sameAsLastForZone(items, draft, last))) setItem(key, v);
           }}
-          className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-white"
+          className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-on-fill"
         >
           Same as last for {zone.label.toLowerCase()}
         </button>
