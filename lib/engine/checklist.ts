@@ -4,7 +4,6 @@ import type {
   ChecklistItem,
   ChecklistZone,
   ItemKind,
-  ItemObservation,
   ReadingField,
   TrailerSpec,
   ZoneKey,
@@ -192,22 +191,4 @@ export function buildChecklist(spec: TrailerSpec): Checklist {
     })),
   }));
   return { spec, zones, items: zones.flatMap((z) => z.items) };
-}
-
-/** The observation fields the gate form asks for each item kind, besides `condition`. */
-export const OBSERVATION_FIELDS: Record<ItemKind, readonly (keyof ItemObservation)[]> = {
-  condition: [],
-  skin: ['isInsulationShowing'],
-  hinge: ['isLocking'],
-  pin: ['isEngaged'],
-  spare: ['isMounted', 'isHoldingAir'],
-  tire: ['treadThirtySeconds', 'isHoldingAir'],
-  leak: ['isLeaking'],
-  cleanliness: ['cleanliness'],
-  reading: [],
-};
-
-/** Items whose condition is compared between inspections (every kind except readings). */
-export function inspectableItems(checklist: Checklist): ChecklistItem[] {
-  return checklist.items.filter((i) => i.kind !== 'reading');
 }

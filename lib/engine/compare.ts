@@ -1,4 +1,4 @@
-import { inspectableItems } from './checklist';
+import { inspectableItems } from './observations';
 import { isInspected, severityOf } from './conditions';
 import type {
   Checklist,

@@ -3,7 +3,8 @@
  * framework: callers pass `now`, the policy and a display time zone. Times are `Date`.
  * Label tokens use node:crypto and live in `./identity/label-token` (server only).
  */
-export { buildChecklist, inspectableItems, OBSERVATION_FIELDS, ZONE_LABELS } from './checklist';
+export { buildChecklist, ZONE_LABELS } from './checklist';
+export { inspectableItems, OBSERVATION_FIELDS } from './observations';
 export {
   CONDITION_LABELS,
   CONDITIONS,

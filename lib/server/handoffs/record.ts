@@ -4,10 +4,8 @@ import 'server-only';
 import { randomUUID } from 'node:crypto';
 import type { Tx } from '@/db';
 import {
-  findCorrectionOf,
   findHandoffByKey,
   getCarrier,
-  getHandoffForCorrection,
   latestHandoffId,
   getPolicyData,
   getTerminal,
@@ -17,7 +15,6 @@ import {
 } from '@/db/queries/handoff-submit';
 import { skipCommitFlush } from '@/db/queries/handoff-writes';
 import { decideHook, safetyGaps } from '@/lib/engine';
-import { correctionRefusal } from '@/lib/handoffs/correction';
 import { evaluateHandoff } from '@/lib/handoffs/evaluation';
 import { HOOK_WORDS, holdReasons } from '@/lib/handoffs/holds';
 import { damageEvidenceErrors, normalizeItems } from '@/lib/handoffs/items';
@@ -27,6 +24,7 @@ import { terminalPolicyOf } from '@/lib/terminal/policy';
 import { checklistOf } from '@/lib/trailers/checklist';
 import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
 import { replay } from './replay';
+import { correctionTarget } from './correction';
 import { storeHandoff } from './store';
 import { loadTimeline } from './timeline';
 import type { HandoffActor, SubmitOptions, SubmitResult } from './types';
@@ -196,20 +194,4 @@ export async function recordHandoff(
     correction: original ? { isOfLatest: (await latestHandoffId(tx, trailer.id)) === original.id } : null,
     isLoadPerishable: askedPerishable ? (input.isLoadPerishable ?? null) : null,
   });
-}
-
-/** The record a correction names, checked against the rules (lib/handoffs/correction.ts); aborts when refused. */
-async function correctionTarget(tx: Tx, input: HandoffSubmitInput, actor: HandoffActor, now: Date) {
-  const original = await getHandoffForCorrection(tx, input.correctsHandoffId!);
-  const policy = original ? terminalPolicyOf(await getPolicyData(tx, original.terminalId)) : null;
-  const refused = correctionRefusal({
-    original,
-    actor,
-    input,
-    now,
-    windowMinutes: policy?.gate.correctionWindowMinutes ?? 0,
-    correctedByCode: original ? await findCorrectionOf(tx, original.id) : null,
-  });
-  if (refused) abort(refused);
-  return original!;
 }

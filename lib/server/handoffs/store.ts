@@ -5,7 +5,7 @@ import 'server-only';
 import type { Tx } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { priceCase } from '@/lib/server/desk/pricing';
-import { getSpotLabel, getUserEmail, latestContentHash, type OpenHoldRow } from '@/db/queries/handoff-submit';
+import { getSpotLabel, getUserEmail, latestContentHash } from '@/db/queries/handoff-submit';
 import {
   attachPhotos,
   insertFindings,
@@ -16,44 +16,20 @@ import {
   recordCurrentCondition,
   updateTrailer,
 } from '@/db/queries/handoff-writes';
-import type { HandoffEvent, TimelineEvent } from '@/lib/engine';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
-import type { Evaluation } from '@/lib/handoffs/evaluation';
 import { handoffContentHash, KEYED_HASH_VERSION } from '@/lib/handoffs/hash';
 import { holdsNotYetOpen } from '@/lib/handoffs/holds';
 import { receiptRecipients } from '@/lib/handoffs/receipt';
-import type { normalizeItems } from '@/lib/handoffs/items';
 import { handoffRow, readingsOf, trailerAfter } from '@/lib/handoffs/submission';
 import { newVerificationCode } from '@/lib/handoffs/verification-code';
 import { abort } from '@/lib/result';
 import { chainKey } from '@/lib/server/env';
-import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
 import { enqueueReceiptEmail } from './receipt-mail';
 import { chooseSpot } from './slots';
-import type { HandoffActor, SubmitResult } from './types';
+import type { CheckedHandoff } from './checked';
+import type { SubmitResult } from './types';
 
-export type CheckedHandoff = {
-  input: HandoffSubmitInput;
-  actor: HandoffActor;
-  trailer: { id: string; unitNumber: string };
-  terminal: { id: string; name: string; timeZone: string };
-  carrier: { id: string; name: string; contactEmail: string };
-  event: HandoffEvent;
-  evaluation: Evaluation;
-  items: ReturnType<typeof normalizeItems>;
-  photos: { id: string; sha256: string }[];
-  openHolds: OpenHoldRow[];
-  history: TimelineEvent[];
-  sendReceipt: boolean;
-  /** SHA-256 of the submitted body, kept with the draft key (replay.ts compares it). */
-  requestHash: string;
-  /** When the record is stored; the event's time differs only for a correction (the corrected record's time). */
-  recordedAt: Date;
-  /** Set for a correction: whether the record it corrects is the trailer's latest. */
-  correction: { isOfLatest: boolean } | null;
-  /** The driver's answer at a hook of a "no perishable loads" trailer; null when not asked. */
-  isLoadPerishable: boolean | null;
-};
+export type { CheckedHandoff };
 
 export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitResult> {
   const { input, actor, trailer, terminal, event, evaluation: ev, items } = c;
