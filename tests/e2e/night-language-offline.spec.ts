@@ -1,7 +1,7 @@
 import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Page } from '@playwright/test';
 import { eq } from 'drizzle-orm';
-import { db, pool } from '../../db';
+import { db } from '../../db';
 import { walkScans } from '../../db/schema';
 import { SignInPage } from './pages/sign-in-page';
 import { YardWalkPage } from './pages/yard-walk-page';
@@ -9,9 +9,8 @@ import { walkRowFixture } from './support/yard-state';
 
 const shots = process.env.HM_SCREENSHOTS === '1';
 
-test.afterAll(async () => {
-  await pool.end();
-});
+// The database pool is shared by every spec this worker runs (yard-walk.spec.ts comes after this
+// one and still needs it), so it is not ended here.
 
 /** axe-core's WCAG 2.x A/AA rules on the page as drawn; serious and critical findings fail. */
 async function expectNoSeriousViolations(page: Page) {

@@ -74,6 +74,8 @@ export function allOkItems(t: {
     if (i.kind === 'reading') continue;
     const o: Obs = { condition: 'ok' };
     if (i.kind === 'pin') o.isEngaged = true;
+    if (i.kind === 'hinge') o.isLocking = true;
+    if (i.kind === 'leak') o.isLeaking = false;
     if (i.kind === 'spare') Object.assign(o, { isMounted: true, isHoldingAir: true });
     if (i.kind === 'tire') Object.assign(o, { treadThirtySeconds: 12, isHoldingAir: true });
     out[i.key] = o;
