@@ -1,10 +1,7 @@
 import { cookies } from 'next/headers';
 import { getRequestConfig } from 'next-intl/server';
 import { DEFAULT_LOCALE, LOCALE_COOKIE, parseLocale, type Locale } from '@/lib/i18n/locales';
-import en from '@/lib/i18n/messages/en.json';
-import es from '@/lib/i18n/messages/es.json';
-
-const MESSAGES: Record<Locale, typeof en> = { en, es };
+import { MESSAGES } from '@/lib/i18n/messages';
 
 /** The reader's language is the one kept in the hm-locale cookie (set at sign-in); no locale in URLs. */
 export async function requestLocale(): Promise<Locale> {

@@ -3,8 +3,9 @@ import { join } from 'node:path';
 import { createTranslator } from 'next-intl';
 import { describe, expect, it } from 'vitest';
 import { LOCALES } from '@/lib/i18n/locales';
-import en from '@/lib/i18n/messages/en.json';
-import es from '@/lib/i18n/messages/es.json';
+import { MESSAGES } from '@/lib/i18n/messages';
+
+const { en, es } = MESSAGES;
 
 type Tree = { [key: string]: string | Tree };
 function flatten(tree: Tree, prefix = ''): Record<string, string> {
