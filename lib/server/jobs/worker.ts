@@ -10,7 +10,7 @@
 // id per concurrent worker), which is plenty for a terminal's e-mail.
 import 'server-only';
 import { hostname } from 'node:os';
-import { makeWorkerUtils, run, type Runner } from 'graphile-worker';
+import { makeWorkerUtils, run, type Runner, type RunnerOptions } from 'graphile-worker';
 import { databaseUrl } from '@/db/url';
 import { env } from '../env';
 import { cronItems, taskList } from './tasks';
@@ -29,14 +29,16 @@ export async function startJobWorker(): Promise<Runner> {
   } finally {
     await utils.release();
   }
-  return run({
+  const options: RunnerOptions & { workerId: string } = {
     connectionString: databaseUrl(),
     concurrency: 1,
+    // read by run() (it refuses one with concurrency above 1) though RunnerOptions does not list it
     workerId,
     maxPoolSize: 4,
     pollInterval: 5_000,
     noHandleSignals: true,
     taskList,
     parsedCronItems: cronItems(),
-  });
+  };
+  return run(options);
 }
