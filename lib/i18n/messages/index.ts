@@ -5,12 +5,14 @@ import enGate from './en/Gate.json';
 import enLanguage from './en/Language.json';
 import enLogin from './en/Login.json';
 import enOffline from './en/Offline.json';
+import enReasons from './en/Reasons.json';
 import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
 import esGate from './es/Gate.json';
 import esLanguage from './es/Language.json';
 import esLogin from './es/Login.json';
 import esOffline from './es/Offline.json';
+import esReasons from './es/Reasons.json';
 import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
 
@@ -19,6 +21,7 @@ const en = {
   Language: enLanguage,
   Login: enLogin,
   Offline: enOffline,
+  Reasons: enReasons,
   Shell: enShell,
   Theme: enTheme,
 };
@@ -33,6 +36,7 @@ export const MESSAGES: Record<Locale, Messages> = {
     Language: esLanguage,
     Login: esLogin,
     Offline: esOffline,
+    Reasons: esReasons,
     Shell: esShell,
     Theme: esTheme,
   },
