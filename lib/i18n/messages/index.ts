@@ -6,6 +6,7 @@ import enGate from './en/Gate.json';
 import enLanguage from './en/Language.json';
 import enLogin from './en/Login.json';
 import enOffline from './en/Offline.json';
+import enReasons from './en/Reasons.json';
 import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
 import esAccount from './es/Account.json';
@@ -13,6 +14,7 @@ import esGate from './es/Gate.json';
 import esLanguage from './es/Language.json';
 import esLogin from './es/Login.json';
 import esOffline from './es/Offline.json';
+import esReasons from './es/Reasons.json';
 import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
 
@@ -22,6 +24,7 @@ const en = {
   Language: enLanguage,
   Login: enLogin,
   Offline: enOffline,
+  Reasons: enReasons,
   Shell: enShell,
   Theme: enTheme,
 };
@@ -37,6 +40,7 @@ export const MESSAGES: Record<Locale, Messages> = {
     Language: esLanguage,
     Login: esLogin,
     Offline: esOffline,
+    Reasons: esReasons,
     Shell: esShell,
     Theme: esTheme,
   },

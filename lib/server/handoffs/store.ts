@@ -19,6 +19,7 @@ import {
 import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { handoffContentHash, WRITTEN_HASH_VERSION } from '@/lib/handoffs/hash';
 import { holdsNotYetOpen } from '@/lib/handoffs/holds';
+import { englishReason } from '@/lib/i18n/reasons';
 import { receiptRecipients } from '@/lib/handoffs/receipt';
 import { handoffRow, readingsOf, trailerAfter } from '@/lib/handoffs/submission';
 import { newVerificationCode } from '@/lib/handoffs/verification-code';
@@ -125,9 +126,9 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
       restriction: h.restriction,
       ruleKey: h.ruleKey,
       itemKey: h.itemKey,
-      reason: h.reason,
+      reason: englishReason(h.reason, terminal.timeZone),
       source: h.source,
-      caution: h.caution,
+      caution: h.caution ? englishReason(h.caution, terminal.timeZone) : null,
       placedById: actor.id,
       placedAt: now,
     })),
@@ -174,7 +175,11 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
       findings: ev.rows,
       holds: [
         ...c.openHolds.map((h) => ({ severity: h.severity, restriction: h.restriction, reason: h.reason })),
-        ...newHolds,
+        ...newHolds.map((h) => ({
+          severity: h.severity,
+          restriction: h.restriction,
+          reason: englishReason(h.reason, terminal.timeZone),
+        })),
       ],
       photos: c.photos.map((p) => ({ id: p.id, itemKey: null })),
     });
