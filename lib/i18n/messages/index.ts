@@ -1,6 +1,7 @@
 import type { Locale } from '@/lib/i18n/locales';
 // One JSON file per namespace and language, so screens can be translated in parallel without
 // everyone editing one big file. Add a namespace: one file in en/, one in es/, one line in each list.
+import enAccount from './en/Account.json';
 import enGate from './en/Gate.json';
 import enLanguage from './en/Language.json';
 import enLogin from './en/Login.json';
@@ -8,6 +9,7 @@ import enOffline from './en/Offline.json';
 import enReasons from './en/Reasons.json';
 import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
+import esAccount from './es/Account.json';
 import esGate from './es/Gate.json';
 import esLanguage from './es/Language.json';
 import esLogin from './es/Login.json';
@@ -17,6 +19,7 @@ import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
 
 const en = {
+  Account: enAccount,
   Gate: enGate,
   Language: enLanguage,
   Login: enLogin,
@@ -32,6 +35,7 @@ export type Messages = typeof en;
 export const MESSAGES: Record<Locale, Messages> = {
   en,
   es: {
+    Account: esAccount,
     Gate: esGate,
     Language: esLanguage,
     Login: esLogin,

@@ -17,7 +17,7 @@ import {
   updateTrailer,
 } from '@/db/queries/handoff-writes';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
-import { handoffContentHash, KEYED_HASH_VERSION } from '@/lib/handoffs/hash';
+import { handoffContentHash, WRITTEN_HASH_VERSION } from '@/lib/handoffs/hash';
 import { holdsNotYetOpen } from '@/lib/handoffs/holds';
 import { englishReason } from '@/lib/i18n/reasons';
 import { receiptRecipients } from '@/lib/handoffs/receipt';
@@ -52,13 +52,16 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
     prevHash: await latestContentHash(tx, trailer.id),
   });
   const shas = c.photos.map((p) => p.sha256);
-  const contentHash = handoffContentHash(hashableFromRows(row, items.rows, shas), chainKey());
+  const hashed = { ...row, isLoadPerishable: c.isLoadPerishable };
+  const contentHash = handoffContentHash(
+    hashableFromRows(hashed, items.rows, shas, WRITTEN_HASH_VERSION),
+    chainKey(),
+  );
   await insertHandoff(tx, {
-    ...row,
+    ...hashed,
     contentHash,
-    hashVersion: KEYED_HASH_VERSION,
+    hashVersion: WRITTEN_HASH_VERSION,
     requestHash: c.requestHash,
-    isLoadPerishable: c.isLoadPerishable,
   });
   await insertHandoffItems(
     tx,

@@ -326,6 +326,7 @@ describe('handoff submit service (real database)', () => {
             r,
             it,
             ph.map((x) => x.sha256),
+            r.hashVersion,
           ),
         };
       }),
