@@ -6,6 +6,7 @@ import { useSWRConfig } from 'swr';
 import { Button } from '@/app/_components/button';
 import { Caution } from '@/app/_components/caution';
 import { Field, FormError } from '@/app/_components/field';
+import { useRefusalText } from '@/app/_components/use-refusal-text';
 import { CameraButton } from '../../_components/camera-button';
 import { BOARD_KEY } from '../../_components/use-board';
 
@@ -16,6 +17,7 @@ type Result =
 export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: string[] }) {
   const t = useTranslations('Yard');
   const c = useTranslations('Cautions');
+  const say = useRefusalText();
   const { mutate } = useSWRConfig();
   const [result, setResult] = useState<Result | null>(null);
   const [pending, setPending] = useState(false);
@@ -39,8 +41,17 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
       } else {
         setResult({
           ok: false,
-          message: body.message ?? t('move.notRecorded'),
-          fieldErrors: body.fieldErrors,
+          message: body.message
+            ? say(body.message, body.messageKey, body.messageValues)
+            : t('move.notRecorded'),
+          fieldErrors: body.fieldErrors
+            ? Object.fromEntries(
+                Object.entries(body.fieldErrors as Record<string, string[]>).map(([k, list]) => [
+                  k,
+                  list.map((m) => say(m)),
+                ]),
+              )
+            : undefined,
         });
       }
     } catch {

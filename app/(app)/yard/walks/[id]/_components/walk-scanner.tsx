@@ -5,6 +5,7 @@ import { useMemo, useRef, useState } from 'react';
 import { ActionForm } from '@/app/_components/action-form';
 import { Button } from '@/app/_components/button';
 import { Field, Select } from '@/app/_components/field';
+import { useRefusalText } from '@/app/_components/use-refusal-text';
 import { pendingCount } from '@/lib/yard/scan-queue';
 import { suggestNextSpot, type WalkSpot } from '@/lib/yard/walk';
 import { finishWalkAction } from '../../actions';
@@ -24,6 +25,7 @@ export function WalkScanner({
   stored: Stored[];
 }) {
   const t = useTranslations('Walk');
+  const say = useRefusalText();
   const { queue, isOnline, add } = useScanQueue(walkId);
   const [lastSpotId, setLastSpotId] = useState<string | null>(null);
   const [errors, setErrors] = useState<{ unit?: string[]; spotId?: string[] }>({});
@@ -124,7 +126,7 @@ export function WalkScanner({
               {q.spotLabel}:{' '}
               {q.state === 'sent' ? (q.result ?? t('unknownUnit', { text: q.scannedText })) : q.scannedText} ·{' '}
               {t(`state.${q.state}`)}
-              {q.error ? `: ${q.error}` : ''}
+              {q.error ? `: ${say(q.error)}` : ''}
             </li>
           ))}
         </ol>
