@@ -59,7 +59,9 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
           <ul className="mt-1 space-y-2">
             {r.findings.map((f) => (
               <li key={`${f.kind}-${f.itemKey}`} className="rounded-lg bg-paper-dim p-2 text-gate">
-                <span className="font-bold">{FINDING_WORDS[f.kind] ?? f.kind}:</span> {f.reason}
+                <span data-stored-text="">
+                  <span className="font-bold">{FINDING_WORDS[f.kind] ?? f.kind}:</span> {f.reason}
+                </span>
               </li>
             ))}
           </ul>
@@ -78,7 +80,9 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
                 key={h.reason}
                 className={`rounded-lg border-2 p-2 text-gate ${h.severity === 'out_of_service' ? 'border-danger bg-danger-bg text-danger' : 'border-hold bg-hold-bg text-hold'}`}
               >
-                <span className="font-bold">{holdTitle(h)}.</span> {h.reason}
+                <span data-stored-text="">
+                  <span className="font-bold">{holdTitle(h)}.</span> {h.reason}
+                </span>
               </li>
             ))}
           </ul>

@@ -3,6 +3,7 @@ import { getTranslations } from 'next-intl/server';
 import { Button } from '@/app/_components/button';
 import { ReceiptSummary } from '@/app/_components/receipt-summary';
 import { checkReceipt } from '@/lib/server/handoffs/verify';
+import { refusalSayer } from '@/lib/server/i18n/say';
 import { verificationCodeSchema } from '@/lib/validation/handoffs';
 
 export async function generateMetadata(): Promise<Metadata> {
@@ -13,13 +14,14 @@ export async function generateMetadata(): Promise<Metadata> {
 // and only when the stored record still matches what was receipted.
 export default async function VerifyPage({ searchParams }: PageProps<'/verify'>) {
   const t = await getTranslations('Verify');
+  const say = await refusalSayer();
   const raw = (await searchParams).code;
   const typed = typeof raw === 'string' ? raw : '';
   const parsed = typed ? verificationCodeSchema.safeParse(typed) : null;
   const checked = parsed?.success ? await checkReceipt(parsed.data) : null;
   const error =
     parsed && !parsed.success
-      ? parsed.error.issues[0].message
+      ? say(parsed.error.issues[0].message)
       : parsed?.success && !checked
         ? t('noReceipt')
         : null;
@@ -58,7 +60,7 @@ export default async function VerifyPage({ searchParams }: PageProps<'/verify'>)
           role="alert"
           className="rounded-lg border-l-8 border-danger bg-danger-bg p-3 text-gate font-bold text-danger"
         >
-          {checked.message}
+          {t(`why.${checked.status}`)}
         </p>
       ) : null}
     </main>

@@ -8,6 +8,7 @@ import { isDeskStaff } from '@/lib/desk/access';
 import { formatMoney } from '@/lib/format/money';
 import { formatTime } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
+import { refusalSayer } from '@/lib/server/i18n/say';
 import { listFailedEmails } from '@/lib/server/jobs/mail-failures';
 import { CASE_PAGE_SIZE, caseCursor, caseQueueQuerySchema } from '@/lib/validation/desk';
 import { describeZodError } from '@/lib/validation/errors';
@@ -31,7 +32,12 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
     ]),
   );
   const parsed = caseQueueQuerySchema.safeParse(raw);
-  const errors = parsed.success ? {} : describeZodError(parsed.error).fieldErrors;
+  const say = await refusalSayer();
+  const errors = parsed.success
+    ? {}
+    : Object.fromEntries(
+        Object.entries(describeZodError(parsed.error).fieldErrors).map(([k, list]) => [k, list.map(say)]),
+      );
   const isStaff = isDeskStaff(user.role);
   const now = new Date();
   const [page, carriers, failedMail] = await Promise.all([

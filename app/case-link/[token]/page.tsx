@@ -50,7 +50,9 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
               {f.previousCondition ? CONDITION_LABELS[f.previousCondition] : t('noEarlier')} →{' '}
               {f.condition ? CONDITION_LABELS[f.condition] : t('notChecked')}
             </p>
-            <p className="text-gate-sm">{f.reason}</p>
+            <p className="text-gate-sm" data-stored-text="">
+              {f.reason}
+            </p>
           </li>
         ))}
       </ul>

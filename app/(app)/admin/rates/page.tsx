@@ -23,7 +23,8 @@ export default async function RatesPage() {
         {rates.map((r) => (
           <li key={r.id} className="flex flex-wrap items-center justify-between gap-2 p-3">
             <span className="text-gate">
-              <code className="font-bold">{r.itemPattern}</code> · {r.condition}
+              <code className="font-bold">{r.itemPattern}</code> ·{' '}
+              <span data-stored-text="">{r.condition}</span>
             </span>
             <ChangeRateForm
               id={r.id}

@@ -7,7 +7,7 @@ import { Caution } from '@/app/_components/caution';
 import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { isDeskStaff } from '@/lib/desk/access';
-import { buildTrailerFile } from '@/lib/desk/trailer-file';
+import { buildTrailerFile, STORED, type FileWords } from '@/lib/desk/trailer-file';
 import { formatTime, toLocalInput } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
@@ -50,6 +50,20 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   const nowLocal = toLocalInput(new Date(), zone);
   const t = await getTranslations('Trailers');
   const c = await getTranslations('Cautions');
+  const desk = await getTranslations('Desk');
+  // a file line in the reader's language; stored text (engine reasons, notes) shown as it is
+  const say = (w: FileWords) => {
+    if (w.key === STORED) return <span data-stored-text="">{w.values.text}</span>;
+    if (w.key === 'case') {
+      const state = desk.has(`state.${w.values.state}` as 'state.open')
+        ? desk(`state.${w.values.state}` as 'state.open')
+        : w.values.state;
+      return w.values.scac
+        ? t('file.entry.caseScac', { state, scac: w.values.scac })
+        : t('file.entry.case', { state });
+    }
+    return t(`file.entry.${w.key}` as 'file.entry.moved', w.values);
+  };
   return (
     <div className="space-y-4">
       <header>
@@ -77,7 +91,8 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
           {openHolds.map((h) => (
             <div key={h.id} className="space-y-2 rounded-lg bg-paper p-3">
               <p className="text-gate font-bold">
-                {h.severity === 'out_of_service' ? t('file.outOfService') : t('file.restricted')}: {h.reason}
+                {h.severity === 'out_of_service' ? t('file.outOfService') : t('file.restricted')}:{' '}
+                <span data-stored-text="">{h.reason}</span>
               </p>
               <p className="text-gate-sm text-ink-soft">
                 {t('file.placed', { when: formatTime(h.placedAt, zone) })}
@@ -119,13 +134,22 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
             <p className="text-gate font-bold">
               {e.href ? (
                 <Link href={e.href} className="text-brand underline">
-                  {e.title}
+                  {say(e.words.title)}
                 </Link>
               ) : (
-                e.title
+                say(e.words.title)
               )}
             </p>
-            {e.detail ? <p className="text-gate-sm">{e.detail}</p> : null}
+            {e.words.detail.length ? (
+              <p className="text-gate-sm">
+                {e.words.detail.map((w, i) => (
+                  <span key={i}>
+                    {i ? ' · ' : ''}
+                    {say(w)}
+                  </span>
+                ))}
+              </p>
+            ) : null}
           </li>
         ))}
         {entries.length === 0 ? <li className="text-gate text-ink-soft">{t('file.nothing')}</li> : null}

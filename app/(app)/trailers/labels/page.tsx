@@ -7,6 +7,7 @@ import { EmptyState } from '@/app/_components/empty-state';
 import { getRowName, listRowsForLabels } from '@/db/queries/labels';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
+import { refusalSayer } from '@/lib/server/i18n/say';
 import { prepareLabelSheet } from '@/lib/server/labels';
 import { labelSheetQuerySchema } from '@/lib/validation/labels';
 import { LabelSheet } from './_components/label-sheet';
@@ -22,6 +23,7 @@ export default async function LabelsPage({ searchParams }: PageProps<'/trailers/
   const sp = await searchParams;
   const t = await getTranslations('Trailers');
   const c = await getTranslations('Cautions');
+  const say = await refusalSayer();
   if (sp.ids === undefined && sp.row === undefined)
     return <RowChooser rows={await listRowsForLabels()} homeTerminalId={user.terminalId} />;
 
@@ -29,7 +31,7 @@ export default async function LabelsPage({ searchParams }: PageProps<'/trailers/
   if (!parsed.success) {
     return (
       <EmptyState title={t('labels.nothing')}>
-        {parsed.error.issues[0]?.message}{' '}
+        {say(parsed.error.issues[0]?.message ?? '')}{' '}
         <Link href="/trailers" className="font-bold text-brand underline">
           {t('labels.nothingText')}
         </Link>

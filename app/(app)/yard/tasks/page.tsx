@@ -37,7 +37,8 @@ export default async function TasksPage() {
                 {task.spotLabel ? ` ${t('tasks.inSpot', { spot: task.spotLabel })}` : ''}
               </p>
               <p className="text-gate-sm text-ink-soft">
-                {task.note} {t('tasks.found', { when: formatTime(task.createdAt, tz) })}
+                <span data-stored-text="">{task.note}</span>{' '}
+                {t('tasks.found', { when: formatTime(task.createdAt, tz) })}
               </p>
               {task.kind === 'low_fuel' ? (
                 <Caution title={c('titles.fuelling')}>{c('fuelling')}</Caution>

@@ -27,7 +27,11 @@ function Record({ side, itemName, timeZone }: { side: Side; itemName: string; ti
         <p className="text-gate-sm text-ink-soft">{t('noEarlier')}</p>
       )}
       <p className="text-gate font-bold" data-testid="condition">
-        {item ? CONDITION_LABELS[item.condition as Condition] : t('notChecked')}
+        {item ? (
+          <span data-stored-text="">{CONDITION_LABELS[item.condition as Condition]}</span>
+        ) : (
+          t('notChecked')
+        )}
       </p>
       {item?.note ? <p className="text-gate-sm">“{item.note}”</p> : null}
       {side.photoIds.length ? (
@@ -90,7 +94,7 @@ export function EvidencePair({
             : ''}
           :
         </span>{' '}
-        {finding.reason}
+        <span data-stored-text="">{finding.reason}</span>
       </p>
     </article>
   );

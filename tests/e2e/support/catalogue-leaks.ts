@@ -1,0 +1,78 @@
+// The English sentences and words of the message catalogues, as a Spanish page must not show them.
+import type { Page } from '@playwright/test';
+import { MESSAGES } from '../../../lib/i18n/messages';
+
+type Tree = { [key: string]: string | Tree };
+
+function flatten(tree: Tree, prefix = ''): [string, string][] {
+  return Object.entries(tree).flatMap(([k, v]) =>
+    typeof v === 'string' ? [[`${prefix}${k}`, v] as [string, string]] : flatten(v, `${prefix}${k}.`),
+  );
+}
+
+/** The text of an ICU message outside every {argument} (plural branches included): what is always printed. */
+export function fixedParts(message: string): string[] {
+  const parts: string[] = [];
+  let depth = 0;
+  let current = '';
+  for (const ch of message) {
+    if (ch === '{') {
+      if (depth === 0) parts.push(current);
+      current = '';
+      depth++;
+    } else if (ch === '}') depth--;
+    else if (depth === 0) current += ch;
+  }
+  parts.push(current);
+  return parts
+    .map((p) => p.replace(/^[\s\p{P}\p{S}]+|[\s\p{P}\p{S}]+$/gu, ''))
+    .filter((p) => (p.match(/\p{L}/gu) ?? []).length >= 3);
+}
+
+/**
+ * English fragments to look for: every fixed part of an English message of the given namespaces,
+ * unless the Spanish message of the same key, or any Spanish message, uses it too (units, codes,
+ * "VIN", "CSV", names of the product), which a Spanish page may rightly show.
+ */
+export function englishFragments(namespaces: readonly (keyof typeof MESSAGES.en)[]): string[] {
+  const spanishAll = flatten(MESSAGES.es as unknown as Tree)
+    .map(([, v]) => v)
+    .join('\n');
+  const fragments = new Set<string>();
+  for (const ns of namespaces) {
+    const es = Object.fromEntries(flatten(MESSAGES.es[ns] as unknown as Tree));
+    for (const [key, english] of flatten(MESSAGES.en[ns] as unknown as Tree)) {
+      if (english === es[key]) continue;
+      for (const part of fixedParts(english))
+        if (!(es[key] ?? '').includes(part) && !spanishAll.includes(part)) fragments.add(part);
+    }
+  }
+  return [...fragments];
+}
+
+/**
+ * The page's visible text and accessible names (aria-label, placeholder, title), without the
+ * elements marked data-stored-text: stored engine reasons and vocabulary whose translation this
+ * catalogue does not own (they are rendered from codes by their own work).
+ */
+export async function pageWords(page: Page): Promise<string> {
+  return page.evaluate(() => {
+    const hidden = [...document.querySelectorAll<HTMLElement>('[data-stored-text]')];
+    const before = hidden.map((el) => el.style.display);
+    hidden.forEach((el) => (el.style.display = 'none'));
+    const names = [...document.querySelectorAll<HTMLElement>('[aria-label], [placeholder], [title]')]
+      .filter((el) => !el.closest('[data-stored-text]'))
+      .flatMap((el) => ['aria-label', 'placeholder', 'title'].map((a) => el.getAttribute(a) ?? ''));
+    const text = document.body.innerText;
+    hidden.forEach((el, i) => (el.style.display = before[i]));
+    return [text, ...names].join('\n');
+  });
+}
+
+/** The fragments found in the text as whole words (case as written). */
+export function leaks(text: string, fragments: string[]): string[] {
+  const escape = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+  return fragments.filter((f) =>
+    new RegExp(`(?<![\\p{L}\\p{N}])${escape(f)}(?![\\p{L}\\p{N}])`, 'u').test(text),
+  );
+}
