@@ -4,7 +4,7 @@ import { desc, eq } from 'drizzle-orm';
 import { db } from '../../db';
 import { handoffs, users } from '../../db/schema';
 import { baseURL } from '../../playwright.config';
-import { SignInPage, type AccountName } from './pages/sign-in-page';
+import { ACCOUNTS, SignInPage, type AccountName } from './pages/sign-in-page';
 import { YardWalkPage } from './pages/yard-walk-page';
 import { walkRowFixture } from './support/yard-state';
 
@@ -92,7 +92,10 @@ for (const { who, pages } of ROLES) {
     page,
     context,
   }) => {
+    // several pages in two themes on a shared 2-core machine
+    test.setTimeout(300_000);
     await new SignInPage(page).signIn(who);
+    await expect(page).toHaveURL(new RegExp(`${ACCOUNTS[who].home}$`));
     const paths = await pages(page);
     for (const theme of THEMES) {
       await setTheme(context, theme);
@@ -116,6 +119,7 @@ test('README screenshots of the yard board, a case and a trailer file, day and n
 }) => {
   test.skip(process.env.HM_SCREENSHOTS !== '1', 'only when HM_SCREENSHOTS=1');
   await new SignInPage(page).signIn('clerk');
+  await expect(page).toHaveURL(/\/desk$/);
   await page.goto('/desk');
   const firstCase = await page
     .getByRole('list', { name: 'Cases' })

@@ -1,6 +1,6 @@
 import { expect, test, type BrowserContext, type Page } from '@playwright/test';
 import { baseURL } from '../../playwright.config';
-import { SignInPage, type AccountName } from './pages/sign-in-page';
+import { ACCOUNTS, SignInPage, type AccountName } from './pages/sign-in-page';
 import { englishFragments, fixedParts, leaks, pageWords } from './support/catalogue-leaks';
 
 // Issue 13 item 1: a rendered Spanish page shows no English message. The English catalogue is the
@@ -76,7 +76,10 @@ const JOURNEYS: { who: AccountName; pages: (page: Page) => Promise<string[]> }[]
 
 for (const { who, pages } of JOURNEYS) {
   test(`${who}: every main page in Spanish shows no English message`, async ({ page, context }) => {
+    // several pages, each fully rendered and read, on a shared 2-core machine
+    test.setTimeout(300_000);
     await new SignInPage(page).signIn(who);
+    await expect(page).toHaveURL(new RegExp(`${ACCOUNTS[who].home}$`));
     await inSpanish(context);
     for (const path of await pages(page)) await expectNoEnglish(page, path);
   });

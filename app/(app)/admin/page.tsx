@@ -45,7 +45,7 @@ export default async function AdminPage() {
             <li key={u.id} className="flex flex-wrap justify-between gap-2 p-3 text-gate-sm">
               <span className="font-bold">{u.name}</span>
               <span>
-                {t(`role.${u.role}`)} · {u.email ?? u.driverNumber}{' '}
+                {t(`role.${u.role}`)} · <span data-stored-text="">{u.email ?? u.driverNumber}</span>{' '}
                 {u.carrierScac ? `· ${u.carrierScac}` : ''}
               </span>
             </li>
@@ -59,10 +59,10 @@ export default async function AdminPage() {
         <ul className="mt-2 divide-y divide-paper-line rounded-xl bg-paper">
           {carrierRows.map((c) => (
             <li key={c.id} className="flex flex-wrap justify-between gap-2 p-3 text-gate-sm">
-              <span className="font-bold">
+              <span className="font-bold" data-stored-text="">
                 {c.scac} — {c.name}
               </span>
-              <span>{c.contactEmail}</span>
+              <span data-stored-text="">{c.contactEmail}</span>
             </li>
           ))}
         </ul>

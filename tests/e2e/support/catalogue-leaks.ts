@@ -1,8 +1,20 @@
 // The English sentences and words of the message catalogues, as a Spanish page must not show them.
+import { readdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import type { Page } from '@playwright/test';
-import { MESSAGES } from '../../../lib/i18n/messages';
 
 type Tree = { [key: string]: string | Tree };
+
+// read from the files (Playwright's loader does not take JSON imports): lib/i18n/messages/<lang>/<Ns>.json
+function catalogue(lang: 'en' | 'es'): Record<string, Tree> {
+  const dir = join('lib/i18n/messages', lang);
+  return Object.fromEntries(
+    readdirSync(dir)
+      .filter((f) => f.endsWith('.json'))
+      .map((f) => [f.replace(/\.json$/, ''), JSON.parse(readFileSync(join(dir, f), 'utf8')) as Tree]),
+  );
+}
+const MESSAGES = { en: catalogue('en'), es: catalogue('es') };
 
 function flatten(tree: Tree, prefix = ''): [string, string][] {
   return Object.entries(tree).flatMap(([k, v]) =>
@@ -34,17 +46,23 @@ export function fixedParts(message: string): string[] {
  * unless the Spanish message of the same key, or any Spanish message, uses it too (units, codes,
  * "VIN", "CSV", names of the product), which a Spanish page may rightly show.
  */
-export function englishFragments(namespaces: readonly (keyof typeof MESSAGES.en)[]): string[] {
-  const spanishAll = flatten(MESSAGES.es as unknown as Tree)
+export function englishFragments(namespaces: readonly string[]): string[] {
+  const spanishAll = flatten(MESSAGES.es as Tree)
     .map(([, v]) => v)
     .join('\n');
   const fragments = new Set<string>();
   for (const ns of namespaces) {
-    const es = Object.fromEntries(flatten(MESSAGES.es[ns] as unknown as Tree));
-    for (const [key, english] of flatten(MESSAGES.en[ns] as unknown as Tree)) {
+    if (!MESSAGES.en[ns]) throw new Error(`no namespace ${ns}`);
+    const es = Object.fromEntries(flatten(MESSAGES.es[ns]));
+    for (const [key, english] of flatten(MESSAGES.en[ns])) {
       if (english === es[key]) continue;
-      for (const part of fixedParts(english))
-        if (!(es[key] ?? '').includes(part) && !spanishAll.includes(part)) fragments.add(part);
+      const parts = fixedParts(english);
+      // a lone word cut out of a longer sentence ("Row" of "Row {name} added.") may be a name in the
+      // data; a one-word message (a tab, a column, a button) is looked for as it is
+      const isSentence = parts.length > 1 || parts[0] !== english.trim();
+      for (const part of parts)
+        if (isSentence && !/\s/.test(part)) continue;
+        else if (!(es[key] ?? '').includes(part) && !spanishAll.includes(part)) fragments.add(part);
     }
   }
   return [...fragments];
@@ -52,7 +70,7 @@ export function englishFragments(namespaces: readonly (keyof typeof MESSAGES.en)
 
 /**
  * The page's visible text and accessible names (aria-label, placeholder, title), without the
- * elements marked data-stored-text: stored engine reasons and vocabulary whose translation this
+ * elements marked data-stored-text: stored text (names, e-mails, notes) and the engine's reasons and vocabulary, whose translation this
  * catalogue does not own (they are rendered from codes by their own work).
  */
 export async function pageWords(page: Page): Promise<string> {
