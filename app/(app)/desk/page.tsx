@@ -66,7 +66,10 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
           {isStaff ? t('casesStaff') : t('casesCarrier', { carrier: user.carrierName ?? t('yourCarrier') })}
         </h1>
         {isStaff ? (
-          <Link href="/desk/reports" className="text-gate font-bold text-brand underline">
+          <Link
+            href="/desk/reports"
+            className="inline-flex min-h-tap items-center text-gate font-bold text-brand underline"
+          >
             {t('reports')}
           </Link>
         ) : null}

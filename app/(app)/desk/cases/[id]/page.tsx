@@ -79,7 +79,10 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
           {c.disputeDeadline ? ` · ${t('disputeUntil', { when: formatTime(c.disputeDeadline, tz) })}` : ''}
         </p>
         {isDeskStaff(user.role) ? (
-          <Link href={`/trailers/${c.trailerId}`} className="text-gate-sm font-bold text-brand underline">
+          <Link
+            href={`/trailers/${c.trailerId}`}
+            className="inline-flex min-h-tap items-center text-gate-sm font-bold text-brand underline"
+          >
             {t('trailerFile')}
           </Link>
         ) : null}
