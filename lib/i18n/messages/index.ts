@@ -1,6 +1,7 @@
 import type { Locale } from '@/lib/i18n/locales';
 // One JSON file per namespace and language, so screens can be translated in parallel without
 // everyone editing one big file. Add a namespace: one file in en/, one in es/, one line in each list.
+import enAccount from './en/Account.json';
 import enGate from './en/Gate.json';
 import enRefusals from './en/Refusals.json';
 import enCommon from './en/Common.json';
@@ -18,8 +19,10 @@ import enCautions from './en/Cautions.json';
 import enLanguage from './en/Language.json';
 import enLogin from './en/Login.json';
 import enOffline from './en/Offline.json';
+import enReasons from './en/Reasons.json';
 import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
+import esAccount from './es/Account.json';
 import esGate from './es/Gate.json';
 import esRefusals from './es/Refusals.json';
 import esCommon from './es/Common.json';
@@ -37,6 +40,7 @@ import esCautions from './es/Cautions.json';
 import esLanguage from './es/Language.json';
 import esLogin from './es/Login.json';
 import esOffline from './es/Offline.json';
+import esReasons from './es/Reasons.json';
 import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
 
@@ -54,10 +58,12 @@ const en = {
   Yard: enYard,
   Walk: enWalk,
   Cautions: enCautions,
+  Account: enAccount,
   Gate: enGate,
   Language: enLanguage,
   Login: enLogin,
   Offline: enOffline,
+  Reasons: enReasons,
   Shell: enShell,
   Theme: enTheme,
 };
@@ -81,10 +87,12 @@ export const MESSAGES: Record<Locale, Messages> = {
     Yard: esYard,
     Walk: esWalk,
     Cautions: esCautions,
+    Account: esAccount,
     Gate: esGate,
     Language: esLanguage,
     Login: esLogin,
     Offline: esOffline,
+    Reasons: esReasons,
     Shell: esShell,
     Theme: esTheme,
   },
