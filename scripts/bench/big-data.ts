@@ -12,7 +12,7 @@ import type pg from 'pg';
 import { makeBuffers, WORK_TABLES_SQL } from './bulk/buffers';
 import { random } from './bulk/copy';
 import { handoffPass, type PassTrailer } from './bulk/handoffs';
-import { dropItemIndexes, finishTrailers, insertItems, rebuildItemIndexes } from './bulk/items';
+import { dropIndexes, finishTrailers, insertItems, rebuildIndexes } from './bulk/items';
 import { addTerminals, addTrailers } from './bulk/places';
 import { addYardHistory, countRows } from './bulk/yard';
 
@@ -104,7 +104,8 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
   );
 
   await client.query(WORK_TABLES_SQL);
-  const saved = await dropItemIndexes(client);
+  const savedItems = await dropIndexes(client, 'handoff_items');
+  const savedHandoffs = await dropIndexes(client, 'handoffs');
   const started = Date.now();
   const secs = () => `${Math.round((Date.now() - started) / 1000)} s`;
   const b = makeBuffers();
@@ -127,14 +128,18 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
     now,
   );
   log(`${handoffs} handoffs hashed and copied (${secs()}); making their items in SQL`);
-  await q('ANALYZE bulk_trailer_shape; ANALYZE bulk_item_template; ANALYZE bulk_item_override');
+  await rebuildIndexes(client, savedHandoffs);
+  await q(
+    'ANALYZE handoffs; ANALYZE bulk_trailer_shape; ANALYZE bulk_item_template; ANALYZE bulk_item_override',
+  );
+  log(`handoffs' indexes and keys rebuilt (${secs()})`);
   await insertItems(
     client,
     trailers.map((t) => t.id),
     log,
   );
   log(`items made (${secs()}); building the item table's indexes and constraints`);
-  await rebuildItemIndexes(client, saved);
+  await rebuildIndexes(client, savedItems);
   await finishTrailers(client);
   log(`indexes, trailers' state and current condition done (${secs()})`);
 

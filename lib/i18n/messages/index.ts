@@ -7,12 +7,14 @@ import enLogin from './en/Login.json';
 import enOffline from './en/Offline.json';
 import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
+import enTrailerFilePages from './en/TrailerFilePages.json';
 import esGate from './es/Gate.json';
 import esLanguage from './es/Language.json';
 import esLogin from './es/Login.json';
 import esOffline from './es/Offline.json';
 import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
+import esTrailerFilePages from './es/TrailerFilePages.json';
 
 const en = {
   Gate: enGate,
@@ -21,6 +23,7 @@ const en = {
   Offline: enOffline,
   Shell: enShell,
   Theme: enTheme,
+  TrailerFilePages: enTrailerFilePages,
 };
 
 /** The English catalogue's shape is the one every language must match (the unit test checks keys). */
@@ -35,5 +38,6 @@ export const MESSAGES: Record<Locale, Messages> = {
     Offline: esOffline,
     Shell: esShell,
     Theme: esTheme,
+    TrailerFilePages: esTrailerFilePages,
   },
 };

@@ -5,30 +5,33 @@ import type pg from 'pg';
 
 type Saved = { name: string; sql: string };
 
-/** Drops the item table's indexes and constraints (rebuilt once after the load: far faster). */
-export async function dropItemIndexes(client: pg.Client): Promise<Saved[]> {
+/** Drops a table's indexes and keys (rebuilt once after the load: far faster than row by row). */
+export async function dropIndexes(client: pg.Client, table: 'handoffs' | 'handoff_items'): Promise<Saved[]> {
   const { rows: constraints } = await client.query<{ name: string; def: string }>(
     `SELECT conname AS name, pg_get_constraintdef(oid) AS def FROM pg_constraint
-      WHERE conrelid = 'handoff_items'::regclass AND contype IN ('p', 'u', 'f')`,
+      WHERE conrelid = $1::regclass AND contype = ANY($2::char[])`,
+    // other tables' keys point at the handoffs' primary key: it stays
+    [table, table === 'handoffs' ? ['u', 'f'] : ['p', 'u', 'f']],
   );
   const { rows: indexes } = await client.query<{ name: string; def: string }>(
     `SELECT i.relname AS name, pg_get_indexdef(i.oid) AS def FROM pg_index x JOIN pg_class i ON i.oid = x.indexrelid
-      WHERE x.indrelid = 'handoff_items'::regclass
+      WHERE x.indrelid = $1::regclass
         AND NOT EXISTS (SELECT 1 FROM pg_constraint c WHERE c.conindid = i.oid)`,
+    [table],
   );
   const saved = [
     ...indexes.map((i) => ({ name: i.name, sql: i.def })),
     // primary key and unique first, foreign keys after (they are checked against the table)
     ...constraints
       .sort((a, b) => Number(a.def.startsWith('FOREIGN')) - Number(b.def.startsWith('FOREIGN')))
-      .map((c) => ({ name: c.name, sql: `ALTER TABLE handoff_items ADD CONSTRAINT "${c.name}" ${c.def}` })),
+      .map((c) => ({ name: c.name, sql: `ALTER TABLE ${table} ADD CONSTRAINT "${c.name}" ${c.def}` })),
   ];
-  for (const c of constraints) await client.query(`ALTER TABLE handoff_items DROP CONSTRAINT "${c.name}"`);
+  for (const c of constraints) await client.query(`ALTER TABLE ${table} DROP CONSTRAINT "${c.name}"`);
   for (const i of indexes) await client.query(`DROP INDEX "${i.name}"`);
   return saved;
 }
 
-export async function rebuildItemIndexes(client: pg.Client, saved: Saved[]) {
+export async function rebuildIndexes(client: pg.Client, saved: Saved[]) {
   await client.query(`SET maintenance_work_mem = '512MB'`);
   for (const s of saved) await client.query(s.sql);
 }

@@ -150,9 +150,11 @@ describe('query plans on a generated data set', () => {
       await listCases(clerk, { sort: 'oldest', limit: 51, after: { openedAt: last.openedAt, id: last.id } });
     });
     await screen('desk: case', () => Promise.all([getCase(ids.caseId, clerk), listCaseEvents(ids.caseId)]));
-    await screen('trailer file', () =>
-      Promise.all([getTrailerHeader(ids.longest), getTrailerFileRows(ids.longest)]),
-    );
+    await screen('trailer file', async () => {
+      const [, first] = await Promise.all([getTrailerHeader(ids.longest), getTrailerFileRows(ids.longest)]);
+      // an older page (keyset on the last handoff shown)
+      await getTrailerFileRows(ids.longest, first.next);
+    });
     await screen('gate: submit', async () => {
       const isReefer = ids.onRoad.trailer.kind === 'reefer';
       const result = await submitHandoff(

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { getTranslations } from 'next-intl/server';
 import { z } from 'zod';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
@@ -11,7 +12,7 @@ import { formatTime, toLocalInput } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 import { checkTrailerPhotos, type PhotoCheckReport } from '@/lib/server/photos/integrity';
-import { TRAILER_FILE_KINDS, trailerFileQuerySchema } from '@/lib/validation/desk';
+import { fileCursorParam, TRAILER_FILE_KINDS, trailerFileQuerySchema } from '@/lib/validation/desk';
 import { ChainStatus } from './_components/chain-status';
 import { HoldReleaseForm } from './_components/hold-release-form';
 import { PhotoCheckPanel } from './_components/photo-check';
@@ -36,13 +37,25 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   if (!z.uuid().safeParse(id).success) notFound();
   const query = trailerFileQuerySchema.safeParse(await searchParams);
   const kind = query.success ? query.data.kind : undefined;
+  const badPage = !query.success && query.error.issues.some((i) => i.path[0] === 'before');
   const trailer = await getTrailerHeader(id);
   if (!trailer) notFound();
-  const [rows, chain] = await Promise.all([getTrailerFileRows(id), verifyTrailerChain(id)]);
+  const t = await getTranslations('TrailerFilePages');
+  // the whole chain is re-hashed only when asked for: it reads every handoff and item of the trailer
+  const wantsChain = query.success && query.data.chain === 'check';
+  const [page, chain] = await Promise.all([
+    getTrailerFileRows(id, query.success ? (query.data.before ?? null) : null),
+    wantsChain ? verifyTrailerChain(id) : null,
+  ]);
+  const { rows } = page;
   const photoCheck = query.success && query.data.photos === 'check' ? await tryCheckPhotos(id) : null;
   const zone = trailer.timeZone ?? user.terminalTimeZone ?? 'UTC';
-  const entries = buildTrailerFile(rows, kind);
+  const entries = buildTrailerFile(rows, kind, page.window);
   const openHolds = rows.holds.filter((h) => !h.releasedAt);
+  const linkTo = (extra: Record<string, string>) => {
+    const p = new URLSearchParams({ ...(kind ? { kind } : {}), ...extra });
+    return p.size ? `/trailers/${id}?${p}` : `/trailers/${id}`;
+  };
   const canRelease = isDeskStaff(user.role);
   const nowLocal = toLocalInput(new Date(), zone);
   return (
@@ -59,7 +72,19 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
               : 'gone'}
         </p>
       </header>
-      <ChainStatus check={chain.check} brokenAt={chain.brokenAt} timeZone={zone} />
+      {chain ? (
+        <ChainStatus check={chain.check} brokenAt={chain.brokenAt} timeZone={zone} />
+      ) : (
+        <p className="flex flex-wrap items-center gap-3 rounded-lg border-l-8 border-paper-line bg-paper p-3 text-gate">
+          {t('chainNotChecked')}
+          <Link
+            href={linkTo({ chain: 'check' })}
+            className="inline-flex min-h-tap items-center rounded-full border-2 border-brand px-4 text-gate-sm font-bold text-brand"
+          >
+            {t('checkChain')}
+          </Link>
+        </p>
+      )}
       <PhotoCheckPanel trailerId={trailer.id} kind={kind} result={photoCheck} timeZone={zone} />
       {openHolds.length ? (
         <section aria-labelledby="holds" className="space-y-3 rounded-xl bg-hold-bg p-3">
@@ -96,9 +121,10 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
       </nav>
       {!query.success ? (
         <p role="alert" className="text-gate font-bold text-danger">
-          Unknown filter; showing everything.
+          {badPage ? t('badPage') : 'Unknown filter; showing everything.'}
         </p>
       ) : null}
+      <p className="text-gate-sm text-ink-soft">{t('pageNote', { count: rows.handoffs.length })}</p>
       <ol className="space-y-2" aria-label="Trailer history">
         {entries.map((e) => (
           <li
@@ -125,6 +151,24 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
           <li className="text-gate text-ink-soft">Nothing of this kind on file.</li>
         ) : null}
       </ol>
+      <nav aria-label={t('older')} className="flex flex-wrap gap-2">
+        {page.window.before ? (
+          <Link
+            href={linkTo({})}
+            className="inline-flex min-h-tap items-center px-2 text-gate text-brand underline"
+          >
+            {t('newest')}
+          </Link>
+        ) : null}
+        {page.next ? (
+          <Link
+            href={linkTo({ before: fileCursorParam(page.next) })}
+            className="inline-flex min-h-tap items-center rounded-full border-2 border-brand px-4 text-gate font-bold text-brand"
+          >
+            {t('older')}
+          </Link>
+        ) : null}
+      </nav>
     </div>
   );
 }
