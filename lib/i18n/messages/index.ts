@@ -8,6 +8,7 @@ import enOffline from './en/Offline.json';
 import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
 import enTrailerFilePages from './en/TrailerFilePages.json';
+import enYardRows from './en/YardRows.json';
 import esGate from './es/Gate.json';
 import esLanguage from './es/Language.json';
 import esLogin from './es/Login.json';
@@ -15,6 +16,7 @@ import esOffline from './es/Offline.json';
 import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
 import esTrailerFilePages from './es/TrailerFilePages.json';
+import esYardRows from './es/YardRows.json';
 
 const en = {
   Gate: enGate,
@@ -24,6 +26,7 @@ const en = {
   Shell: enShell,
   Theme: enTheme,
   TrailerFilePages: enTrailerFilePages,
+  YardRows: enYardRows,
 };
 
 /** The English catalogue's shape is the one every language must match (the unit test checks keys). */
@@ -39,5 +42,6 @@ export const MESSAGES: Record<Locale, Messages> = {
     Shell: esShell,
     Theme: esTheme,
     TrailerFilePages: esTrailerFilePages,
+    YardRows: esYardRows,
   },
 };
