@@ -2,7 +2,7 @@
 import type { HandoffHashRow } from '@/lib/handoffs/canonical';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { allOkObservations } from '@/lib/handoffs/all-ok';
-import { canonicalJson, handoffContentHash, hmacSha256Hex, KEYED_HASH_VERSION } from '@/lib/handoffs/hash';
+import { canonicalJson, handoffContentHash, hmacSha256Hex, WRITTEN_HASH_VERSION } from '@/lib/handoffs/hash';
 import { normalizeItems, type ItemRowInput } from '@/lib/handoffs/items';
 import { checklistOf } from '@/lib/trailers/checklist';
 import type { Buffers } from './buffers';
@@ -20,7 +20,12 @@ export function shapeOf(shapes: Map<string, Shape>, t: PassTrailer, b: Buffers) 
       checklist,
       allOkObservations(checklist, (k) => 8 + (k.length % 5)),
     ).rows;
-    const hashed = hashableFromRows({ occurredAt: new Date(0) } as HandoffHashRow, okRows, []).items;
+    const hashed = hashableFromRows(
+      { occurredAt: new Date(0) } as HandoffHashRow,
+      okRows,
+      [],
+      WRITTEN_HASH_VERSION,
+    ).items;
     hashed.sort((a, c) => (a.itemKey < c.itemKey ? -1 : 1));
     s = { okRows, itemsJson: canonicalJson(hashed) };
     shapes.set(key, s);
@@ -52,9 +57,12 @@ export function linkHash(
   check: boolean,
 ): string {
   const appHash = () =>
-    handoffContentHash(hashableFromRows(row, found?.items ?? shape.okRows, found?.shas ?? []), chainKey);
+    handoffContentHash(
+      hashableFromRows(row, found?.items ?? shape.okRows, found?.shas ?? [], WRITTEN_HASH_VERSION),
+      chainKey,
+    );
   if (found) return appHash();
-  const content = canonicalJson(hashableFromRows(row, [], []).content);
+  const content = canonicalJson(hashableFromRows(row, [], [], WRITTEN_HASH_VERSION).content);
   const prev = canonicalJson(row.prevHash);
   const hash = hmacSha256Hex(
     chainKey,
@@ -93,7 +101,7 @@ export function handoffCopyRow(r: HandoffHashRow, contentHash: string): unknown[
     r.verificationCode,
     r.prevHash,
     contentHash,
-    KEYED_HASH_VERSION,
+    WRITTEN_HASH_VERSION,
     r.occurredAt,
   ];
 }
