@@ -51,9 +51,14 @@ function entryScripts(route) {
   vm.runInNewContext(readFileSync(file, 'utf8'), sandbox);
   const manifest = sandbox.globalThis.__RSC_MANIFEST?.[route];
   if (!manifest) return null;
-  return Object.values(manifest.entryJSFiles ?? {})
-    .flat()
-    .map((f) => f.replace(/^\/_next\//, ''));
+  // Turbopack lists each segment's scripts; webpack lists the chunks of every client module the
+  // route's tree imports statically (`async: false`; import() chunks are async)
+  const files = manifest.entryJSFiles
+    ? Object.values(manifest.entryJSFiles).flat()
+    : Object.values(manifest.clientModules ?? {})
+        .filter((m) => !m.async)
+        .flatMap((m) => m.chunks.filter((c) => typeof c === 'string' && c.endsWith('.js')));
+  return files.map((f) => decodeURIComponent(f.replace(/^\/_next\//, '')));
 }
 
 let over = 0;
