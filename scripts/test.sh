@@ -32,6 +32,9 @@ node_modules/.bin/vitest run
 step "building the app (next build; 1 to 3 min)"
 quietly .data/build.log node_modules/.bin/next build --webpack
 
+step "JavaScript budget (first-load gzipped KB per main route; a second)"
+node scripts/js-budget.mjs
+
 step "preparing the browser tests' database (hitchmark_e2e: migrate, seed; about 30 s)"
 export HM_DB_NAME=hitchmark_e2e
 quietly .data/e2e-db.log sh -c "bash scripts/db.sh createdb $HM_DB_NAME && node_modules/.bin/tsx db/migrate.ts && HM_DB_ROLE=owner node_modules/.bin/tsx --conditions=react-server db/seed/index.ts"

@@ -1,5 +1,5 @@
 import 'server-only';
-import { aliasedTable, desc, eq, sql } from 'drizzle-orm';
+import { aliasedTable, and, desc, eq, gte, lt, or, sql, type SQL } from 'drizzle-orm';
 import { db } from '@/db';
 import {
   carriers,
@@ -16,7 +16,10 @@ import {
   yardSpots,
   yardWalks,
 } from '@/db/schema';
-import type { FileRows } from '@/lib/desk/trailer-file';
+import type { FileCursor, FilePage } from '@/lib/desk/trailer-file';
+
+/** Handoffs per page of the trailer file (with everything recorded between them). */
+export const FILE_PAGE_SIZE = 50;
 
 export async function getTrailerHeader(id: string) {
   const [row] = await db
@@ -43,24 +46,64 @@ export async function getTrailerHeader(id: string) {
 const fromSpots = aliasedTable(yardSpots, 'from_spots');
 const people = aliasedTable(users, 'people');
 
-/** Every record about one trailer, for the trailer file (staff only: the page checks the role). */
-export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
-  const [hs, moves, walks, fs, hls, cs, ps] = await Promise.all([
-    db
-      .select({
-        id: handoffs.id,
-        kind: handoffs.kind,
-        occurredAt: handoffs.occurredAt,
-        driverName: handoffs.driverName,
-        carrierScac: carriers.scac,
-        level: handoffs.level,
-        verificationCode: handoffs.verificationCode,
-        correctsHandoffId: handoffs.correctsHandoffId,
-        correctionReason: handoffs.correctionReason,
-      })
-      .from(handoffs)
-      .innerJoin(carriers, eq(carriers.id, handoffs.carrierId))
-      .where(eq(handoffs.trailerId, trailerId)),
+const handoffFields = {
+  id: handoffs.id,
+  kind: handoffs.kind,
+  occurredAt: handoffs.occurredAt,
+  driverName: handoffs.driverName,
+  carrierScac: carriers.scac,
+  level: handoffs.level,
+  verificationCode: handoffs.verificationCode,
+  correctsHandoffId: handoffs.correctsHandoffId,
+  correctionReason: handoffs.correctionReason,
+};
+
+/**
+ * One page of the trailer file (staff only: the page checks the role), newest first: the `size`
+ * handoffs before `before` (keyset on occurred_at, id) and every other record dated between the
+ * oldest of them and `before`. The last page reaches back to the first record.
+ */
+export async function getTrailerFileRows(
+  trailerId: string,
+  before: FileCursor | null = null,
+  size = FILE_PAGE_SIZE,
+): Promise<FilePage> {
+  const page = await db
+    .select(handoffFields)
+    .from(handoffs)
+    .innerJoin(carriers, eq(carriers.id, handoffs.carrierId))
+    .where(
+      and(
+        eq(handoffs.trailerId, trailerId),
+        before
+          ? sql`(${handoffs.occurredAt}, ${handoffs.id}) < (${before.at.toISOString()}::timestamptz, ${before.id}::uuid)`
+          : undefined,
+      ),
+    )
+    .orderBy(desc(handoffs.occurredAt), desc(handoffs.id))
+    .limit(size + 1);
+  const hs = page.slice(0, size);
+  const last = page.length > size ? hs[hs.length - 1] : null;
+  const window = { from: last?.occurredAt ?? null, before: before?.at ?? null };
+  const within = (column: typeof yardMoves.movedAt | typeof walkScans.scannedAt): SQL | undefined =>
+    and(
+      window.from ? gte(column, window.from) : undefined,
+      window.before ? lt(column, window.before) : undefined,
+    );
+  // corrections on this page and the records they correct, wherever those are filed
+  const correcting = hs.map((h) => h.correctsHandoffId).filter((id): id is string => Boolean(id));
+  const related = db
+    .select(handoffFields)
+    .from(handoffs)
+    .innerJoin(carriers, eq(carriers.id, handoffs.carrierId))
+    .where(
+      or(
+        and(eq(handoffs.trailerId, trailerId), sql`${handoffs.correctsHandoffId} is not null`),
+        correcting.length ? sql`${handoffs.id} = any(${`{${correcting.join(',')}}`}::uuid[])` : undefined,
+      ),
+    );
+  const [rel, moves, walks, fs, hls, cs, ps] = await Promise.all([
+    related,
     db
       .select({
         id: yardMoves.id,
@@ -73,7 +116,7 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
       .innerJoin(yardSpots, eq(yardSpots.id, yardMoves.toSpotId))
       .leftJoin(fromSpots, eq(fromSpots.id, yardMoves.fromSpotId))
       .leftJoin(people, eq(people.id, yardMoves.movedById))
-      .where(eq(yardMoves.trailerId, trailerId)),
+      .where(and(eq(yardMoves.trailerId, trailerId), within(yardMoves.movedAt))),
     db
       .select({
         id: walkScans.id,
@@ -85,7 +128,7 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
       .innerJoin(yardWalks, eq(yardWalks.id, walkScans.walkId))
       .leftJoin(yardSpots, eq(yardSpots.id, walkScans.spotId))
       .leftJoin(people, eq(people.id, yardWalks.startedById))
-      .where(eq(walkScans.trailerId, trailerId)),
+      .where(and(eq(walkScans.trailerId, trailerId), within(walkScans.scannedAt))),
     // findings and photos are dated by the handoff they belong to (their own rows are written at submit)
     db
       .select({
@@ -141,5 +184,9 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
       .where(eq(photos.trailerId, trailerId))
       .orderBy(desc(photos.createdAt)),
   ]);
-  return { handoffs: hs, moves, walks, findings: fs, holds: hls, cases: cs, photos: ps };
+  return {
+    rows: { handoffs: hs, related: rel, moves, walks, findings: fs, holds: hls, cases: cs, photos: ps },
+    window,
+    next: last ? { at: last.occurredAt, id: last.id } : null,
+  };
 }

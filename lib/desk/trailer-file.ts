@@ -1,4 +1,5 @@
-// One trailer's whole history as a single timeline, newest first. Pure: the query passes the rows.
+// One trailer's history as a single timeline, newest first, a page at a time. Pure: the query
+// passes the rows of one page (its handoffs, and the other records it fetched).
 import { formatMoney } from '@/lib/format/money';
 import { itemLabel } from './item-labels';
 
@@ -55,7 +56,20 @@ export type FileRows = {
   }[];
   cases: { id: string; openedAt: Date; state: string; amountCents: number; carrierScac: string | null }[];
   photos: { id: string; createdAt: Date; itemKey: string | null; handoffId: string | null }[];
+  /** Handoffs on other pages that correct, or are corrected by, one on this page (only looked up). */
+  related?: FileRows['handoffs'];
 };
+
+/** Where a page of the file starts: the handoff after which older entries follow. */
+export type FileCursor = { at: Date; id: string };
+/** The page's time span: entries at or after `from` (null: the first record) and before `before` (null: now). */
+export type FileWindow = { from: Date | null; before: Date | null };
+export type FilePage = { rows: FileRows; window: FileWindow; next: FileCursor | null };
+
+/** Whether a non-handoff entry falls on this page (its handoffs are the page itself). */
+export function inWindow(at: Date, w: FileWindow): boolean {
+  return (!w.from || at >= w.from) && (!w.before || at < w.before);
+}
 
 const SHOWN_FINDINGS = new Set(['new', 'worse', 'repaired']);
 
@@ -99,9 +113,10 @@ function handoffEntry(h: FileRows['handoffs'][number], all: FileRows['handoffs']
   };
 }
 
-export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
+export function buildTrailerFile(rows: FileRows, kind?: FileKind, window?: FileWindow): FileEntry[] {
+  const known = [...rows.handoffs, ...(rows.related ?? [])];
   const entries: FileEntry[] = [
-    ...rows.handoffs.map((h) => handoffEntry(h, rows.handoffs)),
+    ...rows.handoffs.map((h) => handoffEntry(h, known)),
     ...rows.moves.map((m): FileEntry => ({
       id: m.id,
       kind: 'move',
@@ -210,5 +225,6 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
   ];
   return entries
     .filter((e) => !kind || e.kind === kind)
+    .filter((e) => e.kind === 'handoff' || !window || inWindow(e.at, window))
     .sort((a, b) => b.at.getTime() - a.at.getTime() || a.id.localeCompare(b.id));
 }

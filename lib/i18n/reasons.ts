@@ -1,7 +1,9 @@
 // Puts the engine's coded reasons (lib/engine/types/codes.ts) into words in the reader's language,
 // through the Reasons catalogue (lib/i18n/messages/*/Reasons.json). Pure: the caller passes the
 // locale and the terminal's time zone; dates go through lib/format/time.ts.
-import { createTranslator } from 'next-intl';
+// use-intl's core (next-intl's own base, no React): the seed and scripts load this under the
+// react-server condition, where next-intl's entry needs the framework's request context
+import { createTranslator } from 'use-intl/core';
 import { z } from 'zod';
 import type { Reason } from '@/lib/engine';
 import { formatStamp } from '@/lib/format/time';

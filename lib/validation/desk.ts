@@ -181,7 +181,24 @@ export const trailerFileQuerySchema = z.object({
   ),
   /** `check`: re-hash the trailer's recorded photos against the record. */
   photos: z.preprocess(blankToUndefined, z.enum(['check']).optional()),
+  /** `check`: re-hash the trailer's whole handoff chain (on demand: it reads every record). */
+  chain: z.preprocess(blankToUndefined, z.enum(['check']).optional()),
+  /** A page's start, `<ISO time>_<handoff id>` of the last handoff on the page before. */
+  before: z.preprocess(
+    blankToUndefined,
+    z
+      .string()
+      .regex(/^\d{4}-\d{2}-\d{2}T[\d:.]+Z_[0-9a-f-]{36}$/i, { error: 'Not a page of this file.' })
+      .transform((v) => ({ at: new Date(v.slice(0, v.indexOf('_'))), id: v.slice(v.indexOf('_') + 1) }))
+      .refine((c) => !Number.isNaN(c.at.getTime()) && z.uuid().safeParse(c.id).success, {
+        error: 'Not a page of this file.',
+      })
+      .optional(),
+  ),
 });
+
+/** The `before` value that opens the page after one ending at `c`. */
+export const fileCursorParam = (c: { at: Date; id: string }) => `${c.at.toISOString()}_${c.id}`;
 
 export const reportQuerySchema = z.object({
   months: z.preprocess(

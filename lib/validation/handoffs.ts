@@ -6,22 +6,9 @@ import { noteText, plainText } from './text';
 // The server stays the authority: item keys are checked against the trailer's checklist, and
 // the photo-and-note rule for new or worse damage is enforced after the engine's comparison.
 
-/**
- * The limits of the gate form's fields: the schema below and the browser's own limits
- * (maxLength, min, max) both read them, so the two never disagree.
- */
-export const HANDOFF_LIMITS = {
-  tread: { min: 0, max: 32 },
-  setpointF: { min: -40, max: 90 },
-  returnAirF: { min: -60, max: 140 },
-  engineHours: { min: 0, max: 200_000 },
-  itemNote: 500,
-  note: 1000,
-  driverName: 80,
-  tractorNumber: 20,
-  sealNumber: 30,
-} as const;
-export const TREAD_LIMITS = HANDOFF_LIMITS.tread;
+import { HANDOFF_LIMITS, TREAD_LIMITS } from '@/lib/handoffs/limits';
+
+export { HANDOFF_LIMITS, TREAD_LIMITS };
 const L = HANDOFF_LIMITS;
 
 export const CONDITION_VALUES = CONDITIONS;

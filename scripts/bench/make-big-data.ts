@@ -22,13 +22,14 @@ const env = { ...process.env, HM_DB_NAME: dbName };
 if (!args.includes('--keep')) {
   execFileSync('bash', ['scripts/db.sh', 'createdb', dbName], { stdio: 'inherit', env });
   execFileSync('node_modules/.bin/tsx', ['db/migrate.ts'], { stdio: 'inherit', env });
+  // the seed and the bulk rows are written as the owner (the app's role may not write history in bulk)
   execFileSync('node_modules/.bin/tsx', ['--conditions=react-server', 'db/seed/index.ts'], {
     stdio: 'inherit',
-    env,
+    env: { ...env, HM_DB_ROLE: 'owner' },
   });
   console.log(`demo seed ready (${seconds()})`);
 }
-const client = new pg.Client({ connectionString: databaseUrl(dbName) });
+const client = new pg.Client({ connectionString: databaseUrl(dbName, 'owner') });
 await client.connect();
 await client.query('SET synchronous_commit = off');
 const counts = await addBigData(client, {

@@ -4,6 +4,7 @@ import { EmptyState } from '@/app/_components/empty-state';
 import { getBoard } from '@/db/queries/yard-board';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
+import { firstLoadBoard } from '@/lib/yard/row-window';
 import { YardBoard } from './_components/yard-board';
 import { YardNav } from './_components/yard-nav';
 
@@ -19,7 +20,8 @@ export default async function YardPage() {
     <div>
       <YardNav current="/yard" />
       {board ? (
-        <YardBoard initial={board} />
+        // a big yard's first rows only: the page stays small, the first refresh brings the rest
+        <YardBoard initial={firstLoadBoard(board)} />
       ) : (
         <EmptyState title={t('noTerminal')}>{t('askAdminYard')}</EmptyState>
       )}

@@ -22,6 +22,8 @@ import enOffline from './en/Offline.json';
 import enReasons from './en/Reasons.json';
 import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
+import enTrailerFilePages from './en/TrailerFilePages.json';
+import enYardRows from './en/YardRows.json';
 import esAccount from './es/Account.json';
 import esGate from './es/Gate.json';
 import esRefusals from './es/Refusals.json';
@@ -43,6 +45,8 @@ import esOffline from './es/Offline.json';
 import esReasons from './es/Reasons.json';
 import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
+import esTrailerFilePages from './es/TrailerFilePages.json';
+import esYardRows from './es/YardRows.json';
 
 const en = {
   Refusals: enRefusals,
@@ -66,6 +70,8 @@ const en = {
   Reasons: enReasons,
   Shell: enShell,
   Theme: enTheme,
+  TrailerFilePages: enTrailerFilePages,
+  YardRows: enYardRows,
 };
 
 /** The English catalogue's shape is the one every language must match (the unit test checks keys). */
@@ -95,5 +101,7 @@ export const MESSAGES: Record<Locale, Messages> = {
     Reasons: esReasons,
     Shell: esShell,
     Theme: esTheme,
+    TrailerFilePages: esTrailerFilePages,
+    YardRows: esYardRows,
   },
 };

@@ -124,11 +124,24 @@ describe('corrections of stored handoffs', () => {
     expect([after.fuelEighths, after.isLoaded]).toEqual([3, true]);
     expect((await verifyTrailerChain(trailer.id)).check).toEqual({ ok: true, count: 2 });
     // the trailer file keeps the original, marked as corrected by the correction's receipt
-    const file = buildTrailerFile(await getTrailerFileRows(trailer.id), 'handoff');
+    const file = buildTrailerFile((await getTrailerFileRows(trailer.id)).rows, 'handoff');
     const original = file.find((e) => e.id === h.handoffId)!;
     expect(original.title).toMatch(/\(corrected\)$/);
     expect(original.detail).toContain(`corrected by receipt ${correction.verificationCode}`);
     expect(file.find((e) => e.id === correction.id)!.title).toMatch(/^Correction: Drop by/);
+    // pages of one handoff each (the two share their time; the keyset breaks the tie by id): each
+    // still names the other, looked up across pages
+    const first = await getTrailerFileRows(trailer.id, null, 1);
+    const second = await getTrailerFileRows(trailer.id, first.next, 1);
+    expect(second.next).toBeNull();
+    const paged = [first, second].flatMap((p) => buildTrailerFile(p.rows, 'handoff'));
+    expect(paged.map((e) => e.id).sort()).toEqual([h.handoffId, correction.id].sort());
+    expect(paged.find((e) => e.id === h.handoffId)!.detail).toContain(
+      `corrected by receipt ${correction.verificationCode}`,
+    );
+    expect(paged.find((e) => e.id === correction.id)!.detail).toContain(
+      `corrects receipt ${orig.verificationCode}`,
+    );
     // a second correction of the same original is refused: correct the correction instead
     const again = await post(
       d1,

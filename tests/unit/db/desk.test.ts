@@ -238,7 +238,7 @@ describe('desk in the database', () => {
     ).toMatchObject({ ok: false, code: 'conflict', message: 'This hold was already released.' });
     const [h] = await db.select().from(holds).where(eq(holds.id, f.hold.id));
     expect(h).toMatchObject({ repairedBy: 'Riverbend body shop', releasedById: f.clerk.id });
-    const file = buildTrailerFile(await getTrailerFileRows(f.trailer.id));
+    const file = buildTrailerFile((await getTrailerFileRows(f.trailer.id)).rows);
     expect(file.some((e) => e.kind === 'hold' && e.title.includes('released'))).toBe(true);
   });
 

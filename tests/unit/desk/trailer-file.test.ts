@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { buildTrailerFile, type FileRows } from '@/lib/desk/trailer-file';
+import { buildTrailerFile, inWindow, type FileRows } from '@/lib/desk/trailer-file';
 
 const t = (iso: string) => new Date(iso);
 const rows: FileRows = {
@@ -78,5 +78,32 @@ describe('trailer file', () => {
   it('filters by kind', () => {
     expect(buildTrailerFile(rows, 'hold').map((e) => e.id)).toEqual(['x1:released', 'x1']);
     expect(buildTrailerFile(rows, 'walk')).toEqual([]);
+  });
+});
+
+describe('a page of the trailer file', () => {
+  // `common practice` for keyset pages: an entry shows on exactly one page, the page whose span
+  // [from, before) holds its time; the page's own handoffs are the page and are never filtered
+  it('keeps only the records dated within the page span, and all of the page handoffs', () => {
+    const later = { from: t('2026-11-01T10:30:00Z'), before: null };
+    expect(
+      buildTrailerFile(rows, undefined, later)
+        .map((e) => e.id)
+        .sort(),
+    ).toEqual(['h1', 'm1', 'x1:released']); // the hold placed at 10:00:02 was released on Nov 3
+    const earlier = { from: null, before: t('2026-11-01T10:30:00Z') };
+    const ids = buildTrailerFile(rows, undefined, earlier).map((e) => e.id);
+    expect(ids).toContain('h1');
+    expect(ids).toContain('f1');
+    expect(ids).toContain('x1');
+    expect(ids).not.toContain('m1');
+    expect(ids).not.toContain('x1:released');
+  });
+
+  it('puts a record at the span start on the page, and one at its end on the next', () => {
+    expect(inWindow(t('2026-11-01T11:00:00Z'), { from: t('2026-11-01T11:00:00Z'), before: null })).toBe(true);
+    expect(inWindow(t('2026-11-01T11:00:00Z'), { from: null, before: t('2026-11-01T11:00:00Z') })).toBe(
+      false,
+    );
   });
 });

@@ -1,8 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { z } from 'zod';
 import { getTranslations } from 'next-intl/server';
+import { z } from 'zod';
 import { Caution } from '@/app/_components/caution';
 import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -12,7 +12,7 @@ import { formatTime, toLocalInput } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 import { checkTrailerPhotos, type PhotoCheckReport } from '@/lib/server/photos/integrity';
-import { TRAILER_FILE_KINDS, trailerFileQuerySchema } from '@/lib/validation/desk';
+import { fileCursorParam, TRAILER_FILE_KINDS, trailerFileQuerySchema } from '@/lib/validation/desk';
 import { ChainStatus } from './_components/chain-status';
 import { HoldReleaseForm } from './_components/hold-release-form';
 import { PhotoCheckPanel } from './_components/photo-check';
@@ -39,13 +39,25 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   if (!z.uuid().safeParse(id).success) notFound();
   const query = trailerFileQuerySchema.safeParse(await searchParams);
   const kind = query.success ? query.data.kind : undefined;
+  const badPage = !query.success && query.error.issues.some((i) => i.path[0] === 'before');
   const trailer = await getTrailerHeader(id);
   if (!trailer) notFound();
-  const [rows, chain] = await Promise.all([getTrailerFileRows(id), verifyTrailerChain(id)]);
+  const tp = await getTranslations('TrailerFilePages');
+  // the whole chain is re-hashed only when asked for: it reads every handoff and item of the trailer
+  const wantsChain = query.success && query.data.chain === 'check';
+  const [page, chain] = await Promise.all([
+    getTrailerFileRows(id, query.success ? (query.data.before ?? null) : null),
+    wantsChain ? verifyTrailerChain(id) : null,
+  ]);
+  const { rows } = page;
   const photoCheck = query.success && query.data.photos === 'check' ? await tryCheckPhotos(id) : null;
   const zone = trailer.timeZone ?? user.terminalTimeZone ?? 'UTC';
-  const entries = buildTrailerFile(rows, kind);
+  const entries = buildTrailerFile(rows, kind, page.window);
   const openHolds = rows.holds.filter((h) => !h.releasedAt);
+  const linkTo = (extra: Record<string, string>) => {
+    const p = new URLSearchParams({ ...(kind ? { kind } : {}), ...extra });
+    return p.size ? `/trailers/${id}?${p}` : `/trailers/${id}`;
+  };
   const canRelease = isDeskStaff(user.role);
   const nowLocal = toLocalInput(new Date(), zone);
   const t = await getTranslations('Trailers');
@@ -78,7 +90,19 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
               : t('file.gone')}
         </p>
       </header>
-      <ChainStatus check={chain.check} brokenAt={chain.brokenAt} timeZone={zone} />
+      {chain ? (
+        <ChainStatus check={chain.check} brokenAt={chain.brokenAt} timeZone={zone} />
+      ) : (
+        <p className="flex flex-wrap items-center gap-3 rounded-lg border-l-8 border-paper-line bg-paper p-3 text-gate">
+          {tp('chainNotChecked')}
+          <Link
+            href={linkTo({ chain: 'check' })}
+            className="inline-flex min-h-tap items-center rounded-full border-2 border-brand px-4 text-gate-sm font-bold text-brand"
+          >
+            {tp('checkChain')}
+          </Link>
+        </p>
+      )}
       <PhotoCheckPanel trailerId={trailer.id} kind={kind} result={photoCheck} timeZone={zone} />
       {openHolds.length ? (
         <section aria-labelledby="holds" className="space-y-3 rounded-xl bg-hold-bg p-3">
@@ -118,9 +142,10 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
       </nav>
       {!query.success ? (
         <p role="alert" className="text-gate font-bold text-danger">
-          {t('file.badFilter')}
+          {badPage ? t('badPage') : t('file.badFilter')}
         </p>
       ) : null}
+      <p className="text-gate-sm text-ink-soft">{tp('pageNote', { count: rows.handoffs.length })}</p>
       <ol className="space-y-2" aria-label={t('file.history')}>
         {entries.map((e) => (
           <li
@@ -154,6 +179,24 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
         ))}
         {entries.length === 0 ? <li className="text-gate text-ink-soft">{t('file.nothing')}</li> : null}
       </ol>
+      <nav aria-label={tp('older')} className="flex flex-wrap gap-2">
+        {page.window.before ? (
+          <Link
+            href={linkTo({})}
+            className="inline-flex min-h-tap items-center px-2 text-gate text-brand underline"
+          >
+            {tp('newest')}
+          </Link>
+        ) : null}
+        {page.next ? (
+          <Link
+            href={linkTo({ before: fileCursorParam(page.next) })}
+            className="inline-flex min-h-tap items-center rounded-full border-2 border-brand px-4 text-gate font-bold text-brand"
+          >
+            {tp('older')}
+          </Link>
+        ) : null}
+      </nav>
     </div>
   );
 }

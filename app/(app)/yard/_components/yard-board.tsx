@@ -9,10 +9,12 @@ import { BoardTable } from './board-table';
 import { useBoard } from './use-board';
 import { YardMap } from './yard-map';
 
-export function YardBoard({ initial }: { initial: Board }) {
+/** `initial` may hold only the first rows of a big yard (`isPartial`); the first refresh brings the rest. */
+export function YardBoard({ initial }: { initial: Board & { isPartial?: boolean } }) {
   const t = useTranslations('Yard');
   const { data, error } = useBoard(initial);
   const board = data ?? initial;
+  const isPartial = board === initial && Boolean(initial.isPartial);
   const [filters, setFilters] = useState<BoardFilter[]>([]);
   const [sort, setSort] = useState<{ key: SortKey; dir: SortDir }>({ key: 'slot', dir: 'asc' });
   const [view, setView] = useState<'map' | 'table'>('map');
@@ -92,7 +94,12 @@ export function YardBoard({ initial }: { initial: Board }) {
         </a>
       </div>
       {view === 'map' ? (
-        <YardMap board={board} highlight={filters.length ? shownIds : null} policy={board.policy} />
+        <YardMap
+          board={board}
+          highlight={filters.length ? shownIds : null}
+          policy={board.policy}
+          isPartial={isPartial}
+        />
       ) : (
         <BoardTable rows={shown} timeZone={board.terminal.timeZone} now={now} sort={sort} onSort={setSort} />
       )}

@@ -1,5 +1,9 @@
+'use client';
+
 import { useTranslations } from 'next-intl';
+import { useState } from 'react';
 import { SLOT_WORDS, slotFlags, type SlotTone } from '@/lib/yard/map-signal';
+import { firstRows } from '@/lib/yard/row-window';
 import type { Board, BoardSpot, YardPolicy } from '@/lib/yard/types';
 import './yard-map.css';
 
@@ -59,17 +63,25 @@ function spotCell(tr: T, spot: BoardSpot, policy: YardPolicy, isDimmed: boolean)
   );
 }
 
-/** The yard drawn as rows of slots, then the dock doors (CSS grid; wraps on a phone). */
+/**
+ * The yard drawn as rows of slots, then the dock doors (CSS grid; wraps on a phone). A big yard
+ * draws its first rows (lib/yard/row-window.ts) and lists the others, each opened on demand.
+ */
 export function YardMap({
   board,
   highlight,
   policy,
+  isPartial = false,
 }: {
   board: Board;
   highlight: Set<string> | null;
   policy: YardPolicy;
+  isPartial?: boolean;
 }) {
   const tr = useTranslations('Yard');
+  const t = useTranslations('YardRows');
+  const [opened, setOpened] = useState<Set<string> | 'all'>(() => firstRows(board));
+  const isOpen = (key: string) => key === 'doors' || opened === 'all' || opened.has(key);
   const byRow = new Map<string, BoardSpot[]>();
   for (const s of board.spots) {
     const key = s.kind === 'door' ? 'doors' : (s.rowId ?? 'doors');
@@ -80,19 +92,59 @@ export function YardMap({
   const groups = [
     ...board.rows.map((r) => ({ key: r.id, name: r.name })),
     { key: 'doors', name: tr('map.doors') },
-  ].flatMap((g) => (byRow.get(g.key)?.length ? [{ ...g, spots: byRow.get(g.key)! }] : []));
+  ].flatMap((g) =>
+    byRow.get(g.key)?.length || (isPartial && g.key !== 'doors')
+      ? [{ ...g, spots: byRow.get(g.key) ?? [] }]
+      : [],
+  );
+  const closed = groups.filter((g) => !isOpen(g.key)).length;
   return (
     <div id="yard-map" className="space-y-3" data-testid="yard-map">
-      {groups.map((g) => (
-        <section key={g.key} aria-label={g.name} className="ym-row">
-          <h2 className="text-gate font-bold">{g.name}</h2>
-          <ul className="ym-grid">
-            {g.spots.map((s) =>
-              spotCell(tr, s, policy, highlight !== null && !(s.trailer && highlight.has(s.trailer.id))),
+      {groups.map((g) =>
+        isOpen(g.key) ? (
+          <section key={g.key} aria-label={g.name} className="ym-row">
+            <h2 className="text-gate font-bold">{g.name}</h2>
+            {g.spots.length ? (
+              <ul className="ym-grid">
+                {g.spots.map((s) =>
+                  spotCell(tr, s, policy, highlight !== null && !(s.trailer && highlight.has(s.trailer.id))),
+                )}
+              </ul>
+            ) : (
+              <p className="text-gate-sm text-ink-soft">{t('loading')}</p>
             )}
-          </ul>
-        </section>
-      ))}
+          </section>
+        ) : (
+          <section key={g.key} aria-label={g.name} className="ym-row flex flex-wrap items-center gap-3">
+            <h2 className="text-gate font-bold">{g.name}</h2>
+            {g.spots.length ? (
+              <span className="text-gate-sm text-ink-soft">
+                {t('summary', {
+                  slots: g.spots.length,
+                  trailers: g.spots.filter((s) => s.trailer).length,
+                  flagged: g.spots.filter((s) => s.trailer && slotFlags(s.trailer, policy).tone).length,
+                })}
+              </span>
+            ) : null}
+            <button
+              type="button"
+              onClick={() => setOpened((o) => (o === 'all' ? o : new Set([...o, g.key])))}
+              className="min-h-tap rounded-lg border-2 border-brand px-3 text-gate-sm font-bold text-brand"
+            >
+              {t('show', { row: g.name })}
+            </button>
+          </section>
+        ),
+      )}
+      {closed > 1 ? (
+        <button
+          type="button"
+          onClick={() => setOpened('all')}
+          className="min-h-tap rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand"
+        >
+          {t('showAll', { count: closed })}
+        </button>
+      ) : null}
       <p className="text-gate-sm text-ink-soft">{tr('map.legend', { eighths: policy.lowFuelEighths })}</p>
     </div>
   );

@@ -6,7 +6,7 @@ import { CAUTIONS, Caution } from '@/app/_components/caution';
 import { FieldError, Textarea } from '@/app/_components/field';
 import { safetyGroups } from '@/lib/engine';
 import { newDraft, sameAsLastForZone, type Draft, type DraftItem } from '@/lib/handoffs/draft';
-import { HOOK_WORDS } from '@/lib/handoffs/holds';
+import { HOOK_WORDS } from '@/lib/handoffs/hook-words';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { Choice } from './choice';
 import { FuelButtons, ReeferFields } from './readings-fields';

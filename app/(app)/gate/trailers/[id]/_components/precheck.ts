@@ -1,9 +1,12 @@
 import { draftToInput, itemChange, needsEvidence, type Draft } from '@/lib/handoffs/draft';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
-import { handoffSubmitSchema } from '@/lib/validation/handoffs';
 
-/** Client-side check with the shared schema, and the photo-and-note rule, before anything is sent. */
-export function precheck(d: Draft, isReefer: boolean, last: TrailerCondition['last']) {
+/**
+ * Client-side check with the shared schema, and the photo-and-note rule, before anything is sent.
+ * The schema (and zod with it) is loaded on the first send, not with the form's first page.
+ */
+export async function precheck(d: Draft, isReefer: boolean, last: TrailerCondition['last']) {
+  const { handoffSubmitSchema } = await import('@/lib/validation/handoffs');
   const body = draftToInput(d, isReefer);
   const errors: Record<string, string[]> = {};
   const parsed = handoffSubmitSchema.safeParse(body);

@@ -3,7 +3,7 @@
 import { useState } from 'react';
 import { statedObservation, type ChecklistItem, type SafetyGroup } from '@/lib/engine';
 import type { DraftItem } from '@/lib/handoffs/draft';
-import { TREAD_LIMITS } from '@/lib/validation/handoffs';
+import { TREAD_LIMITS } from '@/lib/handoffs/limits';
 import { SAFETY_WORDS } from './safety-words';
 
 /**

@@ -30,7 +30,10 @@ export function useSubmit(
   const send = useCallback(
     async (d: StoredDraft) => {
       if (inFlight.current) return;
-      const { body, errors: found } = precheck(d, isReefer, last);
+      inFlight.current = true;
+      const { body, errors: found } = await precheck(d, isReefer, last).finally(() => {
+        inFlight.current = false;
+      });
       setErrors(found);
       setRefusal(null);
       if (Object.keys(found).length) {

@@ -1,0 +1,85 @@
+// Largest Contentful Paint of the daily screens in headless Chromium (Debian's /usr/bin/chromium
+// through @playwright/test's launcher), against a running `next start` (--url, default the e2e
+// port) whose database is --db (default hitchmark_big; the demo's is hitchmark_e2e). Each page is
+// loaded --runs times (default 3) in a fresh phone-sized context with a sealed session; prints
+// every run and the median. LCP as the browser reports it: the last `largest-contentful-paint`
+// entry before the first input (W3C Largest Contentful Paint draft; PerformanceObserver, buffered).
+//   bash scripts/bench/with-env.sh scripts/bench/lcp.ts --db hitchmark_e2e --url http://localhost:3150
+import { chromium } from '@playwright/test';
+import { sealData } from 'iron-session';
+import pg from 'pg';
+import { databaseUrl } from '@/db/url';
+
+const args = process.argv.slice(2);
+const opt = (name: string) => (args.includes(`--${name}`) ? args[args.indexOf(`--${name}`) + 1] : undefined);
+const dbName = opt('db') ?? process.env.HM_BIG_DB ?? 'hitchmark_big';
+const base = opt('url') ?? `http://localhost:${process.env.HM_E2E_PORT ?? 3150}`;
+const runs = Number(opt('runs') ?? 3);
+
+const client = new pg.Client({ connectionString: databaseUrl(dbName) });
+await client.connect();
+const one = async (sql: string) => (await client.query(sql)).rows[0];
+const user = (where: string) =>
+  one(`SELECT id, role, carrier_id, home_terminal_id, session_version FROM users WHERE ${where} LIMIT 1`);
+const driver = await user(`driver_number = 'D1001'`);
+const jockey = await user(`email = 'jockey@bramblecrest.example'`);
+const clerk = await user(`email = 'clerk@bramblecrest.example'`);
+const longest = await one(
+  `SELECT trailer_id, count(*)::int AS n FROM handoffs GROUP BY trailer_id ORDER BY count(*) DESC LIMIT 1`,
+);
+const slots = await one(
+  `SELECT count(*)::int AS n FROM yard_spots WHERE terminal_id = '${jockey.home_terminal_id}' AND kind = 'slot'`,
+);
+await client.end();
+
+const secret = process.env.SESSION_SECRET ?? 'hitchmark-local-development-secret-not-for-production';
+const seal = (u: typeof driver) =>
+  sealData(
+    {
+      userId: u.id,
+      role: u.role,
+      carrierId: u.carrier_id,
+      terminalId: u.home_terminal_id,
+      version: u.session_version,
+    },
+    { password: secret, ttl: 60 * 60 },
+  );
+
+const PAGES = [
+  ['gate', '/gate', driver],
+  ['handoff form (longest history)', `/gate/trailers/${longest.trailer_id}`, driver],
+  [`yard (${slots.n} slots)`, '/yard', jockey],
+  ['desk (case queue)', '/desk', clerk],
+  [`trailer file (${longest.n} handoffs)`, `/trailers/${longest.trailer_id}`, clerk],
+] as const;
+
+const browser = await chromium.launch({ executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium' });
+const lines: string[] = [];
+for (const [name, path, who] of PAGES) {
+  const figures: number[] = [];
+  for (let r = 0; r < runs; r++) {
+    const context = await browser.newContext({ viewport: { width: 412, height: 915 }, isMobile: true });
+    await context.addCookies([{ name: 'hm_session', value: await seal(who), url: base }]);
+    const page = await context.newPage();
+    await page.goto(base + path, { waitUntil: 'load', timeout: 60_000 });
+    const lcp = await page.evaluate(
+      () =>
+        new Promise<number>((resolve) => {
+          let last = 0;
+          new PerformanceObserver((list) => {
+            for (const e of list.getEntries()) last = e.startTime;
+          }).observe({ type: 'largest-contentful-paint', buffered: true });
+          setTimeout(() => resolve(last), 1500);
+        }),
+    );
+    figures.push(lcp);
+    await context.close();
+  }
+  const median = [...figures].sort((a, b) => a - b)[Math.floor(figures.length / 2)];
+  lines.push(
+    `${name.padEnd(34)} median ${(median / 1000).toFixed(2)} s   runs ${figures.map((f) => (f / 1000).toFixed(2)).join(' / ')}`,
+  );
+}
+await browser.close();
+console.log(`LCP in headless Chromium, ${base}, database ${dbName}, ${runs} runs each`);
+for (const l of lines) console.log(l);
