@@ -142,7 +142,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
       </nav>
       {!query.success ? (
         <p role="alert" className="text-gate font-bold text-danger">
-          {badPage ? t('badPage') : t('file.badFilter')}
+          {badPage ? tp('badPage') : t('file.badFilter')}
         </p>
       ) : null}
       <p className="text-gate-sm text-ink-soft">{tp('pageNote', { count: rows.handoffs.length })}</p>
