@@ -103,6 +103,8 @@ export async function flushOutbox(
   userId: string,
   now: () => number,
   send: (item: OutboxItem) => Promise<SendOutcome>,
+  /** The signal just came back: try now, whatever the backoff said. */
+  ignoreBackoff = false,
 ): Promise<{ sent: number; stopped: boolean }> {
   let sent = 0;
   for (const item of sortBySeq(await store.all())) {
@@ -111,7 +113,7 @@ export async function flushOutbox(
       if (now() - item.createdAt > KEEP_DONE_MS) await store.del(item.key);
       continue;
     }
-    if (item.nextTryAt > now()) return { sent, stopped: true };
+    if (!ignoreBackoff && item.nextTryAt > now()) return { sent, stopped: true };
     const outcome = await send(item);
     if (outcome.kind === 'offline') {
       const attempts = item.attempts + 1;
@@ -126,15 +128,6 @@ export async function flushOutbox(
     }
   }
   return { sent, stopped: false };
-}
-
-/** The 'online' event: every waiting item of the user may be tried now. */
-export async function clearBackoff(store: OutboxStore, userId: string): Promise<void> {
-  for (const item of await store.all()) {
-    if (item.userId === userId && item.state === 'pending' && item.nextTryAt > 0) {
-      await store.set(item.key, { ...item, nextTryAt: 0 });
-    }
-  }
 }
 
 /** In-memory store (tests, and a phone whose browser refuses IndexedDB). */

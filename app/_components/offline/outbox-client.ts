@@ -2,7 +2,6 @@
 // The outbox on this phone: one sender for every screen (the shell starts it), a snapshot that
 // React reads through useSyncExternalStore, and a lock so two tabs never send the same item at once.
 import {
-  clearBackoff,
   enqueue,
   flushOutbox,
   outcomeOf,
@@ -16,6 +15,7 @@ let items: OutboxItem[] = [];
 let userId: string | null = null;
 let flushing: Promise<void> | null = null;
 let again = false;
+let wokenUp = false;
 const listeners = new Set<() => void>();
 const EMPTY: OutboxItem[] = [];
 
@@ -45,15 +45,21 @@ async function send(item: OutboxItem): Promise<SendOutcome> {
   }
 }
 
-async function runOnce(user: string) {
+async function runOnce(user: string, ignoreBackoff: boolean) {
   const store = outboxStore();
   const run = () =>
-    flushOutbox(store, user, Date.now, async (item) => {
-      const outcome = await send(item);
-      // show each outcome as it comes, not only at the end of the run
-      queueMicrotask(() => void refresh());
-      return outcome;
-    });
+    flushOutbox(
+      store,
+      user,
+      Date.now,
+      async (item) => {
+        const outcome = await send(item);
+        // show each outcome as it comes, not only at the end of the run
+        queueMicrotask(() => void refresh());
+        return outcome;
+      },
+      ignoreBackoff,
+    );
   const locks = typeof navigator !== 'undefined' ? navigator.locks : undefined;
   if (locks) await locks.request('hitchmark-outbox', run);
   else await run();
@@ -71,7 +77,11 @@ export function flush(): Promise<void> {
     try {
       do {
         again = false;
-        await runOnce(user);
+        // the 'online' event may come while a try that failed offline is still running: the
+        // run after it then ignores the backoff that failure set
+        const ignoreBackoff = wokenUp;
+        wokenUp = false;
+        await runOnce(user, ignoreBackoff);
         await refresh();
       } while (again);
     } catch {
@@ -104,7 +114,10 @@ export async function removeFromOutbox(key: string) {
 export function startOutbox(user: string): () => void {
   userId = user;
   void moveLocalStorageOnce(user).then(refresh).then(flush);
-  const online = () => void clearBackoff(outboxStore(), user).then(flush);
+  const online = () => {
+    wokenUp = true;
+    void flush();
+  };
   window.addEventListener('online', online);
   const timer = window.setInterval(() => void flush(), 15_000);
   return () => {

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
   backoffMs,
-  clearBackoff,
   enqueue,
   flushOutbox,
   KEEP_DONE_MS,
@@ -113,7 +112,7 @@ describe('the phone outbox', () => {
     expect(waitingCount(await store.all(), 'u-first')).toBe(1);
   });
 
-  it('backs off 2 s, 4 s, 8 s … up to 5 minutes, and the online event clears the wait', async () => {
+  it('backs off 2 s, 4 s, 8 s … up to 5 minutes, and the online event skips the wait', async () => {
     // exponential backoff with a cap: common practice for retries over a flaky network
     expect([1, 2, 3, 4].map(backoffMs)).toEqual([2_000, 4_000, 8_000, 16_000]);
     expect(backoffMs(20)).toBe(300_000);
@@ -124,9 +123,23 @@ describe('the phone outbox', () => {
       () => T0,
       async () => ({ kind: 'offline' }),
     );
-    expect((await store.get('key-0001'))?.nextTryAt).toBe(T0 + 2_000);
-    await clearBackoff(store, 'u-driver');
-    expect((await store.get('key-0001'))?.nextTryAt).toBe(0);
+    await flushOutbox(
+      store,
+      'u-driver',
+      () => T0 + 500,
+      async () => ({ kind: 'offline' }),
+      true,
+    );
+    expect(await store.get('key-0001')).toMatchObject({ attempts: 2, nextTryAt: T0 + 500 + 4_000 });
+    const tried: string[] = [];
+    const ok = async (i: OutboxItem): Promise<SendOutcome> => {
+      tried.push(i.key);
+      return { kind: 'sent', answer: {} };
+    };
+    await flushOutbox(store, 'u-driver', () => T0 + 600, ok);
+    expect(tried).toEqual([]);
+    await flushOutbox(store, 'u-driver', () => T0 + 600, ok, true);
+    expect(tried).toEqual(['key-0001']);
   });
 
   it('forgets sent items after a day, never pending ones', async () => {
