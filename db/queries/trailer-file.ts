@@ -136,6 +136,8 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
           ),
         itemKey: photos.itemKey,
         handoffId: photos.handoffId,
+        capturedAt: photos.capturedAt,
+        uploadedAt: photos.createdAt,
       })
       .from(photos)
       .where(eq(photos.trailerId, trailerId))

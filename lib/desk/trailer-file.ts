@@ -11,6 +11,8 @@ export type FileEntry = {
   detail: string | null;
   href?: string;
   tone?: 'danger' | 'ok' | 'hold';
+  /** A photo's two times: when the phone says it was taken (EXIF; may be absent) and when it arrived. */
+  photoTimes?: { takenAt: Date | null; uploadedAt: Date };
 };
 
 export type FileRows = {
@@ -47,7 +49,14 @@ export type FileRows = {
     releasedByName: string | null;
   }[];
   cases: { id: string; openedAt: Date; state: string; amountCents: number; carrierScac: string | null }[];
-  photos: { id: string; createdAt: Date; itemKey: string | null; handoffId: string | null }[];
+  photos: {
+    id: string;
+    createdAt: Date;
+    itemKey: string | null;
+    handoffId: string | null;
+    capturedAt?: Date | null;
+    uploadedAt?: Date;
+  }[];
 };
 
 const SHOWN_FINDINGS = new Set(['new', 'worse', 'repaired']);
@@ -138,6 +147,7 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
       title: `Photo${p.itemKey ? ` of ${itemLabel(p.itemKey)}` : ''}`,
       detail: null,
       href: `/api/photos/${p.id}`,
+      photoTimes: { takenAt: p.capturedAt ?? null, uploadedAt: p.uploadedAt ?? p.createdAt },
     })),
   ];
   return entries

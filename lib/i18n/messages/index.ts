@@ -5,12 +5,14 @@ import enGate from './en/Gate.json';
 import enLanguage from './en/Language.json';
 import enLogin from './en/Login.json';
 import enOffline from './en/Offline.json';
+import enPhotos from './en/Photos.json';
 import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
 import esGate from './es/Gate.json';
 import esLanguage from './es/Language.json';
 import esLogin from './es/Login.json';
 import esOffline from './es/Offline.json';
+import esPhotos from './es/Photos.json';
 import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
 
@@ -19,6 +21,7 @@ const en = {
   Language: enLanguage,
   Login: enLogin,
   Offline: enOffline,
+  Photos: enPhotos,
   Shell: enShell,
   Theme: enTheme,
 };
@@ -33,6 +36,7 @@ export const MESSAGES: Record<Locale, Messages> = {
     Language: esLanguage,
     Login: esLogin,
     Offline: esOffline,
+    Photos: esPhotos,
     Shell: esShell,
     Theme: esTheme,
   },

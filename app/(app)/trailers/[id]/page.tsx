@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { getTranslations } from 'next-intl/server';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
@@ -41,6 +42,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   const [rows, chain] = await Promise.all([getTrailerFileRows(id), verifyTrailerChain(id)]);
   const photoCheck = query.success && query.data.photos === 'check' ? await tryCheckPhotos(id) : null;
   const zone = trailer.timeZone ?? user.terminalTimeZone ?? 'UTC';
+  const tp = await getTranslations('Photos');
   const entries = buildTrailerFile(rows, kind);
   const openHolds = rows.holds.filter((h) => !h.releasedAt);
   const canRelease = isDeskStaff(user.role);
@@ -119,6 +121,14 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
               )}
             </p>
             {e.detail ? <p className="text-gate-sm">{e.detail}</p> : null}
+            {e.photoTimes ? (
+              <p className="text-gate-sm" data-testid="photo-times">
+                {e.photoTimes.takenAt
+                  ? tp('taken', { time: formatTime(e.photoTimes.takenAt, zone) })
+                  : tp('noCaptureTime')}{' '}
+                · {tp('uploaded', { time: formatTime(e.photoTimes.uploadedAt, zone) })}
+              </p>
+            ) : null}
           </li>
         ))}
         {entries.length === 0 ? (

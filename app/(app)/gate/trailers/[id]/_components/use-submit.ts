@@ -121,7 +121,13 @@ export function useSubmit(
       requeued.current = key;
       const { body, errors: found } = precheck(draft, isReefer, last);
       if (!Object.keys(found).length) {
-        void addToOutbox({ key, kind: 'handoff', group: draft.trailerId, url: '/api/handoffs', body });
+        void addToOutbox({
+          key,
+          kind: 'handoff',
+          group: draft.trailerId,
+          url: '/api/handoffs',
+          body: body as Record<string, unknown>,
+        });
       }
       return;
     }
