@@ -15,7 +15,26 @@ function uploadOrigin(): string | null {
   return endpoint ? new URL(endpoint).origin : null;
 }
 
-export function proxy(request: NextRequest) {
+/**
+ * A form post to a page (no JavaScript, or a stranger) that the framework cannot read as a form.
+ * The framework tries to read every multipart or form-encoded POST to a page as a server action and
+ * answers a malformed body (e.g. a multipart boundary the body never uses) with a 500; it is the
+ * sender's fault, so it gets a 400 here. A well-formed form passes on untouched (the framework
+ * hands the proxy a copy of the body). Actions sent by the app's own script carry `Next-Action`.
+ */
+async function unreadableForm(request: NextRequest): Promise<boolean> {
+  if (request.method !== 'POST' || request.headers.has('next-action')) return false;
+  const type = request.headers.get('content-type') ?? '';
+  if (!/^(multipart\/form-data|application\/x-www-form-urlencoded)\b/i.test(type)) return false;
+  try {
+    await request.clone().formData();
+    return false;
+  } catch {
+    return true;
+  }
+}
+
+export async function proxy(request: NextRequest) {
   const nonce = Buffer.from(crypto.getRandomValues(new Uint8Array(16))).toString('base64');
   const headers = securityHeaders({
     nonce,
@@ -43,6 +62,14 @@ export function proxy(request: NextRequest) {
         NextResponse.json({ code: 'unsupported_type', message: 'Send the body as JSON.' }, { status: 415 }),
       );
     }
+  }
+  if (!pathname.startsWith('/api/') && (await unreadableForm(request))) {
+    return withHeaders(
+      NextResponse.json(
+        { code: 'invalid', message: 'The form could not be read. Send it again.' },
+        { status: 400 },
+      ),
+    );
   }
   if (PUBLIC_PREFIXES.some((p) => pathname === p.replace(/\/$/, '') || pathname.startsWith(p))) return pass();
   if (request.cookies.has(SESSION_COOKIE)) return pass();

@@ -120,7 +120,7 @@ function compareAndAttribute(n: number): () => unknown {
   const c = current(n);
   return () => {
     const findings = compareInspection({ checklist, history: h, current: c });
-    return attributeFindings({ history: h, current: c, findings, timeZone: 'America/Chicago' });
+    return attributeFindings({ history: h, current: c, findings });
   };
 }
 

@@ -1,6 +1,8 @@
 // Local stand-ins for hosted services, in one process:
 //  - s3rver: S3-compatible object storage on 127.0.0.1 (photos), bucket with CORS for browser PUTs
 //  - smtp-server + mailparser: an SMTP inbox; GET /messages on the HTTP port lists what arrived
+//    (with each message's Message-ID); POST /smtp/stop and /smtp/start take the SMTP port down and
+//    up again while the inbox keeps what it holds (the no-loss script's "mail server down")
 // Run: npx tsx scripts/fakes.ts   (scripts/start.sh and scripts/test.sh start it for you)
 // Each fake has its own error handlers: a client that drops its connection mid-send (ECONNRESET,
 // EPIPE) is logged and forgotten, so one fake's fault never stops the other.
@@ -37,6 +39,8 @@ s3Server.on('clientError', (error, socket) => {
 
 type Message = {
   id: number;
+  /** The Message-ID header as sent (angle brackets included), or '' when the sender gave none. */
+  messageId: string;
   to: string[];
   from: string;
   subject: string;
@@ -47,30 +51,54 @@ type Message = {
 const inbox: Message[] = [];
 let nextId = 1;
 
-const smtp = new SMTPServer({
-  authOptional: true,
-  disabledCommands: ['STARTTLS'], // the built-in certificate is expired; loopback only
-  logger: false,
-  onData(stream, session, callback) {
-    simpleParser(stream)
-      .then((mail) => {
-        inbox.push({
-          id: nextId++,
-          to: session.envelope.rcptTo.map((r) => r.address),
-          from: session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
-          subject: mail.subject ?? '',
-          text: mail.text ?? '',
-          html: typeof mail.html === 'string' ? mail.html : '',
-          date: new Date().toISOString(),
-        });
-        callback();
-      })
-      .catch((err: Error) => callback(err));
-  },
-});
-// smtp-server re-emits every connection's socket error on the server: unhandled, it ends the process
-smtp.on('error', (error) => logFault('smtp', error));
+const makeSmtp = () => {
+  const server = new SMTPServer({
+    authOptional: true,
+    disabledCommands: ['STARTTLS'], // the built-in certificate is expired; loopback only
+    logger: false,
+    onData(stream, session, callback) {
+      simpleParser(stream)
+        .then((mail) => {
+          inbox.push({
+            id: nextId++,
+            messageId: mail.messageId ? `<${mail.messageId.replace(/^<|>$/g, '')}>` : '',
+            to: session.envelope.rcptTo.map((r) => r.address),
+            from: session.envelope.mailFrom ? session.envelope.mailFrom.address : '',
+            subject: mail.subject ?? '',
+            text: mail.text ?? '',
+            html: typeof mail.html === 'string' ? mail.html : '',
+            date: new Date().toISOString(),
+          });
+          callback();
+        })
+        .catch((err: Error) => callback(err));
+    },
+  });
+  // smtp-server re-emits every connection's socket error on the server: unhandled, it ends the process
+  server.on('error', (error) => logFault('smtp', error));
+  return server;
+};
+let smtp: SMTPServer | null = makeSmtp();
 smtp.listen(fakes.smtpPort, '127.0.0.1');
+
+/** Closes the SMTP port (open connections are cut): senders get "connection refused". */
+function stopSmtp(): Promise<void> {
+  const server = smtp;
+  smtp = null;
+  if (!server) return Promise.resolve();
+  return new Promise((resolve) => {
+    server.close(() => resolve());
+    // smtp-server waits for open sessions; cut them so the port is free at once
+    (server as unknown as { connections: Set<{ close(): void }> }).connections?.forEach((c) => c.close());
+  });
+}
+
+function startSmtp(): Promise<void> {
+  if (smtp) return Promise.resolve();
+  const server = makeSmtp();
+  smtp = server;
+  return new Promise((resolve) => server.listen(fakes.smtpPort, '127.0.0.1', () => resolve()));
+}
 
 const inboxServer = http.createServer((req, res) => {
   const url = new URL(req.url ?? '/', 'http://127.0.0.1');
@@ -82,6 +110,11 @@ const inboxServer = http.createServer((req, res) => {
   } else if (url.pathname === '/messages' && req.method === 'DELETE') {
     inbox.length = 0;
     res.writeHead(204).end();
+  } else if ((url.pathname === '/smtp/stop' || url.pathname === '/smtp/start') && req.method === 'POST') {
+    void (url.pathname === '/smtp/stop' ? stopSmtp() : startSmtp()).then(() => {
+      res.writeHead(200, { 'content-type': 'application/json' });
+      res.end(JSON.stringify({ smtp: smtp ? 'up' : 'down' }));
+    });
   } else if (url.pathname === '/health') {
     res.writeHead(200).end('ok');
   } else {
@@ -136,7 +169,7 @@ console.log(
   `fakes up: s3 http://127.0.0.1:${fakes.s3Port} bucket ${fakes.bucket}; smtp 127.0.0.1:${fakes.smtpPort}; inbox http://127.0.0.1:${fakes.mailHttpPort}`,
 );
 const stop = () => {
-  smtp.close(() => undefined);
+  smtp?.close(() => undefined);
   inboxServer.close();
   void s3.close().finally(() => process.exit(0));
 };

@@ -17,6 +17,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   const user = await requireUser();
   const theme = parseTheme((await cookies()).get(THEME_COOKIE)?.value);
   const t = await getTranslations('Shell');
+  const account = await getTranslations('Account');
   const links = SECTIONS.filter((s) => canOpen(user.role, s)).map((s) => ({
     href: `/${s}`,
     label: t(`section.${s}`),
@@ -40,7 +41,10 @@ export default async function AppLayout({ children }: { children: React.ReactNod
               <ThemeSwitch initial={theme} onFill />
               <LanguageSwitch onFill />
               <span>
-                <span className="font-bold">{user.name}</span> · {t(`role.${user.role}`)}
+                <Link href="/account" className="font-bold underline" title={account('linkLabel')}>
+                  {user.name}
+                </Link>{' '}
+                · {t(`role.${user.role}`)}
                 {user.carrierScac ? ` · ${user.carrierScac}` : ''}
               </span>
               <SignOutButton label={t('signOut')} />

@@ -4,6 +4,7 @@ import { headers } from 'next/headers';
 import { redirect } from 'next/navigation';
 import type { ActionState } from '@/lib/result';
 import { signIn } from '@/lib/server/auth/sign-in';
+import { clientAddress } from '@/lib/server/client-address';
 import { signInSchema } from '@/lib/validation/auth';
 import { describeZodError } from '@/lib/validation/errors';
 
@@ -24,16 +25,4 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
   const result = await signIn(parsed.data, new Date(), clientAddress(await headers()));
   if (!result.ok) return { ok: false, formError: result.message, fieldErrors: result.fieldErrors, values };
   redirect(result.value.next);
-}
-
-/**
- * The address the request came from, as the nearest proxy saw it: the last X-Forwarded-For entry
- * (`next start` adds the socket's address when no proxy did). Deploy behind a proxy that sets it.
- */
-function clientAddress(h: Headers): string {
-  const hops = (h.get('x-forwarded-for') ?? '')
-    .split(',')
-    .map((s) => s.trim())
-    .filter(Boolean);
-  return hops.at(-1)?.slice(0, 64) ?? 'unknown';
 }

@@ -1,6 +1,6 @@
 import 'server-only';
 import { eq, sql } from 'drizzle-orm';
-import { db } from '@/db';
+import { db, type Tx } from '@/db';
 import { carriers, terminals, users } from '@/db/schema';
 
 const signInColumns = {
@@ -60,3 +60,37 @@ export async function getSessionUser(userId: string) {
   return row && row.isActive ? row : null;
 }
 export type SessionUser = NonNullable<Awaited<ReturnType<typeof getSessionUser>>>;
+
+/** The stored PIN or password hash of a user (to check the current one before a change). */
+export async function getUserSecretHash(userId: string): Promise<string | null> {
+  const [row] = await db.select({ hash: users.secretHash }).from(users).where(eq(users.id, userId)).limit(1);
+  return row?.hash ?? null;
+}
+
+/** A new PIN or password hash; the users_end_sessions trigger moves the session version on. */
+export async function setUserSecretHash(tx: Tx, userId: string, hash: string): Promise<number> {
+  const [row] = await tx
+    .update(users)
+    .set({ secretHash: hash })
+    .where(eq(users.id, userId))
+    .returning({ sessionVersion: users.sessionVersion });
+  return row.sessionVersion;
+}
+
+/** What an admin may change about an account; the trigger ends its sessions when either changes. */
+export async function getUserAccess(userId: string) {
+  const [row] = await db
+    .select({ id: users.id, role: users.role, isActive: users.isActive, name: users.name })
+    .from(users)
+    .where(eq(users.id, userId))
+    .limit(1);
+  return row ?? null;
+}
+
+export async function setUserAccess(
+  tx: Tx,
+  userId: string,
+  access: { role: (typeof users.$inferSelect)['role']; isActive: boolean },
+) {
+  await tx.update(users).set(access).where(eq(users.id, userId));
+}

@@ -84,7 +84,8 @@ export const handoffs = pgTable(
     contentHash: text('content_hash').notNull(),
     /**
      * How content_hash was made: 1 = plain SHA-256 (rows from before the chain was keyed; they
-     * cannot be vouched for), 2 = HMAC-SHA-256 with CHAIN_KEY. The submit always writes 2.
+     * cannot be vouched for), 2 = HMAC-SHA-256 with CHAIN_KEY, 3 = the same, with is_load_perishable
+     * in the hashed content. The submit writes 3; older rows keep verifying with their own version.
      */
     hashVersion: integer('hash_version').notNull().default(1),
     /** SHA-256 of the submitted body: a retry with the same draft key must send the same body. */

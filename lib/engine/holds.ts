@@ -1,6 +1,7 @@
 // Turns one inspection into holds: per item (tires, pins, spare, doors, landing gear, reefer) and,
 // for a reefer's full handoff, the pre-trip. The caution each hold carries comes from hold-parts.ts.
 import type { Checklist, EnginePolicy, Hold, InspectionEvent, ItemObservation } from './types';
+import { reason } from './codes';
 import { hold, UNDER_TRAILER_CAUTION } from './hold-parts';
 
 export interface HoldInput {
@@ -24,7 +25,7 @@ function itemHolds(
       hold(
         'pin_not_engaged',
         key,
-        `${label} is not engaged.`,
+        reason('hold.pin_not_engaged', { item: key, label }),
         'out_of_service',
         null,
         '49 CFR 393.207(b); common practice: any one pin not engaged counts',
@@ -34,11 +35,11 @@ function itemHolds(
   if (kind === 'spare') {
     const problem =
       o.condition === 'missing'
-        ? 'is missing'
+        ? 'missing'
         : o.isMounted === false
-          ? 'is not on its wheel'
+          ? 'off_wheel'
           : o.isHoldingAir === false
-            ? 'is not holding air'
+            ? 'flat'
             : null;
     if (problem) {
       const sev = policy.spareHoldSeverity;
@@ -46,7 +47,7 @@ function itemHolds(
         hold(
           'spare_unusable',
           key,
-          `${label} ${problem}.`,
+          reason('hold.spare_unusable', { item: key, label, problem }),
           sev,
           sev === 'restricted' ? 'yard_only' : null,
           'common practice: a spare counts only when present, mounted and holding air',
@@ -61,7 +62,12 @@ function itemHolds(
         hold(
           'tire_tread_low',
           key,
-          `${label} has ${o.treadThirtySeconds}/32 in tread, under ${policy.minTreadThirtySeconds}/32 in.`,
+          reason('hold.tire_tread_low', {
+            item: key,
+            label,
+            tread: o.treadThirtySeconds,
+            min: policy.minTreadThirtySeconds,
+          }),
           'out_of_service',
           null,
           '49 CFR 393.75(c): at least 2/32 inch on trailer tires',
@@ -73,7 +79,7 @@ function itemHolds(
         hold(
           'tire_not_holding_air',
           key,
-          `${label} is not holding air.`,
+          reason('hold.tire_not_holding_air', { item: key, label }),
           'out_of_service',
           null,
           '49 CFR 393.75(a): no tire flat or with an audible leak',
@@ -86,7 +92,7 @@ function itemHolds(
       hold(
         'insulation_showing',
         key,
-        `${label}: insulation is showing.`,
+        reason('hold.insulation_showing', { item: key, label }),
         'restricted',
         'no_perishable',
         'common practice: no perishable load until the damage is sealed watertight',
@@ -98,7 +104,7 @@ function itemHolds(
       hold(
         'hinge_not_locking',
         key,
-        `${label} does not lock.`,
+        reason('hold.hinge_not_locking', { item: key, label }),
         'restricted',
         'no_perishable',
         'common practice: a hinge that does not lock leaves an air gap at the door',
@@ -110,7 +116,7 @@ function itemHolds(
       hold(
         'fuel_leak',
         key,
-        `${label}: fuel is leaking.`,
+        reason('hold.fuel_leak', { item: key, label }),
         'out_of_service',
         null,
         '49 CFR 396.7: not operated in a condition likely to cause an accident or breakdown; common practice',
@@ -122,7 +128,7 @@ function itemHolds(
       hold(
         'item_unsafe',
         key,
-        `${label} was recorded unsafe.`,
+        reason('hold.item_unsafe', { item: key, label }),
         'out_of_service',
         null,
         '49 CFR 396.7: not operated in a condition likely to cause an accident or breakdown',
@@ -137,7 +143,14 @@ function preTripHolds(event: InspectionEvent, now: Date, policy: EnginePolicy): 
   const source = 'common practice: a reefer load needs a passed pre-trip; maximum age is terminal policy';
   if (!preTrip) {
     return [
-      hold('pre_trip_missing', null, 'No reefer pre-trip on record.', 'restricted', 'no_perishable', source),
+      hold(
+        'pre_trip_missing',
+        null,
+        reason('hold.pre_trip_missing', {}),
+        'restricted',
+        'no_perishable',
+        source,
+      ),
     ];
   }
   if (preTrip.result === 'failed') {
@@ -145,7 +158,7 @@ function preTripHolds(event: InspectionEvent, now: Date, policy: EnginePolicy): 
       hold(
         'pre_trip_failed',
         null,
-        'The last reefer pre-trip failed.',
+        reason('hold.pre_trip_failed', {}),
         'restricted',
         'no_perishable',
         source,
@@ -158,7 +171,10 @@ function preTripHolds(event: InspectionEvent, now: Date, policy: EnginePolicy): 
       hold(
         'pre_trip_stale',
         null,
-        `The last passed pre-trip is ${Math.floor(ageHours)} h old; policy allows ${policy.preTripMaxAgeHours} h.`,
+        reason('hold.pre_trip_stale', {
+          ageHours: Math.floor(ageHours),
+          maxHours: policy.preTripMaxAgeHours,
+        }),
         'restricted',
         'no_perishable',
         source,

@@ -32,7 +32,13 @@ export { assessFuel, eighthsToGallons, eighthsToLitres, expectedBurnGallons } fr
 export type { FuelInput } from './fuel';
 export { evaluateHolds } from './holds';
 export type { HoldInput } from './holds';
-export { NO_PERISHABLE_CAUTION, OUT_OF_SERVICE_CAUTION, YARD_ONLY_CAUTION } from './hold-parts';
+export {
+  NO_PERISHABLE_CAUTION,
+  OUT_OF_SERVICE_CAUTION,
+  UNDER_TRAILER_CAUTION,
+  YARD_ONLY_CAUTION,
+} from './hold-parts';
+export { eventRef, partyRef, reason } from './codes';
 export { blocksHook, decideHook } from './hook';
 export type { HookDecision } from './hook';
 export { answerGroup, safetyGaps, safetyGroups, safetyItems, statedObservation } from './safety';

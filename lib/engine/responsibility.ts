@@ -1,4 +1,5 @@
-import { custodianKey, custodianName, legsAlong } from './custody';
+import { eventRef, partyRef, reason } from './codes';
+import { custodianKey, legsAlong } from './custody';
 import type {
   Attribution,
   Custodian,
@@ -7,16 +8,13 @@ import type {
   ItemFinding,
   TimelineEvent,
 } from './types';
-import { conditionWords, describeEvent, listWords } from './wording';
 
 export interface AttributeInput {
   /** The same history passed to `compareInspection`, oldest first. */
   history: readonly TimelineEvent[];
   current: InspectionEvent;
   findings: readonly ItemFinding[];
-  /** IANA zone for dates in reasons, e.g. `America/Chicago`. */
-  timeZone: string;
-  /** How reasons name the terminal; default "the terminal". */
+  /** How reasons name the terminal; by default the reader's words for "the terminal". */
   terminalName?: string;
 }
 
@@ -44,11 +42,11 @@ function intervalFrom(k: number, history: readonly TimelineEvent[], current: Ins
  * hooking driver's pickup report protects them.
  */
 export function attributeFindings(input: AttributeInput): Attribution[] {
-  const { history, current, findings, timeZone } = input;
-  const terminal = input.terminalName ?? 'the terminal';
+  const { history, current, findings } = input;
+  const terminal = input.terminalName ?? null;
   const cache = new Map<number, Interval>();
   const out: Attribution[] = [];
-  const now = describeEvent(current, timeZone);
+  const now = eventRef(current);
 
   for (const f of findings) {
     const isDamage =
@@ -68,9 +66,7 @@ export function attributeFindings(input: AttributeInput): Attribution[] {
         confidence: null,
         legs: [],
         previousEventId: null,
-        reason:
-          `${f.label}: found ${conditionWords(f.current)} at ${now}; no earlier inspection of this item ` +
-          'is on record, so it cannot be attributed to anyone.',
+        reason: reason('attribution.none', { item: f.itemKey, label: f.label, current: f.current, now }),
       });
       continue;
     }
@@ -81,19 +77,18 @@ export function attributeFindings(input: AttributeInput): Attribution[] {
       cache.set(k, interval);
     }
     const before = history[k] as InspectionEvent;
-    const head =
-      `${f.label}: inspected ${conditionWords(f.previous)} at ${describeEvent(before, timeZone)}; ` +
-      `found ${conditionWords(f.current)} at ${now}; `;
-    const names = interval.candidates.map((c) => custodianName(c, terminal));
+    const head = {
+      item: f.itemKey,
+      label: f.label,
+      previous: f.previous,
+      current: f.current,
+      before: eventRef(before),
+      now,
+    };
+    const parties = interval.candidates.map((c) => partyRef(c, terminal));
 
     if (interval.candidates.length === 1) {
       const quick = f.previousInspection === 'quick' || current.type === 'walk';
-      let reason = `${head}only ${names[0]} held the trailer between.`;
-      if (current.type === 'hook') {
-        reason += " A hook is the driver's pickup report, so this is not charged to the hooking driver.";
-      }
-      if (quick)
-        reason += ' One of the two inspections was a quick yard-walk check, so confidence is medium.';
       out.push({
         ...base,
         status: 'single',
@@ -102,13 +97,15 @@ export function attributeFindings(input: AttributeInput): Attribution[] {
         confidence: quick ? 'medium' : 'high',
         legs: interval.legs,
         previousEventId: before.id,
-        reason,
+        reason: reason('attribution.single', {
+          ...head,
+          holder: parties[0],
+          atHook: current.type === 'hook',
+          quick,
+        }),
       });
       continue;
     }
-    const gap = interval.legs.some((l) => l.isUnrecordedChange)
-      ? ' Custody changed hands at least once without a Hitchmark handoff.'
-      : '';
     out.push({
       ...base,
       status: 'several',
@@ -117,9 +114,11 @@ export function attributeFindings(input: AttributeInput): Attribution[] {
       confidence: null,
       legs: interval.legs,
       previousEventId: before.id,
-      reason:
-        `${head}${listWords(names)} held the trailer between, so no single party is responsible; ` +
-        `the clerk decides.${gap}`,
+      reason: reason('attribution.several', {
+        ...head,
+        holders: parties,
+        unrecorded: interval.legs.some((l) => l.isUnrecordedChange),
+      }),
     });
   }
   return out;

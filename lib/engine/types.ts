@@ -8,3 +8,4 @@ export type * from './types/checklist';
 export type * from './types/timeline';
 export type * from './types/results';
 export type * from './types/policy-yard';
+export type * from './types/codes';

@@ -57,3 +57,31 @@ export function previousLocalDay(at: Date, timeZone: string): string {
     'yyyy-MM-dd',
   );
 }
+
+const stampCache = new Map<string, Intl.DateTimeFormat>();
+
+/**
+ * `at` in `timeZone` as the engine's reasons write it, day first and 24 h with no zone name:
+ * `3 Nov 2026 14:05` in English, `3 nov 2026 14:05` in Spanish.
+ */
+export function formatStamp(at: Date | string | number, timeZone: string, locale = 'en'): string {
+  const key = `${locale}|${timeZone}`;
+  let f = stampCache.get(key);
+  if (!f) {
+    f = new Intl.DateTimeFormat(locale, {
+      day: 'numeric',
+      month: 'short',
+      year: 'numeric',
+      hour: '2-digit',
+      minute: '2-digit',
+      hourCycle: 'h23',
+      timeZone,
+    });
+    stampCache.set(key, f);
+  }
+  const part = (type: Intl.DateTimeFormatPartTypes, parts: Intl.DateTimeFormatPart[]) =>
+    parts.find((p) => p.type === type)?.value ?? '';
+  const parts = f.formatToParts(new Date(at));
+  const month = part('month', parts).replace(/\.$/, '');
+  return `${part('day', parts)} ${month} ${part('year', parts)} ${part('hour', parts)}:${part('minute', parts)}`;
+}

@@ -1,6 +1,6 @@
 // Which fields of a stored handoff the hash chain covers. The submit service hashes with this,
 // and the desk re-verifies a trailer's chain with the same function, so the two never drift.
-import type { HashableHandoff } from './hash';
+import { PERISHABLE_HASH_VERSION, type HashableHandoff } from './hash';
 
 export type HandoffHashRow = {
   id: string;
@@ -23,6 +23,8 @@ export type HandoffHashRow = {
   pretripResult: string | null;
   pretripAt: Date | null;
   note: string | null;
+  /** A hook's answer to "is the load perishable?": hashed from hash_version 3 on. */
+  isLoadPerishable?: boolean | null;
   occurredAt: Date;
   correctsHandoffId: string | null;
   /** Absent or null leaves the hash of a record without one as it was. */
@@ -39,11 +41,17 @@ export type HandoffItemHashRow = {
   details?: Record<string, boolean | string> | null;
 };
 
-/** The hash input of one handoff from its stored rows and the SHA-256 of its stored photos. */
+/**
+ * The hash input of one handoff from its stored rows and the SHA-256 of its stored photos, as
+ * its hash_version defines it: from version 3 on the content always holds `isLoadPerishable`
+ * (null included), so a version-3 input never equals a version-2 one and relabelling a row's
+ * version cannot drop the answer from the hash.
+ */
 export function hashableFromRows(
   h: HandoffHashRow,
   items: HandoffItemHashRow[],
   photoSha256s: string[],
+  hashVersion: number,
 ): HashableHandoff {
   return {
     content: {
@@ -67,6 +75,7 @@ export function hashableFromRows(
       pretripResult: h.pretripResult,
       pretripAt: h.pretripAt ? h.pretripAt.toISOString() : null,
       note: h.note,
+      ...(hashVersion >= PERISHABLE_HASH_VERSION ? { isLoadPerishable: h.isLoadPerishable ?? null } : {}),
       occurredAt: h.occurredAt.toISOString(),
       correctsHandoffId: h.correctsHandoffId,
       ...(h.correctionReason ? { correctionReason: h.correctionReason } : {}),

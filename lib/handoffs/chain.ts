@@ -45,7 +45,7 @@ export function checkTrailerChain(records: ChainRecord[], chainKey: string): Tra
       storedHash: row.contentHash,
       storedPrevHash: row.prevHash,
       hashVersion: row.hashVersion,
-      recomputed: hashableFromRows(row, items, hashedPhotos(photos)),
+      recomputed: hashableFromRows(row, items, hashedPhotos(photos), row.hashVersion),
     })),
     chainKey,
   );

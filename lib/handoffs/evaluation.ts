@@ -6,6 +6,7 @@ import {
   compareInspection,
   damageFindings,
   evaluateHolds,
+  reason,
   type Attribution,
   type Checklist,
   type EnginePolicy,
@@ -13,8 +14,10 @@ import {
   type HandoffEvent,
   type Hold,
   type ItemFinding,
+  type Reason,
   type TimelineEvent,
 } from '@/lib/engine';
+import { englishReason } from '@/lib/i18n/reasons';
 import { isChargeableDamage, isUnattributedDamage, NOT_ATTRIBUTED_NOTE } from './damage';
 
 export type FindingRow = {
@@ -27,6 +30,9 @@ export type FindingRow = {
   responsibleParty: string | null;
   confidence: 'high' | 'medium' | 'none' | null;
   candidates: unknown[] | null;
+  /** Why, as a code with parameters: stored, and rendered in each reader's language. */
+  coded: Reason;
+  /** The English words of `coded`, receipted with the row at the time. */
   reason: string;
   isDamage: boolean;
 };
@@ -45,13 +51,29 @@ export type Evaluation = {
   proposedCarrierId: string | null;
   /** `NOT_ATTRIBUTED_NOTE` when the case holds damage with no earlier inspection, else null. */
   attributionNote: string | null;
+  /** The attribution note as a code (`case.not_attributed`), else null. */
+  attributionNoteCoded: Reason | null;
 };
 
-const frac = (n: number) => `${n}/8`;
-const gal = (n: number) => `${Math.round(n * 10) / 10} gal`;
+const gal = (n: number) => Math.round(n * 10) / 10;
 
-function attributionRow(f: ItemFinding, a: Attribution | undefined, terminalName: string): FindingRow {
+function attributionRow(
+  f: ItemFinding,
+  a: Attribution | undefined,
+  terminalName: string,
+  timeZone: string,
+): FindingRow {
   const responsible = a?.responsible ?? null;
+  const coded: Reason =
+    a?.reason ??
+    (f.finding === 'repaired'
+      ? reason('finding.repaired', {
+          item: f.itemKey,
+          label: f.label,
+          previous: f.previous,
+          current: f.current,
+        })
+      : reason('finding.other', { item: f.itemKey, label: f.label, kind: f.finding }));
   return {
     itemKey: f.itemKey,
     kind: f.finding,
@@ -66,16 +88,13 @@ function attributionRow(f: ItemFinding, a: Attribution | undefined, terminalName
       : null,
     confidence: a ? (a.confidence ?? 'none') : null,
     candidates: a ? a.candidates : null,
-    reason:
-      a?.reason ??
-      (f.finding === 'repaired'
-        ? `${f.label}: was ${f.previous}, now ${f.current}: repaired since the last inspection.`
-        : `${f.label}: ${f.finding}.`),
+    coded,
+    reason: englishReason(coded, timeZone),
     isDamage: isChargeableDamage(f.finding, f.current) || isUnattributedDamage(f.finding, f.current),
   };
 }
 
-function ruleRow(itemKey: string, kind: string, reason: string): FindingRow {
+function ruleRow(itemKey: string, kind: string, coded: Reason, timeZone: string): FindingRow {
   return {
     itemKey,
     kind,
@@ -86,7 +105,8 @@ function ruleRow(itemKey: string, kind: string, reason: string): FindingRow {
     responsibleParty: null,
     confidence: null,
     candidates: null,
-    reason,
+    coded,
+    reason: englishReason(coded, timeZone),
     isDamage: false,
   };
 }
@@ -103,7 +123,7 @@ export function evaluateHandoff(input: {
 }): Evaluation {
   const { checklist, history, current, policy, now, timeZone, terminalName } = input;
   const compared = compareInspection({ checklist, history, current });
-  const attributions = attributeFindings({ history, current, findings: compared, timeZone, terminalName });
+  const attributions = attributeFindings({ history, current, findings: compared, terminalName });
   const byKey = new Map(attributions.map((a) => [a.itemKey, a]));
   const fuel =
     checklist.spec.kind === 'reefer'
@@ -115,7 +135,7 @@ export function evaluateHandoff(input: {
   for (const f of compared) {
     const isFirstDamage = f.finding === 'first_record' && f.current !== 'ok';
     if (f.finding === 'new' || f.finding === 'worse' || f.finding === 'repaired' || isFirstDamage) {
-      rows.push(attributionRow(f, byKey.get(f.itemKey), terminalName));
+      rows.push(attributionRow(f, byKey.get(f.itemKey), terminalName, timeZone));
     }
   }
   if (fuel?.isShort) {
@@ -123,8 +143,16 @@ export function evaluateHandoff(input: {
       ruleRow(
         'readings.fuel',
         'fuel_short',
-        `Fuel ${frac(fuel.eighths)} (${gal(fuel.gallons)} of ${fuel.tankGallons} gal); policy asks ${frac(fuel.requiredEighths ?? 8)} ` +
-          `at a ${current.type}: ${frac(fuel.shortfallEighths)} short (${gal(fuel.shortfallGallons)}).`,
+        reason('finding.fuel_short', {
+          eighths: fuel.eighths,
+          gallons: gal(fuel.gallons),
+          tankGallons: fuel.tankGallons,
+          requiredEighths: fuel.requiredEighths ?? 8,
+          eventType: current.type,
+          shortfallEighths: fuel.shortfallEighths,
+          shortfallGallons: gal(fuel.shortfallGallons),
+        }),
+        timeZone,
       ),
     );
   }
@@ -133,14 +161,18 @@ export function evaluateHandoff(input: {
       ruleRow(
         'readings.fuel',
         'fuel_unexplained_drop',
-        `Fuel fell ${gal(fuel.dropGallons ?? 0)} since the last reading; ${fuel.engineHoursRun} engine hours explain ` +
-          `${gal(fuel.expectedBurnGallons ?? 0)}. Possible leak or theft: check the tank.`,
+        reason('finding.fuel_unexplained_drop', {
+          dropGallons: gal(fuel.dropGallons ?? 0),
+          engineHours: fuel.engineHoursRun ?? 0,
+          expectedBurnGallons: gal(fuel.expectedBurnGallons ?? 0),
+        }),
+        timeZone,
       ),
     );
   }
   for (const h of holds) {
     if (h.ruleKey === 'pin_not_engaged' || h.ruleKey === 'spare_unusable')
-      rows.push(ruleRow(h.itemKey ?? '', h.ruleKey, h.reason));
+      rows.push(ruleRow(h.itemKey ?? '', h.ruleKey, h.reason, timeZone));
   }
 
   const damage = damageFindings(compared).filter((f) => isChargeableDamage(f.finding, f.current));
@@ -158,6 +190,7 @@ export function evaluateHandoff(input: {
   // damage nobody can be charged for leaves the case with no single carrier to propose
   const proposedCarrierId = parties.size === 1 && only && !unattributedKeys.length ? only : null;
   const attributionNote = unattributedKeys.length ? NOT_ATTRIBUTED_NOTE : null;
+  const attributionNoteCoded = unattributedKeys.length ? reason('case.not_attributed', {}) : null;
   return {
     compared,
     attributions,
@@ -168,5 +201,6 @@ export function evaluateHandoff(input: {
     unattributedKeys,
     proposedCarrierId,
     attributionNote,
+    attributionNoteCoded,
   };
 }

@@ -38,10 +38,16 @@ export function sha256Hex(data: string | Uint8Array): string {
   return createHash('sha256').update(data).digest('hex');
 }
 
-/** The hash_version the submit writes: HMAC-SHA-256 with the chain key. */
-export const KEYED_HASH_VERSION = 2;
 /** Rows linked before the chain was keyed: plain SHA-256. */
 export const UNKEYED_HASH_VERSION = 1;
+/** HMAC-SHA-256 with the chain key, before the hook's perishable answer was hashed. */
+export const KEYED_HASH_VERSION = 2;
+/** HMAC-SHA-256 with the chain key; the content also holds the hook's answer to "is the load perishable?". */
+export const PERISHABLE_HASH_VERSION = 3;
+/** The hash_version the submit writes now. Older keyed rows keep verifying with their own version. */
+export const WRITTEN_HASH_VERSION = PERISHABLE_HASH_VERSION;
+/** The versions whose links are keyed, and so can be vouched for. */
+export const isKeyedHashVersion = (v: number) => v === KEYED_HASH_VERSION || v === PERISHABLE_HASH_VERSION;
 
 /** The bytes a link covers; items and photo hashes are sorted so their order does not matter. */
 function hashInput(h: HashableHandoff): string {
@@ -50,7 +56,7 @@ function hashInput(h: HashableHandoff): string {
   return canonicalJson({ content: h.content, items, photoSha256s: photos, prevHash: h.prevHash });
 }
 
-/** The keyed content hash of one handoff (hash_version 2). */
+/** The keyed content hash of one handoff (hash_version 2 or 3: the content differs, the HMAC does not). */
 export function handoffContentHash(h: HashableHandoff, chainKey: string): string {
   return hmacSha256Hex(chainKey, hashInput(h));
 }
@@ -88,7 +94,7 @@ export function verifyChain(links: ChainLink[], chainKey: string): ChainCheck {
     if (link.storedPrevHash !== prev || link.recomputed.prevHash !== prev)
       return { ok: false, brokenAt: link.id, why: 'link_broken' };
     if (
-      link.hashVersion !== KEYED_HASH_VERSION ||
+      !isKeyedHashVersion(link.hashVersion) ||
       handoffContentHash(link.recomputed, chainKey) !== link.storedHash
     ) {
       const isOldLink =

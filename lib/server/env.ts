@@ -37,6 +37,13 @@ const schema = z.object({
   MAIL_FROM: z.string().default('Hitchmark <no-reply@hitchmark.example>'),
   /** '0': this server runs no job worker (e-mail, cleanup, anchors); another process must. */
   HM_JOB_WORKER: z.enum(['0', '1']).default('1'),
+  /** The job worker's fixed id (default: host name and port); one live server per id. */
+  HM_JOB_WORKER_ID: z
+    .string()
+    .regex(/^[\w.-]{1,100}$/, 'HM_JOB_WORKER_ID: letters, digits, dot, dash, underscore')
+    .optional(),
+  /** The port `next start` listens on (the framework sets it). */
+  PORT: z.coerce.number().int().min(1).max(65535).optional(),
 });
 
 export type Env = z.infer<typeof schema>;

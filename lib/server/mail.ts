@@ -44,6 +44,8 @@ export async function sendOutboxEmail(
       to: email.toAddress,
       ...(email.ccAddress ? { cc: email.ccAddress } : {}),
       subject: email.subject,
+      // one Message-ID per outbox row, the same on every attempt: a repeat is recognisable as one
+      messageId: outboxMessageId(email.id, env().MAIL_FROM),
       text: email.textBody,
       html: email.htmlBody ?? undefined,
     });
@@ -56,6 +58,12 @@ export async function sendOutboxEmail(
   }
   await markEmailSent(email.id);
   return 'sent';
+}
+
+/** The Message-ID (RFC 5322 §3.6.4) of an outbox e-mail: its row id at the sender's domain. */
+export function outboxMessageId(emailId: string, mailFrom: string): string {
+  const domain = /@([A-Za-z0-9.-]+)/.exec(mailFrom)?.[1] ?? 'hitchmark.invalid';
+  return `<${emailId}@${domain}>`;
 }
 
 /** For tests: forget the cached transport (e.g. after changing SMTP_PORT and calling reloadEnv()). */

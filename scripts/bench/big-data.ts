@@ -15,7 +15,7 @@ import { pipeline } from 'node:stream/promises';
 import { Readable } from 'node:stream';
 import { allOkObservations } from '@/lib/handoffs/all-ok';
 import { hashableFromRows, type HandoffHashRow } from '@/lib/handoffs/canonical';
-import { handoffContentHash, KEYED_HASH_VERSION } from '@/lib/handoffs/hash';
+import { handoffContentHash, WRITTEN_HASH_VERSION } from '@/lib/handoffs/hash';
 import { normalizeItems, type ItemRowInput } from '@/lib/handoffs/items';
 import { CROCKFORD } from '@/lib/handoffs/verification-code';
 import { checklistOf, type TrailerShape } from '@/lib/trailers/checklist';
@@ -559,7 +559,10 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
         ]);
       }
       if (openHold && k < n - 1) openHold = null;
-      const contentHash = handoffContentHash(hashableFromRows(row, items, shas), CHAIN_KEY);
+      const contentHash = handoffContentHash(
+        hashableFromRows(row, items, shas, WRITTEN_HASH_VERSION),
+        CHAIN_KEY,
+      );
       H.push([
         id,
         t.id,
@@ -587,7 +590,7 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
         row.verificationCode,
         prevHash,
         contentHash,
-        KEYED_HASH_VERSION,
+        WRITTEN_HASH_VERSION,
         at,
       ]);
       for (const i of items)

@@ -72,6 +72,7 @@ export const PAGES: PageRow[] = [
     expect: all(NOT_FOUND),
     note: 'a forged link',
   },
+  { file: 'app/(app)/account/page.tsx', url: () => '/account', expect: only(EVERY_ROLE) },
   { file: 'app/(app)/admin/page.tsx', url: () => '/admin', expect: only(['admin']) },
   { file: 'app/(app)/admin/rates/page.tsx', url: () => '/admin/rates', expect: only(['admin']) },
   { file: 'app/(app)/admin/yard/page.tsx', url: () => '/admin/yard', expect: only(['admin']) },
@@ -256,6 +257,9 @@ export const ACTIONS: ActionRow[] = [
   { file: 'app/(auth)/actions.ts', name: 'signInAction', expect: every('form') },
   // everyone, signed in or not, ends on the sign-in page
   { file: 'app/(app)/_components/sign-out-action.ts', name: 'signOutAction', expect: every('signin') },
+  { file: 'app/(app)/account/actions.ts', name: 'changePinAction', expect: act([...DRIVERS]) },
+  { file: 'app/(app)/account/actions.ts', name: 'changePasswordAction', expect: act(YARD) },
+  { file: 'app/(app)/admin/actions.ts', name: 'changeUserAccessAction', expect: act(ADMIN) },
   { file: 'app/(app)/admin/rates/actions.ts', name: 'addRateAction', expect: act(ADMIN) },
   { file: 'app/(app)/admin/rates/actions.ts', name: 'changeRateAction', expect: act(ADMIN) },
   { file: 'app/(app)/admin/yard/actions.ts', name: 'createRowAction', expect: act(ADMIN) },

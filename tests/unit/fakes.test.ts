@@ -75,7 +75,7 @@ function smtpGreeting(port: number): Promise<string> {
 }
 
 /** Sends one whole message through SMTP. */
-function sendWholeMessage(port: number, to: string): Promise<void> {
+function sendWholeMessage(port: number, to: string, messageId?: string): Promise<void> {
   return new Promise((resolve, reject) => {
     const s = net.connect(port, '127.0.0.1');
     const script = [
@@ -83,7 +83,8 @@ function sendWholeMessage(port: number, to: string): Promise<void> {
       'MAIL FROM:<desk@hitchmark.example>',
       `RCPT TO:<${to}>`,
       'DATA',
-      'Subject: after the reset\r\n\r\nStill delivered.\r\n.',
+      (messageId ? `Message-ID: ${messageId}\r\n` : '') +
+        'Subject: after the reset\r\n\r\nStill delivered.\r\n.',
       'QUIT',
     ];
     let step = 0;
@@ -166,5 +167,32 @@ describe('local fakes keep running when a client resets mid-send', () => {
     expect(await got.text()).toBe('stored after the reset');
     // (s3rver keeps whatever part of a dropped PUT arrived: completion's size and hash checks catch it)
     expect(await smtpGreeting(ports.smtp)).toMatch(/^220 /);
+  });
+
+  it('the SMTP port goes down and up on request; the inbox keeps its messages and lists their Message-ID', async () => {
+    const inboxUrl = `http://127.0.0.1:${ports.http}`;
+    await sendWholeMessage(ports.smtp, 'before@hitchmark.example', '<one@hitchmark.example>');
+    const down = await fetch(`${inboxUrl}/smtp/stop`, { method: 'POST' });
+    expect(await down.json()).toEqual({ smtp: 'down' });
+    // a sender now finds the port closed (nodemailer's "connection refused")
+    await expect(smtpGreeting(ports.smtp)).rejects.toMatchObject({ code: 'ECONNREFUSED' });
+    // S3 is another fake: it keeps answering
+    const put = await fetch(`http://127.0.0.1:${ports.s3}/${bucket}/photos/while-smtp-down.txt`, {
+      method: 'PUT',
+      body: 'x',
+    });
+    expect(put.status).toBe(200);
+
+    const up = await fetch(`${inboxUrl}/smtp/start`, { method: 'POST' });
+    expect(await up.json()).toEqual({ smtp: 'up' });
+    expect(await smtpGreeting(ports.smtp)).toMatch(/^220 /);
+    await sendWholeMessage(ports.smtp, 'after@hitchmark.example', '<two@hitchmark.example>');
+    const all = (await (await fetch(`${inboxUrl}/messages`)).json()) as { to: string[]; messageId: string }[];
+    expect(
+      all.filter((m) => m.to[0] !== 'clerk@hitchmark.example').map((m) => [m.to[0], m.messageId]),
+    ).toEqual([
+      ['before@hitchmark.example', '<one@hitchmark.example>'],
+      ['after@hitchmark.example', '<two@hitchmark.example>'],
+    ]);
   });
 });

@@ -1,14 +1,20 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { getTranslations } from 'next-intl/server';
+import { ActionForm } from '@/app/_components/action-form';
+import { Select } from '@/app/_components/field';
 import { listCarriers, listUsers } from '@/db/queries/admin';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
+import { STAFF_ROLES } from '@/lib/validation/account';
+import { changeUserAccessAction } from './actions';
 
 export const metadata: Metadata = { title: 'Admin' };
 
 export default async function AdminPage() {
-  await requireUser(SECTION_ROLES.admin);
+  const admin = await requireUser(SECTION_ROLES.admin);
   const [people, carrierRows] = await Promise.all([listUsers(), listCarriers()]);
+  const t = await getTranslations('Account');
   return (
     <div className="space-y-6">
       <h1 className="text-gate-xl font-bold">Admin</h1>
@@ -34,15 +40,46 @@ export default async function AdminPage() {
       </nav>
       <section aria-labelledby="people">
         <h2 id="people" className="text-gate-lg font-bold">
-          People and roles
+          {t('people')}
         </h2>
+        <p className="text-gate-sm text-ink-soft">{t('accessNote')}</p>
         <ul className="mt-2 divide-y divide-paper-line rounded-xl bg-paper">
           {people.map((u) => (
-            <li key={u.id} className="flex flex-wrap justify-between gap-2 p-3 text-gate-sm">
-              <span className="font-bold">{u.name}</span>
-              <span>
-                {u.role} · {u.email ?? u.driverNumber} {u.carrierScac ? `· ${u.carrierScac}` : ''}
-              </span>
+            <li key={u.id} className="space-y-2 p-3 text-gate-sm">
+              <div className="flex flex-wrap justify-between gap-2">
+                <span className="font-bold">
+                  {u.name}
+                  {u.id === admin.id ? ` (${t('you')})` : ''}
+                </span>
+                <span>
+                  {t(`roles.${u.role}`)} · {u.email ?? u.driverNumber}{' '}
+                  {u.carrierScac ? `· ${u.carrierScac}` : ''}
+                  {u.isActive ? '' : ` · ${t('off')}`}
+                </span>
+              </div>
+              {u.id === admin.id ? null : (
+                <ActionForm
+                  action={changeUserAccessAction}
+                  ariaLabel={`${t('role')}: ${u.name}`}
+                  hidden={{ userId: u.id }}
+                  submitLabel={t('saveAccess')}
+                  pendingLabel={t('saving')}
+                  variant="secondary"
+                  className="flex flex-wrap items-end gap-3"
+                >
+                  <Select label={t('role')} name="role" id={`role-${u.id}`} defaultValue={u.role}>
+                    {(u.role === 'driver' ? (['driver'] as const) : STAFF_ROLES).map((r) => (
+                      <option key={r} value={r}>
+                        {t(`roles.${r}`)}
+                      </option>
+                    ))}
+                  </Select>
+                  <label className="flex min-h-tap items-center gap-2 text-gate">
+                    <input type="checkbox" name="isActive" defaultChecked={u.isActive} className="h-6 w-6" />
+                    {t('active')}
+                  </label>
+                </ActionForm>
+              )}
             </li>
           ))}
         </ul>

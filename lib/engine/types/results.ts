@@ -1,5 +1,6 @@
 /** What the engine returns: findings, custody legs, attributions, fuel, holds. */
 import type { Condition, ZoneKey } from './checklist';
+import type { Reason } from './codes';
 import type { Custodian, InspectionKind } from './timeline';
 
 // ---------- Comparison ----------
@@ -58,8 +59,8 @@ export interface Attribution {
   legs: CustodyLeg[];
   previousEventId: string | null;
   currentEventId: string;
-  /** A sentence a clerk can read to a carrier. */
-  reason: string;
+  /** Why, as a code with parameters (put into words in the reader's language by lib/i18n/reasons.ts). */
+  reason: Reason<'attribution.none' | 'attribution.single' | 'attribution.several'>;
 }
 
 // ---------- Fuel ----------
@@ -95,11 +96,12 @@ export type Restriction = 'no_perishable' | 'yard_only';
 export interface Hold {
   ruleKey: string;
   itemKey: string | null;
-  reason: string;
+  /** Why the hold is placed, as a code with parameters. */
+  reason: Reason;
   severity: HoldSeverity;
   restriction: Restriction | null;
   /** Where the rule comes from: a regulation, or `common practice`, or `terminal policy`. */
   source: string;
-  /** Safety caution shown with the hold (always set for out-of-service holds). */
-  caution: string | null;
+  /** Safety caution shown with the hold, as a code (always set for out-of-service holds). */
+  caution: Reason | null;
 }

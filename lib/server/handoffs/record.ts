@@ -87,7 +87,7 @@ export async function recordHandoff(
   if (before?.outcome === 'refused') {
     abort(
       refuse('conflict', HOOK_WORDS.refused(trailer.unitNumber, before.because, false), undefined, {
-        holds: holdReasons(before.holds),
+        holds: holdReasons(before.holds, terminal.timeZone),
       }),
     );
   }
@@ -149,8 +149,9 @@ export async function recordHandoff(
     // the holds this record found travel with the refusal: submit.ts places them on the trailer
     abort(
       refuse('conflict', HOOK_WORDS.refused(trailer.unitNumber, found.because, true), undefined, {
-        holds: holdReasons(found.holds),
+        holds: holdReasons(found.holds, terminal.timeZone),
         found: ev.holds,
+        timeZone: terminal.timeZone,
       }),
     );
   }

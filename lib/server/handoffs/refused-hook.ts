@@ -6,14 +6,15 @@ import { db } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { listOpenHoldRows, lockTrailer } from '@/db/queries/handoff-submit';
 import { insertHolds } from '@/db/queries/handoff-writes';
-import type { Hold } from '@/lib/engine';
+import { reason, type Hold } from '@/lib/engine';
 import { holdsNotYetOpen, type HoldReason } from '@/lib/handoffs/holds';
+import { englishReason } from '@/lib/i18n/reasons';
 import { refuse, type Refusal } from '@/lib/result';
 import type { HandoffSubmitInput } from '@/lib/validation/handoffs';
 import type { HandoffActor } from './types';
 
 /** What record.ts puts in a refused hook's detail; only `holds` goes back to the caller. */
-type HookDetail = { holds: HoldReason[]; found?: Hold[] };
+type HookDetail = { holds: HoldReason[]; found?: Hold[]; timeZone?: string };
 
 export function isRefusedHook(r: Refusal): r is Refusal & { detail: HookDetail } {
   return Array.isArray((r.detail as Partial<HookDetail> | undefined)?.holds);
@@ -40,6 +41,7 @@ export async function settleRefusedHook(
     if (!r.detail.found?.length) return;
     await lockTrailer(tx, input.trailerId, { noWait: false });
     const fresh = holdsNotYetOpen(r.detail.found, await listOpenHoldRows(tx, input.trailerId));
+    const zone = r.detail.timeZone ?? 'UTC';
     await insertHolds(
       tx,
       fresh.map((h) => ({
@@ -49,9 +51,9 @@ export async function settleRefusedHook(
         restriction: h.restriction,
         ruleKey: h.ruleKey,
         itemKey: h.itemKey,
-        reason: `${h.reason} (found at a refused hook)`,
+        reason: englishReason(reason('hold.at_refused_hook', { reason: h.reason }), zone),
         source: h.source,
-        caution: h.caution,
+        caution: h.caution ? englishReason(h.caution, zone) : null,
         placedById: actor.id,
         placedAt: now,
       })),

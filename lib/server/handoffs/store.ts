@@ -17,8 +17,9 @@ import {
   updateTrailer,
 } from '@/db/queries/handoff-writes';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
-import { handoffContentHash, KEYED_HASH_VERSION } from '@/lib/handoffs/hash';
+import { handoffContentHash, WRITTEN_HASH_VERSION } from '@/lib/handoffs/hash';
 import { holdsNotYetOpen } from '@/lib/handoffs/holds';
+import { englishReason } from '@/lib/i18n/reasons';
 import { receiptRecipients } from '@/lib/handoffs/receipt';
 import { handoffRow, readingsOf, trailerAfter } from '@/lib/handoffs/submission';
 import { newVerificationCode } from '@/lib/handoffs/verification-code';
@@ -51,13 +52,16 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
     prevHash: await latestContentHash(tx, trailer.id),
   });
   const shas = c.photos.map((p) => p.sha256);
-  const contentHash = handoffContentHash(hashableFromRows(row, items.rows, shas), chainKey());
+  const hashed = { ...row, isLoadPerishable: c.isLoadPerishable };
+  const contentHash = handoffContentHash(
+    hashableFromRows(hashed, items.rows, shas, WRITTEN_HASH_VERSION),
+    chainKey(),
+  );
   await insertHandoff(tx, {
-    ...row,
+    ...hashed,
     contentHash,
-    hashVersion: KEYED_HASH_VERSION,
+    hashVersion: WRITTEN_HASH_VERSION,
     requestHash: c.requestHash,
-    isLoadPerishable: c.isLoadPerishable,
   });
   await insertHandoffItems(
     tx,
@@ -122,9 +126,9 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
       restriction: h.restriction,
       ruleKey: h.ruleKey,
       itemKey: h.itemKey,
-      reason: h.reason,
+      reason: englishReason(h.reason, terminal.timeZone),
       source: h.source,
-      caution: h.caution,
+      caution: h.caution ? englishReason(h.caution, terminal.timeZone) : null,
       placedById: actor.id,
       placedAt: now,
     })),
@@ -171,7 +175,11 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
       findings: ev.rows,
       holds: [
         ...c.openHolds.map((h) => ({ severity: h.severity, restriction: h.restriction, reason: h.reason })),
-        ...newHolds,
+        ...newHolds.map((h) => ({
+          severity: h.severity,
+          restriction: h.restriction,
+          reason: englishReason(h.reason, terminal.timeZone),
+        })),
       ],
       photos: c.photos.map((p) => ({ id: p.id, itemKey: null })),
     });

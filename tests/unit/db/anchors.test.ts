@@ -116,7 +116,7 @@ describe('daily chain anchors', () => {
       for (const [i, rec] of before.entries()) {
         const row = { ...rec.row, prevHash, driverName: i === 0 ? 'Someone Else' : rec.row.driverName };
         const contentHash = handoffContentHash(
-          { ...hashableFromRows(row, rec.items, hashedPhotos(rec.photos)), prevHash },
+          { ...hashableFromRows(row, rec.items, hashedPhotos(rec.photos), rec.row.hashVersion), prevHash },
           chainKey(),
         );
         await owner.query(

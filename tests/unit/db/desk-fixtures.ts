@@ -137,7 +137,7 @@ export async function makeDeskFixture() {
         note: null,
       },
     ];
-    const contentHash = handoffContentHash(hashableFromRows(row, items, []), chainKey());
+    const contentHash = handoffContentHash(hashableFromRows(row, items, [], KEYED_HASH_VERSION), chainKey());
     await db.insert(handoffs).values({ ...row, contentHash, hashVersion: KEYED_HASH_VERSION });
     await db.insert(handoffItems).values(items.map((i) => ({ ...i, handoffId: row.id })));
     prevHash = contentHash;

@@ -110,7 +110,7 @@ describe('evidence that holds up (real database, app role and owner role)', () =
     expect(t.status).toBe('in_yard');
     expect((await verifyTrailerChain(trailer.id)).check).toEqual({ ok: true, count: 1 });
     const [h] = await db.select().from(handoffs).where(eq(handoffs.id, id));
-    expect(h.hashVersion).toBe(2);
+    expect(h.hashVersion).toBe(3); // keyed, with the perishable answer in the hashed content
   });
 
   it('an edited row (owner, trigger disabled) is detected: /verify says it does not match and shows none of the new values', async () => {
@@ -171,7 +171,7 @@ describe('evidence that holds up (real database, app role and owner role)', () =
             prevHash: prev,
             sealNumber: r.row.id === first.id ? 'FORGED-1' : r.row.sealNumber,
           };
-          const hash = unkeyedContentHash(hashableFromRows(row, r.items, []));
+          const hash = unkeyedContentHash(hashableFromRows(row, r.items, [], hashVersion));
           await owner.query(
             'update handoffs set seal_number = $2, prev_hash = $3, content_hash = $4, hash_version = $5 where id = $1',
             [r.row.id, row.sealNumber, prev, hash, hashVersion],

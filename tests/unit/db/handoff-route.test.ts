@@ -166,7 +166,7 @@ describe('POST /api/handoffs answers bad input with 4xx, never 500', () => {
     expect(body.message).toBe(
       `Trailer ${trailer.unitNumber} is restricted to yard moves only and may not leave the gate.`,
     );
-    expect(body.holds).toEqual([
+    expect(body.holds).toMatchObject([
       {
         reason: 'Spare tire is missing.',
         severity: 'restricted',

@@ -1,4 +1,3 @@
-import { OUT_OF_SERVICE_CAUTION } from '@/lib/engine';
 import { randomUUID } from 'node:crypto';
 import { and, eq, inArray, isNotNull, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -21,6 +20,8 @@ import {
 } from '@/db/schema';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { handoffContentHash, verifyChain } from '@/lib/handoffs/hash';
+import { OUT_OF_SERVICE_CAUTION } from '@/lib/engine';
+import { renderCoded } from '@/lib/i18n/reasons';
 import { isRefusal } from '@/lib/result';
 import { chainKey } from '@/lib/server/env';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
@@ -177,12 +178,12 @@ describe('handoff submit service (real database)', () => {
       now: at(2),
     });
     expect(e.code).toBe('conflict');
-    expect(e.detail?.holds).toEqual([
+    expect(e.detail?.holds).toMatchObject([
       {
         reason: 'Tandem locking pin, left rear is not engaged.',
         severity: 'out_of_service',
         restriction: null,
-        caution: OUT_OF_SERVICE_CAUTION,
+        caution: renderCoded(OUT_OF_SERVICE_CAUTION, 'en', 'UTC'),
       },
     ]);
     const [t] = await db.select().from(trailers).where(eq(trailers.id, trailer.id));
@@ -205,9 +206,17 @@ describe('handoff submit service (real database)', () => {
       holds: [
         {
           reason: 'Tandem locking pin, right front is not engaged.',
+          reasonCoded: {
+            code: 'hold.pin_not_engaged',
+            params: {
+              item: 'undercarriage.tandem_pin.right_front',
+              label: 'Tandem locking pin, right front',
+            },
+          },
           severity: 'out_of_service',
           restriction: null,
-          caution: OUT_OF_SERVICE_CAUTION,
+          caution: renderCoded(OUT_OF_SERVICE_CAUTION, 'en', 'UTC'),
+          cautionCoded: OUT_OF_SERVICE_CAUTION,
         },
       ],
     });
@@ -302,6 +311,7 @@ describe('handoff submit service (real database)', () => {
             r,
             it,
             ph.map((x) => x.sha256),
+            r.hashVersion,
           ),
         };
       }),

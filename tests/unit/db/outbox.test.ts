@@ -27,7 +27,7 @@ function freePort(): Promise<number> {
 }
 
 /** An SMTP inbox; while `refuse` holds an address, RCPT TO that address gets 550 (RFC 5321 §4.2.2: mailbox unavailable). */
-function startInbox(port: number, received: string[], refuse: Set<string>) {
+function startInbox(port: number, received: string[], refuse: Set<string>, messageIds: string[] = []) {
   const server = new SMTPServer({
     authOptional: true,
     disabledCommands: ['STARTTLS'],
@@ -41,8 +41,11 @@ function startInbox(port: number, received: string[], refuse: Set<string>) {
       cb();
     },
     onData(stream, session, cb) {
-      stream.resume();
+      let head = '';
+      stream.on('data', (chunk: Buffer) => (head += head.length < 4000 ? chunk.toString() : ''));
       stream.on('end', () => {
+        const m = /^Message-ID:\s*(\S+)/im.exec(head);
+        messageIds.push(m ? m[1] : '');
         received.push(session.envelope.rcptTo.map((r) => r.address).join(','));
         cb();
       });
@@ -169,7 +172,8 @@ describe('e-mail outbox on the job queue', () => {
     expect(afterFailure.lastError).toMatch(/ECONNREFUSED|connect/i);
 
     const received: string[] = [];
-    const server = await startInbox(port, received, new Set());
+    const messageIds: string[] = [];
+    const server = await startInbox(port, received, new Set(), messageIds);
     try {
       // not due yet: the queue waits before the second attempt
       await runDueJobs();
@@ -180,6 +184,8 @@ describe('e-mail outbox on the job queue', () => {
       const sent = await row(id);
       expect(sent.status).toBe('sent');
       expect(sent.attempts).toBe(2);
+      // its Message-ID is the outbox row's (RFC 5322 §3.6.4), the same on every attempt, so a repeat shows
+      expect(messageIds).toEqual([`<${id}@hitchmark.example>`]);
       // the job is done and gone: nothing is sent twice
       expect(await makeDue(id)).toBe(false);
       await runDueJobs();

@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
 import { seed } from '@/db/seed';
 import { photos } from '@/db/schema';
+import { MAX_PHOTO_BYTES } from '@/lib/photos/image-type';
 import { readObject } from '@/lib/server/storage';
 import { isRefusal, type Refusal } from '@/lib/result';
 import { completeUpload, createUpload } from '@/lib/server/photos/uploads';
@@ -185,4 +186,40 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
     const other = await actor('D2001');
     expect((await refusedWith(completeUpload(id, { id: other.id }))).code).toBe('not_found');
   });
+
+  it('refuses at completion an object over the size limit that the store let through (the fake ignores the signed length)', async () => {
+    // a small PNG announced honestly, then a PUT of a much bigger body to the same presigned URL:
+    // a real S3 refuses the length mismatch (the URL signs content-length), the local fake does not,
+    // so completion's own check must. The body starts with the PNG's bytes, so it still sniffs as PNG.
+    const png = smallPng();
+    const oversize = new Uint8Array(MAX_PHOTO_BYTES + 64 * 1024);
+    oversize.set(png);
+    const announced = await createUpload(
+      {
+        trailerId,
+        itemKey: 'left_side.skin',
+        contentType: 'image/png',
+        byteSize: png.length,
+        sha256: sha(png),
+      },
+      { id: userId },
+    );
+    if (!announced.ok) throw new Error(announced.message);
+    const put = await fetch(announced.value.uploadUrl, {
+      method: 'PUT',
+      headers: announced.value.headers,
+      body: new Blob([oversize]),
+    });
+    expect(put.status).toBe(200); // the fake took it: this is the hole completion closes
+    const [before] = await db.select().from(photos).where(eq(photos.id, announced.value.photoId));
+    expect((await readObject(before.pendingKey!, MAX_PHOTO_BYTES * 2))?.length).toBe(oversize.length);
+
+    const e = await refusedWith(completeUpload(announced.value.photoId, { id: userId }));
+    expect(e.code).toBe('too_large');
+    const [row] = await db.select().from(photos).where(eq(photos.id, announced.value.photoId));
+    expect(row.status).toBe('rejected');
+    // neither the pending object nor a final one is left
+    expect(await readObject(row.pendingKey!, 1000)).toBeNull();
+    expect(await readObject(row.objectKey, 1000)).toBeNull();
+  }, 30_000);
 });

@@ -11,7 +11,11 @@ import {
   YARD_ONLY_CAUTION,
 } from '@/lib/engine';
 import type { HandoffEvent, ItemObservations, ReeferReadings } from '@/lib/engine';
+import { renderCoded } from '@/lib/i18n/reasons';
 import { drop, northwind, walk } from './fixtures';
+
+// cautions are codes; their English comes from the renderer (lib/i18n/reasons.ts)
+const english = (r: Parameters<typeof renderCoded>[0]) => renderCoded(r, 'en', 'UTC');
 
 const reefer = buildChecklist({ kind: 'reefer', hingesPerDoor: 4, axles: 2, tireLayout: 'dual' });
 const van = buildChecklist({ kind: 'dry_van', hingesPerDoor: 4, axles: 2, tireLayout: 'dual' });
@@ -49,7 +53,7 @@ describe('evaluateHolds', () => {
     });
     expect(hs[0].source).toContain('393.207(b)');
     expect(hs[0].caution).toBe(OUT_OF_SERVICE_CAUTION);
-    expect(hs[0].caution).toContain('396.11');
+    expect(english(hs[0].caution)).toContain('396.11');
     expect(blocksHook(hs)).toBe(true);
   });
 
@@ -86,7 +90,7 @@ describe('evaluateHolds', () => {
         severity: 'restricted',
         restriction: 'yard_only',
       });
-      expect(hs[0].caution).toContain('Chock the wheels');
+      expect(english(hs[0].caution)).toContain('Chock the wheels');
     }
     expect(
       holdsFor({ 'undercarriage.spare_tire': { condition: 'ok', isMounted: true, isHoldingAir: true } }),
@@ -216,7 +220,7 @@ describe('decideHook: what the gate does with a trailer’s holds', () => {
     const hinge = hs.find((h) => h.ruleKey === 'hinge_not_locking')!;
     expect(hinge.caution).toBe(NO_PERISHABLE_CAUTION);
     const spare = hs.find((h) => h.ruleKey === 'spare_unusable')!;
-    expect(spare.caution).toContain('Chock the wheels');
+    expect(english(spare.caution)).toContain('Chock the wheels');
     const yardOnly = holdsFor(
       { 'undercarriage.spare_tire': { condition: 'missing' } },
       {},
@@ -224,7 +228,7 @@ describe('decideHook: what the gate does with a trailer’s holds', () => {
       makePolicy({ spareHoldSeverity: 'restricted' }),
     );
     expect(yardOnly[0].restriction).toBe('yard_only');
-    expect(hs.every((h) => typeof h.caution === 'string' && h.caution.length > 20)).toBe(true);
-    expect(YARD_ONLY_CAUTION).toContain('tug test');
+    expect(hs.every((h) => english(h.caution).length > 20)).toBe(true);
+    expect(english(YARD_ONLY_CAUTION)).toContain('tug test');
   });
 });

@@ -7,6 +7,7 @@ import {
   currentCustodian,
 } from '@/lib/engine';
 import type { InspectionEvent, TimelineEvent } from '@/lib/engine';
+import { renderReason } from '@/lib/i18n/reasons';
 import { bluefield, corvid, drop, hook, move, northwind, TZ, walk } from './fixtures';
 
 const checklist = buildChecklist({ kind: 'reefer', hingesPerDoor: 4, axles: 2, tireLayout: 'dual' });
@@ -14,7 +15,13 @@ const HINGE = 'rear.door_left.hinge_3';
 
 function attribute(history: TimelineEvent[], current: InspectionEvent, terminalName?: string) {
   const findings = compareInspection({ checklist, history, current });
-  return attributeFindings({ history, current, findings, timeZone: TZ, terminalName });
+  // the engine answers in codes; the English the clerk reads comes from the renderer (lib/i18n/reasons.ts)
+  return attributeFindings({ history, current, findings, terminalName }).map((a) => {
+    const errors: string[] = [];
+    const reason = renderReason(a.reason.code, a.reason.params, 'en', TZ, { onError: (m) => errors.push(m) });
+    expect(errors).toEqual([]);
+    return { ...a, coded: a.reason, reason };
+  });
 }
 
 describe('custody legs', () => {

@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { hashableFromRows, type HandoffHashRow } from '@/lib/handoffs/canonical';
 import { checkOneRecord, checkTrailerChain, type ChainRecord } from '@/lib/handoffs/chain';
-import { handoffContentHash, sha256Hex } from '@/lib/handoffs/hash';
+import {
+  handoffContentHash,
+  KEYED_HASH_VERSION,
+  PERISHABLE_HASH_VERSION,
+  sha256Hex,
+  WRITTEN_HASH_VERSION,
+} from '@/lib/handoffs/hash';
 
 // Two stored handoffs hashed the way the submit does; the photo's bytes are the FIPS 180-2
 // example message "abc", whose SHA-256 is ba7816bf… (NIST FIPS 180-2, Appendix B.1).
@@ -44,19 +50,22 @@ const items = [
   },
 ];
 
-/** A chain whose first record was submitted with one stored photo. */
-function stored(): ChainRecord[] {
+/**
+ * A chain whose first record was submitted with one stored photo; the second is a hook whose
+ * driver answered "perishable: yes". Each record is hashed with the version given.
+ */
+function stored(firstVersion = KEYED_HASH_VERSION, secondVersion = KEYED_HASH_VERSION): ChainRecord[] {
   const first = row('h1', '2026-11-02T15:00:00Z', null);
-  const firstHash = handoffContentHash(hashableFromRows(first, items, [PHOTO]), KEY);
-  const second = row('h2', '2026-11-03T09:00:00Z', firstHash);
-  const secondHash = handoffContentHash(hashableFromRows(second, [], []), KEY);
+  const firstHash = handoffContentHash(hashableFromRows(first, items, [PHOTO], firstVersion), KEY);
+  const second = { ...row('h2', '2026-11-03T09:00:00Z', firstHash), kind: 'hook', isLoadPerishable: true };
+  const secondHash = handoffContentHash(hashableFromRows(second, [], [], secondVersion), KEY);
   return [
     {
-      row: { ...first, contentHash: firstHash, hashVersion: 2 },
+      row: { ...first, contentHash: firstHash, hashVersion: firstVersion },
       items,
       photos: [{ sha256: PHOTO, status: 'stored' }],
     },
-    { row: { ...second, contentHash: secondHash, hashVersion: 2 }, items: [], photos: [] },
+    { row: { ...second, contentHash: secondHash, hashVersion: secondVersion }, items: [], photos: [] },
   ];
 }
 
@@ -97,5 +106,38 @@ describe('the one chain check', () => {
     earlier[0].row = { ...earlier[0].row, driverName: 'Someone Else' };
     expect(checkOneRecord(earlier, 'h2', KEY)).toBe('earlier_broken');
     expect(checkOneRecord(stored(), 'h9', KEY)).toBe('altered');
+  });
+
+  it('the submit writes version 3, which hashes the perishable answer; version 2 records keep verifying with theirs', () => {
+    expect(WRITTEN_HASH_VERSION).toBe(PERISHABLE_HASH_VERSION);
+    // an older version-2 record followed by a new version-3 one: both verify
+    expect(checkTrailerChain(stored(KEYED_HASH_VERSION, PERISHABLE_HASH_VERSION), KEY).check).toEqual({
+      ok: true,
+      count: 2,
+    });
+    // version 3: flipping the answer (or clearing it) breaks the record
+    for (const answer of [false, null]) {
+      const flipped = stored(KEYED_HASH_VERSION, PERISHABLE_HASH_VERSION);
+      flipped[1].row = { ...flipped[1].row, isLoadPerishable: answer };
+      expect(checkOneRecord(flipped, 'h2', KEY)).toBe('altered');
+    }
+    // version 2 never covered the answer: its records verify whatever the column holds (the hole this closes)
+    const old = stored(KEYED_HASH_VERSION, KEYED_HASH_VERSION);
+    old[1].row = { ...old[1].row, isLoadPerishable: false };
+    expect(checkOneRecord(old, 'h2', KEY)).toBe('matches');
+  });
+
+  it('relabelling a version-3 record as version 2 (to drop the answer from the hash) is detected', () => {
+    const relabelled = stored(KEYED_HASH_VERSION, PERISHABLE_HASH_VERSION);
+    relabelled[1].row = { ...relabelled[1].row, hashVersion: KEYED_HASH_VERSION, isLoadPerishable: false };
+    expect(checkTrailerChain(relabelled, KEY).check).toEqual({
+      ok: false,
+      brokenAt: 'h2',
+      why: 'content_changed',
+    });
+    // even with the answer left as it was: the version-3 content holds the field, version 2 does not
+    const same = stored(KEYED_HASH_VERSION, PERISHABLE_HASH_VERSION);
+    same[1].row = { ...same[1].row, hashVersion: KEYED_HASH_VERSION };
+    expect(checkOneRecord(same, 'h2', KEY)).toBe('altered');
   });
 });

@@ -1,0 +1,41 @@
+'use server';
+
+import { headers } from 'next/headers';
+import { getTranslations } from 'next-intl/server';
+import { changeOwnSecret } from '@/lib/server/auth/account';
+import { formAction } from '@/lib/server/action';
+import { clientAddress } from '@/lib/server/client-address';
+import { changePasswordSchema, changePinSchema } from '@/lib/validation/account';
+
+/** A driver's own PIN: the current one, then the new one twice. Other phones are signed out. */
+export const changePinAction = formAction(
+  { roles: ['driver'], schema: changePinSchema },
+  async (user, input) => {
+    const result = await changeOwnSecret(
+      user,
+      { kind: 'pin', current: input.currentPin, next: input.newPin, currentField: 'currentPin' },
+      clientAddress(await headers()),
+    );
+    if (!result.ok) return result;
+    return { ok: true, message: (await getTranslations('Account'))('pinChanged') };
+  },
+);
+
+/** A staff member's own password, likewise. */
+export const changePasswordAction = formAction(
+  { roles: ['jockey', 'clerk', 'admin'], schema: changePasswordSchema },
+  async (user, input) => {
+    const result = await changeOwnSecret(
+      user,
+      {
+        kind: 'password',
+        current: input.currentPassword,
+        next: input.newPassword,
+        currentField: 'currentPassword',
+      },
+      clientAddress(await headers()),
+    );
+    if (!result.ok) return result;
+    return { ok: true, message: (await getTranslations('Account'))('passwordChanged') };
+  },
+);
