@@ -6,8 +6,9 @@ import { LanguageSwitch } from '@/app/_components/language-switch';
 import { canOpen, type Section } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { parseTheme, THEME_COOKIE } from '@/lib/theme/theme';
+import { OfflineProvider, OutboxLine } from '@/app/_components/offline/offline-provider';
 import { NavLinks } from './_components/nav-links';
-import { signOutAction } from './_components/sign-out-action';
+import { SignOutButton } from './_components/sign-out-button';
 
 const SECTIONS: Section[] = ['gate', 'yard', 'desk', 'trailers', 'admin'];
 
@@ -22,43 +23,39 @@ export default async function AppLayout({ children }: { children: React.ReactNod
     label: t(`section.${s}`),
   }));
   return (
-    <div className="min-h-screen">
-      <a
-        href="#main"
-        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper focus:p-2"
-      >
-        {t('skip')}
-      </a>
-      <header className="no-print bg-brand text-on-fill">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2">
-          <Link href="/" className="inline-flex min-h-tap items-center text-gate-lg font-bold">
-            Hitchmark
-          </Link>
-          <NavLinks links={links} label={t('sections')} />
-          <div className="ml-auto flex flex-wrap items-center gap-3 text-gate-sm">
-            <ThemeSwitch initial={theme} onFill />
-            <LanguageSwitch onFill />
-            <span>
-              <Link href="/account" className="font-bold underline" title={account('linkLabel')}>
-                {user.name}
-              </Link>{' '}
-              · {t(`role.${user.role}`)}
-              {user.carrierScac ? ` · ${user.carrierScac}` : ''}
-            </span>
-            <form action={signOutAction}>
-              <button
-                type="submit"
-                className="min-h-tap whitespace-nowrap rounded-lg border-2 border-on-fill px-3 font-bold"
-              >
-                {t('signOut')}
-              </button>
-            </form>
+    <OfflineProvider userId={user.id}>
+      <div className="min-h-screen">
+        <a
+          href="#main"
+          className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-paper focus:p-2"
+        >
+          {t('skip')}
+        </a>
+        <header className="no-print bg-brand text-on-fill">
+          <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2">
+            <Link href="/" className="inline-flex min-h-tap items-center text-gate-lg font-bold">
+              Hitchmark
+            </Link>
+            <NavLinks links={links} label={t('sections')} />
+            <div className="ml-auto flex flex-wrap items-center gap-3 text-gate-sm">
+              <ThemeSwitch initial={theme} onFill />
+              <LanguageSwitch onFill />
+              <span>
+                <Link href="/account" className="font-bold underline" title={account('linkLabel')}>
+                  {user.name}
+                </Link>{' '}
+                · {t(`role.${user.role}`)}
+                {user.carrierScac ? ` · ${user.carrierScac}` : ''}
+              </span>
+              <SignOutButton label={t('signOut')} />
+            </div>
           </div>
-        </div>
-      </header>
-      <main id="main" className="mx-auto max-w-6xl p-3 sm:p-4">
-        {children}
-      </main>
-    </div>
+        </header>
+        <OutboxLine />
+        <main id="main" className="mx-auto max-w-6xl p-3 sm:p-4">
+          {children}
+        </main>
+      </div>
+    </OfflineProvider>
   );
 }

@@ -24,10 +24,14 @@ export async function getOwnPhoto(photoId: string, uploadedById: string) {
 }
 
 /** Settles a pending photo; one already settled (a second, racing completion) stays as it is. */
-export async function setPhotoStatus(photoId: string, status: 'stored' | 'rejected') {
+export async function setPhotoStatus(
+  photoId: string,
+  status: 'stored' | 'rejected',
+  capturedAt: Date | null = null,
+) {
   await db
     .update(photos)
-    .set({ status })
+    .set(status === 'stored' ? { status, capturedAt } : { status })
     .where(and(eq(photos.id, photoId), eq(photos.status, 'pending')));
 }
 

@@ -179,6 +179,8 @@ export async function getTrailerFileRows(
           ),
         itemKey: photos.itemKey,
         handoffId: photos.handoffId,
+        capturedAt: photos.capturedAt,
+        uploadedAt: photos.createdAt,
       })
       .from(photos)
       .where(eq(photos.trailerId, trailerId))

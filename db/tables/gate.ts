@@ -129,6 +129,8 @@ export const photos = pgTable(
     contentType: text('content_type').notNull(),
     byteSize: integer('byte_size').notNull(),
     sha256: text('sha256').notNull(),
+    /** When the phone says the picture was taken (EXIF), checked only to be within sane bounds. */
+    capturedAt: at('captured_at'),
     createdAt: createdAt(),
   },
   (t) => [

@@ -19,6 +19,8 @@ export type FileEntry = {
   words: { title: FileWords; detail: FileWords[] };
   href?: string;
   tone?: 'danger' | 'ok' | 'hold';
+  /** A photo's two times: when the phone says it was taken (EXIF; may be absent) and when it arrived. */
+  photoTimes?: { takenAt: Date | null; uploadedAt: Date };
 };
 
 export type FileRows = {
@@ -55,7 +57,14 @@ export type FileRows = {
     releasedByName: string | null;
   }[];
   cases: { id: string; openedAt: Date; state: string; amountCents: number; carrierScac: string | null }[];
-  photos: { id: string; createdAt: Date; itemKey: string | null; handoffId: string | null }[];
+  photos: {
+    id: string;
+    createdAt: Date;
+    itemKey: string | null;
+    handoffId: string | null;
+    capturedAt?: Date | null;
+    uploadedAt?: Date;
+  }[];
   /** Handoffs on other pages that correct, or are corrected by, one on this page (only looked up). */
   related?: FileRows['handoffs'];
 };
@@ -221,6 +230,7 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind, window?: FileW
         detail: [],
       },
       href: `/api/photos/${p.id}`,
+      photoTimes: { takenAt: p.capturedAt ?? null, uploadedAt: p.uploadedAt ?? p.createdAt },
     })),
   ];
   return entries

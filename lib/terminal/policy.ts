@@ -5,6 +5,12 @@ import { z } from 'zod';
 import { defaultPolicy, type EnginePolicy } from '@/lib/engine';
 import { DEFAULT_YARD_POLICY } from '@/lib/yard/policy';
 import type { YardPolicy } from '@/lib/yard/types';
+import {
+  DEFAULT_PHOTO_POLICY,
+  PHOTO_QUALITY_BOUNDS,
+  PHOTO_SIDE_BOUNDS,
+  type PhotoPolicy,
+} from '@/lib/photos/policy';
 
 export type DeskPolicy = { disputeWindowDays: number };
 /** common practice: two weeks to answer a damage notice; a terminal may change it. */
@@ -17,7 +23,13 @@ export type GatePolicy = { correctionWindowMinutes: number };
  */
 export const DEFAULT_GATE_POLICY: GatePolicy = { correctionWindowMinutes: 30 };
 
-export type TerminalPolicy = { engine: EnginePolicy; yard: YardPolicy; desk: DeskPolicy; gate: GatePolicy };
+export type TerminalPolicy = {
+  engine: EnginePolicy;
+  yard: YardPolicy;
+  desk: DeskPolicy;
+  gate: GatePolicy;
+  photo: PhotoPolicy;
+};
 
 const d = defaultPolicy;
 const eighths = (fallback: number) => z.number().int().min(0).max(8).catch(fallback);
@@ -41,6 +53,17 @@ const schema = z.object({
     .min(0)
     .max(24 * 60)
     .catch(DEFAULT_GATE_POLICY.correctionWindowMinutes),
+  photoLongestSidePx: z
+    .number()
+    .int()
+    .min(PHOTO_SIDE_BOUNDS.min)
+    .max(PHOTO_SIDE_BOUNDS.max)
+    .catch(DEFAULT_PHOTO_POLICY.longestSidePx),
+  photoQuality: z
+    .number()
+    .min(PHOTO_QUALITY_BOUNDS.min)
+    .max(PHOTO_QUALITY_BOUNDS.max)
+    .catch(DEFAULT_PHOTO_POLICY.quality),
 });
 
 /** The terminal's policy from its stored document (`null` when the terminal has none yet). */
@@ -61,5 +84,6 @@ export function terminalPolicyOf(data: unknown): TerminalPolicy {
     yard: { freeTimeHours: p.freeTimeHours, lowFuelEighths: p.lowFuelEighths },
     desk: { disputeWindowDays: p.disputeWindowDays },
     gate: { correctionWindowMinutes: p.correctionWindowMinutes },
+    photo: { longestSidePx: p.photoLongestSidePx, quality: p.photoQuality },
   };
 }

@@ -168,3 +168,11 @@ export const uploadRequestSchema = z.object({
 export type UploadRequestInput = z.infer<typeof uploadRequestSchema>;
 
 export const idParamSchema = z.uuid({ error: 'Not found.' });
+
+/** `POST /api/uploads/[id]/complete`: the capture time the phone read from the photo, if any. */
+export const uploadCompleteSchema = z.object({
+  capturedAt: z.iso
+    .datetime({ offset: true, error: 'The capture time must be a date and time with its zone.' })
+    .nullish(),
+});
+export type UploadCompleteInput = z.infer<typeof uploadCompleteSchema>;

@@ -19,6 +19,7 @@ import enCautions from './en/Cautions.json';
 import enLanguage from './en/Language.json';
 import enLogin from './en/Login.json';
 import enOffline from './en/Offline.json';
+import enPhotos from './en/Photos.json';
 import enReasons from './en/Reasons.json';
 import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
@@ -42,6 +43,7 @@ import esCautions from './es/Cautions.json';
 import esLanguage from './es/Language.json';
 import esLogin from './es/Login.json';
 import esOffline from './es/Offline.json';
+import esPhotos from './es/Photos.json';
 import esReasons from './es/Reasons.json';
 import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
@@ -67,6 +69,7 @@ const en = {
   Language: enLanguage,
   Login: enLogin,
   Offline: enOffline,
+  Photos: enPhotos,
   Reasons: enReasons,
   Shell: enShell,
   Theme: enTheme,
@@ -98,6 +101,7 @@ export const MESSAGES: Record<Locale, Messages> = {
     Language: esLanguage,
     Login: esLogin,
     Offline: esOffline,
+    Photos: esPhotos,
     Reasons: esReasons,
     Shell: esShell,
     Theme: esTheme,

@@ -11,7 +11,8 @@ import { uploadProblem } from '@/lib/photos/check';
 import { isAllowedImageType, MAX_PHOTO_BYTES } from '@/lib/photos/image-type';
 import { done, refuse, type Result } from '@/lib/result';
 import { checklistOf } from '@/lib/trailers/checklist';
-import type { UploadRequestInput } from '@/lib/validation/handoffs';
+import { isSaneCaptureTime } from '@/lib/photos/capture-time';
+import type { UploadCompleteInput, UploadRequestInput } from '@/lib/validation/handoffs';
 import { deleteObject, presignPhotoUpload, putObject, readObject } from '../storage';
 
 type Uploader = { id: string };
@@ -64,7 +65,17 @@ export async function createUpload(input: UploadRequestInput, user: Uploader) {
  * After the browser's PUT: reads the object back and checks its type by content, its size and
  * its SHA-256 against what was declared. Stored, or rejected and the object deleted.
  */
-export async function completeUpload(photoId: string, user: Uploader): Promise<Result<Stored>> {
+export async function completeUpload(
+  photoId: string,
+  user: Uploader,
+  claimed: UploadCompleteInput = {},
+): Promise<Result<Stored>> {
+  // the phone's claim of when the picture was taken: stored only within sane bounds of now
+  const capturedAt = claimed.capturedAt ? new Date(claimed.capturedAt) : null;
+  if (capturedAt && !isSaneCaptureTime(capturedAt, new Date())) {
+    const why = 'The capture time is not plausible (more than 30 days old or in the future).';
+    return refuse('invalid', why, { capturedAt: [why] });
+  }
   const p = await getOwnPhoto(photoId, user.id);
   if (!p) return refuse('not_found', 'No such upload.');
   if (p.status === 'stored') return done({ photoId: p.id, status: 'stored' });
@@ -81,7 +92,7 @@ export async function completeUpload(photoId: string, user: Uploader): Promise<R
   // the bytes just checked, not a server-side copy of the pending key: a PUT racing this
   // completion could change the pending object between the check and a copy
   await putObject(p.objectKey, bytes, p.contentType);
-  await setPhotoStatus(p.id, 'stored');
+  await setPhotoStatus(p.id, 'stored', capturedAt);
   await deleteObject(p.pendingKey);
   return done({ photoId: p.id, status: 'stored' });
 }

@@ -38,6 +38,23 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
     expect(await readObject(row.objectKey, 1_000_000)).toEqual(png);
   });
 
+  it('stores the capture time the phone read, and refuses an implausible one before any change', async () => {
+    const png = smallPng();
+    const declared = { contentType: 'image/png', byteSize: png.length, sha256: sha(png) };
+    const id = await announceAndPut(ctx.trailerId, ctx.userId, declared, png);
+    // 40 days old: beyond the 30-day bound (lib/photos/capture-time.ts; common practice)
+    const old = new Date(Date.now() - 40 * 24 * 3_600_000).toISOString();
+    const e = await refusedWith(completeUpload(id, { id: ctx.userId }, { capturedAt: old }));
+    expect(e.fieldErrors?.capturedAt).toHaveLength(1);
+    expect((await db.select().from(photos).where(eq(photos.id, id)))[0].status).toBe('pending');
+    // seven minutes before now, written with an offset: stored as that instant
+    const taken = new Date(Math.floor((Date.now() - 7 * 60_000) / 1000) * 1000);
+    const local = new Date(taken.getTime() - 5 * 3_600_000).toISOString().replace('Z', '-05:00');
+    expect((await completeUpload(id, { id: ctx.userId }, { capturedAt: local })).ok).toBe(true);
+    const [row] = await db.select().from(photos).where(eq(photos.id, id));
+    expect(row.capturedAt?.toISOString()).toBe(taken.toISOString());
+  });
+
   it('refuses content that is not an image although it was announced as PNG, and deletes it', async () => {
     const text = new TextEncoder().encode('this is not a photo, just text pretending to be one');
     const id = await announceAndPut(

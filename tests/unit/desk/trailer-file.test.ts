@@ -79,6 +79,39 @@ describe('trailer file', () => {
     expect(buildTrailerFile(rows, 'hold').map((e) => e.id)).toEqual(['x1:released', 'x1']);
     expect(buildTrailerFile(rows, 'walk')).toEqual([]);
   });
+
+  it("gives a photo both its times: taken (the phone's EXIF claim, when present) and uploaded", () => {
+    const taken = new Date('2026-03-09T19:02:31Z');
+    const uploaded = new Date('2026-03-09T19:09:05Z');
+    const file = buildTrailerFile(
+      {
+        ...rows,
+        photos: [
+          {
+            id: 'p1',
+            createdAt: uploaded,
+            itemKey: null,
+            handoffId: null,
+            capturedAt: taken,
+            uploadedAt: uploaded,
+          },
+          {
+            id: 'p2',
+            createdAt: uploaded,
+            itemKey: null,
+            handoffId: null,
+            capturedAt: null,
+            uploadedAt: uploaded,
+          },
+        ],
+      },
+      'photo',
+    );
+    expect(file.map((e) => [e.id, e.photoTimes])).toEqual([
+      ['p1', { takenAt: taken, uploadedAt: uploaded }],
+      ['p2', { takenAt: null, uploadedAt: uploaded }],
+    ]);
+  });
 });
 
 describe('a page of the trailer file', () => {

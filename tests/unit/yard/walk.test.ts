@@ -1,12 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import {
-  flushQueue,
-  loadQueue,
-  pendingCount,
-  saveQueue,
-  type QueuedScan,
-  type SendOutcome,
-} from '@/lib/yard/scan-queue';
 import { classifyScanText } from '@/lib/yard/scan-text';
 import { terminalPolicyOf } from '@/lib/terminal/policy';
 import { DEFAULT_YARD_POLICY } from '@/lib/yard/policy';
@@ -118,53 +110,5 @@ describe('yard policy', () => {
       lowFuelEighths: 4,
     });
     expect(yardPolicyOf(null)).toEqual(DEFAULT_YARD_POLICY);
-  });
-});
-
-describe('offline scan queue', () => {
-  const scan = (n: number): QueuedScan => ({
-    clientKey: `key-000${n}`,
-    scannedText: `R${n}`,
-    spotId: 's1',
-    spotLabel: 'A01',
-    scannedAt: '2026-03-09T18:00:00Z',
-    state: 'pending',
-    ...checks,
-  });
-
-  it('sends in order and stops at the first network failure, keeping the rest pending', async () => {
-    const sent: string[] = [];
-    let online = true;
-    const send = async (s: QueuedScan): Promise<SendOutcome> => {
-      if (!online) return { kind: 'offline' };
-      sent.push(s.clientKey);
-      if (s.clientKey === 'key-0002') online = false;
-      return { kind: 'sent' };
-    };
-    const after = await flushQueue([scan(1), scan(2), scan(3), scan(4)], send);
-    expect(sent).toEqual(['key-0001', 'key-0002']);
-    expect(after.map((s) => s.state)).toEqual(['sent', 'sent', 'pending', 'pending']);
-    expect(pendingCount(after)).toBe(2);
-    online = true;
-    const again = await flushQueue(after, send);
-    expect(sent).toEqual(['key-0001', 'key-0002', 'key-0003', 'key-0004']);
-    expect(pendingCount(again)).toBe(0);
-  });
-
-  it('keeps a rejected scan with its error instead of dropping it', async () => {
-    const after = await flushQueue([scan(1)], async () => ({ kind: 'rejected', error: 'Unknown slot.' }));
-    expect(after[0]).toMatchObject({ state: 'rejected', error: 'Unknown slot.', scannedText: 'R1' });
-  });
-
-  it('survives a round trip through storage and reads a damaged entry as empty', () => {
-    const store = new Map<string, string>();
-    const storage = {
-      getItem: (k: string) => store.get(k) ?? null,
-      setItem: (k: string, v: string) => void store.set(k, v),
-    };
-    saveQueue(storage, 'w1', [scan(1)]);
-    expect(loadQueue(storage, 'w1')).toEqual([scan(1)]);
-    store.set('hitchmark.walk.w2.scans', '{not json');
-    expect(loadQueue(storage, 'w2')).toEqual([]);
   });
 });

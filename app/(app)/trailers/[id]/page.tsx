@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
+import { getTranslations } from 'next-intl/server';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { getTranslations } from 'next-intl/server';
 import { z } from 'zod';
 import { Caution } from '@/app/_components/caution';
 import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
@@ -52,6 +52,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   const { rows } = page;
   const photoCheck = query.success && query.data.photos === 'check' ? await tryCheckPhotos(id) : null;
   const zone = trailer.timeZone ?? user.terminalTimeZone ?? 'UTC';
+  const tph = await getTranslations('Photos');
   const entries = buildTrailerFile(rows, kind, page.window);
   const openHolds = rows.holds.filter((h) => !h.releasedAt);
   const linkTo = (extra: Record<string, string>) => {
@@ -173,6 +174,14 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
                     {say(w)}
                   </span>
                 ))}
+              </p>
+            ) : null}
+            {e.photoTimes ? (
+              <p className="text-gate-sm" data-testid="photo-times">
+                {e.photoTimes.takenAt
+                  ? tph('taken', { time: formatTime(e.photoTimes.takenAt, zone) })
+                  : tph('noCaptureTime')}{' '}
+                · {tph('uploaded', { time: formatTime(e.photoTimes.uploadedAt, zone) })}
               </p>
             ) : null}
           </li>

@@ -1,6 +1,8 @@
 'use client';
 
-import { useCallback, useEffect, useState, useSyncExternalStore, type SetStateAction } from 'react';
+import { useCallback, useEffect, useRef, useState, type SetStateAction } from 'react';
+import { useOfflineUser } from '@/app/_components/offline/offline-provider';
+import { deleteDraft, readDraft, writeDraft } from '@/app/_components/offline/store';
 import type { Draft } from '@/lib/handoffs/draft';
 
 export type StoredDraft = Draft & { isQueued?: boolean };
@@ -11,40 +13,42 @@ export function newDraftKey(): string {
   return [...crypto.getRandomValues(new Uint8Array(16))].map((b) => b.toString(16).padStart(2, '0')).join('');
 }
 
-function readSaved(storageKey: string, trailerId: string): StoredDraft | null {
-  try {
-    const raw = localStorage.getItem(storageKey);
-    const parsed = raw ? (JSON.parse(raw) as StoredDraft) : null;
-    const isOurs =
-      parsed && typeof parsed.idempotencyKey === 'string' && parsed.trailerId === trailerId && parsed.items;
-    return isOurs ? parsed : null;
-  } catch {
-    return null;
-  }
+function isOurs(saved: unknown, trailerId: string): saved is StoredDraft {
+  if (!saved || typeof saved !== 'object') return false;
+  const d = saved as Partial<StoredDraft>;
+  return typeof d.idempotencyKey === 'string' && d.trailerId === trailerId && Boolean(d.items);
 }
 
-const subscribeToNothing = () => () => {};
-
-/** False on the server and while hydrating (so both render the same), true in the browser after. */
-function useIsBrowser(): boolean {
-  return useSyncExternalStore(
-    subscribeToNothing,
-    () => true,
-    () => false,
-  );
-}
-
-/** The form's draft, kept in localStorage per trailer so it survives a reload or a lost connection. */
+/**
+ * The form's draft, kept in IndexedDB per user and trailer (app/_components/offline/store.ts) so
+ * it survives a reload, a lost connection or a closed browser. `null` until it has been read.
+ */
 export function useDraft(trailerId: string, kind: 'drop' | 'hook', make: () => Draft) {
-  const storageKey = `hm-draft:${trailerId}`;
-  const openedFor = `${storageKey}|${kind}`;
-  const isBrowser = useIsBrowser();
+  const userId = useOfflineUser() ?? 'anonymous';
+  const openedFor = `${userId}|${trailerId}|${kind}`;
   const [state, setState] = useState<{ openedFor: string; draft: StoredDraft } | null>(null);
-  // read once per trailer and kind, in the first browser render: the saved draft, or a new one
-  if (isBrowser && state?.openedFor !== openedFor) {
-    const saved = readSaved(storageKey, trailerId);
-    setState({ openedFor, draft: saved ? { ...saved, kind } : make() });
-  }
+  const makeRef = useRef(make);
+  useEffect(() => {
+    makeRef.current = make;
+  });
+
+  // read once per user, trailer and kind: the saved draft, or a new one
+  useEffect(() => {
+    let live = true;
+    readDraft<unknown>(userId, trailerId)
+      .catch(() => undefined)
+      .then((saved) => {
+        if (!live) return;
+        setState({
+          openedFor,
+          draft: isOurs(saved, trailerId) ? { ...saved, kind } : makeRef.current(),
+        });
+      });
+    return () => {
+      live = false;
+    };
+  }, [userId, trailerId, kind, openedFor]);
+
   const draft = state?.openedFor === openedFor ? state.draft : null;
   const setDraft = useCallback(
     (next: SetStateAction<StoredDraft | null>) =>
@@ -56,15 +60,15 @@ export function useDraft(trailerId: string, kind: 'drop' | 'hook', make: () => D
     [],
   );
   useEffect(() => {
-    if (draft) localStorage.setItem(storageKey, JSON.stringify(draft));
-  }, [draft, storageKey]);
+    if (draft) void writeDraft(userId, trailerId, draft).catch(() => undefined);
+  }, [draft, userId, trailerId]);
   return {
     draft,
     setDraft,
     discard: () => {
-      localStorage.removeItem(storageKey);
-      setDraft(make());
+      void deleteDraft(userId, trailerId);
+      setDraft(makeRef.current());
     },
-    forget: () => localStorage.removeItem(storageKey),
+    forget: () => void deleteDraft(userId, trailerId),
   };
 }

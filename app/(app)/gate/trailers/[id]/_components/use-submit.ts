@@ -2,6 +2,8 @@
 
 import { useRouter } from 'next/navigation';
 import { useCallback, useEffect, useRef, useState, type Dispatch, type SetStateAction } from 'react';
+import { addToOutbox, removeFromOutbox } from '@/app/_components/offline/outbox-client';
+import { useOutboxItems } from '@/app/_components/offline/offline-provider';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { precheck } from './precheck';
 import type { StoredDraft } from './use-draft';
@@ -9,9 +11,19 @@ import type { StoredDraft } from './use-draft';
 export type SubmitRefusal = { message: string; holds?: { reason: string }[]; cautions?: string[] };
 export type SubmitStatus = 'idle' | 'sending' | 'queued';
 
+type Answer = {
+  handoff?: { receiptUrl?: string };
+  message?: string;
+  fieldErrors?: Record<string, string[]>;
+  holds?: { reason: string }[];
+  cautions?: string[];
+};
+
 /**
- * Sends the draft to POST /api/handoffs. Offline (or when the request cannot leave the phone)
- * the draft is queued and goes as soon as the connection is back, also after a reload.
+ * Sends the draft to POST /api/handoffs. Without signal (or when the request cannot leave the
+ * phone) the submit goes into the phone's outbox (IndexedDB) under the draft's idempotency key;
+ * the outbox sends it when the signal returns, from whatever screen is open, and this form
+ * follows it: to the receipt once sent, or back to the answers if the server refused it.
  */
 export function useSubmit(
   draft: StoredDraft | null,
@@ -24,8 +36,38 @@ export function useSubmit(
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [refusal, setRefusal] = useState<SubmitRefusal | null>(null);
   const [status, setStatus] = useState<SubmitStatus>('idle');
+  const outbox = useOutboxItems();
 
-  // one submit at a time: the 'online' event and a re-queued draft must not send twice at once
+  const refused = useCallback(
+    (d: StoredDraft, answer: Answer) => {
+      setStatus('idle');
+      setDraft({ ...d, isQueued: false });
+      setErrors(answer.fieldErrors ?? {});
+      setRefusal({
+        message: answer.message ?? 'The handoff was not recorded.',
+        holds: answer.holds,
+        cautions: answer.cautions,
+      });
+    },
+    [setDraft],
+  );
+
+  const queue = useCallback(
+    async (d: StoredDraft, body: Record<string, unknown>) => {
+      setDraft({ ...d, isQueued: true });
+      setStatus('queued');
+      await addToOutbox({
+        key: d.idempotencyKey,
+        kind: 'handoff',
+        group: d.trailerId,
+        url: '/api/handoffs',
+        body,
+      });
+    },
+    [setDraft],
+  );
+
+  // one submit at a time: a second tap must not send twice at once
   const inFlight = useRef(false);
   const send = useCallback(
     async (d: StoredDraft) => {
@@ -40,11 +82,7 @@ export function useSubmit(
         setRefusal({ message: 'Some answers need attention (marked in red).' });
         return;
       }
-      if (!navigator.onLine) {
-        setDraft({ ...d, isQueued: true });
-        setStatus('queued');
-        return;
-      }
+      if (!navigator.onLine) return queue(d, body as Record<string, unknown>);
       setStatus('sending');
       let res: Response;
       inFlight.current = true;
@@ -56,37 +94,60 @@ export function useSubmit(
         });
       } catch {
         inFlight.current = false;
-        setDraft({ ...d, isQueued: true });
-        setStatus('queued');
-        return;
+        return queue(d, body as Record<string, unknown>);
       }
       inFlight.current = false;
-      const answer = await res.json().catch(() => ({}));
-      if (res.ok) {
+      const answer = (await res.json().catch(() => ({}))) as Answer;
+      if (res.ok && answer.handoff?.receiptUrl) {
         forget();
         router.push(answer.handoff.receiptUrl);
         return;
       }
-      setStatus('idle');
-      setDraft({ ...d, isQueued: false });
-      setErrors(answer.fieldErrors ?? {});
-      setRefusal({
-        message: answer.message ?? 'The handoff was not recorded.',
-        holds: answer.holds,
-        cautions: answer.cautions,
-      });
+      // the server was reached but could not answer: the outbox retries with the same key
+      if (res.status >= 500) return queue(d, body as Record<string, unknown>);
+      refused(d, answer);
     },
-    [isReefer, last, setDraft, forget, router],
+    [isReefer, last, forget, router, queue, refused],
   );
 
-  // a queued submit goes as soon as the connection is back (and on reload, if it is back already)
+  // a queued draft follows its outbox item: sent → receipt, refused → back to the answers;
+  // a queued draft with no item (moved from an older version of the app) is queued again
+  const key = draft?.isQueued ? draft.idempotencyKey : null;
+  const item = key ? outbox.find((i) => i.key === key) : undefined;
+  const requeued = useRef<string | null>(null);
+  const finished = useRef<string | null>(null);
   useEffect(() => {
-    if (!draft?.isQueued) return;
-    const go = () => void send(draft);
-    if (navigator.onLine) go();
-    window.addEventListener('online', go);
-    return () => window.removeEventListener('online', go);
-  }, [draft, send]);
+    if (!draft?.isQueued || !key || finished.current === key) return;
+    if (!item) {
+      // enqueue is idempotent by key: this only adds the item when the outbox truly lacks it
+      if (requeued.current === key) return;
+      requeued.current = key;
+      void precheck(draft, isReefer, last).then(({ body, errors: found }) => {
+        if (Object.keys(found).length) return;
+        return addToOutbox({
+          key,
+          kind: 'handoff',
+          group: draft.trailerId,
+          url: '/api/handoffs',
+          body: body as Record<string, unknown>,
+        });
+      });
+      return;
+    }
+    if (item.state === 'pending') return;
+    finished.current = key;
+    if (item.state === 'sent') {
+      const url = (item.answer as Answer | undefined)?.handoff?.receiptUrl;
+      forget();
+      if (url) router.push(url);
+    } else {
+      // refused while the driver was away from the form: back to the answers, with the reason
+      const answer = (item.answer ?? { message: item.error }) as Answer;
+      void removeFromOutbox(item.key).then(() => refused(draft, answer));
+    }
+  }, [draft, key, item, isReefer, last, refused, forget, router]);
 
-  return { send, errors, refusal, status };
+  // a draft queued before a reload shows as queued while its item waits
+  const shown: SubmitStatus = status === 'idle' && item?.state === 'pending' ? 'queued' : status;
+  return { send, errors, refusal, status: shown };
 }

@@ -1,82 +1,61 @@
 'use client';
 
-import { useCallback, useEffect, useRef, useState } from 'react';
-import { flushQueue, loadQueue, saveQueue, type QueuedScan, type SendOutcome } from '@/lib/yard/scan-queue';
+import { useCallback, useMemo, useSyncExternalStore } from 'react';
+import { addToOutbox } from '@/app/_components/offline/outbox-client';
+import { useOutboxItems } from '@/app/_components/offline/offline-provider';
+import type { OutboxItem } from '@/lib/offline/outbox';
+import type { QueuedScan } from '@/lib/yard/scan-queue';
 
-async function send(walkId: string, scan: QueuedScan): Promise<SendOutcome> {
-  const { state: _s, error: _e, result: _r, spotLabel: _l, ...body } = scan;
-  try {
-    const res = await fetch(`/api/yard/walks/${walkId}/scans`, {
-      method: 'POST',
-      headers: { 'Content-Type': 'application/json' },
-      body: JSON.stringify(body),
-    });
-    if (res.status >= 500) return { kind: 'offline' }; // the server had trouble: keep it and retry
-    const json = await res.json().catch(() => ({}));
-    if (!res.ok) return { kind: 'rejected', error: json.message ?? `Refused (${res.status}).` };
-    return { kind: 'sent', result: json.unitNumber ?? undefined };
-  } catch {
-    return { kind: 'offline' };
-  }
+function toScan(item: OutboxItem): QueuedScan {
+  const body = item.body as unknown as Omit<QueuedScan, 'state' | 'spotLabel'>;
+  const unit = item.answer?.unitNumber;
+  return {
+    ...body,
+    spotLabel: item.meta?.spotLabel ?? '',
+    state: item.state,
+    error: item.error,
+    result: typeof unit === 'string' ? unit : undefined,
+  };
 }
 
-/** The device queue of one walk: kept in localStorage, sent in order, re-sent when back online. */
+function subscribeOnline(cb: () => void) {
+  window.addEventListener('online', cb);
+  window.addEventListener('offline', cb);
+  return () => {
+    window.removeEventListener('online', cb);
+    window.removeEventListener('offline', cb);
+  };
+}
+
+/**
+ * The scans of one walk on this phone: kept in the phone's outbox (IndexedDB), sent in scan
+ * order by the shell's sender, re-sent when the signal returns (the clientKey makes it harmless).
+ */
 export function useScanQueue(walkId: string) {
-  const [queue, setQueue] = useState<QueuedScan[]>([]);
-  const [isOnline, setIsOnline] = useState(true);
-  const queueRef = useRef<QueuedScan[]>([]);
-  const flushing = useRef(false);
-
-  const commit = useCallback(
-    (next: QueuedScan[]) => {
-      queueRef.current = next;
-      saveQueue(window.localStorage, walkId, next);
-      setQueue(next);
-    },
-    [walkId],
+  const items = useOutboxItems();
+  const isOnline = useSyncExternalStore(
+    subscribeOnline,
+    () => navigator.onLine,
+    () => true,
   );
-
-  const flush = useCallback(async () => {
-    if (flushing.current) return;
-    flushing.current = true;
-    try {
-      const before = queueRef.current;
-      const sent = await flushQueue(before, (s) => send(walkId, s));
-      // scans added while sending stay behind the ones just sent
-      const added = queueRef.current.slice(before.length);
-      commit([...sent, ...added]);
-      if (added.some((a) => a.state === 'pending') && navigator.onLine) queueMicrotask(() => void flush());
-    } finally {
-      flushing.current = false;
-    }
-  }, [walkId, commit]);
-
-  useEffect(() => {
-    queueRef.current = loadQueue(window.localStorage, walkId);
-    setQueue(queueRef.current);
-    setIsOnline(navigator.onLine);
-    const online = () => {
-      setIsOnline(true);
-      void flush();
-    };
-    const offline = () => setIsOnline(false);
-    window.addEventListener('online', online);
-    window.addEventListener('offline', offline);
-    const timer = window.setInterval(() => void flush(), 10_000);
-    void flush();
-    return () => {
-      window.removeEventListener('online', online);
-      window.removeEventListener('offline', offline);
-      window.clearInterval(timer);
-    };
-  }, [walkId, flush]);
+  const queue = useMemo(
+    () => items.filter((i) => i.kind === 'scan' && i.group === walkId).map(toScan),
+    [items, walkId],
+  );
 
   const add = useCallback(
     (scan: QueuedScan) => {
-      commit([...queueRef.current, scan]);
-      void flush();
+      const { state: _s, error: _e, result: _r, spotLabel, ...body } = scan;
+      void addToOutbox({
+        key: scan.clientKey,
+        kind: 'scan',
+        group: walkId,
+        url: `/api/yard/walks/${walkId}/scans`,
+        body: { ...body },
+        meta: { spotLabel },
+      });
     },
-    [commit, flush],
+    [walkId],
   );
 
   return { queue, isOnline, add };

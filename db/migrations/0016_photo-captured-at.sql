@@ -1,0 +1,1 @@
+ALTER TABLE "photos" ADD COLUMN "captured_at" timestamp with time zone;
