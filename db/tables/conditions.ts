@@ -26,7 +26,11 @@ export const findings = pgTable(
     responsibleParty: text('responsible_party'),
     confidence: confidenceEnum('confidence'),
     candidates: jsonb('candidates').$type<unknown[]>(),
+    /** The English words receipted at the time (evidence: kept as written). */
     reason: text('reason').notNull(),
+    /** The reason as a code with parameters (lib/engine/types/codes.ts), rendered in the reader's language. */
+    reasonCode: text('reason_code'),
+    reasonParams: jsonb('reason_params').$type<Record<string, unknown>>(),
     caseId: uuid('case_id'),
     createdAt: createdAt(),
   },
@@ -51,10 +55,15 @@ export const holds = pgTable(
     restriction: text('restriction'),
     ruleKey: text('rule_key').notNull(),
     itemKey: text('item_key'),
+    /** The English words receipted at the time; `reason_code`/`reason_params` render it in any language. */
     reason: text('reason').notNull(),
+    reasonCode: text('reason_code'),
+    reasonParams: jsonb('reason_params').$type<Record<string, unknown>>(),
     source: text('source').notNull(),
-    /** The safety caution shown with the hold (the engine's, at the time it was placed). */
+    /** The safety caution shown with the hold (the engine's, at the time it was placed), and its code. */
     caution: text('caution'),
+    cautionCode: text('caution_code'),
+    cautionParams: jsonb('caution_params').$type<Record<string, unknown>>(),
     placedById: uuid('placed_by_id').references(() => users.id),
     placedAt: at('placed_at').notNull().defaultNow(),
     releasedAt: at('released_at'),

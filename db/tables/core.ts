@@ -60,6 +60,8 @@ export const carriers = pgTable('carriers', {
   name: text('name').notNull(),
   contactEmail: text('contact_email').notNull(),
   isHomeCarrier: boolean('is_home_carrier').notNull().default(false),
+  /** The language of the carrier contact's e-mail (en | es). */
+  locale: text('locale').notNull().default('en'),
   createdAt: createdAt(),
 });
 
@@ -77,6 +79,8 @@ export const users = pgTable(
     isActive: boolean('is_active').notNull().default(true),
     /** Carried in the session cookie; a cookie with an older number is signed out (trigger bumps it on secret, role or active changes). */
     sessionVersion: integer('session_version').notNull().default(1),
+    /** The language chosen at sign-in or in the header (en | es): screens and e-mail follow it. */
+    locale: text('locale').notNull().default('en'),
     createdAt: createdAt(),
   },
   (t) => [index('users_carrier').on(t.carrierId), index('users_terminal').on(t.homeTerminalId)],

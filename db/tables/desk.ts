@@ -31,6 +31,9 @@ export const cases = pgTable(
     proposedCarrierId: uuid('proposed_carrier_id').references(() => carriers.id),
     /** Set when the case holds damage with no earlier inspection: "no earlier inspection: not attributed". */
     attributionNote: text('attribution_note'),
+    /** The attribution note as a code with parameters (`case.not_attributed`), rendered in the reader's language. */
+    attributionNoteCode: text('attribution_note_code'),
+    attributionNoteParams: jsonb('attribution_note_params').$type<Record<string, unknown>>(),
     state: caseStateEnum('state').notNull().default('open'),
     estimateCents: integer('estimate_cents').notNull().default(0),
     overrideCents: integer('override_cents'),

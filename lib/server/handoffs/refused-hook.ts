@@ -44,19 +44,26 @@ export async function settleRefusedHook(
     const zone = r.detail.timeZone ?? 'UTC';
     await insertHolds(
       tx,
-      fresh.map((h) => ({
-        trailerId: input.trailerId,
-        handoffId: null,
-        severity: h.severity,
-        restriction: h.restriction,
-        ruleKey: h.ruleKey,
-        itemKey: h.itemKey,
-        reason: englishReason(reason('hold.at_refused_hook', { reason: h.reason }), zone),
-        source: h.source,
-        caution: h.caution ? englishReason(h.caution, zone) : null,
-        placedById: actor.id,
-        placedAt: now,
-      })),
+      fresh.map((h) => {
+        const why = reason('hold.at_refused_hook', { reason: h.reason });
+        return {
+          trailerId: input.trailerId,
+          handoffId: null,
+          severity: h.severity,
+          restriction: h.restriction,
+          ruleKey: h.ruleKey,
+          itemKey: h.itemKey,
+          reason: englishReason(why, zone),
+          reasonCode: why.code,
+          reasonParams: why.params,
+          source: h.source,
+          caution: h.caution ? englishReason(h.caution, zone) : null,
+          cautionCode: h.caution?.code ?? null,
+          cautionParams: h.caution?.params ?? null,
+          placedById: actor.id,
+          placedAt: now,
+        };
+      }),
     );
   });
   return refuse(r.code, r.message, r.fieldErrors, { holds: r.detail.holds });

@@ -15,13 +15,14 @@ import {
   handoffs,
   holds,
   photos,
+  terminals,
   trailers,
   users,
 } from '@/db/schema';
 import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { handoffContentHash, verifyChain } from '@/lib/handoffs/hash';
 import { OUT_OF_SERVICE_CAUTION } from '@/lib/engine';
-import { renderCoded } from '@/lib/i18n/reasons';
+import { renderCoded, renderReason } from '@/lib/i18n/reasons';
 import { isRefusal } from '@/lib/result';
 import { chainKey } from '@/lib/server/env';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
@@ -58,10 +59,18 @@ describe('handoff submit service (real database)', () => {
       state: 'open',
       proposedCarrierId: null,
       attributionNote: 'no earlier inspection: not attributed',
+      attributionNoteCode: 'case.not_attributed',
+      attributionNoteParams: {},
     });
     const rows = await db.select().from(findings).where(eq(findings.handoffId, h.handoffId));
     const panel = rows.find((f) => f.itemKey === 'rear.door_right.panel')!;
     expect(panel).toMatchObject({ kind: 'first_record', caseId: c.id, responsibleParty: null });
+    expect(panel.reasonCode).toBe('attribution.none');
+    const [{ zone }] = await db
+      .select({ zone: terminals.timeZone })
+      .from(terminals)
+      .where(eq(terminals.id, c.terminalId));
+    expect(renderReason(panel.reasonCode!, panel.reasonParams, 'en', zone)).toBe(panel.reason);
     expect(panel.reason).toContain('cannot be attributed to anyone');
     expect(rows.find((f) => f.itemKey === 'left_side.rivets')?.caseId).toBeNull();
     const [opened] = await db.select().from(caseEvents).where(eq(caseEvents.caseId, c.id));
@@ -181,9 +190,15 @@ describe('handoff submit service (real database)', () => {
     expect(e.detail?.holds).toMatchObject([
       {
         reason: 'Tandem locking pin, left rear is not engaged.',
+        // the stored hold keeps its code beside the English, so the gate can say it in the driver's language
+        reasonCoded: {
+          code: 'hold.pin_not_engaged',
+          params: { item: 'undercarriage.tandem_pin.left_rear', label: 'Tandem locking pin, left rear' },
+        },
         severity: 'out_of_service',
         restriction: null,
         caution: renderCoded(OUT_OF_SERVICE_CAUTION, 'en', 'UTC'),
+        cautionCoded: OUT_OF_SERVICE_CAUTION,
       },
     ]);
     const [t] = await db.select().from(trailers).where(eq(trailers.id, trailer.id));
