@@ -99,6 +99,8 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
         kind: findings.kind,
         condition: findings.condition,
         reason: findings.reason,
+        reasonCode: findings.reasonCode,
+        reasonParams: findings.reasonParams,
       })
       .from(findings)
       .where(eq(findings.trailerId, trailerId)),
@@ -108,6 +110,8 @@ export async function getTrailerFileRows(trailerId: string): Promise<FileRows> {
         placedAt: holds.placedAt,
         severity: holds.severity,
         reason: holds.reason,
+        reasonCode: holds.reasonCode,
+        reasonParams: holds.reasonParams,
         releasedAt: holds.releasedAt,
         repairedBy: holds.repairedBy,
         repairNote: holds.repairNote,

@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { getLocale } from 'next-intl/server';
 import { EmptyState } from '@/app/_components/empty-state';
 import { getBoard } from '@/db/queries/yard-board';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -10,7 +11,7 @@ export const metadata: Metadata = { title: 'Yard board' };
 
 export default async function YardPage() {
   const user = await requireUser(SECTION_ROLES.yard);
-  const board = user.terminalId ? await getBoard(user.terminalId) : null;
+  const board = user.terminalId ? await getBoard(user.terminalId, new Date(), await getLocale()) : null;
   return (
     <div>
       <YardNav current="/yard" />

@@ -1,12 +1,14 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { getLocale } from 'next-intl/server';
 import { z } from 'zod';
 import { Caution, CAUTIONS } from '@/app/_components/caution';
 import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { isDeskStaff } from '@/lib/desk/access';
 import { buildTrailerFile } from '@/lib/desk/trailer-file';
+import { readable } from '@/lib/i18n/reasons';
 import { formatTime, toLocalInput } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
@@ -38,9 +40,16 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   const kind = query.success ? query.data.kind : undefined;
   const trailer = await getTrailerHeader(id);
   if (!trailer) notFound();
-  const [rows, chain] = await Promise.all([getTrailerFileRows(id), verifyTrailerChain(id)]);
+  const [stored, chain] = await Promise.all([getTrailerFileRows(id), verifyTrailerChain(id)]);
   const photoCheck = query.success && query.data.photos === 'check' ? await tryCheckPhotos(id) : null;
   const zone = trailer.timeZone ?? user.terminalTimeZone ?? 'UTC';
+  // stored findings and holds in the reader's language (lib/i18n/reasons.ts)
+  const locale = await getLocale();
+  const rows = {
+    ...stored,
+    findings: readable(stored.findings, locale, zone),
+    holds: readable(stored.holds, locale, zone),
+  };
   const entries = buildTrailerFile(rows, kind);
   const openHolds = rows.holds.filter((h) => !h.releasedAt);
   const canRelease = isDeskStaff(user.role);
