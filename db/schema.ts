@@ -2,5 +2,6 @@
 export * from './tables/common';
 export * from './tables/core';
 export * from './tables/gate';
+export * from './tables/conditions';
 export * from './tables/yard';
 export * from './tables/desk';

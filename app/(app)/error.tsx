@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { Button } from '@/app/_components/button';
 import { ErrorDigest } from '@/app/_components/error-digest';
 
@@ -10,12 +11,13 @@ export default function SectionError({
   error: Error & { digest?: string };
   reset: () => void;
 }) {
+  const t = useTranslations('Errors');
   return (
     <div role="alert" className="rounded-xl border-2 border-danger bg-danger-bg p-4">
-      <h1 className="text-gate-lg font-bold text-danger">Something went wrong on our side</h1>
-      <p className="mt-1 text-gate">The problem has been logged. Nothing was saved twice. Try again.</p>
+      <h1 className="text-gate-lg font-bold text-danger">{t('error')}</h1>
+      <p className="mt-1 text-gate">{t('errorText')}</p>
       <Button type="button" className="mt-3" onClick={() => reset()}>
-        Try again
+        {t('again')}
       </Button>
       <ErrorDigest digest={error.digest} />
     </div>

@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useActionState, type ReactNode } from 'react';
 import { IDLE, type ActionState } from '@/lib/result';
 import { Button } from './button';
@@ -16,7 +17,7 @@ type Action = (prev: ActionState, form: FormData) => Promise<ActionState>;
 export function ActionForm({
   action,
   submitLabel,
-  pendingLabel = 'Saving…',
+  pendingLabel,
   title,
   ariaLabel,
   hidden,
@@ -38,6 +39,7 @@ export function ActionForm({
   disabled?: boolean;
   children?: ReactNode;
 }) {
+  const t = useTranslations('Common');
   const [state, run, isPending] = useActionState(action, IDLE);
   return (
     <FormStateProvider value={state}>
@@ -54,7 +56,7 @@ export function ActionForm({
           </p>
         ) : null}
         <Button type="submit" disabled={isPending || disabled} variant={variant}>
-          {isPending ? pendingLabel : submitLabel}
+          {isPending ? (pendingLabel ?? t('saving')) : submitLabel}
         </Button>
       </form>
     </FormStateProvider>

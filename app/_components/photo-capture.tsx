@@ -1,6 +1,8 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useState } from 'react';
+import { useRefusalText } from './use-refusal-text';
 
 /** A photo that reached storage and passed the server's checks. */
 export type CapturedPhoto = { id: string };
@@ -31,7 +33,9 @@ async function message(res: Response, fallback: string) {
 }
 
 /** Camera photo → resized JPEG → SHA-256 → presigned PUT → server check. */
-async function uploadPhoto(file: File, trailerId: string, itemKey: string): Promise<CapturedPhoto> {
+type Words = { notAnnounced: string; notUploaded: string; refused: string };
+
+async function uploadPhoto(file: File, trailerId: string, itemKey: string, w: Words): Promise<CapturedPhoto> {
   const blob = await resizeToJpeg(file);
   const bytes = await blob.arrayBuffer();
   const announce = await fetch('/api/uploads', {
@@ -45,12 +49,12 @@ async function uploadPhoto(file: File, trailerId: string, itemKey: string): Prom
       sha256: await sha256Hex(bytes),
     }),
   });
-  if (!announce.ok) throw new Error(await message(announce, 'The photo could not be announced.'));
+  if (!announce.ok) throw new Error(await message(announce, w.notAnnounced));
   const { photoId, uploadUrl, headers } = await announce.json();
   const put = await fetch(uploadUrl, { method: 'PUT', headers, body: blob });
-  if (!put.ok) throw new Error('The photo did not upload; try again.');
+  if (!put.ok) throw new Error(w.notUploaded);
   const done = await fetch(`/api/uploads/${photoId}/complete`, { method: 'POST' });
-  if (!done.ok) throw new Error(await message(done, 'The photo was refused.'));
+  if (!done.ok) throw new Error(await message(done, w.refused));
   return { id: photoId };
 }
 
@@ -68,18 +72,20 @@ export function PhotoCapture({
   photos: CapturedPhoto[];
   onAdd: (p: CapturedPhoto) => void;
 }) {
+  const t = useTranslations('Common');
+  const say = useRefusalText();
   const [state, setState] = useState<{ busy: boolean; error: string | null }>({ busy: false, error: null });
   const inputId = `photo-${itemKey}`;
   return (
     <div className="space-y-2">
       {photos.length ? (
-        <ul className="flex flex-wrap gap-2" aria-label={`Photos of ${label}`}>
+        <ul className="flex flex-wrap gap-2" aria-label={t('photo.photosOf', { label })}>
           {photos.map((p) => (
             <li key={p.id}>
               {/* eslint-disable-next-line @next/next/no-img-element -- served by the app, checked and sized at upload */}
               <img
                 src={`/api/photos/${p.id}`}
-                alt={`Photo of ${label}`}
+                alt={t('photo.photoOf', { label })}
                 className="h-20 w-20 rounded border-2 border-paper-line object-cover"
               />
             </li>
@@ -90,7 +96,7 @@ export function PhotoCapture({
         htmlFor={inputId}
         className="inline-flex min-h-tap cursor-pointer items-center rounded-lg border-2 border-brand bg-paper px-4 text-gate font-bold text-brand"
       >
-        {state.busy ? 'Uploading…' : photos.length ? 'Add another photo' : 'Take a photo'}
+        {state.busy ? t('photo.uploading') : photos.length ? t('photo.another') : t('photo.take')}
       </label>
       <input
         id={inputId}
@@ -98,7 +104,7 @@ export function PhotoCapture({
         accept="image/*"
         capture="environment"
         className="sr-only"
-        aria-label={`Photo of ${label}`}
+        aria-label={t('photo.photoOf', { label })}
         disabled={state.busy}
         onChange={async (e) => {
           const file = e.target.files?.[0];
@@ -106,12 +112,18 @@ export function PhotoCapture({
           if (!file) return;
           setState({ busy: true, error: null });
           try {
-            onAdd(await uploadPhoto(file, trailerId, itemKey));
+            onAdd(
+              await uploadPhoto(file, trailerId, itemKey, {
+                notAnnounced: t('photo.notAnnounced'),
+                notUploaded: t('photo.notUploaded'),
+                refused: t('photo.refused'),
+              }),
+            );
             setState({ busy: false, error: null });
           } catch (err) {
             setState({
               busy: false,
-              error: err instanceof Error ? err.message : 'The photo could not be saved.',
+              error: err instanceof Error ? say(err.message) : t('photo.notSaved'),
             });
           }
         }}

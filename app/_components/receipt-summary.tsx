@@ -1,15 +1,18 @@
-import { CAUTIONS, Caution } from '@/app/_components/caution';
+import { useTranslations } from 'next-intl';
+import { Caution } from '@/app/_components/caution';
 import { formatWhen } from '@/lib/engine';
 import { FINDING_WORDS, holdTitle, type ReceiptView } from '@/lib/handoffs/receipt';
 import { formatVerificationCode } from '@/lib/handoffs/verification-code';
 
 /** The receipt as the gate, the e-mail and the public verify page show it. Photos only where the viewer may see them. */
 export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptView; showPhotos: boolean }) {
+  const t = useTranslations('Common');
+  const c = useTranslations('Cautions');
   const isOutOfService = r.holds.some((h) => h.severity === 'out_of_service');
   return (
-    <article className="space-y-4" aria-label="Handoff receipt">
+    <article className="space-y-4" aria-label={t('receipt.label')}>
       <div className="rounded-lg border-4 border-brand p-3 text-center">
-        <p className="text-gate-sm font-bold">Verification code</p>
+        <p className="text-gate-sm font-bold">{t('receipt.code')}</p>
         <p
           className="font-mono text-[2.5rem] font-bold leading-tight tracking-widest"
           data-testid="verification-code"
@@ -18,57 +21,57 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
         </p>
       </div>
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-gate">
-        <dt className="font-bold">Trailer</dt>
+        <dt className="font-bold">{t('receipt.trailer')}</dt>
         <dd>{r.unitNumber}</dd>
-        <dt className="font-bold">Handoff</dt>
+        <dt className="font-bold">{t('receipt.handoff')}</dt>
         <dd>
-          {r.kind === 'drop' ? 'Drop (gate in)' : 'Hook (gate out)'}, {r.terminalName}
+          {r.kind === 'drop' ? t('receipt.drop') : t('receipt.hook')}, {r.terminalName}
         </dd>
-        <dt className="font-bold">When</dt>
+        <dt className="font-bold">{t('receipt.when')}</dt>
         <dd>{formatWhen(r.occurredAt, r.timeZone)}</dd>
-        <dt className="font-bold">Carrier</dt>
+        <dt className="font-bold">{t('receipt.carrier')}</dt>
         <dd>{r.carrierName}</dd>
-        <dt className="font-bold">Driver</dt>
+        <dt className="font-bold">{t('receipt.driver')}</dt>
+        <dd>{t('receipt.driverLine', { driver: r.driverName, tractor: r.tractorNumber })}</dd>
+        <dt className="font-bold">{t('receipt.load')}</dt>
         <dd>
-          {r.driverName}, tractor {r.tractorNumber}
-        </dd>
-        <dt className="font-bold">Load</dt>
-        <dd>
-          {r.isLoaded ? 'Loaded' : 'Empty'}
-          {r.sealNumber ? `, seal ${r.sealNumber}` : ''}
+          {r.isLoaded ? t('receipt.loaded') : t('receipt.empty')}
+          {r.sealNumber ? `, ${t('receipt.seal', { seal: r.sealNumber })}` : ''}
         </dd>
         {r.fuelEighths !== null ? (
           <>
-            <dt className="font-bold">Fuel</dt>
+            <dt className="font-bold">{t('receipt.fuel')}</dt>
             <dd>{r.fuelEighths}/8</dd>
           </>
         ) : null}
         {r.spotLabel ? (
           <>
-            <dt className="font-bold">Slot</dt>
+            <dt className="font-bold">{t('receipt.slot')}</dt>
             <dd>{r.spotLabel}</dd>
           </>
         ) : null}
       </dl>
       <section aria-labelledby="findings-title">
         <h2 id="findings-title" className="text-gate-xl font-bold">
-          Findings
+          {t('receipt.findings')}
         </h2>
         {r.findings.length ? (
           <ul className="mt-1 space-y-2">
             {r.findings.map((f) => (
               <li key={`${f.kind}-${f.itemKey}`} className="rounded-lg bg-paper-dim p-2 text-gate">
-                <span className="font-bold">{FINDING_WORDS[f.kind] ?? f.kind}:</span> {f.reason}
+                <span data-stored-text="">
+                  <span className="font-bold">{FINDING_WORDS[f.kind] ?? f.kind}:</span> {f.reason}
+                </span>
               </li>
             ))}
           </ul>
         ) : (
-          <p className="text-gate">No change from the last record.</p>
+          <p className="text-gate">{t('receipt.noChange')}</p>
         )}
       </section>
       <section aria-labelledby="holds-title">
         <h2 id="holds-title" className="text-gate-xl font-bold">
-          Holds
+          {t('receipt.holds')}
         </h2>
         {r.holds.length ? (
           <ul className="mt-1 space-y-2">
@@ -77,22 +80,24 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
                 key={h.reason}
                 className={`rounded-lg border-2 p-2 text-gate ${h.severity === 'out_of_service' ? 'border-danger bg-danger-bg text-danger' : 'border-hold bg-hold-bg text-hold'}`}
               >
-                <span className="font-bold">{holdTitle(h)}.</span> {h.reason}
+                <span data-stored-text="">
+                  <span className="font-bold">{holdTitle(h)}.</span> {h.reason}
+                </span>
               </li>
             ))}
           </ul>
         ) : (
-          <p className="text-gate">None.</p>
+          <p className="text-gate">{t('receipt.none')}</p>
         )}
         {isOutOfService ? (
           <div className="mt-2">
-            <Caution title="Out of service">{CAUTIONS.outOfService}</Caution>
+            <Caution title={c('titles.outOfService')}>{c('outOfService')}</Caution>
           </div>
         ) : null}
       </section>
       <section aria-labelledby="photos-title">
         <h2 id="photos-title" className="text-gate-xl font-bold">
-          Photos ({r.photos.length})
+          {t('receipt.photos', { count: r.photos.length })}
         </h2>
         {showPhotos && r.photos.length ? (
           <ul className="mt-1 flex flex-wrap gap-2">
@@ -102,7 +107,7 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
                   {/* eslint-disable-next-line @next/next/no-img-element -- served by the app, checked and sized at upload */}
                   <img
                     src={`/api/photos/${p.id}`}
-                    alt={`Photo${p.itemKey ? ` of ${p.itemKey}` : ''}`}
+                    alt={p.itemKey ? t('receipt.photoOf', { item: p.itemKey }) : t('receipt.photo')}
                     className="h-24 w-24 rounded border-2 border-paper-line object-cover"
                   />
                 </a>
@@ -111,8 +116,8 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
           </ul>
         ) : null}
       </section>
-      <Caution title="Your inspection">{CAUTIONS.inspection}</Caution>
-      <p className="break-all text-gate-sm text-ink-faint">Record hash (SHA-256): {r.contentHash}</p>
+      <Caution title={c('titles.inspection')}>{c('inspection')}</Caution>
+      <p className="break-all text-gate-sm text-ink-faint">{t('receipt.hash', { hash: r.contentHash })}</p>
     </article>
   );
 }

@@ -1,6 +1,7 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { getTranslations } from 'next-intl/server';
 import { formAction } from '@/lib/server/action';
 import { disputeByLink } from '@/lib/server/desk/link-dispute';
 import { linkDisputeSchema } from '@/lib/validation/desk';
@@ -12,6 +13,6 @@ export const disputeByLinkAction = formAction(
     const result = await disputeByLink({ token: v.token, note: v.note });
     if (!result.ok) return result;
     revalidatePath(`/case-link/${v.token}`);
-    return { ok: true, message: 'Your dispute is recorded. The terminal clerk will decide and e-mail you.' };
+    return { ok: true, message: (await getTranslations('CaseLink'))('done') };
   },
 );

@@ -6,25 +6,7 @@ import type { ChainRecord } from '@/lib/handoffs/chain';
 
 /** A trailer's handoffs as stored, oldest first (as the submit links them), with their items and photos. */
 export async function listChainRecords(trailerId: string): Promise<ChainRecord[]> {
-  const rows = await db
-    .select()
-    .from(handoffs)
-    .where(eq(handoffs.trailerId, trailerId))
-    .orderBy(asc(handoffs.occurredAt), asc(handoffs.createdAt));
-  if (!rows.length) return [];
-  const ids = rows.map((r) => r.id);
-  const [items, pics] = await Promise.all([
-    db.select().from(handoffItems).where(inArray(handoffItems.handoffId, ids)),
-    db
-      .select({ handoffId: photos.handoffId, sha256: photos.sha256, status: photos.status })
-      .from(photos)
-      .where(inArray(photos.handoffId, ids)),
-  ]);
-  return rows.map((row) => ({
-    row,
-    items: items.filter((i) => i.handoffId === row.id),
-    photos: pics.filter((p) => p.handoffId === row.id),
-  }));
+  return (await chainsWhere(eq(handoffs.trailerId, trailerId))).get(trailerId) ?? [];
 }
 
 /** The chains of every trailer with a handoff recorded at the terminal, by trailer (three queries). */
@@ -42,6 +24,7 @@ export async function listChainsOf(trailerIds: string[]): Promise<Map<string, Ch
   return chainsWhere(inArray(handoffs.trailerId, trailerIds));
 }
 
+/** The records matching `where`, by trailer, each trailer's oldest first (three queries). */
 async function chainsWhere(where: SQL): Promise<Map<string, ChainRecord[]>> {
   const rows = await db
     .select()

@@ -14,7 +14,14 @@ export type CustodyRows = {
   walks: { id: string; scannedAt: Date }[];
 };
 
-export type CustodyEvent = { id: string; at: Date; kind: 'drop' | 'hook' | 'move' | 'walk'; text: string };
+/** `values` fill the screen's message for the kind in the reader's language; `text` is the English line. */
+export type CustodyEvent = {
+  id: string;
+  at: Date;
+  kind: 'drop' | 'hook' | 'move' | 'walk';
+  text: string;
+  values: Record<string, string>;
+};
 
 export function custodyTimeline(rows: CustodyRows): CustodyEvent[] {
   const events: CustodyEvent[] = [
@@ -26,18 +33,21 @@ export function custodyTimeline(rows: CustodyRows): CustodyEvent[] {
         h.kind === 'drop'
           ? `Dropped by ${h.driverName} (${h.carrierScac}); custody passes to the terminal`
           : `Hooked by ${h.driverName} (${h.carrierScac}); custody passes to ${h.carrierName}`,
+      values: { driver: h.driverName, scac: h.carrierScac, carrier: h.carrierName },
     })),
     ...rows.moves.map((m) => ({
       id: m.id,
       at: m.movedAt,
       kind: 'move' as const,
       text: `Yard move to ${m.toSpot}; custody stays with the terminal`,
+      values: { spot: m.toSpot },
     })),
     ...rows.walks.map((w) => ({
       id: w.id,
       at: w.scannedAt,
       kind: 'walk' as const,
       text: 'Seen on a yard walk (quick check)',
+      values: {},
     })),
   ];
   return events.sort((a, b) => a.at.getTime() - b.at.getTime());

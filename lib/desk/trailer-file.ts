@@ -3,12 +3,19 @@ import { formatMoney } from '@/lib/format/money';
 import { itemLabel } from './item-labels';
 
 export type FileKind = 'handoff' | 'move' | 'walk' | 'finding' | 'hold' | 'case' | 'photo';
+/** A line of the file as a message key and its values, for the screen to say in the reader's language. */
+export type FileWords = { key: string; values: Record<string, string> };
+/** Stored text (an engine reason, a clerk's note) shown as it is. */
+export const STORED = 'stored';
+
 export type FileEntry = {
   id: string;
   kind: FileKind;
   at: Date;
+  /** English title and detail (kept for tests and exports); the screen uses `words`. */
   title: string;
   detail: string | null;
+  words: { title: FileWords; detail: FileWords[] };
   href?: string;
   tone?: 'danger' | 'ok' | 'hold';
 };
@@ -58,18 +65,36 @@ function handoffEntry(h: FileRows['handoffs'][number], all: FileRows['handoffs']
   const corrects = h.correctsHandoffId ? all.find((o) => o.id === h.correctsHandoffId) : undefined;
   const what = `${h.kind === 'drop' ? 'Drop' : 'Hook'} by ${h.driverName} (${h.carrierScac})`;
   const parts = [`${h.level === 'full' ? 'Full inspection' : 'Quick check'} · receipt ${h.verificationCode}`];
+  const who = { kind: h.kind, driver: h.driverName, scac: h.carrierScac };
+  const detail: FileWords[] = [
+    { key: h.level === 'full' ? 'fullInspection' : 'quickCheck', values: { code: h.verificationCode } },
+  ];
   if (h.correctsHandoffId) {
     parts.push(`corrects receipt ${corrects?.verificationCode ?? 'of another trailer'}`);
-    if (h.correctionReason) parts.push(`reason: ${h.correctionReason}`);
+    detail.push(
+      corrects
+        ? { key: 'corrects', values: { code: corrects.verificationCode } }
+        : { key: 'correctsOther', values: {} },
+    );
+    if (h.correctionReason) {
+      parts.push(`reason: ${h.correctionReason}`);
+      detail.push({ key: 'reason', values: { reason: h.correctionReason } });
+    }
   }
-  if (correctedBy)
+  if (correctedBy) {
     parts.push(`corrected by receipt ${correctedBy.verificationCode}; the correction stands in for it`);
+    detail.push({ key: 'correctedBy', values: { code: correctedBy.verificationCode } });
+  }
   return {
     id: h.id,
     kind: 'handoff',
     at: h.occurredAt,
     title: h.correctsHandoffId ? `Correction: ${what}` : correctedBy ? `${what} (corrected)` : what,
     detail: parts.join(' · '),
+    words: {
+      title: { key: h.correctsHandoffId ? 'correction' : correctedBy ? 'corrected' : 'handoff', values: who },
+      detail,
+    },
     ...(correctedBy ? { tone: 'hold' as const } : {}),
   };
 }
@@ -83,6 +108,12 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
       at: m.movedAt,
       title: `Moved ${m.fromSpot ? `from ${m.fromSpot} ` : ''}to ${m.toSpot}`,
       detail: m.jockeyName ? `by ${m.jockeyName}` : null,
+      words: {
+        title: m.fromSpot
+          ? { key: 'movedFrom', values: { from: m.fromSpot, to: m.toSpot } }
+          : { key: 'moved', values: { to: m.toSpot } },
+        detail: m.jockeyName ? [{ key: 'by', values: { name: m.jockeyName } }] : [],
+      },
     })),
     ...rows.walks.map((w): FileEntry => ({
       id: w.id,
@@ -90,6 +121,10 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
       at: w.scannedAt,
       title: `Seen on a yard walk${w.spot ? ` in ${w.spot}` : ''}`,
       detail: w.jockeyName ? `by ${w.jockeyName}` : null,
+      words: {
+        title: w.spot ? { key: 'seenIn', values: { spot: w.spot } } : { key: 'seen', values: {} },
+        detail: w.jockeyName ? [{ key: 'by', values: { name: w.jockeyName } }] : [],
+      },
     })),
     ...rows.findings
       .filter(
@@ -101,6 +136,16 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
         at: f.createdAt,
         title: `${f.kind === 'repaired' ? 'Repaired' : f.kind === 'worse' ? 'Worse' : f.kind === 'new' ? 'New damage' : f.kind}: ${itemLabel(f.itemKey)}${f.condition ? ` (${f.condition})` : ''}`,
         detail: f.reason,
+        // the item and condition names and the reason are the engine's words (rendered from codes by their owner)
+        words: {
+          title: {
+            key: STORED,
+            values: {
+              text: `${f.kind === 'repaired' ? 'Repaired' : f.kind === 'worse' ? 'Worse' : f.kind === 'new' ? 'New damage' : f.kind}: ${itemLabel(f.itemKey)}${f.condition ? ` (${f.condition})` : ''}`,
+            },
+          },
+          detail: [{ key: STORED, values: { text: f.reason } }],
+        },
         tone: f.kind === 'repaired' ? 'ok' : 'danger',
       })),
     ...rows.holds.flatMap((h): FileEntry[] => {
@@ -110,6 +155,10 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
         at: h.placedAt,
         title: `Hold placed: ${h.severity === 'out_of_service' ? 'out of service' : 'restricted'}`,
         detail: h.reason,
+        words: {
+          title: { key: h.severity === 'out_of_service' ? 'holdOutOfService' : 'holdRestricted', values: {} },
+          detail: [{ key: STORED, values: { text: h.reason } }],
+        },
         tone: 'hold',
       };
       if (!h.releasedAt) return [placed];
@@ -119,6 +168,15 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
         at: h.releasedAt,
         title: `Hold released after repair by ${h.repairedBy ?? 'unknown'}`,
         detail: `${h.repairNote ?? ''}${h.releasedByName ? ` · recorded by ${h.releasedByName}` : ''}`,
+        words: {
+          title: h.repairedBy
+            ? { key: 'released', values: { who: h.repairedBy } }
+            : { key: 'releasedUnknown', values: {} },
+          detail: [
+            ...(h.repairNote ? [{ key: STORED, values: { text: h.repairNote } }] : []),
+            ...(h.releasedByName ? [{ key: 'recordedBy', values: { name: h.releasedByName } }] : []),
+          ],
+        },
         tone: 'ok',
       };
       return [placed, released];
@@ -129,6 +187,10 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
       at: c.openedAt,
       title: `Damage case ${c.state}${c.carrierScac ? ` · ${c.carrierScac}` : ''}`,
       detail: `Estimate ${formatMoney(c.amountCents)}`,
+      words: {
+        title: { key: 'case', values: { state: c.state, scac: c.carrierScac ?? '' } },
+        detail: [{ key: 'estimate', values: { amount: formatMoney(c.amountCents) } }],
+      },
       href: `/desk/cases/${c.id}`,
     })),
     ...rows.photos.map((p): FileEntry => ({
@@ -137,6 +199,12 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind): FileEntry[] {
       at: p.createdAt,
       title: `Photo${p.itemKey ? ` of ${itemLabel(p.itemKey)}` : ''}`,
       detail: null,
+      words: {
+        title: p.itemKey
+          ? { key: 'photoOf', values: { item: itemLabel(p.itemKey) } }
+          : { key: 'photo', values: {} },
+        detail: [],
+      },
       href: `/api/photos/${p.id}`,
     })),
   ];

@@ -2,6 +2,7 @@
 // through formatWhen), the verification code, and a QR to the verify page with the code filled in.
 import { PDFDocument, rgb, StandardFonts, type PDFFont, type PDFPage } from 'pdf-lib';
 import QRCode from 'qrcode';
+import { drawQr, modulesOf } from '@/lib/pdf/qr';
 import { receiptText, type ReceiptView } from './receipt';
 import { formatVerificationCode } from './verification-code';
 
@@ -41,23 +42,10 @@ function wrap(font: PDFFont, text: string, width: number): string[] {
   return out;
 }
 
-function drawQr(page: PDFPage, link: string, x: number, y: number, target: number) {
-  const qr = QRCode.create(link, { errorCorrectionLevel: 'M' });
-  const { size, data } = qr.modules;
-  const m = Math.max(2, Math.floor(target / (size + 2 * QR_MARGIN)));
-  const side = (size + 2 * QR_MARGIN) * m;
-  page.drawRectangle({ x, y, width: side, height: side, color: rgb(1, 1, 1) });
-  for (let r = 0; r < size; r++)
-    for (let c = 0; c < size; c++)
-      if (data[r * size + c])
-        page.drawRectangle({
-          x: x + (c + QR_MARGIN) * m,
-          y: y + side - (r + 1 + QR_MARGIN) * m,
-          width: m,
-          height: m,
-          color: INK,
-        });
-  return side;
+function drawReceiptQr(page: PDFPage, link: string, x: number, y: number, target: number) {
+  const qr = modulesOf(QRCode.create(link, { errorCorrectionLevel: 'M' }).modules);
+  const modulePt = Math.max(2, Math.floor(target / (qr.size + 2 * QR_MARGIN)));
+  return drawQr(page, qr, { x, y, modulePt, margin: QR_MARGIN, ink: INK });
 }
 
 /** Builds the receipt PDF. `verifyUrl` is the app's public verify page (…/verify). */
@@ -70,7 +58,7 @@ export async function buildReceiptPdf(view: ReceiptView, verifyUrl: string): Pro
   let page = doc.addPage([PAGE.width, PAGE.height]);
   let y = PAGE.height - MARGIN;
   const link = receiptVerifyLink(verifyUrl, view.verificationCode);
-  const qrSide = drawQr(page, link, PAGE.width - MARGIN - 120, PAGE.height - MARGIN - 120, 120);
+  const qrSide = drawReceiptQr(page, link, PAGE.width - MARGIN - 120, PAGE.height - MARGIN - 120, 120);
   const textWidth = PAGE.width - 2 * MARGIN - qrSide - 12;
   const lines = receiptText(view, verifyUrl).split('\n');
   lines.forEach((raw, i) => {

@@ -2,6 +2,7 @@
 // large type, the QR drawn as filled squares at a whole number of points per module (scanners
 // misread fractional module sizes), and the VIN and owner SCAC in small type.
 import { PDFDocument, rgb, StandardFonts, type PDFFont, type PDFPage } from 'pdf-lib';
+import { drawQr } from '@/lib/pdf/qr';
 import { LABEL_QR_MARGIN, labelQrModules } from './qr';
 
 export interface PrintableLabel {
@@ -56,22 +57,7 @@ function drawLabel(
   const qr = labelQrModules(label.link);
   const m = pdfModulePoints(qr.size);
   const side = (qr.size + 2 * LABEL_QR_MARGIN) * m;
-  const qx = centre - side / 2;
-  const qy = y0 + 58;
-  // white quiet zone, then one square per dark module (row 0 at the top)
-  page.drawRectangle({ x: qx, y: qy, width: side, height: side, color: rgb(1, 1, 1) });
-  for (let r = 0; r < qr.size; r++) {
-    for (let c = 0; c < qr.size; c++) {
-      if (!qr.isDark(r, c)) continue;
-      page.drawRectangle({
-        x: qx + (c + LABEL_QR_MARGIN) * m,
-        y: qy + side - (r + 1 + LABEL_QR_MARGIN) * m,
-        width: m,
-        height: m,
-        color: INK,
-      });
-    }
-  }
+  drawQr(page, qr, { x: centre - side / 2, y: y0 + 58, modulePt: m, margin: LABEL_QR_MARGIN, ink: INK });
   const small = `VIN ${label.vin}   Owner ${label.ownerScac}`;
   const smallSize = fitSize(mono, small, CELL.width - 40, 9);
   page.drawText(small, {

@@ -1,7 +1,9 @@
 import 'server-only';
+import { getTranslations } from 'next-intl/server';
 import type { z } from 'zod';
 import type { Role } from '@/lib/auth/roles';
-import { isRefusal, type ActionState, type Refusal } from '@/lib/result';
+import { localizeRefusal } from '@/lib/i18n/refusals';
+import { isRefusal, type ActionState, type FieldErrors, type Refusal } from '@/lib/result';
 import { describeZodError } from '@/lib/validation/errors';
 import { currentUser, requireUser, type SessionUser } from './auth';
 
@@ -15,6 +17,18 @@ function echo(raw: unknown): Record<string, string> {
     if (typeof value === 'string' && !SECRET_FIELD.test(key) && !key.startsWith('$')) out[key] = value;
   }
   return out;
+}
+
+/** A refusal's summary and field messages in the reader's language (the services speak English). */
+async function localized(formError: string | undefined, fieldErrors: FieldErrors | undefined) {
+  const t = await getTranslations('Refusals');
+  const say = (m: string) => localizeRefusal(m, (key, values) => t(key, values));
+  return {
+    formError: formError === undefined ? undefined : say(formError),
+    fieldErrors: fieldErrors
+      ? Object.fromEntries(Object.entries(fieldErrors).map(([k, list]) => [k, list.map(say)]))
+      : undefined,
+  };
 }
 
 type Access = readonly Role[] | 'public';
@@ -49,11 +63,11 @@ export function formAction<S extends z.ZodType, A extends Access = readonly Role
     const parsed = spec.schema.safeParse(raw);
     if (!parsed.success) {
       const { message, fieldErrors } = describeZodError(parsed.error, spec.invalidMessage);
-      return { ok: false, formError: message, fieldErrors, values };
+      return { ok: false, ...(await localized(message, fieldErrors)), values };
     }
     const outcome = await work(user, parsed.data);
     if (isRefusal(outcome)) {
-      return { ok: false, formError: outcome.message, fieldErrors: outcome.fieldErrors, values };
+      return { ok: false, ...(await localized(outcome.message, outcome.fieldErrors)), values };
     }
     return { ok: true, message: outcome?.message };
   };

@@ -5,6 +5,7 @@ import { isRefusal, refuse, type FieldErrors, type Refusal, type RefusalCode } f
 import { describeZodError } from '@/lib/validation/errors';
 import { currentUser, type SessionUser } from './auth';
 import { appUrl } from './env';
+import { knownRefusal } from '@/lib/i18n/refusals';
 
 // The one map from a refusal to an HTTP status. Nothing below lib/server knows about HTTP.
 const STATUS: Record<RefusalCode, number> = {
@@ -24,9 +25,13 @@ const STATUS: Record<RefusalCode, number> = {
 
 /** The one shape every route handler answers an expected failure with: `{ code, message, fieldErrors? }`. */
 export function refusalResponse(r: Refusal, headers?: HeadersInit): Response {
+  // `message` stays English for API clients; `messageKey` (and its values) let a screen say it in the
+  // reader's language through the `Refusals` catalogue
+  const known = knownRefusal(r.message);
   const body = {
     code: r.code,
     message: r.message,
+    ...(known ? { messageKey: known.key, messageValues: known.values } : {}),
     ...(r.fieldErrors ? { fieldErrors: r.fieldErrors } : {}),
     ...(r.detail ?? {}),
   };

@@ -22,35 +22,62 @@ export const COLUMNS: readonly { key: SortKey | 'gateIn'; header: string }[] = [
 
 const localTime = (at: string | null, timeZone: string) => (at === null ? '—' : formatTime(at, timeZone));
 
-export function reeferText(t: BoardTrailer): string {
-  if (t.kind !== 'reefer') return 'No unit';
-  if (t.isReeferOn === null) return 'Not read';
-  if (!t.isReeferOn) return 'Off';
-  return t.setpointTenthsF === null ? 'On' : `On, ${(t.setpointTenthsF / 10).toFixed(1)} °F`;
+/** The words of the table's cells; the CSV export keeps English, the screen passes the reader's. */
+export type CellWords = {
+  loaded: string;
+  empty: string;
+  noUnit: string;
+  notRead: string;
+  off: string;
+  on: string;
+  onAt: (setpoint: string) => string;
+  none: string;
+  outOfService: string;
+  restricted: string;
+};
+
+export const ENGLISH_CELLS: CellWords = {
+  loaded: 'Loaded',
+  empty: 'Empty',
+  noUnit: 'No unit',
+  notRead: 'Not read',
+  off: 'Off',
+  on: 'On',
+  onAt: (setpoint) => `On, ${setpoint} °F`,
+  none: 'None',
+  outOfService: 'Out of service',
+  restricted: 'Restricted',
+};
+
+export function reeferText(t: BoardTrailer, w: CellWords = ENGLISH_CELLS): string {
+  if (t.kind !== 'reefer') return w.noUnit;
+  if (t.isReeferOn === null) return w.notRead;
+  if (!t.isReeferOn) return w.off;
+  return t.setpointTenthsF === null ? w.on : w.onAt((t.setpointTenthsF / 10).toFixed(1));
 }
 
-export function fuelText(t: BoardTrailer): string {
+export function fuelText(t: BoardTrailer, w: CellWords = ENGLISH_CELLS): string {
   if (t.kind !== 'reefer') return '—';
-  return t.fuelEighths === null ? 'Not read' : `${t.fuelEighths}/8`;
+  return t.fuelEighths === null ? w.notRead : `${t.fuelEighths}/8`;
 }
 
-export function holdsText(t: BoardTrailer): string {
-  if (t.holds.length === 0) return 'None';
+export function holdsText(t: BoardTrailer, w: CellWords = ENGLISH_CELLS): string {
+  if (t.holds.length === 0) return w.none;
   return t.holds
-    .map((h) => `${h.severity === 'out_of_service' ? 'Out of service' : 'Restricted'}: ${h.reason}`)
+    .map((h) => `${h.severity === 'out_of_service' ? w.outOfService : w.restricted}: ${h.reason}`)
     .join('; ');
 }
 
 /** The cells of one table row as text, in COLUMNS order. */
-export function rowCells(row: TableRow, timeZone: string, now: Date): string[] {
+export function rowCells(row: TableRow, timeZone: string, now: Date, w: CellWords = ENGLISH_CELLS): string[] {
   const t = row.trailer;
   return [
     t.unitNumber,
     row.spotLabel,
-    t.isLoaded ? 'Loaded' : 'Empty',
-    reeferText(t),
-    fuelText(t),
-    holdsText(t),
+    t.isLoaded ? w.loaded : w.empty,
+    reeferText(t, w),
+    fuelText(t, w),
+    holdsText(t, w),
     formatDwell(dwellMinutes(t.gateInAt, now)),
     localTime(t.gateInAt, timeZone),
     localTime(t.lastSeenAt, timeZone),

@@ -3,7 +3,6 @@
 // never find the yard full, and one untouched trailer on the road per phone.
 import { execFileSync } from 'node:child_process';
 import net from 'node:net';
-import { sealData } from 'iron-session';
 
 const arg = (name: string, fallback: number) => {
   const i = process.argv.indexOf(`--${name}`);
@@ -51,26 +50,16 @@ export async function prepare() {
   const { db } = await import('@/db');
   const { and, eq, sql } = await import('drizzle-orm');
   const { trailers, users, yardRows, yardSpots } = await import('@/db/schema');
-  const { SESSION_COOKIE } = await import('@/lib/auth/session-cookie');
+  const { sessionCookieFor } = await import('@/tests/support/session-cookie');
 
   const drivers: Driver[] = await Promise.all(
     DRIVERS.map(async (n) => {
       const [u] = await db.select().from(users).where(eq(users.driverNumber, n));
-      const cookie = await sealData(
-        {
-          userId: u.id,
-          role: u.role,
-          carrierId: u.carrierId,
-          terminalId: u.homeTerminalId,
-          version: u.sessionVersion,
-        },
-        { password: process.env.SESSION_SECRET!, ttl: 3600 },
-      );
       return {
         id: u.id,
         carrierId: u.carrierId!,
         terminalId: u.homeTerminalId!,
-        cookie: `${SESSION_COOKIE}=${cookie}`,
+        cookie: await sessionCookieFor(n),
       };
     }),
   );

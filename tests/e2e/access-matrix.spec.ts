@@ -1,43 +1,21 @@
 import { randomUUID } from 'node:crypto';
 import { expect, request as playwrightRequest, test } from '@playwright/test';
 import { and, eq, inArray } from 'drizzle-orm';
-import { sealData } from 'iron-session';
 import { db } from '../../db';
 import { cases, handoffs, labels, photos, trailers, users, yardWalks } from '../../db/schema';
 import { signCaseLink } from '../../lib/desk/case-link';
 import { signLabelToken } from '../../lib/engine/identity/label-token';
-import { SESSION_COOKIE } from '../../lib/auth/session-cookie';
 import { baseURL } from '../../playwright.config';
-import { PAGES, ROUTES, VISITORS, type Ids, type Visitor } from '../support/access-matrix';
+import { PAGES, ROUTES, VISITOR_ACCOUNTS, VISITORS, type Ids, type Visitor } from '../support/access-matrix';
+import { sessionCookieFor } from '../support/session-cookie';
 
 // Every page and route-handler cell of the access matrix, sent over HTTP to `next start`: the
 // status on the wire must be the one in the table (a denied page is 403/404, never a 200 that
-// streams a forbidden body). Cookies are sealed here the way the app seals them (iron-session with
-// SESSION_SECRET and the account's current session version), so no sign-in form is needed.
-
-const ACCOUNTS: Record<Exclude<Visitor, 'none'>, { col: 'email' | 'driverNumber'; value: string }> = {
-  driverOwn: { col: 'driverNumber', value: 'D2001' },
-  driverOther: { col: 'driverNumber', value: 'D1001' },
-  jockey: { col: 'email', value: 'jockey@bramblecrest.example' },
-  clerk: { col: 'email', value: 'clerk@bramblecrest.example' },
-  admin: { col: 'email', value: 'admin@bramblecrest.example' },
-};
+// streams a forbidden body). Cookies are sealed the way the app seals them (tests/support/session-cookie.ts),
+// so no sign-in form is needed.
 
 async function cookieOf(visitor: Visitor): Promise<string | null> {
-  if (visitor === 'none') return null;
-  const a = ACCOUNTS[visitor];
-  const [u] = await db.select().from(users).where(eq(users[a.col], a.value));
-  const sealed = await sealData(
-    {
-      userId: u.id,
-      role: u.role,
-      carrierId: u.carrierId,
-      terminalId: u.homeTerminalId,
-      version: u.sessionVersion,
-    },
-    { password: process.env.SESSION_SECRET!, ttl: 3600 },
-  );
-  return `${SESSION_COOKIE}=${sealed}`;
+  return visitor === 'none' ? null : sessionCookieFor(VISITOR_ACCOUNTS[visitor]);
 }
 
 async function recordIds(): Promise<Ids> {

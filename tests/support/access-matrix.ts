@@ -10,6 +10,15 @@
 
 export const VISITORS = ['none', 'driverOwn', 'driverOther', 'jockey', 'clerk', 'admin'] as const;
 export type Visitor = (typeof VISITORS)[number];
+
+/** The seeded account (e-mail or driver number) each signed-in visitor is. */
+export const VISITOR_ACCOUNTS: Record<Exclude<Visitor, 'none'>, string> = {
+  driverOwn: 'D2001',
+  driverOther: 'D1001',
+  jockey: 'jockey@bramblecrest.example',
+  clerk: 'clerk@bramblecrest.example',
+  admin: 'admin@bramblecrest.example',
+};
 export type Expect = Record<Visitor, number>;
 
 /** Records of the seeded e2e database the URLs point at (found by the spec at run time). */

@@ -1,6 +1,7 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { getTranslations } from 'next-intl/server';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { DESK_STAFF } from '@/lib/desk/access';
 import type { CaseCommand } from '@/lib/desk/case-state';
@@ -17,7 +18,9 @@ import {
   resendEmailSchema,
 } from '@/lib/validation/desk';
 
-async function command(user: SessionUser, caseId: string, cmd: CaseCommand, message: string) {
+type Done = 'notified' | 'disputed' | 'decided' | 'override' | 'closed';
+
+async function command(user: SessionUser, caseId: string, cmd: CaseCommand, done: Done) {
   const result = await runCaseCommand(
     { id: user.id, role: user.role, carrierId: user.carrierId },
     { caseId, command: cmd },
@@ -26,23 +29,17 @@ async function command(user: SessionUser, caseId: string, cmd: CaseCommand, mess
   // the e-mail and its sending job were queued with the case change; the job worker sends it
   revalidatePath(`/desk/cases/${caseId}`);
   revalidatePath('/desk');
-  return { ok: true as const, message };
+  return { ok: true as const, message: (await getTranslations('Case'))(`done.${done}`) };
 }
 
 export const notifyCaseAction = formAction({ roles: DESK_STAFF, schema: notifyCaseSchema }, (user, v) =>
-  command(user, v.caseId, { kind: 'notify' }, 'The carrier is notified; the e-mail is on its way.'),
+  command(user, v.caseId, { kind: 'notify' }, 'notified'),
 );
 
 // drivers dispute their own carrier's cases; the service finds no other
 export const disputeCaseAction = formAction(
   { roles: SECTION_ROLES.desk, schema: disputeCaseSchema },
-  (user, v) =>
-    command(
-      user,
-      v.caseId,
-      { kind: 'dispute', note: v.note, photoIds: v.photoIds },
-      'Your dispute is recorded. The terminal clerk will decide.',
-    ),
+  (user, v) => command(user, v.caseId, { kind: 'dispute', note: v.note, photoIds: v.photoIds }, 'disputed'),
 );
 
 export const decideCaseAction = formAction({ roles: DESK_STAFF, schema: decideCaseSchema }, (user, v) =>
@@ -50,23 +47,18 @@ export const decideCaseAction = formAction({ roles: DESK_STAFF, schema: decideCa
     user,
     v.caseId,
     { kind: 'decide', decision: v.decision, chargedCents: v.chargedCents, reason: v.reason },
-    'Decided; the carrier is e-mailed.',
+    'decided',
   ),
 );
 
 export const overrideEstimateAction = formAction(
   { roles: DESK_STAFF, schema: overrideEstimateSchema },
   (user, v) =>
-    command(
-      user,
-      v.caseId,
-      { kind: 'override', overrideCents: v.amount, reason: v.reason },
-      'Estimate changed.',
-    ),
+    command(user, v.caseId, { kind: 'override', overrideCents: v.amount, reason: v.reason }, 'override'),
 );
 
 export const closeCaseAction = formAction({ roles: DESK_STAFF, schema: closeCaseSchema }, (user, v) =>
-  command(user, v.caseId, { kind: 'close', note: v.note }, 'Case closed.'),
+  command(user, v.caseId, { kind: 'close', note: v.note }, 'closed'),
 );
 
 /** Queues a failed e-mail again (clerks and admins). */
@@ -76,6 +68,6 @@ export const resendEmailAction = formAction(
     const result = await resendEmail(v);
     if (!result.ok) return result;
     revalidatePath('/desk');
-    return { ok: true, message: 'Queued again; it goes out with the next attempt.' };
+    return { ok: true, message: (await getTranslations('Desk'))('mail.queued') };
   },
 );

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { getTranslations } from 'next-intl/server';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listCaseCarriers, listCases } from '@/db/queries/cases';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -7,6 +8,7 @@ import { isDeskStaff } from '@/lib/desk/access';
 import { formatMoney } from '@/lib/format/money';
 import { formatTime } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
+import { refusalSayer } from '@/lib/server/i18n/say';
 import { listFailedEmails } from '@/lib/server/jobs/mail-failures';
 import { CASE_PAGE_SIZE, caseCursor, caseQueueQuerySchema } from '@/lib/validation/desk';
 import { describeZodError } from '@/lib/validation/errors';
@@ -14,12 +16,15 @@ import { CaseStateBadge } from './_components/case-state-badge';
 import { FailedMail } from './_components/failed-mail';
 import { QueueFilters } from './_components/queue-filters';
 
-export const metadata: Metadata = { title: 'Desk' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Desk'))('title') };
+}
 
 const pick = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v);
 
 export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
   const user = await requireUser(SECTION_ROLES.desk);
+  const t = await getTranslations('Desk');
   const raw = Object.fromEntries(
     (Object.entries(await searchParams) as [string, string | string[] | undefined][]).map(([k, v]) => [
       k,
@@ -27,7 +32,12 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
     ]),
   );
   const parsed = caseQueueQuerySchema.safeParse(raw);
-  const errors = parsed.success ? {} : describeZodError(parsed.error).fieldErrors;
+  const say = await refusalSayer();
+  const errors = parsed.success
+    ? {}
+    : Object.fromEntries(
+        Object.entries(describeZodError(parsed.error).fieldErrors).map(([k, list]) => [k, list.map(say)]),
+      );
   const isStaff = isDeskStaff(user.role);
   const now = new Date();
   const [page, carriers, failedMail] = await Promise.all([
@@ -53,11 +63,14 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
     <div className="space-y-4">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h1 className="text-gate-xl font-bold">
-          {isStaff ? 'Damage cases' : `Damage cases for ${user.carrierName ?? 'your carrier'}`}
+          {isStaff ? t('casesStaff') : t('casesCarrier', { carrier: user.carrierName ?? t('yourCarrier') })}
         </h1>
         {isStaff ? (
-          <Link href="/desk/reports" className="text-gate font-bold text-brand underline">
-            Reports
+          <Link
+            href="/desk/reports"
+            className="inline-flex min-h-tap items-center text-gate font-bold text-brand underline"
+          >
+            {t('reports')}
           </Link>
         ) : null}
       </div>
@@ -70,29 +83,27 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
           role="alert"
           className="rounded-lg border-2 border-danger bg-danger-bg p-3 text-gate font-bold text-danger"
         >
-          Some filters are not valid; fix them to see cases.
+          {t('badFilters')}
         </p>
       ) : rows.length === 0 ? (
-        <EmptyState title="No cases here">
-          {isStaff ? 'No case matches these filters.' : 'No damage case names your carrier.'}
-        </EmptyState>
+        <EmptyState title={t('noCases')}>{isStaff ? t('noMatch') : t('noCarrierCases')}</EmptyState>
       ) : (
-        <ul className="divide-y divide-paper-line rounded-xl bg-paper" aria-label="Cases">
+        <ul className="divide-y divide-paper-line rounded-xl bg-paper" aria-label={t('casesLabel')}>
           {rows.map((c) => (
             <li key={c.id}>
               <Link
                 href={`/desk/cases/${c.id}`}
                 className="grid min-h-tap grid-cols-[1fr_auto] gap-x-3 gap-y-1 p-3 hover:bg-brand-light sm:grid-cols-[8rem_1fr_8rem_9rem_7rem]"
               >
-                <span className="text-gate font-bold">Trailer {c.unitNumber}</span>
+                <span className="text-gate font-bold">{t('trailer', { unit: c.unitNumber })}</span>
                 <span className="text-gate-sm text-ink-soft sm:order-none">
-                  {c.carrierScac ?? 'no single carrier'} · {c.terminalCode} · {c.handoffKind}
+                  {c.carrierScac ?? t('noSingleCarrier')} · {c.terminalCode} · {t(`kind.${c.handoffKind}`)}
                 </span>
                 <span className="text-gate font-bold">
                   {formatMoney(c.amountCents)}
-                  {c.isOverridden ? <span className="text-gate-sm text-ink-soft"> (set)</span> : null}
+                  {c.isOverridden ? <span className="text-gate-sm text-ink-soft"> {t('set')}</span> : null}
                 </span>
-                <span className="text-gate-sm">opened {formatTime(c.openedAt, tz)}</span>
+                <span className="text-gate-sm">{t('opened', { when: formatTime(c.openedAt, tz) })}</span>
                 <span>
                   <CaseStateBadge state={c.state} />
                 </span>
@@ -103,7 +114,7 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
       )}
       {nextHref ? (
         <Link href={nextHref} className="inline-block min-h-tap text-gate font-bold text-brand underline">
-          Next {CASE_PAGE_SIZE} cases
+          {t('next', { count: CASE_PAGE_SIZE })}
         </Link>
       ) : null}
     </div>

@@ -1,6 +1,7 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { getTranslations } from 'next-intl/server';
 import { DESK_STAFF } from '@/lib/desk/access';
 import { fromLocalInput } from '@/lib/format/time';
 import { refuseField } from '@/lib/result';
@@ -13,11 +14,12 @@ export const releaseHoldAction = formAction(
   { roles: DESK_STAFF, schema: releaseHoldSchema },
   async (user, v) => {
     // the form's local date and time are the terminal's wall clock
+    const t = await getTranslations('Trailers');
     const repairedAt = fromLocalInput(v.repairedAt, user.terminalTimeZone ?? 'UTC');
-    if (!repairedAt) return refuseField('invalid', 'repairedAt', 'Enter the date and time of the repair.');
+    if (!repairedAt) return refuseField('invalid', 'repairedAt', t('release.badTime'));
     const result = await releaseHold(user, { ...v, repairedAt });
     if (!result.ok) return result;
     revalidatePath(`/trailers/${v.trailerId}`);
-    return { ok: true, message: 'Hold released. The repair is on the trailer file.' };
+    return { ok: true, message: t('release.done') };
   },
 );

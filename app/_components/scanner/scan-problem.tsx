@@ -1,23 +1,10 @@
+import { useTranslations } from 'next-intl';
 import type { CameraState } from './use-camera-scan';
 
-const CAMERA_HELP: Partial<Record<CameraState, { title: string; text: string }>> = {
-  denied: {
-    title: 'Camera not allowed',
-    text: 'Hitchmark may not use the camera. Allow the camera for this site in the browser settings and press the scan button again, or type the unit number below.',
-  },
-  no_camera: {
-    title: 'No camera found',
-    text: 'This device has no camera Hitchmark can use. Type the unit number or VIN below.',
-  },
-  insecure: {
-    title: 'Camera needs a secure connection',
-    text: 'Browsers allow the camera only on https addresses. Open Hitchmark by its https address, or type the unit number below.',
-  },
-  failed: {
-    title: 'The camera did not start',
-    text: 'Another app may be using it. Close it and press the scan button again, or type the unit number below.',
-  },
-};
+const CAMERA_HELP = ['denied', 'no_camera', 'insecure', 'failed'] as const;
+type HelpState = (typeof CAMERA_HELP)[number];
+const needsHelp = (camera: CameraState): camera is HelpState =>
+  (CAMERA_HELP as readonly string[]).includes(camera);
 
 /** The way forward after a camera or code problem; always points to the typed entry. */
 export function ScanProblem({
@@ -27,7 +14,10 @@ export function ScanProblem({
   camera: CameraState;
   problem: { message: string; read?: string } | null;
 }) {
-  const help = CAMERA_HELP[camera];
+  const t = useTranslations('Common');
+  const help = needsHelp(camera)
+    ? { title: t(`scanner.camera.${camera}.title`), text: t(`scanner.camera.${camera}.text`) }
+    : null;
   if (!help && !problem) return <div aria-live="polite" />;
   return (
     <div
@@ -45,9 +35,11 @@ export function ScanProblem({
         <>
           <p className="font-bold">{problem.message}</p>
           {problem.read ? (
-            <p className="mt-1 break-all font-mono text-gate-sm">Read: {problem.read}</p>
+            <p className="mt-1 break-all font-mono text-gate-sm">
+              {t('scanner.read', { text: problem.read })}
+            </p>
           ) : null}
-          <p className="mt-1">Scan again, or type the unit number below.</p>
+          <p className="mt-1">{t('scanner.again')}</p>
         </>
       ) : null}
     </div>

@@ -1,7 +1,9 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useCallback, useState } from 'react';
 import { Button } from '@/app/_components/button';
+import { useRefusalText } from '@/app/_components/use-refusal-text';
 import { classifyScan } from '@/lib/labels/scan-text';
 import { lookupTrailer, type LookupQuery, type ScannedTrailer } from './lookup';
 import { ScanProblem } from './scan-problem';
@@ -23,12 +25,14 @@ export type { ScannedTrailer };
 export function TrailerScanner({
   onTrailer,
   onText,
-  startLabel = 'Scan trailer label',
+  startLabel,
 }: {
   onTrailer: (trailer: ScannedTrailer) => void;
   onText?: (text: string) => boolean;
   startLabel?: string;
 }) {
+  const t = useTranslations('Common');
+  const say = useRefusalText();
   const [problem, setProblem] = useState<{ message: string; read?: string } | null>(null);
   const [isBusy, setBusy] = useState(false);
 
@@ -39,9 +43,18 @@ export function TrailerScanner({
       const result = await lookupTrailer(query);
       setBusy(false);
       if (result.ok) onTrailer(result.trailer);
-      else setProblem({ message: result.message, read });
+      else
+        setProblem({
+          message:
+            result.status === 0
+              ? t('scanner.noConnection')
+              : result.status === 401
+                ? t('scanner.sessionEnded')
+                : say(result.message),
+          read,
+        });
     },
-    [onTrailer],
+    [onTrailer, t, say],
   );
 
   const onDecoded = useCallback(
@@ -50,9 +63,9 @@ export function TrailerScanner({
       if (code.kind === 'token') return void find({ token: code.token }, text);
       if (code.kind === 'vin') return void find({ vin: code.vin }, text);
       if (onText?.(text)) return;
-      setProblem({ message: 'That code is not a Hitchmark label or a VIN barcode.', read: code.text });
+      setProblem({ message: t('scanner.notOurs'), read: code.text });
     },
-    [find, onText],
+    [find, onText, t],
   );
 
   const { videoRef, camera, start, stop } = useCameraScan(onDecoded);
@@ -65,18 +78,16 @@ export function TrailerScanner({
           ref={videoRef}
           muted
           playsInline
-          aria-label="Camera view"
+          aria-label={t('scanner.cameraView')}
           className={isLive ? 'aspect-[4/3] w-full rounded-xl bg-black object-cover' : 'hidden'}
         />
         {isLive ? (
           <>
             <p role="status" className="text-gate font-bold">
-              {camera === 'starting'
-                ? 'Starting the camera…'
-                : 'Point the camera at the label. Hold still about a forearm away.'}
+              {camera === 'starting' ? t('scanner.starting') : t('scanner.point')}
             </p>
             <Button type="button" variant="secondary" className="w-full" onClick={stop}>
-              Stop camera
+              {t('scanner.stop')}
             </Button>
           </>
         ) : (
@@ -89,12 +100,12 @@ export function TrailerScanner({
             }}
             disabled={isBusy}
           >
-            {startLabel}
+            {startLabel ?? t('scanner.start')}
           </Button>
         )}
         {isBusy ? (
           <p role="status" className="text-gate font-bold">
-            Looking the trailer up…
+            {t('scanner.lookingUp')}
           </p>
         ) : null}
         <ScanProblem camera={camera} problem={problem} />

@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useState, type FormEvent } from 'react';
 import { Button } from '@/app/_components/button';
 import { normalizeScannedVin } from '@/lib/labels/scan-text';
@@ -22,6 +23,7 @@ export function TypedLookup({
   isBusy: boolean;
   initial?: string;
 }) {
+  const t = useTranslations('Common');
   const [value, setValue] = useState(initial);
   function submit(event: FormEvent) {
     event.preventDefault();
@@ -29,12 +31,12 @@ export function TypedLookup({
     if (query) onLookup(query);
   }
   return (
-    <form onSubmit={submit} className="space-y-2" role="search" aria-label="Type a unit number or VIN">
+    <form onSubmit={submit} className="space-y-2" role="search" aria-label={t('scanner.typeLabel')}>
       <label htmlFor="typed-trailer" className="block text-gate font-bold">
-        Or type the unit number or VIN
+        {t('scanner.typeTitle')}
       </label>
       <p id="typed-trailer-hint" className="text-gate-sm text-ink-soft">
-        Unit number from the nose or doors, or all 17 characters of the VIN.
+        {t('scanner.typeHint')}
       </p>
       <input
         id="typed-trailer"
@@ -50,7 +52,7 @@ export function TypedLookup({
         className="block min-h-tap-lg w-full rounded-lg border-2 border-paper-line bg-paper px-3 font-mono text-gate-xl uppercase"
       />
       <Button type="submit" variant="secondary" className="w-full" disabled={isBusy || !value.trim()}>
-        Find trailer
+        {t('scanner.find')}
       </Button>
     </form>
   );

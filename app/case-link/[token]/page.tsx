@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
+import { getTranslations } from 'next-intl/server';
 import { listCaseFindings } from '@/db/queries/case-evidence';
 import { getCase } from '@/db/queries/cases';
 import { verifyCaseLink } from '@/lib/desk/case-link';
@@ -12,7 +13,9 @@ import { formatTime } from '@/lib/format/time';
 import { caseLinkSecret } from '@/lib/server/env';
 import { LinkDisputeForm } from './link-dispute-form';
 
-export const metadata: Metadata = { title: 'Damage case', robots: { index: false } };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('CaseLink'))('title'), robots: { index: false } };
+}
 
 // Public: the signed token is the permission. It shows the evidence summary of one case to the
 // carrier named in the token, and takes a dispute while the window is open. Photos stay behind
@@ -24,32 +27,39 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
   const c = await getCase(link.claims.caseId, { role: 'driver', carrierId: link.claims.carrierId });
   if (!c) notFound();
   const findings = await listCaseFindings(c);
+  const t = await getTranslations('CaseLink');
+  const desk = await getTranslations('Desk');
   const isOpen = c.state === 'notified' && isWithinDisputeWindow(c.disputeDeadline, new Date());
   return (
     <main className="mx-auto max-w-3xl space-y-4 p-4">
       <p className="text-gate-lg font-bold text-brand">Hitchmark</p>
-      <h1 className="text-gate-xl font-bold">Damage case: trailer {c.unitNumber}</h1>
+      <h1 className="text-gate-xl font-bold">{t('heading', { unit: c.unitNumber })}</h1>
       <p className="text-gate">
-        {c.carrierName} · {c.terminalName} · state <span className="font-bold">{c.state}</span> · estimate{' '}
+        {c.carrierName} · {c.terminalName} · {t('state')}{' '}
+        <span className="font-bold">{desk(`state.${c.state}`)}</span> · {t('estimate')}{' '}
         <span className="font-bold">{formatMoney(effectiveAmountCents(c))}</span>
-        {c.disputeDeadline ? ` · dispute until ${formatTime(c.disputeDeadline, c.timeZone)}` : ''}
+        {c.disputeDeadline
+          ? ` · ${t('disputeUntil', { when: formatTime(c.disputeDeadline, c.timeZone) })}`
+          : ''}
       </p>
       <ul className="space-y-2">
         {findings.map((f) => (
           <li key={f.id} className="rounded-xl bg-paper p-3">
             <p className="text-gate font-bold">
               {itemLabel(f.itemKey)}:{' '}
-              {f.previousCondition ? CONDITION_LABELS[f.previousCondition] : 'no earlier record'} →{' '}
-              {f.condition ? CONDITION_LABELS[f.condition] : 'not checked'}
+              {f.previousCondition ? CONDITION_LABELS[f.previousCondition] : t('noEarlier')} →{' '}
+              {f.condition ? CONDITION_LABELS[f.condition] : t('notChecked')}
             </p>
-            <p className="text-gate-sm">{f.reason}</p>
+            <p className="text-gate-sm" data-stored-text="">
+              {f.reason}
+            </p>
           </li>
         ))}
       </ul>
       {isOpen ? (
         <LinkDisputeForm token={decodeURIComponent(token)} />
       ) : (
-        <p className="text-gate">This case takes no dispute now ({c.state}).</p>
+        <p className="text-gate">{t('closed', { state: desk(`state.${c.state}`) })}</p>
       )}
     </main>
   );

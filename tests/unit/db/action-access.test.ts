@@ -4,7 +4,7 @@ import { db, pool } from '@/db';
 import { users } from '@/db/schema';
 import { seed } from '@/db/seed';
 import { IDLE } from '@/lib/result';
-import { ACTIONS, VISITORS, type Visitor } from '@/tests/support/access-matrix';
+import { ACTIONS, VISITOR_ACCOUNTS, VISITORS, type Visitor } from '@/tests/support/access-matrix';
 import { changedTables, rowCounts } from '@/tests/support/row-counts';
 
 // The action column of the access matrix: each exported server action called as each visitor,
@@ -28,19 +28,12 @@ vi.mock('next/headers', () => ({
 }));
 vi.mock('next/cache', () => ({ revalidatePath: () => undefined }));
 
-const ACCOUNTS: Record<Exclude<Visitor, 'none'>, { col: 'email' | 'driverNumber'; value: string }> = {
-  driverOwn: { col: 'driverNumber', value: 'D2001' },
-  driverOther: { col: 'driverNumber', value: 'D1001' },
-  jockey: { col: 'email', value: 'jockey@bramblecrest.example' },
-  clerk: { col: 'email', value: 'clerk@bramblecrest.example' },
-  admin: { col: 'email', value: 'admin@bramblecrest.example' },
-};
-
 /** The cookie a visitor would carry, with the account's current session version. */
 async function sessionOf(visitor: Visitor): Promise<Record<string, unknown>> {
   if (visitor === 'none') return {};
-  const a = ACCOUNTS[visitor];
-  const [u] = await db.select().from(users).where(eq(users[a.col], a.value));
+  const account = VISITOR_ACCOUNTS[visitor];
+  const col = account.includes('@') ? users.email : users.driverNumber;
+  const [u] = await db.select().from(users).where(eq(col, account));
   return {
     userId: u.id,
     role: u.role,

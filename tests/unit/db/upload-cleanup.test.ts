@@ -2,28 +2,19 @@
 // their pending files deleted; newer pending uploads and stored photos stay. Real S3 fake.
 import { randomUUID } from 'node:crypto';
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { db, pool } from '@/db';
+import { describe, expect, it } from 'vitest';
+import { db } from '@/db';
 import { photos } from '@/db/schema';
-import { seed } from '@/db/seed';
 import { removeStaleUploads } from '@/lib/server/photos/cleanup';
 import { PENDING_PREFIX } from '@/lib/server/photos/uploads';
 import { putObject, readObject } from '@/lib/server/storage';
-import { actor, freshTrailer } from './handoff-fixtures';
+import { uploaderSetup } from './upload-fixtures';
 
 describe('removing stale pending uploads', () => {
-  let userId: string;
-  let trailerId: string;
-  beforeAll(async () => {
-    await seed();
-    userId = (await actor('D1001')).id;
-    trailerId = (await freshTrailer()).trailer.id;
-  });
-  afterAll(async () => {
-    await pool.end();
-  });
+  const ctx = uploaderSetup();
 
   async function pending(ageHours: number, uploaded: boolean) {
+    const { userId, trailerId } = ctx;
     const name = `${randomUUID()}.png`;
     const pendingKey = `${PENDING_PREFIX}${trailerId}/${name}`;
     const [row] = await db

@@ -1,42 +1,16 @@
-import { createHash } from 'node:crypto';
 import { eq } from 'drizzle-orm';
-import { PNG } from 'pngjs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { db, pool } from '@/db';
-import { seed } from '@/db/seed';
+import { describe, expect, it } from 'vitest';
+import { db } from '@/db';
 import { photos } from '@/db/schema';
 import { MAX_PHOTO_BYTES } from '@/lib/photos/image-type';
 import { readObject } from '@/lib/server/storage';
 import { isRefusal, type Refusal } from '@/lib/result';
 import { completeUpload, createUpload } from '@/lib/server/photos/uploads';
-import { actor, freshTrailer } from './handoff-fixtures';
+import { actor } from './handoff-fixtures';
+import { announceAndPut, png, sha, uploaderSetup } from './upload-fixtures';
 
 // Runs against the real local S3 fake (scripts/fakes.sh start; scripts/test.sh starts it).
-const sha = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
-
-function smallPng(): Uint8Array {
-  const png = new PNG({ width: 8, height: 8 });
-  png.data.fill(200);
-  return new Uint8Array(PNG.sync.write(png));
-}
-
-async function announceAndPut(
-  trailerId: string,
-  userId: string,
-  declared: { contentType: string; byteSize: number; sha256: string },
-  body: Uint8Array,
-) {
-  const announced = await createUpload({ trailerId, itemKey: 'left_side.skin', ...declared }, { id: userId });
-  if (!announced.ok) throw new Error(`announcement refused: ${announced.message}`);
-  const up = announced.value;
-  const put = await fetch(up.uploadUrl, {
-    method: 'PUT',
-    headers: up.headers,
-    body: new Blob([new Uint8Array(body)]),
-  });
-  expect(put.status).toBe(200);
-  return up.photoId;
-}
+const smallPng = () => png(200);
 
 async function refusedWith(p: Promise<unknown>): Promise<Refusal> {
   const r = await p;
@@ -45,26 +19,17 @@ async function refusedWith(p: Promise<unknown>): Promise<Refusal> {
 }
 
 describe('photo uploads through presigned URLs (local S3 fake)', () => {
-  let userId: string;
-  let trailerId: string;
-  beforeAll(async () => {
-    await seed();
-    userId = (await actor('D1001')).id;
-    trailerId = (await freshTrailer()).trailer.id;
-  });
-  afterAll(async () => {
-    await pool.end();
-  });
+  const ctx = uploaderSetup();
 
   it('stores a real PNG whose size and SHA-256 match', async () => {
     const png = smallPng();
     const id = await announceAndPut(
-      trailerId,
-      userId,
+      ctx.trailerId,
+      ctx.userId,
       { contentType: 'image/png', byteSize: png.length, sha256: sha(png) },
       png,
     );
-    expect(await completeUpload(id, { id: userId })).toEqual({
+    expect(await completeUpload(id, { id: ctx.userId })).toEqual({
       ok: true,
       value: { photoId: id, status: 'stored' },
     });
@@ -76,12 +41,12 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
   it('refuses content that is not an image although it was announced as PNG, and deletes it', async () => {
     const text = new TextEncoder().encode('this is not a photo, just text pretending to be one');
     const id = await announceAndPut(
-      trailerId,
-      userId,
+      ctx.trailerId,
+      ctx.userId,
       { contentType: 'image/png', byteSize: text.length, sha256: sha(text) },
       text,
     );
-    const e = await refusedWith(completeUpload(id, { id: userId }));
+    const e = await refusedWith(completeUpload(id, { id: ctx.userId }));
     expect(e.code).toBe('unsupported_type');
     const [row] = await db.select().from(photos).where(eq(photos.id, id));
     expect(row.status).toBe('rejected');
@@ -93,12 +58,12 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
     const other = new Uint8Array(png);
     other[other.length - 20] ^= 0xff; // one byte changed on the way
     const id = await announceAndPut(
-      trailerId,
-      userId,
+      ctx.trailerId,
+      ctx.userId,
       { contentType: 'image/png', byteSize: png.length, sha256: sha(png) },
       other,
     );
-    const e = await refusedWith(completeUpload(id, { id: userId }));
+    const e = await refusedWith(completeUpload(id, { id: ctx.userId }));
     expect(e.message).toMatch(/checksum/);
     expect((await db.select().from(photos).where(eq(photos.id, id)))[0].status).toBe('rejected');
   });
@@ -107,12 +72,12 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
     const png = smallPng();
     const longer = new Uint8Array([...png, 0, 0, 0, 0]);
     const id = await announceAndPut(
-      trailerId,
-      userId,
+      ctx.trailerId,
+      ctx.userId,
       { contentType: 'image/png', byteSize: png.length, sha256: sha(longer) },
       longer,
     );
-    const e = await refusedWith(completeUpload(id, { id: userId }));
+    const e = await refusedWith(completeUpload(id, { id: ctx.userId }));
     expect(e.message).toMatch(/size/);
   });
 
@@ -120,39 +85,39 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
     const big = await refusedWith(
       createUpload(
         {
-          trailerId,
+          trailerId: ctx.trailerId,
           itemKey: 'left_side.skin',
           contentType: 'image/jpeg',
           byteSize: 8 * 1024 * 1024 + 1,
           sha256: 'a'.repeat(64),
         },
-        { id: userId },
+        { id: ctx.userId },
       ),
     );
     expect(big.code).toBe('too_large');
     const pdf = await refusedWith(
       createUpload(
         {
-          trailerId,
+          trailerId: ctx.trailerId,
           itemKey: 'left_side.skin',
           contentType: 'application/pdf',
           byteSize: 100,
           sha256: 'a'.repeat(64),
         },
-        { id: userId },
+        { id: ctx.userId },
       ),
     );
     expect(pdf.code).toBe('unsupported_type');
     const item = await refusedWith(
       createUpload(
         {
-          trailerId,
+          trailerId: ctx.trailerId,
           itemKey: 'wheel.of_fortune',
           contentType: 'image/png',
           byteSize: 100,
           sha256: 'a'.repeat(64),
         },
-        { id: userId },
+        { id: ctx.userId },
       ),
     );
     expect(item.code).toBe('invalid');
@@ -161,8 +126,8 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
   it('lets only the uploader complete an upload', async () => {
     const png = smallPng();
     const id = await announceAndPut(
-      trailerId,
-      userId,
+      ctx.trailerId,
+      ctx.userId,
       { contentType: 'image/png', byteSize: png.length, sha256: sha(png) },
       png,
     );
@@ -174,18 +139,18 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
     // a small PNG announced honestly, then a PUT of a much bigger body to the same presigned URL:
     // a real S3 refuses the length mismatch (the URL signs content-length), the local fake does not,
     // so completion's own check must. The body starts with the PNG's bytes, so it still sniffs as PNG.
-    const png = smallPng();
+    const small = smallPng();
     const oversize = new Uint8Array(MAX_PHOTO_BYTES + 64 * 1024);
-    oversize.set(png);
+    oversize.set(small);
     const announced = await createUpload(
       {
-        trailerId,
+        trailerId: ctx.trailerId,
         itemKey: 'left_side.skin',
         contentType: 'image/png',
-        byteSize: png.length,
-        sha256: sha(png),
+        byteSize: small.length,
+        sha256: sha(small),
       },
-      { id: userId },
+      { id: ctx.userId },
     );
     if (!announced.ok) throw new Error(announced.message);
     const put = await fetch(announced.value.uploadUrl, {
@@ -197,7 +162,7 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
     const [before] = await db.select().from(photos).where(eq(photos.id, announced.value.photoId));
     expect((await readObject(before.pendingKey!, MAX_PHOTO_BYTES * 2))?.length).toBe(oversize.length);
 
-    const e = await refusedWith(completeUpload(announced.value.photoId, { id: userId }));
+    const e = await refusedWith(completeUpload(announced.value.photoId, { id: ctx.userId }));
     expect(e.code).toBe('too_large');
     const [row] = await db.select().from(photos).where(eq(photos.id, announced.value.photoId));
     expect(row.status).toBe('rejected');

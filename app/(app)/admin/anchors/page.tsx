@@ -1,19 +1,15 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { getTranslations } from 'next-intl/server';
 import { EmptyState } from '@/app/_components/empty-state';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { formatTime } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { checkTerminalAnchors } from '@/lib/server/jobs/anchor';
 
-export const metadata: Metadata = { title: 'Record anchors' };
-
-const WHY = {
-  head_missing: 'its anchored record is gone',
-  head_changed: 'its anchored record now has another hash',
-  count_changed: 'a different number of records now leads to it',
-  chain_broken: 'the records leading to it no longer verify',
-} as const;
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Admin'))('anchors.title') };
+}
 
 /**
  * The terminal's daily anchors (newest first), each checked against the records as stored now.
@@ -23,20 +19,17 @@ export default async function AnchorsPage() {
   const user = await requireUser(SECTION_ROLES.admin);
   const zone = user.terminalTimeZone ?? 'UTC';
   const anchors = user.terminalId ? await checkTerminalAnchors(user.terminalId) : [];
+  const t = await getTranslations('Admin');
   return (
     <div className="space-y-4">
-      <h1 className="text-gate-xl font-bold">Record anchors · {user.terminalName ?? 'no home terminal'}</h1>
-      <p className="text-gate">
-        Once a day, after the terminal&apos;s midnight, Hitchmark fixes the last record of every
-        trailer&apos;s chain in one digest and e-mails it to the terminal&apos;s managers. Compare the digest
-        below with that e-mail: if they differ, or a check below fails, records were rewritten after that day.
-      </p>
+      <h1 className="text-gate-xl font-bold">
+        {t('anchors.heading', { terminal: user.terminalName ?? t('anchors.noTerminal') })}
+      </h1>
+      <p className="text-gate">{t('anchors.intro')}</p>
       {anchors.length === 0 ? (
-        <EmptyState title="No anchors yet">
-          The first is made after the terminal&apos;s next midnight.
-        </EmptyState>
+        <EmptyState title={t('anchors.none')}>{t('anchors.noneText')}</EmptyState>
       ) : (
-        <ul className="space-y-2" aria-label="Anchors">
+        <ul className="space-y-2" aria-label={t('anchors.list')}>
           {anchors.map((a) => (
             <li
               key={a.id}
@@ -44,31 +37,30 @@ export default async function AnchorsPage() {
               className={`rounded-lg border-l-8 bg-paper p-3 ${a.check.ok ? 'border-ok' : 'border-danger'}`}
             >
               <p className="text-gate font-bold">
-                {a.day} · {a.heads.length} trailers · {a.recordCount} records
+                {t('anchors.line', { day: a.day, trailers: a.heads.length, records: a.recordCount })}
               </p>
               <p className="break-all font-mono text-gate-sm">{a.digest}</p>
               <p className="text-gate-sm text-ink-soft">
-                anchored {formatTime(a.createdAt, zone)} · e-mailed to{' '}
-                {a.emailedTo.length ? a.emailedTo.join(', ') : 'nobody (no manager with an e-mail)'}
+                {t('anchors.anchored', {
+                  when: formatTime(a.createdAt, zone),
+                  to: a.emailedTo.length ? a.emailedTo.join(', ') : t('anchors.nobody'),
+                })}
               </p>
               {a.check.ok ? (
                 <p role="status" className="text-gate font-bold text-ok">
-                  The records as stored now still lead to this anchor.
+                  {t('anchors.ok')}
                 </p>
               ) : (
                 <div role="alert" className="text-gate font-bold text-danger">
-                  <p>
-                    The records as stored now do NOT lead to this anchor
-                    {a.check.digestMatches ? '' : ' (the digest differs)'}.
-                  </p>
+                  <p>{a.check.digestMatches ? t('anchors.bad') : t('anchors.badDigest')}</p>
                   <ul className="list-disc pl-6 text-gate-sm">
                     {a.check.problems.map((p) => (
                       <li key={p.trailerId}>
-                        Trailer{' '}
+                        {t('anchors.trailer')}{' '}
                         <Link href={`/trailers/${p.trailerId}`} className="underline">
                           {p.trailerId.slice(0, 8)}
                         </Link>
-                        : {WHY[p.why]}
+                        : {t(`anchors.why.${p.why}`)}
                       </li>
                     ))}
                   </ul>

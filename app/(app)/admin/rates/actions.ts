@@ -1,6 +1,7 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { getTranslations } from 'next-intl/server';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { formAction } from '@/lib/server/action';
 import { addRate, changeRate } from '@/lib/server/desk/rates';
@@ -12,7 +13,13 @@ export const addRateAction = formAction(
     const result = await addRate(user, v);
     if (!result.ok) return result;
     revalidatePath('/admin/rates');
-    return { ok: true, message: `Added ${v.itemPattern} (${v.condition}).` };
+    return {
+      ok: true,
+      message: (await getTranslations('Admin'))('rates.added', {
+        pattern: v.itemPattern,
+        condition: v.condition,
+      }),
+    };
   },
 );
 
@@ -22,6 +29,6 @@ export const changeRateAction = formAction(
     const result = await changeRate(user, v);
     if (!result.ok) return result;
     revalidatePath('/admin/rates');
-    return { ok: true, message: 'Saved.' };
+    return { ok: true, message: (await getTranslations('Admin'))('rates.saved') };
   },
 );

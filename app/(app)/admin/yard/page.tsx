@@ -1,4 +1,6 @@
 import type { Metadata } from 'next';
+import { useTranslations } from 'next-intl';
+import { getTranslations } from 'next-intl/server';
 import { ActionForm } from '@/app/_components/action-form';
 import { EmptyState } from '@/app/_components/empty-state';
 import { Field } from '@/app/_components/field';
@@ -13,22 +15,38 @@ import {
   retireSpotAction,
 } from './actions';
 
-export const metadata: Metadata = { title: 'Yard layout' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Admin'))('yard.title') };
+}
 
 type Spot = Awaited<ReturnType<typeof listLayout>>['spots'][number];
 
 function SpotLine({ s }: { s: Spot }) {
-  if (s.retiredAt) return <li className="text-gate-sm text-ink-faint">{s.label} · retired</li>;
+  const t = useTranslations('Admin');
+  if (s.retiredAt)
+    return <li className="text-gate-sm text-ink-faint">{t('yard.retired', { label: s.label })}</li>;
   return (
     <li className="flex flex-wrap items-start gap-2 border-t border-paper-line pt-2">
-      <ActionForm action={renameSpotAction} submitLabel="Rename" variant="secondary" hidden={{ id: s.id }}>
-        <Field id={`spot-${s.id}-name`} name="name" label={`Label of ${s.label}`} defaultValue={s.label} />
+      <ActionForm
+        action={renameSpotAction}
+        submitLabel={t('yard.rename')}
+        variant="secondary"
+        hidden={{ id: s.id }}
+      >
+        <Field
+          id={`spot-${s.id}-name`}
+          name="name"
+          label={t('yard.labelOf', { label: s.label })}
+          defaultValue={s.label}
+        />
       </ActionForm>
-      <span className="py-3 text-gate-sm">{s.occupant ? `holds ${s.occupant}` : 'empty'}</span>
+      <span className="py-3 text-gate-sm">
+        {s.occupant ? t('yard.holds', { unit: s.occupant }) : t('yard.empty')}
+      </span>
       <ActionForm
         action={retireSpotAction}
-        submitLabel={`Retire ${s.label}`}
-        pendingLabel="Retiring…"
+        submitLabel={t('yard.retire', { label: s.label })}
+        pendingLabel={t('yard.retiring')}
         variant="danger"
         hidden={{ id: s.id }}
       />
@@ -37,17 +55,18 @@ function SpotLine({ s }: { s: Spot }) {
 }
 
 function AddSpot({ kind, rowId, name }: { kind: 'slot' | 'door'; rowId?: string; name: string }) {
+  const t = useTranslations('Admin');
   return (
     <ActionForm
       action={createSpotAction}
-      submitLabel={kind === 'door' ? 'Add door' : 'Add slot'}
+      submitLabel={kind === 'door' ? t('yard.addDoor') : t('yard.addSlot')}
       hidden={{ kind, ...(rowId ? { rowId } : {}) }}
     >
       <Field
         id={`new-${kind}-${rowId ?? 'doors'}-label`}
         name="label"
         required
-        label={`New ${kind} label in ${name}`}
+        label={kind === 'door' ? t('yard.newDoor', { name }) : t('yard.newSlot', { name })}
       />
     </ActionForm>
   );
@@ -55,22 +74,20 @@ function AddSpot({ kind, rowId, name }: { kind: 'slot' | 'door'; rowId?: string;
 
 export default async function YardLayoutPage() {
   const user = await requireUser(SECTION_ROLES.admin);
-  if (!user.terminalId)
-    return <EmptyState title="No home terminal">Set your home terminal first.</EmptyState>;
+  const t = await getTranslations('Admin');
+  if (!user.terminalId) return <EmptyState title={t('yard.noTerminal')}>{t('yard.setTerminal')}</EmptyState>;
   const { rows, spots } = await listLayout(user.terminalId);
   const doors = spots.filter((s) => s.kind === 'door');
   return (
     <div className="space-y-4">
-      <h1 className="text-gate-xl font-bold">Yard layout · {user.terminalName}</h1>
-      <p className="text-gate">
-        A slot or door that holds a trailer can be retired only after the trailer is moved out.
-      </p>
+      <h1 className="text-gate-xl font-bold">{t('yard.heading', { terminal: user.terminalName ?? '' })}</h1>
+      <p className="text-gate">{t('yard.intro')}</p>
       <section aria-labelledby="add-row" className="rounded-xl bg-paper p-3 shadow">
         <h2 id="add-row" className="text-gate-lg font-bold">
-          Add a row
+          {t('yard.addRow')}
         </h2>
-        <ActionForm action={createRowAction} submitLabel="Add row">
-          <Field id="new-row-name" name="name" required label="New row name" />
+        <ActionForm action={createRowAction} submitLabel={t('yard.addRowSubmit')}>
+          <Field id="new-row-name" name="name" required label={t('yard.newRow')} />
         </ActionForm>
       </section>
       {rows.map((r) => {
@@ -78,15 +95,20 @@ export default async function YardLayoutPage() {
         return (
           <details key={r.id} className="rounded-xl bg-paper p-3 shadow">
             <summary className="min-h-tap cursor-pointer py-2 text-gate-lg font-bold">
-              {r.name} · {own.filter((s) => !s.retiredAt).length} slots
+              {r.name} · {t('yard.slots', { count: own.filter((s) => !s.retiredAt).length })}
             </summary>
             <ActionForm
               action={renameRowAction}
-              submitLabel="Rename row"
+              submitLabel={t('yard.renameRow')}
               variant="secondary"
               hidden={{ id: r.id }}
             >
-              <Field id={`row-${r.id}-name`} name="name" label={`Name of ${r.name}`} defaultValue={r.name} />
+              <Field
+                id={`row-${r.id}-name`}
+                name="name"
+                label={t('yard.nameOf', { name: r.name })}
+                defaultValue={r.name}
+              />
             </ActionForm>
             <ul className="mt-2 space-y-2">
               {own.map((s) => (
@@ -99,14 +121,14 @@ export default async function YardLayoutPage() {
       })}
       <details className="rounded-xl bg-paper p-3 shadow">
         <summary className="min-h-tap cursor-pointer py-2 text-gate-lg font-bold">
-          Dock doors · {doors.filter((d) => !d.retiredAt).length}
+          {t('yard.doors', { count: doors.filter((d) => !d.retiredAt).length })}
         </summary>
         <ul className="mt-2 space-y-2">
           {doors.map((s) => (
             <SpotLine key={s.id} s={s} />
           ))}
         </ul>
-        <AddSpot kind="door" name="dock doors" />
+        <AddSpot kind="door" name={t('yard.doorsName')} />
       </details>
     </div>
   );

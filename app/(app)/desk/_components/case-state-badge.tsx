@@ -1,3 +1,5 @@
+import { useTranslations } from 'next-intl';
+
 const STYLES: Record<string, string> = {
   open: 'bg-warn-bg text-warn',
   notified: 'bg-brand-light text-brand-dark',
@@ -7,9 +9,10 @@ const STYLES: Record<string, string> = {
 };
 
 export function CaseStateBadge({ state }: { state: string }) {
+  const t = useTranslations('Desk');
   return (
     <span className={`inline-block rounded-full px-3 py-0.5 text-gate-sm font-bold ${STYLES[state] ?? ''}`}>
-      {state}
+      {state in STYLES ? t(`state.${state as 'open'}`) : state}
     </span>
   );
 }

@@ -1,3 +1,4 @@
+import { useTranslations } from 'next-intl';
 import { ActionForm } from '@/app/_components/action-form';
 import { formatTime } from '@/lib/format/time';
 import { resendEmailAction } from '../actions';
@@ -13,6 +14,7 @@ type Failed = {
 
 /** E-mail the job queue gave up on after its attempts, each with a resend button (desk staff only). */
 export function FailedMail({ emails, timeZone }: { emails: Failed[]; timeZone: string }) {
+  const t = useTranslations('Desk');
   if (!emails.length) return null;
   return (
     <section
@@ -20,24 +22,23 @@ export function FailedMail({ emails, timeZone }: { emails: Failed[]; timeZone: s
       className="space-y-2 rounded-xl border-2 border-danger bg-danger-bg p-3"
     >
       <h2 id="failed-mail" className="text-gate-lg font-bold text-danger">
-        Mail that could not be sent ({emails.length})
+        {t('mail.title', { count: emails.length })}
       </h2>
       <ul className="space-y-2">
         {emails.map((m) => (
           <li key={m.id} className="space-y-1 rounded-lg bg-paper p-3" data-email-id={m.id}>
             <p className="text-gate font-bold">{m.subject}</p>
             <p className="text-gate-sm">
-              to {m.to} · queued {formatTime(m.createdAt, timeZone)} · {m.attempts}{' '}
-              {m.attempts === 1 ? 'attempt' : 'attempts'}
+              {t('mail.line', { to: m.to, when: formatTime(m.createdAt, timeZone), attempts: m.attempts })}
             </p>
             {m.lastError ? <p className="font-mono text-gate-sm text-ink-soft">{m.lastError}</p> : null}
             <ActionForm
               action={resendEmailAction}
               hidden={{ emailId: m.id }}
-              submitLabel="Resend"
-              pendingLabel="Queueing…"
+              submitLabel={t('mail.resend')}
+              pendingLabel={t('mail.queueing')}
               variant="secondary"
-              ariaLabel={`Resend: ${m.subject} to ${m.to}`}
+              ariaLabel={t('mail.resendLabel', { subject: m.subject, to: m.to })}
             />
           </li>
         ))}

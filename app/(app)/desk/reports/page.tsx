@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { getTranslations } from 'next-intl/server';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listReportCases } from '@/db/queries/desk-reports';
 import { formatMoney } from '@/lib/format/money';
@@ -8,10 +9,13 @@ import { requireUser } from '@/lib/server/auth';
 import { reportQuerySchema } from '@/lib/validation/desk';
 import { ChargedAbsorbedChart } from './_components/charged-absorbed-chart';
 
-export const metadata: Metadata = { title: 'Desk reports' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Desk'))('report.pageTitle') };
+}
 
 export default async function DeskReportsPage({ searchParams }: PageProps<'/desk/reports'>) {
   await requireUser(DESK_STAFF);
+  const t = await getTranslations('Desk');
   const parsed = reportQuerySchema.safeParse(await searchParams);
   const months = parsed.success ? parsed.data.months : 12;
   const lines = summarizeCases(await listReportCases(months));
@@ -20,40 +24,49 @@ export default async function DeskReportsPage({ searchParams }: PageProps<'/desk
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
-        <h1 className="text-gate-xl font-bold">Damage reports, last {months} months</h1>
+        <h1 className="text-gate-xl font-bold">{t('report.title', { months })}</h1>
         <a
           href={`/api/desk/reports.csv?months=${months}`}
           className="inline-flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand"
           download
         >
-          Download CSV
+          {t('report.csv')}
         </a>
       </div>
       {!parsed.success ? (
         <p role="alert" className="font-bold text-danger">
-          Months must be 1 to 36; showing 12.
+          {t('report.badMonths')}
         </p>
       ) : null}
       {lines.length === 0 ? (
-        <EmptyState title="No cases in this period" />
+        <EmptyState title={t('report.empty')} />
       ) : (
         <>
           <div className="grid gap-4 lg:grid-cols-2">
-            <ChargedAbsorbedChart title="By carrier" bars={byCarrier} />
-            <ChargedAbsorbedChart title="By month" bars={byMonth} />
+            <ChargedAbsorbedChart title={t('report.byCarrier')} bars={byCarrier} />
+            <ChargedAbsorbedChart title={t('report.byMonth')} bars={byMonth} />
           </div>
           <div className="overflow-x-auto rounded-xl bg-paper">
             <table className="w-full text-left text-gate-sm">
-              <caption className="sr-only">Damage by carrier and month</caption>
+              <caption className="sr-only">{t('report.caption')}</caption>
               <thead className="bg-paper-dim">
                 <tr>
-                  {['Month', 'Carrier', 'Cases', 'Estimate', 'Charged', 'Absorbed', 'Waived', 'Open'].map(
-                    (h) => (
-                      <th key={h} className="p-2">
-                        {h}
-                      </th>
-                    ),
-                  )}
+                  {(
+                    [
+                      'month',
+                      'carrier',
+                      'cases',
+                      'estimate',
+                      'charged',
+                      'absorbed',
+                      'waived',
+                      'open',
+                    ] as const
+                  ).map((h) => (
+                    <th key={h} scope="col" className="p-2">
+                      {t(`report.col.${h}`)}
+                    </th>
+                  ))}
                 </tr>
               </thead>
               <tbody>

@@ -1,13 +1,16 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
+import { getTranslations } from 'next-intl/server';
 import { ButtonLink } from '@/app/_components/button';
-import { NOT_OUR_LABEL, replacedMessage } from '@/lib/labels/wording';
+import { formatTime } from '@/lib/format/time';
 import { canOpen } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { resolveLabelToken } from '@/lib/server/labels';
 import { labelTokenSchema } from '@/lib/validation/labels';
 
-export const metadata: Metadata = { title: 'Trailer label' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Label'))('title') };
+}
 
 // Where a label's QR code points. A good label opens the handoff start page (jockeys, who do not
 // use the gate, get the trailer file); a forged, damaged or replaced one is refused in words.
@@ -24,23 +27,25 @@ export default async function ScanLinkPage({ params }: PageProps<'/l/[token]'>) 
 
   const isReplaced = label.error === 'revoked';
   const next = canOpen(user.role, 'gate') ? '/gate' : '/yard';
+  const t = await getTranslations('Label');
+  const replacedAt = isReplaced ? label.replacedAt : null;
   return (
     <section
       className="mx-auto max-w-lg space-y-4 rounded-xl border-l-8 border-danger bg-paper p-5"
       aria-labelledby="label-refused"
     >
       <h1 id="label-refused" className="text-gate-xl font-bold">
-        {isReplaced ? 'Old label' : 'Label not accepted'}
+        {isReplaced ? t('old') : t('refused')}
       </h1>
       <p className="text-gate-lg">
-        {isReplaced ? replacedMessage(label.replacedAt, user.terminalTimeZone ?? 'UTC') : NOT_OUR_LABEL}
+        {!isReplaced
+          ? t('notOurs')
+          : replacedAt
+            ? t('replacedOn', { date: formatTime(replacedAt, user.terminalTimeZone ?? 'UTC', 'date') })
+            : t('replaced')}
       </p>
-      <p className="text-gate text-ink-soft">
-        {isReplaced
-          ? 'Look for the newer label on the trailer, or type the unit number. Tell the terminal clerk so the old label comes off.'
-          : 'Type the unit number or the VIN instead, and tell the terminal clerk so the trailer gets a new label.'}
-      </p>
-      <ButtonLink href={next}>Type the unit number</ButtonLink>
+      <p className="text-gate text-ink-soft">{isReplaced ? t('oldHelp') : t('refusedHelp')}</p>
+      <ButtonLink href={next}>{t('type')}</ButtonLink>
     </section>
   );
 }

@@ -1,5 +1,7 @@
+import { useTranslations } from 'next-intl';
 import { EmptyState } from '@/app/_components/empty-state';
 
 export default function TrailerNotFound() {
-  return <EmptyState title="No such trailer">Check the unit number on the trailers list.</EmptyState>;
+  const t = useTranslations('Trailers');
+  return <EmptyState title={t('file.noSuch')}>{t('file.noSuchText')}</EmptyState>;
 }

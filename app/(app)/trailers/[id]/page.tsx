@@ -1,13 +1,13 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { getLocale } from 'next-intl/server';
 import { z } from 'zod';
-import { Caution, CAUTIONS } from '@/app/_components/caution';
+import { getLocale, getTranslations } from 'next-intl/server';
+import { Caution } from '@/app/_components/caution';
 import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { isDeskStaff } from '@/lib/desk/access';
-import { buildTrailerFile } from '@/lib/desk/trailer-file';
+import { buildTrailerFile, STORED, type FileWords } from '@/lib/desk/trailer-file';
 import { readable } from '@/lib/i18n/reasons';
 import { formatTime, toLocalInput } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
@@ -18,7 +18,9 @@ import { ChainStatus } from './_components/chain-status';
 import { HoldReleaseForm } from './_components/hold-release-form';
 import { PhotoCheckPanel } from './_components/photo-check';
 
-export const metadata: Metadata = { title: 'Trailer file' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Trailers'))('file.title') };
+}
 
 /** The photo check, or `unavailable` when storage does not answer (the file itself still shows). */
 async function tryCheckPhotos(trailerId: string): Promise<PhotoCheckReport | 'unavailable'> {
@@ -54,18 +56,34 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   const openHolds = rows.holds.filter((h) => !h.releasedAt);
   const canRelease = isDeskStaff(user.role);
   const nowLocal = toLocalInput(new Date(), zone);
+  const t = await getTranslations('Trailers');
+  const c = await getTranslations('Cautions');
+  const desk = await getTranslations('Desk');
+  // a file line in the reader's language; stored text (engine reasons, notes) shown as it is
+  const say = (w: FileWords) => {
+    if (w.key === STORED) return <span data-stored-text="">{w.values.text}</span>;
+    if (w.key === 'case') {
+      const state = desk.has(`state.${w.values.state}` as 'state.open')
+        ? desk(`state.${w.values.state}` as 'state.open')
+        : w.values.state;
+      return w.values.scac
+        ? t('file.entry.caseScac', { state, scac: w.values.scac })
+        : t('file.entry.case', { state });
+    }
+    return t(`file.entry.${w.key}` as 'file.entry.moved', w.values);
+  };
   return (
     <div className="space-y-4">
       <header>
-        <h1 className="text-gate-xl font-bold">Trailer {trailer.unitNumber}</h1>
+        <h1 className="text-gate-xl font-bold">{t('file.heading', { unit: trailer.unitNumber })}</h1>
         <p className="text-gate">
-          {trailer.kind === 'reefer' ? 'Reefer' : 'Dry van'} · {trailer.ownerScac} ·{' '}
-          <span className="font-mono">{trailer.vin}</span> ·{' '}
+          {t(`kind.${trailer.kind}`)} · {trailer.ownerScac} · <span className="font-mono">{trailer.vin}</span>{' '}
+          ·{' '}
           {trailer.status === 'in_yard'
             ? `${trailer.terminalName} ${trailer.spotLabel ?? ''}`
             : trailer.status === 'on_road'
-              ? 'on the road'
-              : 'gone'}
+              ? t('file.onRoad')
+              : t('file.gone')}
         </p>
       </header>
       <ChainStatus check={chain.check} brokenAt={chain.brokenAt} timeZone={zone} />
@@ -73,17 +91,20 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
       {openHolds.length ? (
         <section aria-labelledby="holds" className="space-y-3 rounded-xl bg-hold-bg p-3">
           <h2 id="holds" className="text-gate-lg font-bold text-hold">
-            Open holds
+            {t('file.openHolds')}
           </h2>
-          <Caution title="Before a repair">
-            {CAUTIONS.underTrailer} {CAUTIONS.outOfService} {CAUTIONS.inspection}
+          <Caution title={t('file.beforeRepair')}>
+            {c('underTrailer')} {c('outOfService')} {c('inspection')}
           </Caution>
           {openHolds.map((h) => (
             <div key={h.id} className="space-y-2 rounded-lg bg-paper p-3">
               <p className="text-gate font-bold">
-                {h.severity === 'out_of_service' ? 'Out of service' : 'Restricted'}: {h.reason}
+                {h.severity === 'out_of_service' ? t('file.outOfService') : t('file.restricted')}:{' '}
+                <span data-stored-text="">{h.reason}</span>
               </p>
-              <p className="text-gate-sm text-ink-soft">placed {formatTime(h.placedAt, zone)}</p>
+              <p className="text-gate-sm text-ink-soft">
+                {t('file.placed', { when: formatTime(h.placedAt, zone) })}
+              </p>
               {canRelease ? (
                 <HoldReleaseForm holdId={h.id} trailerId={trailer.id} reason={h.reason} nowLocal={nowLocal} />
               ) : null}
@@ -91,7 +112,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
           ))}
         </section>
       ) : null}
-      <nav aria-label="Filter the file" className="flex flex-wrap gap-2">
+      <nav aria-label={t('file.filter')} className="flex flex-wrap gap-2">
         {[undefined, ...TRAILER_FILE_KINDS].map((k) => (
           <Link
             key={k ?? 'all'}
@@ -99,16 +120,16 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
             aria-current={kind === k ? 'page' : undefined}
             className="inline-flex min-h-tap items-center rounded-full border-2 border-brand px-4 text-gate-sm font-bold text-brand aria-[current=page]:bg-brand aria-[current=page]:text-on-fill"
           >
-            {k ? `${k}s` : 'everything'}
+            {k ? t(`file.kinds.${k}`) : t('file.everything')}
           </Link>
         ))}
       </nav>
       {!query.success ? (
         <p role="alert" className="text-gate font-bold text-danger">
-          Unknown filter; showing everything.
+          {t('file.badFilter')}
         </p>
       ) : null}
-      <ol className="space-y-2" aria-label="Trailer history">
+      <ol className="space-y-2" aria-label={t('file.history')}>
         {entries.map((e) => (
           <li
             key={e.id}
@@ -116,23 +137,30 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
             data-kind={e.kind}
           >
             <p className="text-gate-sm text-ink-soft">
-              {formatTime(e.at, zone)} · {e.kind}
+              {formatTime(e.at, zone)} · {t(`file.kindOne.${e.kind}`)}
             </p>
             <p className="text-gate font-bold">
               {e.href ? (
                 <Link href={e.href} className="text-brand underline">
-                  {e.title}
+                  {say(e.words.title)}
                 </Link>
               ) : (
-                e.title
+                say(e.words.title)
               )}
             </p>
-            {e.detail ? <p className="text-gate-sm">{e.detail}</p> : null}
+            {e.words.detail.length ? (
+              <p className="text-gate-sm">
+                {e.words.detail.map((w, i) => (
+                  <span key={i}>
+                    {i ? ' · ' : ''}
+                    {say(w)}
+                  </span>
+                ))}
+              </p>
+            ) : null}
           </li>
         ))}
-        {entries.length === 0 ? (
-          <li className="text-gate text-ink-soft">Nothing of this kind on file.</li>
-        ) : null}
+        {entries.length === 0 ? <li className="text-gate text-ink-soft">{t('file.nothing')}</li> : null}
       </ol>
     </div>
   );

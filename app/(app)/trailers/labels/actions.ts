@@ -2,6 +2,7 @@
 
 import { revalidatePath } from 'next/cache';
 import { redirect } from 'next/navigation';
+import enTrailers from '@/lib/i18n/messages/en/Trailers.json';
 import { formAction } from '@/lib/server/action';
 import { reissueLabel } from '@/lib/server/labels';
 import { reissueLabelSchema } from '@/lib/validation/labels';
@@ -11,7 +12,7 @@ export const reissueLabelAction = formAction(
   {
     roles: ['clerk', 'admin'],
     schema: reissueLabelSchema,
-    invalidMessage: 'That trailer could not be read. Reload the page and try again.',
+    invalidMessage: enTrailers.labels.unreadable,
   },
   async (user, input) => {
     const result = await reissueLabel(user, input);

@@ -1,4 +1,7 @@
-import { COLUMNS, rowCells, type SortDir, type SortKey } from '@/lib/yard/table';
+'use client';
+
+import { useTranslations } from 'next-intl';
+import { COLUMNS, rowCells, type CellWords, type SortDir, type SortKey } from '@/lib/yard/table';
 import type { TableRow } from '@/lib/yard/types';
 
 type Sort = { key: SortKey; dir: SortDir };
@@ -17,6 +20,19 @@ export function BoardTable({
   sort: Sort;
   onSort: (s: Sort) => void;
 }) {
+  const t = useTranslations('Yard');
+  const words: CellWords = {
+    loaded: t('cell.loaded'),
+    empty: t('cell.empty'),
+    noUnit: t('cell.noUnit'),
+    notRead: t('cell.notRead'),
+    off: t('cell.off'),
+    on: t('cell.on'),
+    onAt: (setpoint) => t('cell.onAt', { setpoint }),
+    none: t('cell.none'),
+    outOfService: t('cell.outOfService'),
+    restricted: t('cell.restricted'),
+  };
   return (
     <div className="overflow-x-auto rounded-lg border-2 border-paper-line bg-paper">
       <table className="w-full text-left text-gate-sm">
@@ -37,7 +53,7 @@ export function BoardTable({
                     className="min-h-tap w-full px-2 text-left font-bold"
                     onClick={() => onSort({ key, dir: active && sort.dir === 'asc' ? 'desc' : 'asc' })}
                   >
-                    {c.header}
+                    {t(`column.${c.key}`)}
                     {active ? (sort.dir === 'asc' ? ' ▲' : ' ▼') : ''}
                   </button>
                 </th>
@@ -48,10 +64,10 @@ export function BoardTable({
         <tbody>
           {rows.map((r) => (
             <tr key={r.trailer.id} className="border-t border-paper-line">
-              {rowCells(r, timeZone, now).map((cell, i) => (
+              {rowCells(r, timeZone, now, words).map((cell, i) => (
                 <td
                   key={COLUMNS[i].key}
-                  className={`px-2 py-1 ${i === 0 ? 'font-bold' : ''} ${i === 5 && cell !== 'None' ? 'text-hold' : ''}`}
+                  className={`px-2 py-1 ${i === 0 ? 'font-bold' : ''} ${i === 5 && cell !== words.none ? 'text-hold' : ''}`}
                 >
                   {cell}
                 </td>
@@ -60,7 +76,7 @@ export function BoardTable({
           ))}
         </tbody>
       </table>
-      {rows.length === 0 ? <p className="p-3 text-gate">No trailers match these filters.</p> : null}
+      {rows.length === 0 ? <p className="p-3 text-gate">{t('board.noMatch')}</p> : null}
     </div>
   );
 }

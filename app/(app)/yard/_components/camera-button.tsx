@@ -1,16 +1,14 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useCameraScan } from '@/app/_components/scanner/use-camera-scan';
 
-const PROBLEMS = {
-  denied: 'The camera is blocked: allow it in the browser, or type instead.',
-  no_camera: 'No camera found: type instead.',
-  failed: 'The camera did not start: type instead.',
-} as const;
+const PROBLEMS = ['denied', 'no_camera', 'failed'] as const;
 
 /** Reads one code with the camera (label QR or VIN barcode) and hands over the raw text. */
 export function CameraButton({ label, onText }: { label: string; onText: (text: string) => void }) {
   const { videoRef, camera, start, stop } = useCameraScan(onText);
+  const t = useTranslations('Yard');
   const isLive = camera === 'starting' || camera === 'scanning';
   return (
     <div className="space-y-1">
@@ -18,7 +16,7 @@ export function CameraButton({ label, onText }: { label: string; onText: (text: 
         ref={videoRef}
         muted
         playsInline
-        aria-label="Camera view"
+        aria-label={t('camera.view')}
         className={isLive ? 'aspect-[4/3] w-full rounded-xl bg-black object-cover' : 'hidden'}
       />
       <button
@@ -26,11 +24,11 @@ export function CameraButton({ label, onText }: { label: string; onText: (text: 
         onClick={() => (isLive ? stop() : void start())}
         className="min-h-tap w-full rounded-lg border-2 border-brand bg-paper px-4 text-gate font-bold text-brand"
       >
-        {isLive ? 'Stop camera' : label}
+        {isLive ? t('camera.stop') : label}
       </button>
-      {camera in PROBLEMS ? (
+      {(PROBLEMS as readonly string[]).includes(camera) ? (
         <p role="alert" className="text-gate-sm font-bold text-danger">
-          {PROBLEMS[camera as keyof typeof PROBLEMS]}
+          {t(`camera.${camera as (typeof PROBLEMS)[number]}`)}
         </p>
       ) : null}
     </div>

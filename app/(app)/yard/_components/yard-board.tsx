@@ -1,7 +1,8 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useMemo, useState } from 'react';
-import { BOARD_FILTERS, FILTER_LABELS, filterRows, tableRows, type BoardFilter } from '@/lib/yard/board';
+import { BOARD_FILTERS, filterRows, tableRows, type BoardFilter } from '@/lib/yard/board';
 import { sortRows, type SortDir, type SortKey } from '@/lib/yard/table';
 import type { Board } from '@/lib/yard/types';
 import { BoardTable } from './board-table';
@@ -9,6 +10,7 @@ import { useBoard } from './use-board';
 import { YardMap } from './yard-map';
 
 export function YardBoard({ initial }: { initial: Board }) {
+  const t = useTranslations('Yard');
   const { data, error } = useBoard(initial);
   const board = data ?? initial;
   const [filters, setFilters] = useState<BoardFilter[]>([]);
@@ -30,20 +32,24 @@ export function YardBoard({ initial }: { initial: Board }) {
     <section aria-labelledby="board-title" className="space-y-3">
       <div className="flex flex-wrap items-baseline gap-x-3">
         <h1 id="board-title" className="text-gate-xl font-bold">
-          Yard board
+          {t('board.title')}
         </h1>
         <p className="text-gate-sm text-ink-soft">
-          {board.terminal.name} · {all.length} trailers · {board.terminal.timeZone} · free time{' '}
-          {board.policy.freeTimeHours} h
+          {t('board.meta', {
+            terminal: board.terminal.name,
+            count: all.length,
+            zone: board.terminal.timeZone,
+            hours: board.policy.freeTimeHours,
+          })}
         </p>
       </div>
       {error ? (
         <p role="alert" className="text-gate-sm font-bold text-danger">
-          Live refresh failed; showing the last board read.
+          {t('board.refreshFailed')}
         </p>
       ) : null}
       <fieldset className="flex flex-wrap gap-2">
-        <legend className="sr-only">Filters</legend>
+        <legend className="sr-only">{t('board.filters')}</legend>
         {BOARD_FILTERS.map((f) => (
           <label
             key={f}
@@ -55,12 +61,12 @@ export function YardBoard({ initial }: { initial: Board }) {
               onChange={() => toggle(f)}
               className="size-5"
             />
-            {FILTER_LABELS[f]}
+            {t(`board.filter.${f}`)}
           </label>
         ))}
       </fieldset>
       <div className="flex flex-wrap items-center gap-2">
-        <div role="tablist" aria-label="Board view" className="flex gap-1">
+        <div role="tablist" aria-label={t('board.view')} className="flex gap-1">
           {(['map', 'table'] as const).map((v) => (
             <button
               key={v}
@@ -70,19 +76,19 @@ export function YardBoard({ initial }: { initial: Board }) {
               onClick={() => setView(v)}
               className={`min-h-tap rounded-lg px-4 text-gate font-bold ${view === v ? 'bg-brand text-on-fill' : 'bg-paper-dim text-ink'}`}
             >
-              {v === 'map' ? 'Map' : 'Table'}
+              {t(`board.${v}`)}
             </button>
           ))}
         </div>
         <p className="text-gate-sm" aria-live="polite">
-          {shown.length} shown
+          {t('board.shown', { count: shown.length })}
         </p>
         <a
           href={csvHref}
           className="ml-auto flex min-h-tap items-center rounded-lg border-2 border-brand px-4 text-gate font-bold text-brand"
           download
         >
-          Export CSV
+          {t('board.export')}
         </a>
       </div>
       {view === 'map' ? (

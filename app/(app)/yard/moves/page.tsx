@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
-import { Caution, CAUTIONS } from '@/app/_components/caution';
+import { getTranslations } from 'next-intl/server';
+import { Caution } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { getBoard } from '@/db/queries/yard-board';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -7,24 +8,25 @@ import { requireUser } from '@/lib/server/auth';
 import { YardNav } from '../_components/yard-nav';
 import { MoveForm } from './_components/move-form';
 
-export const metadata: Metadata = { title: 'Move a trailer' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Yard'))('move.title') };
+}
 
 export default async function MovesPage() {
   const user = await requireUser(SECTION_ROLES.yard);
   const board = user.terminalId ? await getBoard(user.terminalId) : null;
-  if (!board)
-    return <EmptyState title="No home terminal">Ask an admin to set your home terminal.</EmptyState>;
+  const t = await getTranslations('Yard');
+  const c = await getTranslations('Cautions');
+  if (!board) return <EmptyState title={t('noTerminal')}>{t('askAdmin')}</EmptyState>;
   const units = board.spots.flatMap((s) => (s.trailer ? [s.trailer.unitNumber] : []));
   const freeSpots = board.spots.filter((s) => !s.trailer).map((s) => s.label);
   return (
     <div className="space-y-3">
       <YardNav current="/yard/moves" />
-      <h1 className="text-gate-xl font-bold">Move a trailer</h1>
-      <p className="text-gate">
-        Scan or type the unit, then the slot or door it goes to. Custody stays with the terminal.
-      </p>
-      <Caution title="Out-of-service trailers">
-        {CAUTIONS.outOfService} It may be moved inside the yard only. {CAUTIONS.inspection}
+      <h1 className="text-gate-xl font-bold">{t('move.title')}</h1>
+      <p className="text-gate">{t('move.intro')}</p>
+      <Caution title={t('move.oosTitle')}>
+        {c('outOfService')} {t('move.oosYardOnly')} {c('inspection')}
       </Caution>
       <MoveForm units={units} freeSpots={freeSpots} />
     </div>

@@ -1,6 +1,7 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { getTranslations } from 'next-intl/server';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { formAction } from '@/lib/server/action';
 import { clearTask } from '@/lib/server/yard/tasks';
@@ -12,6 +13,6 @@ export const clearTaskAction = formAction(
     const cleared = await clearTask(user, input);
     if (!cleared.ok) return cleared;
     revalidatePath('/yard/tasks');
-    return { ok: true, message: 'Cleared.' };
+    return { ok: true, message: (await getTranslations('Yard'))('tasks.cleared') };
   },
 );

@@ -1,6 +1,7 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { getTranslations } from 'next-intl/server';
 import { redirect } from 'next/navigation';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { formAction } from '@/lib/server/action';
@@ -25,7 +26,7 @@ export const finishWalkAction = formAction({ roles: yard, schema: finishWalkSche
   if (!finished.ok) return finished;
   revalidatePath(`/yard/walks/${input.walkId}`);
   revalidatePath('/yard/tasks');
-  return { ok: true, message: 'Walk finished.' };
+  return { ok: true, message: (await getTranslations('Walk'))('finishedMsg') };
 });
 
 export const resolveOutcomeAction = formAction(
@@ -35,6 +36,6 @@ export const resolveOutcomeAction = formAction(
     if (!resolved.ok) return resolved;
     revalidatePath('/yard/walks/[id]', 'page');
     revalidatePath('/yard');
-    return { ok: true, message: 'Done.' };
+    return { ok: true, message: (await getTranslations('Walk'))('doneMsg') };
   },
 );

@@ -1,7 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { ActionForm } from '@/app/_components/action-form';
-import { Caution, CAUTIONS } from '@/app/_components/caution';
+import { getTranslations } from 'next-intl/server';
+import { Caution } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listLayout } from '@/db/queries/yard-layout';
 import { listRecentWalks } from '@/db/queries/yard-walks';
@@ -12,12 +13,16 @@ import { YardNav } from '../_components/yard-nav';
 import { RowChoice } from './_components/row-choice';
 import { startWalkAction } from './actions';
 
-export const metadata: Metadata = { title: 'Yard walks' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Walk'))('title') };
+}
 
 export default async function WalksPage() {
   const user = await requireUser(SECTION_ROLES.yard);
-  if (!user.terminalId)
-    return <EmptyState title="No home terminal">Ask an admin to set your home terminal.</EmptyState>;
+  const t = await getTranslations('Walk');
+  const y = await getTranslations('Yard');
+  const c = await getTranslations('Cautions');
+  if (!user.terminalId) return <EmptyState title={y('noTerminal')}>{y('askAdmin')}</EmptyState>;
   const [{ rows }, walks] = await Promise.all([
     listLayout(user.terminalId),
     listRecentWalks(user.terminalId),
@@ -26,22 +31,22 @@ export default async function WalksPage() {
   return (
     <div className="space-y-4">
       <YardNav current="/yard/walks" />
-      <h1 className="text-gate-xl font-bold">Yard walk</h1>
-      <Caution title="Walking the yard">{CAUTIONS.yardWalk}</Caution>
+      <h1 className="text-gate-xl font-bold">{t('title')}</h1>
+      <Caution title={c('titles.yardWalk')}>{c('yardWalk')}</Caution>
       <section aria-labelledby="start-title" className="rounded-xl bg-paper p-4 shadow">
         <h2 id="start-title" className="text-gate-lg font-bold">
-          Start a walk
+          {t('start')}
         </h2>
-        <ActionForm action={startWalkAction} submitLabel="Start walk" pendingLabel="Starting…">
+        <ActionForm action={startWalkAction} submitLabel={t('startSubmit')} pendingLabel={t('starting')}>
           <RowChoice rows={rows} />
         </ActionForm>
       </section>
       <section aria-labelledby="recent-title">
         <h2 id="recent-title" className="text-gate-lg font-bold">
-          Recent walks
+          {t('recent')}
         </h2>
         {walks.length === 0 ? (
-          <p className="text-gate">No walks yet.</p>
+          <p className="text-gate">{t('none')}</p>
         ) : (
           <ul className="space-y-1">
             {walks.map((w) => (
@@ -51,9 +56,14 @@ export default async function WalksPage() {
                   className="flex min-h-tap items-center gap-2 rounded-lg bg-paper px-3 text-gate underline"
                 >
                   {formatTime(w.startedAt, tz)} · {w.startedBy} ·{' '}
-                  {w.status === 'finished' ? 'finished' : 'in progress'}
+                  {w.status === 'finished' ? t('finished') : t('inProgress')}
                   {w.summary
-                    ? ` · ${w.summary.matched ?? 0} matched, ${w.summary.wrong_slot ?? 0} wrong slot, ${w.summary.missing ?? 0} missing, ${w.summary.unknown ?? 0} unknown`
+                    ? ` · ${t('summary', {
+                        matched: w.summary.matched ?? 0,
+                        wrongSlot: w.summary.wrong_slot ?? 0,
+                        missing: w.summary.missing ?? 0,
+                        unknown: w.summary.unknown ?? 0,
+                      })}`
                     : ''}
                 </Link>
               </li>

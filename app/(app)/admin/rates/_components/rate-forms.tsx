@@ -1,24 +1,26 @@
+import { useTranslations } from 'next-intl';
 import { ActionForm } from '@/app/_components/action-form';
 import { Field, Select } from '@/app/_components/field';
 import { RATE_CONDITIONS } from '@/lib/validation/desk';
 import { addRateAction, changeRateAction } from '../actions';
 
 export function AddRateForm() {
+  const t = useTranslations('Admin');
   return (
     <ActionForm
       action={addRateAction}
-      ariaLabel="Add a rate"
-      submitLabel="Add rate"
+      ariaLabel={t('rates.add')}
+      submitLabel={t('rates.addSubmit')}
       className="rounded-xl bg-paper p-3"
     >
       <div className="grid gap-2 sm:grid-cols-3">
-        <Field label="Item key or prefix" name="itemPattern" required placeholder="rear.door_left" />
-        <Select label="Condition" name="condition">
+        <Field label={t('rates.pattern')} name="itemPattern" required placeholder="rear.door_left" />
+        <Select label={t('rates.condition')} name="condition">
           {RATE_CONDITIONS.map((c) => (
             <option key={c}>{c}</option>
           ))}
         </Select>
-        <Field label="Amount ($)" name="amount" inputMode="decimal" required />
+        <Field label={t('rates.amount')} name="amount" inputMode="decimal" required />
       </div>
     </ActionForm>
   );
@@ -26,17 +28,18 @@ export function AddRateForm() {
 
 /** One rate's amount and its Save button on one line; the row beside it names the rate. */
 export function ChangeRateForm({ id, label, amount }: { id: string; label: string; amount: string }) {
+  const t = useTranslations('Admin');
   return (
     <ActionForm
       action={changeRateAction}
       hidden={{ id }}
-      ariaLabel={`Change ${label}`}
-      submitLabel="Save"
+      ariaLabel={t('rates.change', { label })}
+      submitLabel={t('rates.save')}
       variant="secondary"
       className="flex flex-wrap items-start gap-x-2"
     >
       <Field
-        label={`Amount for ${label} ($)`}
+        label={t('rates.amountFor', { label })}
         name="amount"
         id={`amount-${id}`}
         defaultValue={amount}

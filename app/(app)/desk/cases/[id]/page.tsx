@@ -1,9 +1,9 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { getLocale } from 'next-intl/server';
 import { z } from 'zod';
-import { Caution, CAUTIONS } from '@/app/_components/caution';
+import { getLocale, getTranslations } from 'next-intl/server';
+import { Caution } from '@/app/_components/caution';
 import { getCaseEvidence, listCustodyRows } from '@/db/queries/case-evidence';
 import { getCase, listCaseEvents } from '@/db/queries/cases';
 import { isWithinDisputeWindow } from '@/lib/desk/case-state';
@@ -23,7 +23,9 @@ import { CustodyTimeline } from './_components/custody-timeline';
 import { EvidencePair } from './_components/evidence-pair';
 import { TrailerDiagram } from './_components/trailer-diagram';
 
-export const metadata: Metadata = { title: 'Case' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Case'))('title') };
+}
 
 export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>) {
   const user = await requireUser(SECTION_ROLES.desk);
@@ -47,43 +49,57 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
   const amount = effectiveAmountCents(c);
   const isUnsafe = evidence.findings.some((f) => f.condition === 'unsafe');
   const tz = c.timeZone;
+  const t = await getTranslations('Case');
+  const cautions = await getTranslations('Cautions');
   return (
     <div className="space-y-4">
       <p>
         <Link href="/desk" className="text-gate font-bold text-brand underline">
-          ← All cases
+          {t('allCases')}
         </Link>
       </p>
       <header className="space-y-1">
         <h1 className="text-gate-xl font-bold">
-          Trailer {c.unitNumber} <CaseStateBadge state={c.state} />
+          {t('trailer', { unit: c.unitNumber })} <CaseStateBadge state={c.state} />
         </h1>
         <p className="text-gate">
           {c.terminalName} ·{' '}
-          {after ? `${after.kind === 'drop' ? 'drop' : 'hook'} on ${formatTime(after.occurredAt, tz)}` : ''} ·
-          proposed: <span className="font-bold">{c.carrierName ?? 'no single carrier'}</span>
+          {after
+            ? t('handoffOn', { kind: t(`kind.${after.kind}`), when: formatTime(after.occurredAt, tz) })
+            : ''}{' '}
+          · {t('proposed')} <span className="font-bold">{c.carrierName ?? t('noSingleCarrier')}</span>
         </p>
-        {note ? <p className="text-gate font-bold text-warn">Marked: {note}</p> : null}
+        {note ? <p className="text-gate font-bold text-warn">{t('marked', { note })}</p> : null}
         <p className="text-gate">
-          Estimate <span className="font-bold">{formatMoney(amount)}</span>
+          {t('estimate')} <span className="font-bold">{formatMoney(amount)}</span>{' '}
           {c.overrideCents !== null
-            ? ` (set by the clerk: ${c.overrideReason}; rate card ${formatMoney(c.estimateCents)})`
-            : ' from the rate card'}
-          {c.decision ? ` · decided: ${c.decision}, charged ${formatMoney(c.chargedCents ?? 0)}` : ''}
-          {c.disputeDeadline ? ` · dispute until ${formatTime(c.disputeDeadline, tz)}` : ''}
+            ? t('setByClerk', { reason: c.overrideReason ?? '', rate: formatMoney(c.estimateCents) })
+            : t('fromRateCard')}
+          {c.decision
+            ? ` · ${t('decided', {
+                decision: t(`actions.decisionChoice.${c.decision}`),
+                amount: formatMoney(c.chargedCents ?? 0),
+              })}`
+            : ''}
+          {c.disputeDeadline ? ` · ${t('disputeUntil', { when: formatTime(c.disputeDeadline, tz) })}` : ''}
         </p>
         {isDeskStaff(user.role) ? (
-          <Link href={`/trailers/${c.trailerId}`} className="text-gate-sm font-bold text-brand underline">
-            Trailer file
+          <Link
+            href={`/trailers/${c.trailerId}`}
+            className="inline-flex min-h-tap items-center text-gate-sm font-bold text-brand underline"
+          >
+            {t('trailerFile')}
           </Link>
         ) : null}
       </header>
-      {isUnsafe ? <Caution title="Out of service">{CAUTIONS.outOfService}</Caution> : null}
+      {isUnsafe ? (
+        <Caution title={cautions('titles.outOfService')}>{cautions('outOfService')}</Caution>
+      ) : null}
       <div className="grid gap-4 lg:grid-cols-[1fr_22rem]">
         <div className="space-y-4">
           <section aria-labelledby="evidence" className="space-y-3">
             <h2 id="evidence" className="text-gate-lg font-bold">
-              Evidence, before and after
+              {t('evidence')}
             </h2>
             {evidence.findings.map((f) => (
               <EvidencePair
@@ -102,7 +118,7 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
           />
           <section aria-labelledby="custody" className="space-y-2 rounded-xl bg-paper p-3">
             <h2 id="custody" className="text-gate-lg font-bold">
-              Custody between the two inspections
+              {t('custody')}
             </h2>
             <CustodyTimeline events={custody} timeZone={tz} />
           </section>
@@ -120,7 +136,7 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
           />
           <section aria-labelledby="history">
             <h2 id="history" className="text-gate-lg font-bold">
-              History
+              {t('history')}
             </h2>
             <CaseHistory events={events} timeZone={tz} />
           </section>

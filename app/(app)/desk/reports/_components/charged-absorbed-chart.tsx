@@ -1,9 +1,11 @@
+import { useTranslations } from 'next-intl';
 import { formatMoney } from '@/lib/format/money';
 
 type Bar = { label: string; chargedCents: number; absorbedCents: number };
 
 /** Hitchmark's own grouped bars: charged to carriers vs absorbed by the terminal, per group. */
 export function ChargedAbsorbedChart({ bars, title }: { bars: Bar[]; title: string }) {
+  const t = useTranslations('Desk');
   const max = Math.max(1, ...bars.flatMap((b) => [b.chargedCents, b.absorbedCents]));
   const rowH = 44;
   const height = bars.length * rowH + 30;
@@ -14,7 +16,7 @@ export function ChargedAbsorbedChart({ bars, title }: { bars: Bar[]; title: stri
       <svg
         viewBox={`0 0 600 ${height}`}
         role="img"
-        aria-label={`${title}: ${bars.map((b) => `${b.label} charged ${formatMoney(b.chargedCents)}, absorbed ${formatMoney(b.absorbedCents)}`).join('; ')}`}
+        aria-label={`${title}: ${bars.map((b) => t('report.bar', { label: b.label, charged: formatMoney(b.chargedCents), absorbed: formatMoney(b.absorbedCents) })).join('; ')}`}
         className="mt-2 h-auto w-full"
       >
         {bars.map((b, i) => {
@@ -38,11 +40,11 @@ export function ChargedAbsorbedChart({ bars, title }: { bars: Bar[]; title: stri
         <g transform={`translate(90 ${height - 14})`}>
           <rect width="12" height="12" className="fill-brand" />
           <text x="16" y="11" className="fill-ink text-[12px]">
-            charged to carriers
+            {t('report.chargedLegend')}
           </text>
           <rect x="170" width="12" height="12" className="fill-warn" />
           <text x="186" y="11" className="fill-ink text-[12px]">
-            absorbed by the terminal
+            {t('report.absorbedLegend')}
           </text>
         </g>
       </svg>

@@ -1,3 +1,4 @@
+import { useTranslations } from 'next-intl';
 import { formatTime } from '@/lib/format/time';
 import type { ChainCheck } from '@/lib/handoffs/hash';
 
@@ -11,10 +12,11 @@ export function ChainStatus({
   brokenAt: Date | null;
   timeZone: string;
 }) {
+  const t = useTranslations('Trailers');
   if (check.ok) {
     return (
       <p role="status" className="rounded-lg border-l-8 border-ok bg-ok-bg p-3 text-gate font-bold text-ok">
-        Chain verifies: {check.count} {check.count === 1 ? 'record' : 'records'}
+        {t('chain.ok', { count: check.count })}
       </p>
     );
   }
@@ -23,17 +25,15 @@ export function ChainStatus({
       role="alert"
       className="rounded-lg border-l-8 border-danger bg-danger-bg p-3 text-gate font-bold text-danger"
     >
-      {check.why === 'unkeyed' ? (
-        <>
-          Record of {brokenAt ? formatTime(brokenAt, timeZone) : 'an unknown date'} is linked without the
-          chain key, so Hitchmark cannot vouch for it. It and every later record are unproven.
-        </>
-      ) : (
-        <>
-          Record of {brokenAt ? formatTime(brokenAt, timeZone) : 'an unknown date'} changed after the fact
-          {check.why === 'link_broken' ? ' (its link to the record before it is broken)' : ''}. Every later
-          record is unproven.
-        </>
+      {t(
+        check.why === 'unkeyed'
+          ? 'chain.unkeyed'
+          : check.why === 'link_broken'
+            ? 'chain.linkBroken'
+            : 'chain.changed',
+        {
+          when: brokenAt ? formatTime(brokenAt, timeZone) : t('chain.unknownDate'),
+        },
       )}
     </p>
   );

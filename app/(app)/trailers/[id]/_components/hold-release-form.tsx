@@ -1,3 +1,4 @@
+import { useTranslations } from 'next-intl';
 import { ActionForm } from '@/app/_components/action-form';
 import { Field } from '@/app/_components/field';
 import { releaseHoldAction } from '../../actions';
@@ -13,23 +14,24 @@ export function HoldReleaseForm({
   reason: string;
   nowLocal: string;
 }) {
+  const t = useTranslations('Trailers');
   return (
     <ActionForm
       action={releaseHoldAction}
       hidden={{ holdId, trailerId }}
-      submitLabel="Record repair and release"
-      ariaLabel={`Release hold: ${reason}`}
+      submitLabel={t('release.submit')}
+      ariaLabel={t('release.label', { reason })}
     >
       <Field
-        label="Repaired by"
+        label={t('release.repairedBy')}
         name="repairedBy"
         id={`repairedBy-${holdId}`}
         required
-        hint="Technician or shop"
+        hint={t('release.repairedByHint')}
       />
-      <Field label="What was repaired" name="repairNote" id={`repairNote-${holdId}`} required />
+      <Field label={t('release.repairNote')} name="repairNote" id={`repairNote-${holdId}`} required />
       <Field
-        label="When (terminal time)"
+        label={t('release.repairedAt')}
         name="repairedAt"
         id={`repairedAt-${holdId}`}
         type="datetime-local"

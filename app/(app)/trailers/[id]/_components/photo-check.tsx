@@ -1,11 +1,6 @@
+import { useTranslations } from 'next-intl';
 import { formatTime } from '@/lib/format/time';
 import type { PhotoCheckReport } from '@/lib/server/photos/integrity';
-
-const SAYS = {
-  matches: 'matches the record',
-  changed: 'CHANGED since it was recorded',
-  missing: 'MISSING from storage',
-} as const;
 
 /**
  * "Check the photos": a GET button (it only reads) that re-hashes each recorded photo of the
@@ -22,11 +17,12 @@ export function PhotoCheckPanel({
   result: PhotoCheckReport | 'unavailable' | null;
   timeZone: string;
 }) {
+  const t = useTranslations('Trailers');
   const bad = result && result !== 'unavailable' ? result.counts.changed + result.counts.missing : 0;
   return (
     <section aria-labelledby="photo-check" className="space-y-2 rounded-lg bg-paper p-3">
       <h2 id="photo-check" className="text-gate-lg font-bold">
-        Photos
+        {t('photos.title')}
       </h2>
       <form action={`/trailers/${trailerId}`} method="get">
         {kind ? <input type="hidden" name="kind" value={kind} /> : null}
@@ -35,12 +31,12 @@ export function PhotoCheckPanel({
           type="submit"
           className="min-h-tap rounded-lg border-2 border-brand px-4 text-gate-sm font-bold text-brand"
         >
-          Check the photos
+          {t('photos.check')}
         </button>
       </form>
       {result === 'unavailable' ? (
         <p role="alert" className="text-gate font-bold text-danger">
-          Photo storage did not answer; nothing was checked. Try again in a minute.
+          {t('photos.unavailable')}
         </p>
       ) : result ? (
         <>
@@ -49,21 +45,25 @@ export function PhotoCheckPanel({
             className={`text-gate font-bold ${bad ? 'text-danger' : 'text-ok'}`}
           >
             {result.photos.length === 0
-              ? 'No recorded photos for this trailer.'
-              : `${result.counts.matches} of ${result.photos.length} photos match the record` +
-                (result.counts.changed ? `; ${result.counts.changed} changed` : '') +
-                (result.counts.missing ? `; ${result.counts.missing} missing` : '') +
+              ? t('photos.none')
+              : t('photos.summary', { matches: result.counts.matches, total: result.photos.length }) +
+                (result.counts.changed
+                  ? `; ${t('photos.changedCount', { count: result.counts.changed })}`
+                  : '') +
+                (result.counts.missing
+                  ? `; ${t('photos.missingCount', { count: result.counts.missing })}`
+                  : '') +
                 '.'}
           </p>
-          <ul aria-label="Photo check" className="space-y-1">
+          <ul aria-label={t('photos.label')} className="space-y-1">
             {result.photos.map((p) => (
               <li key={p.id} data-outcome={p.outcome} className="text-gate-sm">
-                {formatTime(p.occurredAt, timeZone)} · {p.handoffKind} · {p.itemKey ?? 'photo'}:{' '}
+                {formatTime(p.occurredAt, timeZone)} · {p.handoffKind} · {p.itemKey ?? t('photos.photo')}:{' '}
                 <a href={`/api/photos/${p.id}`} className="text-brand underline">
-                  photo
+                  {t('photos.photo')}
                 </a>{' '}
                 <span className={p.outcome === 'matches' ? 'text-ok' : 'font-bold text-danger'}>
-                  {SAYS[p.outcome]}
+                  {t(`photos.says.${p.outcome}`)}
                 </span>{' '}
                 <span className="font-mono text-ink-soft">sha-256 {p.sha256.slice(0, 12)}…</span>
               </li>

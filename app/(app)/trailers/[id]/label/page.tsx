@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
+import { getTranslations } from 'next-intl/server';
 import { z } from 'zod';
 import { ButtonLink } from '@/app/_components/button';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -9,7 +10,9 @@ import { LabelSheet } from '../../labels/_components/label-sheet';
 import { PrintButton } from '../../labels/_components/print-button';
 import { ReissueForm } from '../../labels/_components/reissue-form';
 
-export const metadata: Metadata = { title: 'Trailer label' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Trailers'))('labels.title') };
+}
 
 export default async function TrailerLabelPage({ params, searchParams }: PageProps<'/trailers/[id]/label'>) {
   const user = await requireUser(SECTION_ROLES.trailers);
@@ -18,19 +21,20 @@ export default async function TrailerLabelPage({ params, searchParams }: PagePro
   const [trailer] = await prepareLabelSheet(user, { trailerIds: [id.data] });
   if (!trailer) notFound();
   const wasReissued = (await searchParams).reissued === '1';
+  const t = await getTranslations('Trailers');
   return (
     <div className="space-y-4">
       <div className="no-print space-y-3">
-        <h1 className="text-gate-xl font-bold">Label for {trailer.unitNumber}</h1>
+        <h1 className="text-gate-xl font-bold">{t('labels.labelFor', { unit: trailer.unitNumber })}</h1>
         {wasReissued ? (
           <p role="status" className="rounded-lg border-2 border-ok bg-ok-bg p-3 text-gate font-bold text-ok">
-            New label issued. Print it and replace the old one on the trailer.
+            {t('labels.reissued')}
           </p>
         ) : null}
         <div className="flex flex-wrap gap-2">
-          <PrintButton label="Print label" />
+          <PrintButton label={t('labels.printOne')} />
           <ButtonLink variant="secondary" href={`/trailers/labels/pdf?ids=${trailer.id}`} prefetch={false}>
-            Download PDF
+            {t('labels.pdf')}
           </ButtonLink>
         </div>
       </div>

@@ -1,3 +1,5 @@
+import { useTranslations } from 'next-intl';
+
 export interface LabelCardProps {
   unitNumber: string;
   vin: string;
@@ -9,10 +11,11 @@ export interface LabelCardProps {
 
 /** One printed trailer label: the unit number huge, the QR, the VIN and owner SCAC small. */
 export function LabelCard({ unitNumber, vin, ownerScac, link, qrSvg }: LabelCardProps) {
+  const t = useTranslations('Trailers');
   return (
     <figure
       data-label-link={link}
-      aria-label={`Label for trailer ${unitNumber}`}
+      aria-label={t('labels.card', { unit: unitNumber })}
       className="label-card flex flex-col items-center rounded-lg border-2 border-dashed border-paper-line bg-white p-4 text-black print:rounded-none print:border-ink-faint"
     >
       <p className="text-center font-bold leading-none tracking-tight text-[clamp(3rem,16vw,5.5rem)] print:text-[64pt]">
@@ -23,8 +26,9 @@ export function LabelCard({ unitNumber, vin, ownerScac, link, qrSvg }: LabelCard
         dangerouslySetInnerHTML={{ __html: qrSvg }}
       />
       <figcaption className="mt-1 text-center font-mono text-[0.8rem] leading-snug print:text-[8pt]">
-        <span>VIN {vin}</span> <span className="ml-2">Owner {ownerScac}</span>
-        <span className="block text-ink-faint">Hitchmark trailer label · scan at the gate</span>
+        <span>{t('labels.vin', { vin })}</span>{' '}
+        <span className="ml-2">{t('labels.owner', { scac: ownerScac })}</span>
+        <span className="block text-ink-faint">{t('labels.cardFoot')}</span>
       </figcaption>
     </figure>
   );

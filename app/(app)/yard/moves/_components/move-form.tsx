@@ -1,10 +1,12 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { useSWRConfig } from 'swr';
 import { Button } from '@/app/_components/button';
-import { Caution, CAUTIONS } from '@/app/_components/caution';
+import { Caution } from '@/app/_components/caution';
 import { Field, FormError } from '@/app/_components/field';
+import { useRefusalText } from '@/app/_components/use-refusal-text';
 import { CameraButton } from '../../_components/camera-button';
 import { BOARD_KEY } from '../../_components/use-board';
 
@@ -13,6 +15,9 @@ type Result =
   | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
 
 export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: string[] }) {
+  const t = useTranslations('Yard');
+  const c = useTranslations('Cautions');
+  const say = useRefusalText();
   const { mutate } = useSWRConfig();
   const [result, setResult] = useState<Result | null>(null);
   const [pending, setPending] = useState(false);
@@ -36,12 +41,21 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
       } else {
         setResult({
           ok: false,
-          message: body.message ?? 'The move was not recorded.',
-          fieldErrors: body.fieldErrors,
+          message: body.message
+            ? say(body.message, body.messageKey, body.messageValues)
+            : t('move.notRecorded'),
+          fieldErrors: body.fieldErrors
+            ? Object.fromEntries(
+                Object.entries(body.fieldErrors as Record<string, string[]>).map(([k, list]) => [
+                  k,
+                  list.map((m) => say(m)),
+                ]),
+              )
+            : undefined,
         });
       }
     } catch {
-      setResult({ ok: false, message: 'No connection: the move was not recorded. Try again when online.' });
+      setResult({ ok: false, message: t('move.noConnection') });
     } finally {
       setPending(false);
     }
@@ -56,23 +70,23 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
   return (
     <form data-move onSubmit={submit} noValidate className="space-y-2 rounded-xl bg-paper p-4 shadow">
       <Field
-        label="Unit"
+        label={t('move.unit')}
         name="unit"
         list="yard-units"
         autoCapitalize="characters"
         autoComplete="off"
         required
-        hint="Unit number, VIN or label"
+        hint={t('move.unitHint')}
         error={errors.unit}
       />
-      <CameraButton label="Scan trailer label" onText={(t) => fill(t, 'unit')} />
+      <CameraButton label={t('move.scanUnit')} onText={(text) => fill(text, 'unit')} />
       <datalist id="yard-units">
         {units.map((u) => (
           <option key={u} value={u} />
         ))}
       </datalist>
       <Field
-        label="To slot or door"
+        label={t('move.target')}
         name="target"
         list="free-spots"
         autoCapitalize="characters"
@@ -80,14 +94,14 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
         required
         error={errors.target}
       />
-      <CameraButton label="Scan slot label" onText={(t) => fill(t, 'target')} />
+      <CameraButton label={t('move.scanTarget')} onText={(text) => fill(text, 'target')} />
       <datalist id="free-spots">
         {freeSpots.map((s) => (
           <option key={s} value={s} />
         ))}
       </datalist>
       <Button type="submit" disabled={pending}>
-        {pending ? 'Recording…' : 'Record move'}
+        {pending ? t('move.pending') : t('move.submit')}
       </Button>
       <FormError message={result && !result.ok && !result.fieldErrors ? result.message : null} />
       <div aria-live="polite">
@@ -97,13 +111,13 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
               role="status"
               className="rounded-lg border-2 border-ok bg-ok-bg p-3 text-gate font-bold text-ok"
             >
-              Moved {result.unitNumber}
-              {result.fromLabel ? ` from ${result.fromLabel}` : ''} to {result.toLabel}.
+              {result.fromLabel
+                ? t('move.movedFrom', { unit: result.unitNumber, from: result.fromLabel, to: result.toLabel })
+                : t('move.moved', { unit: result.unitNumber, to: result.toLabel })}
             </p>
             {result.isOutOfService ? (
-              <Caution title="Out of service">
-                {result.unitNumber} has an out-of-service hold. {CAUTIONS.outOfService} It must not go on a
-                public road.
+              <Caution title={c('titles.outOfService')}>
+                {t('move.oosHold', { unit: result.unitNumber })} {c('outOfService')} {t('move.noPublicRoad')}
               </Caution>
             ) : null}
           </div>

@@ -1,7 +1,8 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { Caution, CAUTIONS } from '@/app/_components/caution';
+import { getTranslations } from 'next-intl/server';
+import { Caution } from '@/app/_components/caution';
 import { listWalkOutcomes } from '@/db/queries/yard-outcomes';
 import { getWalk } from '@/db/queries/yard-walks';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -10,7 +11,9 @@ import { YardNav } from '../../_components/yard-nav';
 import { WalkResult } from './_components/walk-result';
 import { WalkScanner } from './_components/walk-scanner';
 
-export const metadata: Metadata = { title: 'Yard walk' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Walk'))('title') };
+}
 
 export default async function WalkPage({ params }: { params: Promise<{ id: string }> }) {
   const user = await requireUser(SECTION_ROLES.yard);
@@ -19,11 +22,13 @@ export default async function WalkPage({ params }: { params: Promise<{ id: strin
   const walk = await getWalk(id, user.terminalId);
   if (!walk) notFound();
   const rowNames = walk.rows.map((r) => r.name).join(', ');
+  const t = await getTranslations('Walk');
+  const c = await getTranslations('Cautions');
   return (
     <div className="space-y-3">
       <YardNav current="/yard/walks" />
-      <h1 className="text-gate-xl font-bold">Yard walk: {rowNames}</h1>
-      {walk.status === 'in_progress' ? <Caution title="Walking the yard">{CAUTIONS.yardWalk}</Caution> : null}
+      <h1 className="text-gate-xl font-bold">{t('titleRows', { rows: rowNames })}</h1>
+      {walk.status === 'in_progress' ? <Caution title={c('titles.yardWalk')}>{c('yardWalk')}</Caution> : null}
       {walk.status === 'in_progress' ? (
         <WalkScanner
           walkId={walk.id}

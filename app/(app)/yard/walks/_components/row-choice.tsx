@@ -1,10 +1,12 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { FieldError } from '@/app/_components/field';
 import { useFieldError } from '@/app/_components/form-state';
 
 /** The rows a walk covers, as checkboxes; inside an ActionForm its message shows under the boxes. */
 export function RowChoice({ rows }: { rows: { id: string; name: string }[] }) {
+  const t = useTranslations('Walk');
   const messages = useFieldError('rowIds');
   return (
     <fieldset
@@ -12,7 +14,7 @@ export function RowChoice({ rows }: { rows: { id: string; name: string }[] }) {
       aria-invalid={messages?.length ? true : undefined}
       aria-describedby={messages?.length ? 'rowIds-error' : undefined}
     >
-      <legend className="text-gate font-bold">Rows to walk</legend>
+      <legend className="text-gate font-bold">{t('rows')}</legend>
       <div className="mt-1 flex flex-wrap gap-2">
         {rows.map((r) => (
           <label

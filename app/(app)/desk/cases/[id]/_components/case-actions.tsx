@@ -1,3 +1,4 @@
+import { useTranslations } from 'next-intl';
 import { ActionForm } from '@/app/_components/action-form';
 import { Field } from '@/app/_components/field';
 import type { Role } from '@/lib/auth/roles';
@@ -37,6 +38,7 @@ export function CaseActions({
   amountDollars,
   isDisputeOpen,
 }: Props) {
+  const t = useTranslations('Case');
   const can = new Set(availableCommands(state));
   const isStaff = isDeskStaff(role);
   const hidden = { caseId };
@@ -47,8 +49,9 @@ export function CaseActions({
         key="dispute"
         action={disputeCaseAction}
         hidden={hidden}
-        title="Dispute this case"
-        submitLabel="Send dispute"
+        title={t('actions.disputeTitle')}
+        submitLabel={t('actions.disputeSubmit')}
+        pendingLabel={t('actions.saving')}
         variant="danger"
         className={BOX}
       >
@@ -63,12 +66,13 @@ export function CaseActions({
         key="notify"
         action={notifyCaseAction}
         hidden={hidden}
-        title="Notify the carrier"
-        submitLabel="Notify carrier"
+        title={t('actions.notifyTitle')}
+        submitLabel={t('actions.notifySubmit')}
+        pendingLabel={t('actions.saving')}
         className={BOX}
       >
         <p className="text-gate-sm">
-          E-mails {carrierEmail ?? 'the carrier'} the evidence summary and a signed link to dispute.
+          {t('actions.notifyText', { to: carrierEmail ?? t('actions.theCarrier') })}
         </p>
       </ActionForm>,
     );
@@ -79,13 +83,14 @@ export function CaseActions({
         key="override"
         action={overrideEstimateAction}
         hidden={hidden}
-        title="Change the estimate"
-        submitLabel="Save estimate"
+        title={t('actions.overrideTitle')}
+        submitLabel={t('actions.overrideSubmit')}
+        pendingLabel={t('actions.saving')}
         variant="secondary"
         className={BOX}
       >
         <Field
-          label="Amount ($)"
+          label={t('actions.amount')}
           name="amount"
           id="override-amount"
           inputMode="decimal"
@@ -93,11 +98,11 @@ export function CaseActions({
           defaultValue={amountDollars}
         />
         <Field
-          label="Reason"
+          label={t('actions.reason')}
           name="reason"
           id="override-reason"
           required
-          placeholder="e.g. body shop quote"
+          placeholder={t('actions.reasonExample')}
         />
       </ActionForm>,
     );
@@ -110,23 +115,15 @@ export function CaseActions({
         key="decide"
         action={decideCaseAction}
         hidden={hidden}
-        title="Decide"
-        submitLabel="Record decision"
+        title={t('actions.decideTitle')}
+        submitLabel={t('actions.decideSubmit')}
+        pendingLabel={t('actions.saving')}
         className={BOX}
       >
         <DecisionFields choices={choices} />
-        <Field
-          label="Charged to the carrier ($, for charge or share)"
-          name="amount"
-          id="decide-amount"
-          inputMode="decimal"
-        />
-        <Field label="Reason" name="reason" id="decide-reason" required />
-        {state === 'open' ? (
-          <p className="text-gate-sm text-ink-soft">
-            To charge or share, notify the carrier first so they can dispute.
-          </p>
-        ) : null}
+        <Field label={t('actions.charged')} name="amount" id="decide-amount" inputMode="decimal" />
+        <Field label={t('actions.reason')} name="reason" id="decide-reason" required />
+        {state === 'open' ? <p className="text-gate-sm text-ink-soft">{t('actions.notifyFirst')}</p> : null}
       </ActionForm>,
     );
   }
@@ -136,12 +133,13 @@ export function CaseActions({
         key="close"
         action={closeCaseAction}
         hidden={hidden}
-        title="Close the case"
-        submitLabel="Close case"
+        title={t('actions.closeTitle')}
+        submitLabel={t('actions.closeSubmit')}
+        pendingLabel={t('actions.saving')}
         variant="secondary"
         className={BOX}
       >
-        <Field label="Note (optional)" name="note" id="close-note" placeholder="e.g. paid, repair done" />
+        <Field label={t('actions.note')} name="note" id="close-note" placeholder={t('actions.noteExample')} />
       </ActionForm>,
     );
   }

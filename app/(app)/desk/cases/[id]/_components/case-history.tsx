@@ -1,3 +1,4 @@
+import { useTranslations } from 'next-intl';
 import { formatTime } from '@/lib/format/time';
 import { PhotoZoom } from './photo-zoom';
 
@@ -13,32 +14,27 @@ type Event = {
   photoIds: string[];
 };
 
-const WORDS: Record<string, string> = {
-  opened: 'Opened',
-  estimated: 'Estimated',
-  notify: 'Carrier notified',
-  dispute: 'Disputed',
-  decide: 'Decided',
-  close: 'Closed',
-  override: 'Estimate changed',
-};
+const KINDS = ['opened', 'estimated', 'notify', 'dispute', 'decide', 'close', 'override'] as const;
+const isKnown = (kind: string): kind is (typeof KINDS)[number] => (KINDS as readonly string[]).includes(kind);
 
 export function CaseHistory({ events, timeZone }: { events: Event[]; timeZone: string }) {
+  const t = useTranslations('Case');
   return (
-    <ol className="space-y-2" aria-label="Case history">
+    <ol className="space-y-2" aria-label={t('historyLabel')}>
       {events.map((e) => (
         <li key={e.id} className="rounded-lg bg-paper p-2 text-gate-sm">
-          <span className="font-bold">{WORDS[e.kind] ?? e.kind}</span> · {formatTime(e.createdAt, timeZone)}
+          <span className="font-bold">{isKnown(e.kind) ? t(`event.${e.kind}`) : e.kind}</span> ·{' '}
+          {formatTime(e.createdAt, timeZone)}
           {e.actorName
             ? ` · ${e.actorName} (${e.actorRole})`
             : e.kind === 'dispute'
-              ? ' · via the e-mailed link'
+              ? ` · ${t('viaLink')}`
               : ''}
           {e.note ? <p className="mt-1 text-ink-soft">{e.note}</p> : null}
           {e.photoIds.length ? (
             <div className="mt-2 grid grid-cols-2 gap-2">
               {e.photoIds.map((id) => (
-                <PhotoZoom key={id} photoId={id} alt="Photo sent with the dispute" />
+                <PhotoZoom key={id} photoId={id} alt={t('disputePhoto')} />
               ))}
             </div>
           ) : null}

@@ -1,11 +1,13 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { FieldError } from '@/app/_components/field';
 import { useFieldError, useTypedValue } from '@/app/_components/form-state';
 import type { Decision } from '@/lib/desk/case-state';
 
 /** The decision as radio buttons, with its message under the group and the choice kept after a refusal. */
 export function DecisionFields({ choices }: { choices: readonly Decision[] }) {
+  const t = useTranslations('Case');
   const messages = useFieldError('decision');
   const typed = useTypedValue('decision');
   return (
@@ -14,7 +16,7 @@ export function DecisionFields({ choices }: { choices: readonly Decision[] }) {
       aria-invalid={messages?.length ? true : undefined}
       aria-describedby={messages?.length ? 'decision-error' : undefined}
     >
-      <legend className="text-gate font-bold">Decision</legend>
+      <legend className="text-gate font-bold">{t('actions.decision')}</legend>
       {choices.map((d) => (
         <label
           key={d}
@@ -28,7 +30,7 @@ export function DecisionFields({ choices }: { choices: readonly Decision[] }) {
             defaultChecked={typed === d}
             className="h-5 w-5"
           />{' '}
-          {d}
+          {t(`actions.decisionChoice.${d}`)}
         </label>
       ))}
       <FieldError id="decision-error" messages={messages} />

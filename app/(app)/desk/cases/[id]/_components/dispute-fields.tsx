@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { FieldError, Textarea } from '@/app/_components/field';
 import { useFieldError } from '@/app/_components/form-state';
@@ -7,12 +8,13 @@ import { PhotoCapture } from '@/app/_components/photo-capture';
 
 /** The dispute's note and optional photos; the photo ids travel in one hidden field. */
 export function DisputeFields({ trailerId, itemKey }: { trailerId: string; itemKey: string }) {
+  const t = useTranslations('Case');
   const [photos, setPhotos] = useState<{ id: string }[]>([]);
   const photoErrors = useFieldError('photoIds');
   return (
     <>
       <Textarea
-        label="Why is this damage not yours?"
+        label={t('actions.disputeNote')}
         name="note"
         id="dispute-note"
         required
@@ -23,7 +25,7 @@ export function DisputeFields({ trailerId, itemKey }: { trailerId: string; itemK
       <PhotoCapture
         trailerId={trailerId}
         itemKey={itemKey}
-        label="your evidence"
+        label={t('actions.disputeEvidence')}
         photos={photos}
         onAdd={(p) => setPhotos((list) => [...list, p])}
       />

@@ -1,3 +1,4 @@
+import { useTranslations } from 'next-intl';
 import type { CaseEvidence, CaseFinding } from '@/db/queries/case-evidence';
 import { itemLabel } from '@/lib/desk/item-labels';
 import { CONDITION_LABELS, type Condition } from '@/lib/engine';
@@ -12,20 +13,25 @@ type Side = {
 };
 
 function Record({ side, itemName, timeZone }: { side: Side; itemName: string; timeZone: string }) {
+  const t = useTranslations('Case');
   const { handoff, item } = side;
   return (
     <div className="min-w-0 space-y-2 rounded-lg border-2 border-paper-line p-2">
       <h4 className="text-gate-sm font-bold uppercase tracking-wide text-ink-soft">{side.title}</h4>
       {handoff ? (
         <p className="text-gate-sm">
-          {handoff.kind === 'drop' ? 'Drop' : 'Hook'} {formatTime(handoff.occurredAt, timeZone)} ·{' '}
+          {handoff.kind === 'drop' ? t('drop') : t('hook')} {formatTime(handoff.occurredAt, timeZone)} ·{' '}
           {handoff.driverName} ({handoff.carrierScac})
         </p>
       ) : (
-        <p className="text-gate-sm text-ink-soft">No earlier record of this item.</p>
+        <p className="text-gate-sm text-ink-soft">{t('noEarlier')}</p>
       )}
       <p className="text-gate font-bold" data-testid="condition">
-        {item ? CONDITION_LABELS[item.condition as Condition] : 'not checked'}
+        {item ? (
+          <span data-stored-text="">{CONDITION_LABELS[item.condition as Condition]}</span>
+        ) : (
+          t('notChecked')
+        )}
       </p>
       {item?.note ? <p className="text-gate-sm">“{item.note}”</p> : null}
       {side.photoIds.length ? (
@@ -35,18 +41,16 @@ function Record({ side, itemName, timeZone }: { side: Side; itemName: string; ti
           ))}
         </div>
       ) : handoff ? (
-        <p className="text-gate-sm text-ink-soft">No photo of this item at this record.</p>
+        <p className="text-gate-sm text-ink-soft">{t('noPhoto')}</p>
       ) : null}
     </div>
   );
 }
 
-const CONFIDENCE_WORDS: Record<string, string> = {
-  high: 'high confidence',
-  medium: 'medium confidence',
-  // `none`: the party line already says there is no single party; the confidence adds nothing
-  none: '',
-};
+// `none`: the party line already says there is no single party; the confidence adds nothing
+const CONFIDENCES = ['high', 'medium'] as const;
+const isWorded = (c: string): c is (typeof CONFIDENCES)[number] =>
+  (CONFIDENCES as readonly string[]).includes(c);
 
 /** One damaged item: the before record (the inspection the engine compared against) and the after record, side by side. */
 export function EvidencePair({
@@ -60,6 +64,7 @@ export function EvidencePair({
   afterHandoffId: string;
   timeZone: string;
 }) {
+  const t = useTranslations('Case');
   const name = itemLabel(finding.itemKey);
   const sideOf = (title: string, handoffId: string | null): Side => ({
     title,
@@ -74,22 +79,22 @@ export function EvidencePair({
       <h3 className="text-gate-lg font-bold">
         {name}{' '}
         <span className="text-gate-sm font-normal text-ink-soft">
-          ({finding.kind === 'worse' ? 'worse' : 'new damage'})
+          ({finding.kind === 'worse' ? t('worse') : t('newDamage')})
         </span>
       </h3>
       <div className="grid grid-cols-2 gap-2" data-testid="evidence-pair">
-        <Record side={sideOf('Before', finding.previousHandoffId)} itemName={name} timeZone={timeZone} />
-        <Record side={sideOf('After', afterHandoffId)} itemName={name} timeZone={timeZone} />
+        <Record side={sideOf(t('before'), finding.previousHandoffId)} itemName={name} timeZone={timeZone} />
+        <Record side={sideOf(t('after'), afterHandoffId)} itemName={name} timeZone={timeZone} />
       </div>
       <p className="rounded-lg bg-brand-light p-2 text-gate">
         <span className="font-bold">
-          {finding.responsibleCarrierName ?? finding.responsibleParty ?? 'No single party'}
-          {finding.confidence && CONFIDENCE_WORDS[finding.confidence] !== ''
-            ? ` · ${CONFIDENCE_WORDS[finding.confidence] ?? finding.confidence}`
+          {finding.responsibleCarrierName ?? finding.responsibleParty ?? t('noSingleParty')}
+          {finding.confidence && isWorded(finding.confidence)
+            ? ` · ${t(`confidence.${finding.confidence}`)}`
             : ''}
           :
         </span>{' '}
-        {finding.reason}
+        <span data-stored-text="">{finding.reason}</span>
       </p>
     </article>
   );

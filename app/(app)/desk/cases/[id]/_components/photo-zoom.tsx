@@ -1,9 +1,11 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useRef, useState } from 'react';
 
 /** A photo thumbnail that opens large on click; a placeholder when the photo cannot be loaded. */
 export function PhotoZoom({ photoId, alt }: { photoId: string; alt: string }) {
+  const t = useTranslations('Case');
   const dialog = useRef<HTMLDialogElement>(null);
   const [isBroken, setBroken] = useState(false);
   const src = `/api/photos/${photoId}`;
@@ -11,10 +13,10 @@ export function PhotoZoom({ photoId, alt }: { photoId: string; alt: string }) {
     return (
       <div
         role="img"
-        aria-label={`${alt} (not available)`}
+        aria-label={t('photo.unavailableLabel', { alt })}
         className="flex h-28 w-full items-center justify-center rounded-lg border-2 border-dashed border-paper-line bg-paper-dim p-2 text-center text-gate-sm text-ink-soft"
       >
-        Photo not available yet
+        {t('photo.unavailable')}
       </div>
     );
   }
@@ -24,7 +26,7 @@ export function PhotoZoom({ photoId, alt }: { photoId: string; alt: string }) {
         type="button"
         onClick={() => dialog.current?.showModal()}
         className="block w-full rounded-lg border-2 border-paper-line focus:outline-4 focus:outline-brand"
-        aria-label={`Open large: ${alt}`}
+        aria-label={t('photo.open', { alt })}
       >
         {/* eslint-disable-next-line @next/next/no-img-element -- photos stream from our own API, sized by the browser */}
         <img
@@ -48,7 +50,7 @@ export function PhotoZoom({ photoId, alt }: { photoId: string; alt: string }) {
           className="mt-2 min-h-tap w-full rounded-lg bg-paper text-gate font-bold"
           onClick={() => dialog.current?.close()}
         >
-          Close
+          {t('photo.close')}
         </button>
       </dialog>
     </>

@@ -1,5 +1,6 @@
 // Hitchmark's own drawing of a reefer trailer, nose to the left, seen from above and from its left
 // side, with the zones that have damage in this case filled in.
+import { useTranslations } from 'next-intl';
 import { ZONE_LABELS } from '@/lib/engine';
 
 type Props = { damagedZones: string[]; isReefer: boolean; axles: number };
@@ -8,6 +9,7 @@ const ZONE_NAMES: Record<string, string> = ZONE_LABELS;
 
 /** One zone of the drawing: filled red when this case has damage there. */
 function Zone({ zone, hit, children }: { zone: string; hit: Set<string>; children: React.ReactNode }) {
+  const t = useTranslations('Case');
   const isDamaged = hit.has(zone);
   return (
     <g
@@ -16,28 +18,31 @@ function Zone({ zone, hit, children }: { zone: string; hit: Set<string>; childre
       data-zone={zone}
       data-damaged={isDamaged || undefined}
     >
-      <title>{`${ZONE_NAMES[zone] ?? zone}${isDamaged ? ': damaged' : ''}`}</title>
+      <title>
+        {isDamaged ? t('diagram.damaged', { zone: ZONE_NAMES[zone] ?? zone }) : (ZONE_NAMES[zone] ?? zone)}
+      </title>
       {children}
     </g>
   );
 }
 
 export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
+  const t = useTranslations('Case');
   const hit = new Set(damagedZones);
   const label = damagedZones.length
-    ? `Damage at: ${damagedZones.map((z) => ZONE_NAMES[z] ?? z).join(', ')}`
-    : 'No zone marked';
+    ? t('diagram.damageAt', { zones: damagedZones.map((z) => ZONE_NAMES[z] ?? z).join(', ') })
+    : t('diagram.noZone');
   const wheelXs = Array.from({ length: Math.max(1, Math.min(axles, 3)) }, (_, i) => 470 - i * 34);
   return (
     <figure className="rounded-xl bg-paper p-3">
       <svg
         viewBox="0 0 600 330"
         role="img"
-        aria-label={`Trailer diagram. ${label}`}
+        aria-label={t('diagram.label', { detail: label })}
         className="h-auto w-full max-w-2xl"
       >
         <text x="10" y="18" className="fill-ink text-[14px] font-bold">
-          From above (nose left)
+          {t('diagram.above')}
         </text>
         {isReefer ? (
           <Zone zone="reefer_unit" hit={hit}>
@@ -60,14 +65,14 @@ export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
           <rect x="540" y="34" width="16" height="102" />
         </Zone>
         <text x="300" y="30" textAnchor="middle" className="fill-ink-soft text-[12px]">
-          right side
+          {t('diagram.rightSide')}
         </text>
         <text x="300" y="152" textAnchor="middle" className="fill-ink-soft text-[12px]">
-          left side
+          {t('diagram.leftSide')}
         </text>
 
         <text x="10" y="186" className="fill-ink text-[14px] font-bold">
-          Left side view
+          {t('diagram.sideView')}
         </text>
         {isReefer ? (
           <Zone zone="reefer_unit" hit={hit}>
@@ -95,7 +100,7 @@ export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
         </Zone>
       </svg>
       <figcaption className="mt-1 text-gate-sm text-ink-soft">
-        {label}. Red zones hold the damage of this case.
+        {t('diagram.caption', { detail: label })}
       </figcaption>
     </figure>
   );

@@ -1,18 +1,20 @@
+import { useTranslations } from 'next-intl';
 import { Field, Select } from '@/app/_components/field';
 import type { QuickChecks } from '@/lib/yard/walk';
 
 const YES_NO = [
-  ['', 'Not checked'],
-  ['yes', 'Yes'],
-  ['no', 'No'],
+  ['', 'notChecked'],
+  ['yes', 'yes'],
+  ['no', 'no'],
 ] as const;
 
 function YesNo({ name, label }: { name: string; label: string }) {
+  const t = useTranslations('Walk');
   return (
     <Select name={name} label={label} defaultValue="">
       {YES_NO.map(([v, l]) => (
         <option key={v} value={v}>
-          {l}
+          {t(`checks.${l}`)}
         </option>
       ))}
     </Select>
@@ -21,29 +23,30 @@ function YesNo({ name, label }: { name: string; label: string }) {
 
 /** The walk's quick checks; every one may stay "not checked" (never read as ok). */
 export function QuickCheckFields() {
+  const t = useTranslations('Walk');
   return (
     <fieldset className="grid grid-cols-2 gap-2 sm:grid-cols-5">
-      <legend className="text-gate font-bold">Quick checks</legend>
-      <YesNo name="isUnitRunning" label="Unit running" />
+      <legend className="text-gate font-bold">{t('checks.title')}</legend>
+      <YesNo name="isUnitRunning" label={t('checks.unitRunning')} />
       <Field
         name="setpointF"
-        label="Setpoint °F"
+        label={t('checks.setpoint')}
         type="number"
         step="0.1"
         min="-40"
         max="90"
         inputMode="decimal"
       />
-      <Select name="fuelEighths" label="Fuel (eighths)" defaultValue="">
-        <option value="">Not read</option>
+      <Select name="fuelEighths" label={t('checks.fuel')} defaultValue="">
+        <option value="">{t('checks.notRead')}</option>
         {Array.from({ length: 9 }, (_, i) => (
           <option key={i} value={i}>
             {i}/8
           </option>
         ))}
       </Select>
-      <YesNo name="areDoorsClosed" label="Doors closed" />
-      <YesNo name="isSealPresent" label="Seal present" />
+      <YesNo name="areDoorsClosed" label={t('checks.doorsClosed')} />
+      <YesNo name="isSealPresent" label={t('checks.sealPresent')} />
     </fieldset>
   );
 }

@@ -1,3 +1,4 @@
+import { useTranslations } from 'next-intl';
 import { ActionForm } from '@/app/_components/action-form';
 import type { WalkResolution } from '@/lib/yard/walk';
 import { resolveOutcomeAction } from '../../actions';
@@ -12,39 +13,33 @@ type Outcome = {
   expectedLabel: string | null;
 };
 
-const GROUPS = [
-  { key: 'wrong_slot', title: 'Wrong slot' },
-  { key: 'missing', title: 'Missing' },
-  { key: 'unknown', title: 'Unknown' },
-  { key: 'duplicate', title: 'Duplicates' },
-  { key: 'matched', title: 'Matched' },
-] as const;
+const GROUPS = ['wrong_slot', 'missing', 'unknown', 'duplicate', 'matched'] as const;
 
-const RESOLUTION_TEXT: Record<WalkResolution, string> = {
-  accepted: 'Board corrected',
-  marked_gone: 'Marked gone',
-  investigating: 'Under investigation',
-};
+type T = ReturnType<typeof useTranslations<'Walk'>>;
 
-function describe(o: Outcome): string {
-  const unit = o.unitNumber ?? o.scannedText ?? 'Unknown';
+function describe(t: T, o: Outcome): string {
+  const unit = o.unitNumber ?? o.scannedText ?? t('result.unknownUnit');
+  const found = o.foundLabel ?? '';
+  const expected = o.expectedLabel ?? '';
   switch (o.outcome) {
     case 'matched':
-      return `${unit} in ${o.foundLabel}`;
+      return t('result.matched', { unit, found });
     case 'wrong_slot':
-      return `${unit}: board says ${o.expectedLabel}, seen in ${o.foundLabel}`;
+      return t('result.wrongSlot', { unit, expected, found });
     case 'missing':
-      return `${unit}: expected in ${o.expectedLabel}, not found`;
+      return t('result.missing', { unit, expected });
     case 'unknown':
-      return `"${unit}" seen in ${o.foundLabel ?? 'an unknown place'}: not on this board`;
+      return t('result.unknown', { unit, found: o.foundLabel ?? t('result.unknownPlace') });
     case 'duplicate':
-      return `${unit}: scanned in more than one slot (first ${o.foundLabel})`;
+      return t('result.duplicate', { unit, found });
   }
 }
 
 function Resolve({ o }: { o: Outcome }) {
+  const t = useTranslations('Walk');
   if (o.outcome === 'matched') return null;
-  if (o.resolution) return <p className="text-gate-sm font-bold text-ok">{RESOLUTION_TEXT[o.resolution]}</p>;
+  if (o.resolution)
+    return <p className="text-gate-sm font-bold text-ok">{t(`result.resolution.${o.resolution}`)}</p>;
   const choice = (resolution: WalkResolution, label: string, variant: 'primary' | 'secondary' | 'danger') => (
     <ActionForm
       key={resolution}
@@ -56,41 +51,46 @@ function Resolve({ o }: { o: Outcome }) {
   );
   return (
     <div className="flex flex-wrap gap-2">
-      {o.outcome === 'wrong_slot' ? choice('accepted', `Accept: move to ${o.foundLabel}`, 'primary') : null}
-      {o.outcome === 'missing' ? choice('marked_gone', 'Mark gone', 'danger') : null}
-      {choice('investigating', 'Investigate', 'secondary')}
+      {o.outcome === 'wrong_slot'
+        ? choice('accepted', t('result.accept', { found: o.foundLabel ?? '' }), 'primary')
+        : null}
+      {o.outcome === 'missing' ? choice('marked_gone', t('result.markGone'), 'danger') : null}
+      {choice('investigating', t('result.investigate'), 'secondary')}
     </div>
   );
 }
 
 /** The stored reconciliation of a finished walk, with what the clerk or jockey can do about each line. */
 export function WalkResult({ summary, outcomes }: { summary: Record<string, number>; outcomes: Outcome[] }) {
+  const t = useTranslations('Walk');
   return (
     <section aria-labelledby="result-title" className="space-y-3">
       <h2 id="result-title" className="text-gate-lg font-bold">
-        Reconciliation
+        {t('result.title')}
       </h2>
-      <dl className="grid grid-cols-2 gap-2 sm:grid-cols-5" aria-label="Counts">
+      <dl className="grid grid-cols-2 gap-2 sm:grid-cols-5" aria-label={t('result.counts')}>
         {GROUPS.map((g) => (
-          <div key={g.key} className="rounded-lg bg-paper p-2 text-center shadow">
-            <dt className="text-gate-sm">{g.title}</dt>
-            <dd className="text-gate-xl font-bold" data-testid={`count-${g.key}`}>
-              {summary[g.key] ?? 0}
+          <div key={g} className="rounded-lg bg-paper p-2 text-center shadow">
+            <dt className="text-gate-sm">{t(`result.group.${g}`)}</dt>
+            <dd className="text-gate-xl font-bold" data-testid={`count-${g}`}>
+              {summary[g] ?? 0}
             </dd>
           </div>
         ))}
       </dl>
       <p className="text-gate-sm text-ink-soft">
-        {summary.scans ?? 0} scans{summary.repeatScans ? `, ${summary.repeatScans} repeated` : ''}.
+        {t('result.scans', { count: summary.scans ?? 0 })}
+        {summary.repeatScans ? `, ${t('result.repeated', { count: summary.repeatScans })}` : ''}.
       </p>
-      {GROUPS.map((g) => {
+      {GROUPS.map((key) => {
+        const g = { key, title: t(`result.group.${key}`) };
         const list = outcomes.filter((o) => o.outcome === g.key);
         if (list.length === 0) return null;
         const items = (
           <ul className="space-y-2">
             {list.map((o) => (
               <li key={o.id} className="rounded-lg bg-paper p-3 shadow">
-                <p className="text-gate">{describe(o)}</p>
+                <p className="text-gate">{describe(t, o)}</p>
                 <Resolve o={o} />
               </li>
             ))}

@@ -1,9 +1,11 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { useMemo, useRef, useState } from 'react';
 import { ActionForm } from '@/app/_components/action-form';
 import { Button } from '@/app/_components/button';
 import { Field, Select } from '@/app/_components/field';
+import { useRefusalText } from '@/app/_components/use-refusal-text';
 import { pendingCount } from '@/lib/yard/scan-queue';
 import { suggestNextSpot, type WalkSpot } from '@/lib/yard/walk';
 import { finishWalkAction } from '../../actions';
@@ -12,7 +14,6 @@ import { QuickCheckFields, readQuickChecks } from './quick-checks';
 import { useScanQueue } from './use-scan-queue';
 
 type Stored = { clientKey: string; text: string; unitNumber: string | null; spotLabel: string | null };
-const STATE_TEXT = { pending: 'Waiting to send', sent: 'Sent', rejected: 'Refused' } as const;
 
 export function WalkScanner({
   walkId,
@@ -23,6 +24,8 @@ export function WalkScanner({
   spots: WalkSpot[];
   stored: Stored[];
 }) {
+  const t = useTranslations('Walk');
+  const say = useRefusalText();
   const { queue, isOnline, add } = useScanQueue(walkId);
   const [lastSpotId, setLastSpotId] = useState<string | null>(null);
   const [errors, setErrors] = useState<{ unit?: string[]; spotId?: string[] }>({});
@@ -44,8 +47,8 @@ export function WalkScanner({
     const text = String(data.get('unit') ?? '').trim();
     const spot = spots.find((s) => s.id === data.get('spotId'));
     const missing = {
-      ...(text ? {} : { unit: ['Scan or type the unit first.'] }),
-      ...(spot ? {} : { spotId: ['Choose the slot the trailer stands in.'] }),
+      ...(text ? {} : { unit: [t('unitFirst')] }),
+      ...(spot ? {} : { spotId: [t('slotFirst')] }),
     };
     setErrors(missing);
     if (!text || !spot) return;
@@ -69,8 +72,8 @@ export function WalkScanner({
         role="status"
         className={`rounded-lg p-2 text-gate-sm font-bold ${isOnline ? 'bg-ok-bg text-ok' : 'bg-warn-bg text-warn'}`}
       >
-        {isOnline ? 'Online' : 'Offline: scans are kept on this device and sent when the connection returns.'}
-        {waiting ? ` · ${waiting} waiting to send` : ''}
+        {isOnline ? t('online') : t('offline')}
+        {waiting ? ` · ${t('waiting', { count: waiting })}` : ''}
       </p>
       <form
         onSubmit={record}
@@ -81,21 +84,21 @@ export function WalkScanner({
         <Field
           ref={unitRef}
           autoFocus
-          label="Unit"
+          label={t('unit')}
           name="unit"
           autoComplete="off"
           autoCapitalize="characters"
-          placeholder="Unit number, VIN or label"
+          placeholder={t('unitPlaceholder')}
           error={errors.unit}
         />
         <CameraButton
-          label="Scan label"
+          label={t('scanLabel')}
           onText={(text) => {
             if (unitRef.current) unitRef.current.value = text;
           }}
         />
-        <Select label="Slot" name="spotId" defaultValue={suggested?.id ?? ''} error={errors.spotId}>
-          <option value="">Choose the slot</option>
+        <Select label={t('slot')} name="spotId" defaultValue={suggested?.id ?? ''} error={errors.spotId}>
+          <option value="">{t('chooseSlot')}</option>
           {spots.map((s) => (
             <option key={s.id} value={s.id}>
               {s.label}
@@ -103,16 +106,16 @@ export function WalkScanner({
           ))}
         </Select>
         <QuickCheckFields />
-        <Button type="submit">Record scan</Button>
+        <Button type="submit">{t('record')}</Button>
       </form>
       <section aria-labelledby="scans-title">
         <h2 id="scans-title" className="text-gate-lg font-bold">
-          Scans ({queue.length + others.length})
+          {t('scans', { count: queue.length + others.length })}
         </h2>
-        <ol className="space-y-1" aria-label="Scans of this walk">
+        <ol className="space-y-1" aria-label={t('scansLabel')}>
           {others.map((s) => (
             <li key={s.clientKey} className="rounded bg-paper px-3 py-1 text-gate-sm">
-              {s.spotLabel}: {s.unitNumber ?? `${s.text} (unknown)`} · Sent
+              {s.spotLabel}: {s.unitNumber ?? t('unknownUnit', { text: s.text })} · {t('state.sent')}
             </li>
           ))}
           {queue.map((q) => (
@@ -120,17 +123,18 @@ export function WalkScanner({
               key={q.clientKey}
               className={`rounded px-3 py-1 text-gate-sm ${q.state === 'rejected' ? 'bg-danger-bg text-danger' : 'bg-paper'}`}
             >
-              {q.spotLabel}: {q.state === 'sent' ? (q.result ?? `${q.scannedText} (unknown)`) : q.scannedText}{' '}
-              · {STATE_TEXT[q.state]}
-              {q.error ? `: ${q.error}` : ''}
+              {q.spotLabel}:{' '}
+              {q.state === 'sent' ? (q.result ?? t('unknownUnit', { text: q.scannedText })) : q.scannedText} ·{' '}
+              {t(`state.${q.state}`)}
+              {q.error ? `: ${say(q.error)}` : ''}
             </li>
           ))}
         </ol>
       </section>
       <ActionForm
         action={finishWalkAction}
-        submitLabel={waiting > 0 ? 'Finish (send waiting scans first)' : 'Finish walk'}
-        pendingLabel="Reconciling…"
+        submitLabel={waiting > 0 ? t('finishWaiting') : t('finish')}
+        pendingLabel={t('reconciling')}
         variant="secondary"
         disabled={waiting > 0}
         hidden={{ walkId }}
