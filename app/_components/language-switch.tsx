@@ -4,6 +4,7 @@ import { useLocale, useTranslations } from 'next-intl';
 import { useRouter } from 'next/navigation';
 import { useTransition } from 'react';
 import { LOCALE_COOKIE, LOCALE_NAMES, LOCALES, type Locale } from '@/lib/i18n/locales';
+import { chooseLocaleAction } from '@/lib/server/i18n/actions';
 
 function rememberLocale(locale: Locale) {
   document.cookie = `${LOCALE_COOKIE}=${locale}; path=/; max-age=31536000; samesite=lax`;
@@ -26,7 +27,11 @@ export function LanguageSwitch({ onFill = false, className = '' }: { onFill?: bo
           disabled={pending}
           onClick={() => {
             rememberLocale(l);
-            startTransition(() => router.refresh());
+            // kept on the account too when signed in (the cookie alone works without signal)
+            startTransition(async () => {
+              await chooseLocaleAction(l).catch(() => null);
+              router.refresh();
+            });
           }}
           className={`min-h-tap min-w-tap rounded-lg border-2 border-current px-2 text-gate-sm font-bold ${onFill ? 'aria-pressed:bg-paper aria-pressed:text-brand' : 'text-brand aria-pressed:border-brand aria-pressed:bg-brand aria-pressed:text-on-fill'}`}
         >

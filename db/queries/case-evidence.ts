@@ -28,6 +28,8 @@ export async function listCaseFindings(c: { id: string; handoffId: string }) {
       confidence: findings.confidence,
       candidates: findings.candidates,
       reason: findings.reason,
+      reasonCode: findings.reasonCode,
+      reasonParams: findings.reasonParams,
     })
     .from(findings)
     .leftJoin(carriers, eq(carriers.id, findings.responsibleCarrierId))

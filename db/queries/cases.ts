@@ -79,6 +79,8 @@ export async function getCase(id: string, viewer: CaseViewer) {
       terminalId: cases.terminalId,
       proposedCarrierId: cases.proposedCarrierId,
       attributionNote: cases.attributionNote,
+      attributionNoteCode: cases.attributionNoteCode,
+      attributionNoteParams: cases.attributionNoteParams,
       estimateCents: cases.estimateCents,
       overrideCents: cases.overrideCents,
       overrideReason: cases.overrideReason,

@@ -46,13 +46,25 @@ async function receiptWhere(where: SQL | undefined): Promise<ReceiptView | null>
   if (!h) return null;
   const [f, hl, p] = await Promise.all([
     db
-      .select({ kind: findings.kind, itemKey: findings.itemKey, reason: findings.reason })
+      .select({
+        kind: findings.kind,
+        itemKey: findings.itemKey,
+        reason: findings.reason,
+        reasonCode: findings.reasonCode,
+        reasonParams: findings.reasonParams,
+      })
       .from(findings)
       .where(eq(findings.handoffId, h.id))
       .orderBy(asc(findings.createdAt), asc(findings.itemKey)),
     // every hold open at the moment of the handoff: the ones it placed and the ones already there
     db
-      .select({ severity: holds.severity, restriction: holds.restriction, reason: holds.reason })
+      .select({
+        severity: holds.severity,
+        restriction: holds.restriction,
+        reason: holds.reason,
+        reasonCode: holds.reasonCode,
+        reasonParams: holds.reasonParams,
+      })
       .from(holds)
       .where(
         and(
@@ -143,7 +155,11 @@ export function listOpenHolds(trailerId: string) {
       severity: holds.severity,
       restriction: holds.restriction,
       reason: holds.reason,
+      reasonCode: holds.reasonCode,
+      reasonParams: holds.reasonParams,
       caution: holds.caution,
+      cautionCode: holds.cautionCode,
+      cautionParams: holds.cautionParams,
       placedAt: holds.placedAt,
     })
     .from(holds)

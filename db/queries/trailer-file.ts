@@ -142,6 +142,8 @@ export async function getTrailerFileRows(
         kind: findings.kind,
         condition: findings.condition,
         reason: findings.reason,
+        reasonCode: findings.reasonCode,
+        reasonParams: findings.reasonParams,
       })
       .from(findings)
       .where(eq(findings.trailerId, trailerId)),
@@ -151,6 +153,8 @@ export async function getTrailerFileRows(
         placedAt: holds.placedAt,
         severity: holds.severity,
         reason: holds.reason,
+        reasonCode: holds.reasonCode,
+        reasonParams: holds.reasonParams,
         releasedAt: holds.releasedAt,
         repairedBy: holds.repairedBy,
         repairNote: holds.repairNote,

@@ -12,6 +12,7 @@ const signInColumns = {
   homeTerminalId: users.homeTerminalId,
   isActive: users.isActive,
   sessionVersion: users.sessionVersion,
+  locale: users.locale,
 };
 
 export async function getUserForStaffSignIn(email: string) {
@@ -93,4 +94,9 @@ export async function setUserAccess(
   access: { role: (typeof users.$inferSelect)['role']; isActive: boolean },
 ) {
   await tx.update(users).set(access).where(eq(users.id, userId));
+}
+
+/** Keeps the language the user chose (en | es) on the account. */
+export async function setUserLocale(userId: string, locale: string): Promise<void> {
+  await db.update(users).set({ locale }).where(eq(users.id, userId));
 }

@@ -2,11 +2,20 @@ import 'server-only';
 import { and, asc, eq, isNull } from 'drizzle-orm';
 import { db } from '@/db';
 import { holds, policies, terminals, trailers, yardRows, yardSpots } from '@/db/schema';
+import { DEFAULT_LOCALE } from '@/lib/i18n/locales';
+import { storedText } from '@/lib/i18n/reasons';
 import { terminalPolicyOf } from '@/lib/terminal/policy';
 import type { Board, BoardHold, BoardSpot } from '@/lib/yard/types';
 
-/** The yard board of one terminal: live slots and doors in map order, who sits where, open holds. */
-export async function getBoard(terminalId: string, now = new Date()): Promise<Board | null> {
+/**
+ * The yard board of one terminal: live slots and doors in map order, who sits where, open holds
+ * (their reasons in `locale`, the reader's language).
+ */
+export async function getBoard(
+  terminalId: string,
+  now = new Date(),
+  locale: string = DEFAULT_LOCALE,
+): Promise<Board | null> {
   const [terminal] = await db
     .select({ name: terminals.name, timeZone: terminals.timeZone, policy: policies.data })
     .from(terminals)
@@ -43,7 +52,13 @@ export async function getBoard(terminalId: string, now = new Date()): Promise<Bo
       .where(and(eq(yardSpots.terminalId, terminalId), isNull(yardSpots.retiredAt)))
       .orderBy(asc(yardSpots.kind), asc(yardRows.sortOrder), asc(yardSpots.sortOrder), asc(yardSpots.label)),
     db
-      .select({ trailerId: holds.trailerId, severity: holds.severity, reason: holds.reason })
+      .select({
+        trailerId: holds.trailerId,
+        severity: holds.severity,
+        reason: holds.reason,
+        reasonCode: holds.reasonCode,
+        reasonParams: holds.reasonParams,
+      })
       .from(holds)
       .innerJoin(trailers, eq(trailers.id, holds.trailerId))
       .where(
@@ -57,7 +72,8 @@ export async function getBoard(terminalId: string, now = new Date()): Promise<Bo
   const holdsOf = new Map<string, BoardHold[]>();
   for (const h of openHolds) {
     const list = holdsOf.get(h.trailerId) ?? [];
-    list.push({ severity: h.severity, reason: h.reason });
+    const reason = storedText(h.reason, h.reasonCode, h.reasonParams, locale, terminal.timeZone);
+    list.push({ severity: h.severity, reason });
     holdsOf.set(h.trailerId, list);
   }
   const boardSpots: BoardSpot[] = spots.map((s, order) => ({

@@ -207,3 +207,35 @@ export function renderCoded(
 export function englishReason(r: { code: string; params: unknown }, timeZone: string): string {
   return renderReason(r.code, r.params, 'en', timeZone);
 }
+
+/**
+ * A stored reason in the reader's language: its code rendered when it has one, else (and when the
+ * code cannot be rendered) the English stored with it.
+ */
+export function storedText(
+  text: string,
+  code: string | null | undefined,
+  params: unknown,
+  locale: Locale | string,
+  timeZone: string,
+): string {
+  return code ? renderReason(code, params, locale, timeZone, { fallback: text }) : text;
+}
+
+type StoredReason = { reason: string; reasonCode?: string | null; reasonParams?: unknown };
+type StoredCaution = { caution?: string | null; cautionCode?: string | null; cautionParams?: unknown };
+
+/** Rows (findings, holds) with `reason` and `caution` put into the reader's language. */
+export function readable<R extends StoredReason & StoredCaution>(
+  rows: readonly R[],
+  locale: Locale | string,
+  timeZone: string,
+): R[] {
+  return rows.map((r) => ({
+    ...r,
+    reason: storedText(r.reason, r.reasonCode, r.reasonParams, locale, timeZone),
+    ...(r.caution
+      ? { caution: storedText(r.caution, r.cautionCode, r.cautionParams, locale, timeZone) }
+      : {}),
+  }));
+}

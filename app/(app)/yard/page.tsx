@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { EmptyState } from '@/app/_components/empty-state';
 import { getBoard } from '@/db/queries/yard-board';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -14,7 +14,7 @@ export async function generateMetadata(): Promise<Metadata> {
 
 export default async function YardPage() {
   const user = await requireUser(SECTION_ROLES.yard);
-  const board = user.terminalId ? await getBoard(user.terminalId) : null;
+  const board = user.terminalId ? await getBoard(user.terminalId, new Date(), await getLocale()) : null;
   const t = await getTranslations('Yard');
   return (
     <div>

@@ -9,6 +9,7 @@ import { secondsLocked, THROTTLE, throttleKeys } from '@/lib/auth/throttle';
 import { lockedMessage, wrongSecretMessage } from '@/lib/auth/wording';
 import { done, refuse, type Result } from '@/lib/result';
 import { safeNext, type SignInInput } from '@/lib/validation/auth';
+import { settleLocaleAtSignIn } from '../i18n/locale';
 import { getSession } from '../session';
 
 // Compared against when the account does not exist, so a wrong name costs the same time as a wrong secret.
@@ -58,5 +59,6 @@ export async function signIn(
   session.terminalId = user.homeTerminalId;
   session.version = user.sessionVersion;
   await session.save();
+  await settleLocaleAtSignIn(user);
   return done({ next: safeNext(input.next) ?? homeFor(user.role) });
 }

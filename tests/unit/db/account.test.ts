@@ -17,7 +17,11 @@ vi.mock('@/lib/server/session', () => ({
   getSession: async () =>
     Object.assign(session.data, { save: async () => undefined, destroy: () => undefined }),
 }));
-vi.mock('next/headers', () => ({ headers: async () => new Headers({ 'x-forwarded-for': '198.51.100.9' }) }));
+vi.mock('next/headers', () => ({
+  headers: async () => new Headers({ 'x-forwarded-for': '198.51.100.9' }),
+  // the language cookie (lib/server/i18n/locale.ts): none chosen on this phone
+  cookies: async () => ({ get: () => undefined, set: () => undefined }),
+}));
 vi.mock('next/cache', () => ({ revalidatePath: () => undefined }));
 vi.mock('next-intl/server', () => ({ getTranslations: async () => (key: string) => key }));
 const { currentUser } = await import('@/lib/server/auth');

@@ -21,7 +21,11 @@ vi.mock('@/lib/server/session', () => ({
   getSession: async () =>
     Object.assign(session.data, { save: async () => undefined, destroy: () => undefined }),
 }));
-vi.mock('next/headers', () => ({ headers: async () => new Headers({ 'x-forwarded-for': '192.0.2.77' }) }));
+vi.mock('next/headers', () => ({
+  headers: async () => new Headers({ 'x-forwarded-for': '192.0.2.77' }),
+  // the language cookie (lib/server/i18n/locale.ts): none chosen on this phone
+  cookies: async () => ({ get: () => undefined, set: () => undefined }),
+}));
 vi.mock('next/cache', () => ({ revalidatePath: () => undefined }));
 
 /** The cookie a visitor would carry, with the account's current session version. */

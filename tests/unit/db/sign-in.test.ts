@@ -22,6 +22,8 @@ vi.mock('@/lib/server/session', () => ({
 }));
 vi.mock('next/headers', () => ({
   headers: async () => new Headers({ 'x-forwarded-for': '203.0.113.200, 192.0.2.99' }),
+  // the language cookie (lib/server/i18n/locale.ts): none chosen on this phone
+  cookies: async () => ({ get: () => undefined, set: () => undefined }),
 }));
 const { signIn } = await import('@/lib/server/auth/sign-in');
 const { signOut } = await import('@/lib/server/auth/sign-out');

@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { buildChecklist, formatWhen, type ReasonCode, type ReasonCodes, type EventRef } from '@/lib/engine';
 import { formatStamp } from '@/lib/format/time';
 import { LOCALES } from '@/lib/i18n/locales';
-import { renderReason } from '@/lib/i18n/reasons';
+import { readable, renderReason, storedText } from '@/lib/i18n/reasons';
 
 const ZONE = 'America/Chicago';
 const drop: EventRef = {
@@ -212,5 +212,24 @@ describe('formatStamp (dates in reasons)', () => {
     expect(formatStamp('2026-11-03T20:05:00Z', 'America/Chicago', 'es')).toBe('3 nov 2026 14:05');
     // 8 Mar 2026 02:30 does not exist in Chicago: 08:30Z is 03:30 CDT (IANA tz database)
     expect(formatStamp('2026-03-08T08:30:00Z', 'America/Chicago', 'es')).toBe('8 mar 2026 03:30');
+  });
+});
+
+describe('stored rows in the reader language', () => {
+  const row = {
+    reason: 'Spare tire is missing.',
+    reasonCode: 'hold.spare_unusable',
+    reasonParams: { item: 'undercarriage.spare_tire', label: 'Spare tire', problem: 'missing' },
+    caution: 'stored caution words',
+    cautionCode: 'caution.under_trailer',
+    cautionParams: {},
+  };
+  it('renders code and caution in Spanish, and keeps the stored English for rows without a code', () => {
+    const [es] = readable([row], 'es', ZONE);
+    expect(es.reason).toBe('Llanta de refacción: falta.');
+    expect(es.caution).toMatch(/^Calce las llantas/);
+    const [old] = readable([{ reason: 'Old words.', reasonCode: null }], 'es', ZONE);
+    expect(old.reason).toBe('Old words.');
+    expect(storedText('Kept as stored.', 'hold.no_such', {}, 'es', ZONE)).toBe('Kept as stored.');
   });
 });

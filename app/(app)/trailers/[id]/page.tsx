@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
@@ -8,6 +8,7 @@ import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file'
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { isDeskStaff } from '@/lib/desk/access';
 import { buildTrailerFile, STORED, type FileWords } from '@/lib/desk/trailer-file';
+import { readable } from '@/lib/i18n/reasons';
 import { formatTime, toLocalInput } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
@@ -49,9 +50,16 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
     getTrailerFileRows(id, query.success ? (query.data.before ?? null) : null),
     wantsChain ? verifyTrailerChain(id) : null,
   ]);
-  const { rows } = page;
+  const stored = page.rows;
   const photoCheck = query.success && query.data.photos === 'check' ? await tryCheckPhotos(id) : null;
   const zone = trailer.timeZone ?? user.terminalTimeZone ?? 'UTC';
+  // stored findings and holds in the reader's language (lib/i18n/reasons.ts)
+  const locale = await getLocale();
+  const rows = {
+    ...stored,
+    findings: readable(stored.findings, locale, zone),
+    holds: readable(stored.holds, locale, zone),
+  };
   const tph = await getTranslations('Photos');
   const entries = buildTrailerFile(rows, kind, page.window);
   const openHolds = rows.holds.filter((h) => !h.releasedAt);

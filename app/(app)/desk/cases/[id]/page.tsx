@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { Caution } from '@/app/_components/caution';
 import { getCaseEvidence, listCustodyRows } from '@/db/queries/case-evidence';
 import { getCase, listCaseEvents } from '@/db/queries/cases';
@@ -12,6 +12,7 @@ import { isDeskStaff } from '@/lib/desk/access';
 import { effectiveAmountCents } from '@/lib/desk/estimate';
 import { itemZone } from '@/lib/desk/item-labels';
 import { SECTION_ROLES } from '@/lib/auth/roles';
+import { readable, storedText } from '@/lib/i18n/reasons';
 import { centsToDollarsInput, formatMoney } from '@/lib/format/money';
 import { formatTime } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
@@ -32,7 +33,13 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
   if (!z.uuid().safeParse(id).success) notFound();
   const c = await getCase(id, user);
   if (!c) notFound();
-  const [evidence, events] = await Promise.all([getCaseEvidence(c), listCaseEvents(c.id)]);
+  const [stored, events] = await Promise.all([getCaseEvidence(c), listCaseEvents(c.id)]);
+  // stored findings and the attribution note in the reader's language (lib/i18n/reasons.ts)
+  const locale = await getLocale();
+  const evidence = { ...stored, findings: readable(stored.findings, locale, c.timeZone) };
+  const note = c.attributionNote
+    ? storedText(c.attributionNote, c.attributionNoteCode, c.attributionNoteParams, locale, c.timeZone)
+    : null;
   const after = evidence.handoffs.find((h) => h.id === c.handoffId);
   const befores = evidence.handoffs.filter((h) => h.id !== c.handoffId).map((h) => h.occurredAt.getTime());
   const custody =
@@ -62,9 +69,7 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
             : ''}{' '}
           · {t('proposed')} <span className="font-bold">{c.carrierName ?? t('noSingleCarrier')}</span>
         </p>
-        {c.attributionNote ? (
-          <p className="text-gate font-bold text-warn">{t('marked', { note: c.attributionNote })}</p>
-        ) : null}
+        {note ? <p className="text-gate font-bold text-warn">{t('marked', { note })}</p> : null}
         <p className="text-gate">
           {t('estimate')} <span className="font-bold">{formatMoney(amount)}</span>{' '}
           {c.overrideCents !== null

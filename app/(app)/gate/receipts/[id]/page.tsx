@@ -1,9 +1,11 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
+import { getLocale } from 'next-intl/server';
 import { ButtonLink } from '@/app/_components/button';
 import { ReceiptSummary } from '@/app/_components/receipt-summary';
 import { getReceipt } from '@/db/queries/handoffs';
 import { SECTION_ROLES } from '@/lib/auth/roles';
+import { readable } from '@/lib/i18n/reasons';
 import { requireUser } from '@/lib/server/auth';
 import { idParamSchema } from '@/lib/validation/handoffs';
 
@@ -13,8 +15,15 @@ export default async function ReceiptPage({ params }: PageProps<'/gate/receipts/
   const user = await requireUser(SECTION_ROLES.gate);
   const id = idParamSchema.safeParse((await params).id);
   if (!id.success) notFound();
-  const receipt = await getReceipt(id.data, user);
-  if (!receipt) notFound();
+  const stored = await getReceipt(id.data, user);
+  if (!stored) notFound();
+  // findings and holds in the reader's language (lib/i18n/reasons.ts); the e-mail keeps its own
+  const locale = await getLocale();
+  const receipt = {
+    ...stored,
+    findings: readable(stored.findings, locale, stored.timeZone),
+    holds: readable(stored.holds, locale, stored.timeZone),
+  };
   return (
     <div className="mx-auto max-w-xl space-y-4">
       <h1 className="text-gate-xl font-bold">

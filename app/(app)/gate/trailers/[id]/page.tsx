@@ -1,8 +1,10 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
+import { getLocale } from 'next-intl/server';
 import { listOpenHolds } from '@/db/queries/handoffs';
 import { listCarriers } from '@/db/queries/trailers';
 import { SECTION_ROLES } from '@/lib/auth/roles';
+import { readable } from '@/lib/i18n/reasons';
 import { requireUser } from '@/lib/server/auth';
 import { getTrailerCondition } from '@/lib/server/handoffs/condition';
 import { idParamSchema } from '@/lib/validation/handoffs';
@@ -22,7 +24,8 @@ export default async function HandoffStartPage({ params, searchParams }: PagePro
   const asked = (await searchParams).kind;
   const suggested = trailer.status === 'in_yard' ? 'hook' : 'drop';
   const kind = asked === 'drop' || asked === 'hook' ? asked : suggested;
-  const holds = await listOpenHolds(trailer.id);
+  // stored reasons and cautions in the reader's language (lib/i18n/reasons.ts)
+  const holds = readable(await listOpenHolds(trailer.id), await getLocale(), user.terminalTimeZone ?? 'UTC');
   const outOfService = holds.filter((h) => h.severity === 'out_of_service');
   const yardOnly = holds.filter((h) => h.severity === 'restricted' && h.restriction === 'yard_only');
   const restricted = holds.filter((h) => h.severity === 'restricted');
