@@ -9,6 +9,8 @@ export default defineConfig({
       '@': fileURLToPath(new URL('./', import.meta.url)),
       // `server-only` throws outside a React Server Components bundle; tests import query modules directly.
       'server-only': fileURLToPath(new URL('./tests/unit/server-only-stub.ts', import.meta.url)),
+      // next-intl's server functions only work inside Next's server bundle; see the stub's comment.
+      'next-intl/server': fileURLToPath(new URL('./tests/unit/next-intl-server-stub.ts', import.meta.url)),
     },
   },
   test: {

@@ -4,11 +4,14 @@
 // retry and concurrency rules of the submit (reused draft key, twenty drops at once).
 import { randomUUID } from 'node:crypto';
 import { eq, inArray } from 'drizzle-orm';
+import { NextIntlClientProvider } from 'next-intl';
+import { createElement } from 'react';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { db, pool } from '@/db';
 import { handoffs, trailers, yardRows, yardSpots } from '@/db/schema';
 import { seed } from '@/db/seed';
+import { MESSAGES } from '@/lib/i18n/messages';
 import { canonicalJson, sha256Hex } from '@/lib/handoffs/hash';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 import { actor, allOk, freshTrailer, submitInput } from './handoff-fixtures';
@@ -43,8 +46,15 @@ const verify = async (code: string) => {
   });
   return { status: res.status, body: await res.json() };
 };
+// the page's shared components read their words from the provider the root layout gives them
 const verifyPageHtml = async (code: string) =>
-  renderToStaticMarkup(await VerifyPage({ searchParams: Promise.resolve({ code }) } as never));
+  renderToStaticMarkup(
+    createElement(
+      NextIntlClientProvider,
+      { locale: 'en', messages: MESSAGES.en, timeZone: 'UTC' },
+      await VerifyPage({ searchParams: Promise.resolve({ code }) } as never),
+    ),
+  );
 
 /** A drop of a fresh trailer through the real route; its id, code and trailer. */
 async function drop(d: Driver) {
