@@ -47,14 +47,11 @@ const verify = async (code: string) => {
   return { status: res.status, body: await res.json() };
 };
 // the page's shared components read their words from the provider the root layout gives them
-const verifyPageHtml = async (code: string) =>
-  renderToStaticMarkup(
-    createElement(
-      NextIntlClientProvider,
-      { locale: 'en', messages: MESSAGES.en, timeZone: 'UTC' },
-      await VerifyPage({ searchParams: Promise.resolve({ code }) } as never),
-    ),
-  );
+const verifyPageHtml = async (code: string) => {
+  const page = await VerifyPage({ searchParams: Promise.resolve({ code }) } as never);
+  const provider = { locale: 'en', messages: MESSAGES.en, timeZone: 'UTC', children: page };
+  return renderToStaticMarkup(createElement(NextIntlClientProvider, provider));
+};
 
 /** A drop of a fresh trailer through the real route; its id, code and trailer. */
 async function drop(d: Driver) {
