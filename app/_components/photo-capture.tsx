@@ -1,6 +1,5 @@
 'use client';
 
-import imageCompression from 'browser-image-compression';
 import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { useRefusalText } from './use-refusal-text';
@@ -54,6 +53,8 @@ async function uploadPhoto(
   const taken = await readCaptureTime(file, -now.getTimezoneOffset());
   const capturedAt = taken && isSaneCaptureTime(taken, now) ? taken.toISOString() : null;
   progress('shrinking', 0);
+  // loaded with the first photo, not with the page (the handoff form's first-load budget)
+  const { default: imageCompression } = await import('browser-image-compression');
   const small = await imageCompression(file, {
     maxWidthOrHeight: policy.longestSidePx,
     initialQuality: policy.quality,

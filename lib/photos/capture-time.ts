@@ -4,7 +4,6 @@
 // UTC of that local time. The reading is a claim of the phone, never proof: the server only
 // checks it is a date within sane bounds of the upload (isSaneCaptureTime) and stores it beside
 // the upload time, which the server sets itself.
-import exifr from 'exifr';
 
 const DATE_TIME = /^(\d{4}):(\d{2}):(\d{2}) (\d{2}):(\d{2}):(\d{2})$/;
 const OFFSET = /^([+-])(\d{2}):(\d{2})$/;
@@ -56,6 +55,8 @@ export async function readCaptureTime(
   fallbackOffsetMinutes: number,
 ): Promise<Date | null> {
   try {
+    // loaded with the first photo, not with the page (the handoff form's first-load budget)
+    const { default: exifr } = await import('exifr');
     const tags = (await exifr.parse(image, {
       pick: ['DateTimeOriginal', 'OffsetTimeOriginal'],
       reviveValues: false,

@@ -4,7 +4,7 @@ import { useCallback } from 'react';
 import useSWR from 'swr';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
 import { FieldError, Textarea } from '@/app/_components/field';
-import { safetyGroups } from '@/lib/engine';
+import { safetyGroups } from '@/lib/engine/safety';
 import { newDraft, sameAsLastForZone, type Draft, type DraftItem } from '@/lib/handoffs/draft';
 import { HOOK_WORDS } from '@/lib/handoffs/hook-words';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';

@@ -1,13 +1,16 @@
 'use client';
 
+import dynamic from 'next/dynamic';
 import type { ChecklistItem, Condition } from '@/lib/engine';
 import { itemChange, needsEvidence, type DraftItem } from '@/lib/handoffs/draft';
 import type { LastSeen } from '@/lib/handoffs/last-condition';
 import { Choice } from './choice';
 import { ItemFields } from './item-fields';
 import { SAFETY_WORDS } from './safety-words';
-import { PhotoCapture } from '@/app/_components/photo-capture';
 import { formatTime } from '@/lib/format/time';
+
+// the camera and its upload code load when an item first asks for a photo, not with the form
+const PhotoCapture = dynamic(() => import('@/app/_components/photo-capture').then((m) => m.PhotoCapture));
 
 const CONDITION_OPTIONS: {
   value: Exclude<Condition, 'not_checked'>;

@@ -1,7 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import { statedObservation, type ChecklistItem, type SafetyGroup } from '@/lib/engine';
+import type { ChecklistItem } from '@/lib/engine';
+import { statedObservation, type SafetyGroup } from '@/lib/engine/safety';
 import type { DraftItem } from '@/lib/handoffs/draft';
 import { TREAD_LIMITS } from '@/lib/handoffs/limits';
 import { SAFETY_WORDS } from './safety-words';
