@@ -54,7 +54,12 @@ describe('message catalogues', () => {
       expect(message.trim(), key).not.toBe('');
       // formatting with every placeholder given a number exercises the ICU parser
       const values = Object.fromEntries(argumentNames(message).map((n) => [n, 2]));
-      (t as (k: string, v: Record<string, number>) => string)(key, values);
+      // a message with rich-text tags (<link>…</link>) is formatted with each tag given a function
+      const tags = [...message.matchAll(/<(\w+)>/g)].map((m) => m[1]);
+      if (tags.length) {
+        const rich = Object.fromEntries(tags.map((tag) => [tag, (chunks: unknown) => chunks]));
+        (t.rich as (k: string, v: Record<string, unknown>) => unknown)(key, { ...values, ...rich });
+      } else (t as (k: string, v: Record<string, number>) => string)(key, values);
     }
     expect(errors).toEqual([]);
   });

@@ -46,7 +46,13 @@ export default async function DeskReportsPage({ searchParams }: PageProps<'/desk
             <ChargedAbsorbedChart title={t('report.byCarrier')} bars={byCarrier} />
             <ChargedAbsorbedChart title={t('report.byMonth')} bars={byMonth} />
           </div>
-          <div className="overflow-x-auto rounded-xl bg-paper">
+          {/* a wide table scrolls sideways: focusable so a keyboard can scroll it (WCAG 2.1.1) */}
+          <div
+            className="overflow-x-auto rounded-xl bg-paper"
+            tabIndex={0}
+            role="region"
+            aria-label={t('report.caption')}
+          >
             <table className="w-full text-left text-gate-sm">
               <caption className="sr-only">{t('report.caption')}</caption>
               <thead className="bg-paper-dim">

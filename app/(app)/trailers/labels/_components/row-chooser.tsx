@@ -10,9 +10,9 @@ export function RowChooser({ rows, homeTerminalId }: { rows: LabelRow[]; homeTer
       <h1 className="text-gate-xl font-bold">{t('labels.choose')}</h1>
       <p className="text-gate">
         {t.rich('labels.chooseText', {
-          link: () => (
+          link: (chunks) => (
             <Link href="/trailers" className="font-bold text-brand underline">
-              {t('labels.trailersLink')}
+              {chunks}
             </Link>
           ),
         })}
