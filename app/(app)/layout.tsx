@@ -41,7 +41,11 @@ export default async function AppLayout({ children }: { children: React.ReactNod
               <ThemeSwitch initial={theme} onFill />
               <LanguageSwitch onFill />
               <span>
-                <Link href="/account" className="font-bold underline" title={account('linkLabel')}>
+                <Link
+                  href="/account"
+                  className="inline-flex min-h-tap items-center font-bold underline"
+                  title={account('linkLabel')}
+                >
                   {user.name}
                 </Link>{' '}
                 · {t(`role.${user.role}`)}
