@@ -1,4 +1,5 @@
 import { expect, type Page } from '@playwright/test';
+import { baseURL } from '../../../playwright.config';
 
 export const ACCOUNTS = {
   admin: { kind: 'staff', id: 'admin@bramblecrest.example', secret: 'hitchmark-admin', home: '/desk' },
@@ -18,6 +19,11 @@ export class SignInPage {
 
   async signIn(name: AccountName, secret?: string) {
     const account = ACCOUNTS[name];
+    // the account remembers the language chosen at sign-in: a phone that has not chosen one signs
+    // in in English, so a language another spec chose for this account does not carry over
+    const context = this.page.context();
+    if (!(await context.cookies(baseURL)).some((c) => c.name === 'hm-locale'))
+      await context.addCookies([{ name: 'hm-locale', value: 'en', url: baseURL }]);
     await this.open();
     await this.fill(account.kind, account.id, secret ?? account.secret);
   }
