@@ -30,7 +30,12 @@ export function CaseHistory({ events, timeZone }: { events: Event[]; timeZone: s
             : e.kind === 'dispute'
               ? ` · ${t('viaLink')}`
               : ''}
-          {e.note ? <p className="mt-1 text-ink-soft">{e.note}</p> : null}
+          {/* the event's note is stored text, shown as it was written */}
+          {e.note ? (
+            <p className="mt-1 text-ink-soft" data-stored-text="">
+              {e.note}
+            </p>
+          ) : null}
           {e.photoIds.length ? (
             <div className="mt-2 grid grid-cols-2 gap-2">
               {e.photoIds.map((id) => (
