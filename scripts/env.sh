@@ -10,6 +10,11 @@ export HM_SMTP_PORT=${HM_SMTP_PORT:-2525}
 export HM_MAIL_HTTP_PORT=${HM_MAIL_HTTP_PORT:-2580}
 export HM_APP_PORT=${HM_APP_PORT:-3000}
 export APP_URL=${APP_URL:-http://localhost:$HM_APP_PORT}
+# The one-machine topology (scripts/topology.sh): balancer, PgBouncer and the two app servers.
+export HM_TOPO_PORT=${HM_TOPO_PORT:-3200}
+export HM_PGB_PORT=${HM_PGB_PORT:-64310}
+export HM_TOPO_APP_A_PORT=${HM_TOPO_APP_A_PORT:-33010}
+export HM_TOPO_APP_B_PORT=${HM_TOPO_APP_B_PORT:-33020}
 # Local runs are plain http on loopback, so the session cookie cannot be `secure` there.
 export HM_INSECURE_COOKIES=${HM_INSECURE_COOKIES:-1}
 # Secrets: generated once per checkout and kept in .data (ignored by git).

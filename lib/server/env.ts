@@ -35,6 +35,11 @@ const schema = z.object({
   SMTP_PASSWORD: z.string().optional(),
   SMTP_SECURE: flag,
   MAIL_FROM: z.string().default('Hitchmark <no-reply@hitchmark.example>'),
+  /** The job worker's own connection, past a transaction-pooling PgBouncer (db/url.ts). */
+  DATABASE_SESSION_URL: z
+    .string()
+    .regex(/^postgres(ql)?:\/\//, 'DATABASE_SESSION_URL must be a postgres:// URL')
+    .optional(),
   /** '0': this server runs no job worker (e-mail, cleanup, anchors); another process must. */
   HM_JOB_WORKER: z.enum(['0', '1']).default('1'),
   /** The job worker's fixed id (default: host name and port); one live server per id. */

@@ -8,10 +8,12 @@
 // first frees the jobs its killed predecessor held: an e-mail being sent when the app died goes
 // out minutes later, not hours. A fixed id means one job at a time (the queue wants a distinct
 // id per concurrent worker), which is plenty for a terminal's e-mail.
+// The worker connects past PgBouncer (sessionDatabaseUrl, docs/topology.md): it LISTENs for new
+// jobs and uses named prepared statements, which a transaction-pooled connection cannot keep.
 import 'server-only';
 import { hostname } from 'node:os';
 import { makeWorkerUtils, run, type Runner, type RunnerOptions } from 'graphile-worker';
-import { databaseUrl } from '@/db/url';
+import { sessionDatabaseUrl } from '@/db/url';
 import { env } from '../env';
 import { cronItems, taskList } from './tasks';
 
@@ -23,14 +25,14 @@ export function jobWorkerId(): string {
 
 export async function startJobWorker(): Promise<Runner> {
   const workerId = jobWorkerId();
-  const utils = await makeWorkerUtils({ connectionString: databaseUrl() });
+  const utils = await makeWorkerUtils({ connectionString: sessionDatabaseUrl() });
   try {
     await utils.forceUnlockWorkers([workerId]);
   } finally {
     await utils.release();
   }
   const options: RunnerOptions & { workerId: string } = {
-    connectionString: databaseUrl(),
+    connectionString: sessionDatabaseUrl(),
     concurrency: 1,
     // read by run() (it refuses one with concurrency above 1) though RunnerOptions does not list it
     workerId,
