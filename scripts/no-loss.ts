@@ -7,12 +7,14 @@
 //
 //   source scripts/env.sh && npx next build && npm run -s no-loss
 //   npm run -s no-loss -- --handoffs 60 --phones 10 --restarts 1 --mail-down 10   (a short form)
+//   npm run -s no-loss -- --topology …   the same through scripts/topology.sh: each kill takes down
+//     one of the two app servers behind the balancer (docs/topology.md)
 //
 // It makes its own database (hitchmark_noloss; scripts/no-loss/setup.ts), its own fakes and its own
 // server on free ports (HM_NOLOSS_PORT picks the server's). Needs PostgreSQL running (scripts/db.sh start).
 import { checkMail } from './no-loss/mail';
 import { figures, outcomes, runPhones } from './no-loss/phones';
-import { killServer, smtp, startFakes, startServer } from './no-loss/server';
+import { base, killServer, smtp, startFakes, startServer, stopServers } from './no-loss/server';
 import { prepare, settings, sleep } from './no-loss/setup';
 
 if (!process.env.SESSION_SECRET || !process.env.CHAIN_KEY) {
@@ -30,7 +32,8 @@ const { verifyTrailerChain } = await import('@/lib/server/handoffs/chain');
 await startFakes();
 await startServer();
 console.log(
-  `no-loss: ${HANDOFFS} handoffs from ${PHONES} phones, ${RESTARTS} server kills, SMTP down ${mailDownSeconds} s`,
+  `no-loss: ${HANDOFFS} handoffs from ${PHONES} phones, ${RESTARTS} server kills, SMTP down ${mailDownSeconds} s` +
+    (settings.topology ? ` (topology at ${base()}: nginx, two app servers, PgBouncer)` : ''),
 );
 const t0 = Date.now();
 let phonesDone = false;
@@ -46,8 +49,8 @@ const killer = (async () => {
   for (let k = 1; k <= RESTARTS; k++) {
     await waitFor(k / (RESTARTS + 1));
     if (phonesDone) break;
-    killServer();
-    console.log(`no-loss: killed the app server after ${figures.recorded} recorded handoffs`);
+    const killed = await killServer();
+    console.log(`no-loss: killed ${killed} after ${figures.recorded} recorded handoffs`);
     await sleep(1000);
     await startServer();
     restarts++;
@@ -73,7 +76,7 @@ const phonesSeconds = (Date.now() - t0) / 1000;
 
 // every e-mail due goes out while the server (and its job worker) still runs
 const mail = await checkMail(settings.mailWaitSeconds);
-killServer();
+stopServers();
 
 // ---- what the database holds
 const stored = await db
@@ -104,6 +107,7 @@ const lines = [
   `network errors (retried)  ${figures.networkErrors}`,
   `409 while a twin held it  ${figures.conflicts}`,
   `answers 500               ${figures.fiveHundreds}`,
+  `balancer 502/503/504      ${figures.gatewayErrors} (retried under the same draft key)`,
   `server kills survived     ${restarts}`,
   `chains verified           ${chainsOk} of ${chains.length} trailers`,
   `SMTP outages              ${mailOutages} (${mailDownSeconds} s)`,

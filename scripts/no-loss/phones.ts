@@ -18,6 +18,8 @@ export const outcomes: Outcome[] = [];
 export const figures = {
   requests: 0,
   fiveHundreds: 0,
+  /** 502/503/504 from the balancer: the app server behind it was killed mid-request */
+  gatewayErrors: 0,
   networkErrors: 0,
   timeouts: 0,
   duplicateTaps: 0,
@@ -38,7 +40,8 @@ async function send(cookie: string, body: unknown, timeoutMs: number) {
       signal: AbortSignal.timeout(timeoutMs),
     });
     const json = (await res.json().catch(() => null)) as Answer | null;
-    if (res.status >= 500) figures.fiveHundreds++;
+    if (res.status === 502 || res.status === 503 || res.status === 504) figures.gatewayErrors++;
+    else if (res.status >= 500) figures.fiveHundreds++;
     if (res.status === 200) figures.replays++;
     if (res.status === 409) figures.conflicts++;
     return { status: res.status, json };

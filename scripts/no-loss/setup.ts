@@ -19,6 +19,8 @@ export const settings = {
   mailDownSeconds: arg('mail-down', 20),
   /** How long to wait after the last handoff for every e-mail to arrive. */
   mailWaitSeconds: arg('mail-wait', 300),
+  /** Against scripts/topology.sh: each kill takes down one of the two app servers behind nginx. */
+  topology: process.argv.includes('--topology'),
 };
 export const DB = 'hitchmark_noloss';
 const DRIVERS = ['D1001', 'D1002', 'D1003', 'D1004', 'D2001', 'D2002', 'D3001', 'D4001'];
