@@ -5,6 +5,7 @@
 // every run and the median. LCP as the browser reports it: the last `largest-contentful-paint`
 // entry before the first input (W3C Largest Contentful Paint draft; PerformanceObserver, buffered).
 //   bash scripts/bench/with-env.sh scripts/bench/lcp.ts --db hitchmark_e2e --url http://localhost:3150
+import { cpus, loadavg } from 'node:os';
 import { chromium } from '@playwright/test';
 import { sealData } from 'iron-session';
 import pg from 'pg';
@@ -53,7 +54,24 @@ const PAGES = [
   [`trailer file (${longest.n} handoffs)`, `/trailers/${longest.trailer_id}`, clerk],
 ] as const;
 
-const browser = await chromium.launch({ executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium' });
+const load = () =>
+  loadavg()
+    .map((l) => l.toFixed(2))
+    .join(' ');
+const loadAtStart = load();
+// the flags the e2e tests launch Debian's Chromium with (a root user needs --no-sandbox)
+const browser = await chromium.launch({
+  executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
+  args: [
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--disable-sync',
+    '--no-first-run',
+    '--disable-quic',
+  ],
+});
 const lines: string[] = [];
 for (const [name, path, who] of PAGES) {
   const figures: number[] = [];
@@ -81,5 +99,8 @@ for (const [name, path, who] of PAGES) {
   );
 }
 await browser.close();
-console.log(`LCP in headless Chromium, ${base}, database ${dbName}, ${runs} runs each`);
+const date = new Date().toISOString().slice(0, 16).replace('T', ' ');
+console.log(
+  `LCP in headless Chromium, ${date} UTC, ${cpus().length} cores, ${base}, database ${dbName}, ${runs} runs each; load average ${loadAtStart} at the start, ${load()} at the end`,
+);
 for (const l of lines) console.log(l);
