@@ -39,7 +39,9 @@ async function send(cookie: string, body: unknown, timeoutMs: number) {
       body: JSON.stringify(body),
       signal: AbortSignal.timeout(timeoutMs),
     });
-    const json = (await res.json().catch(() => null)) as Answer | null;
+    // a success whose body never fully arrives (the client's timeout, or the server killed while
+    // answering) is no answer: it throws into the catch below and the phone tries again
+    const json = (await (res.ok ? res.json() : res.json().catch(() => null))) as Answer | null;
     if (res.status === 502 || res.status === 503 || res.status === 504) figures.gatewayErrors++;
     else if (res.status >= 500) figures.fiveHundreds++;
     if (res.status === 200) figures.replays++;
