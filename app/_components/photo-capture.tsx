@@ -4,7 +4,8 @@ import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { useRefusalText } from './use-refusal-text';
 import { isSaneCaptureTime, readCaptureTime } from '@/lib/photos/capture-time';
-import { DEFAULT_PHOTO_POLICY, type PhotoPolicy } from '@/lib/photos/policy';
+import type { PhotoPolicy } from '@/lib/photos/policy';
+import { usePhotoPolicy } from './photo-policy';
 
 /** A photo that reached storage and passed the server's checks. */
 export type CapturedPhoto = { id: string };
@@ -104,15 +105,18 @@ export function PhotoCapture({
   label,
   photos,
   onAdd,
-  policy = DEFAULT_PHOTO_POLICY,
+  policy: givenPolicy,
 }: {
   trailerId: string;
   itemKey: string;
   label: string;
   photos: CapturedPhoto[];
   onAdd: (p: CapturedPhoto) => void;
+  /** The terminal's figures; by default those of the signed-in user's terminal (the shell's). */
   policy?: PhotoPolicy;
 }) {
+  const terminalPolicy = usePhotoPolicy();
+  const policy = givenPolicy ?? terminalPolicy;
   const t = useTranslations('Photos');
   const say = useRefusalText();
   const [jobs, setJobs] = useState<Job[]>([]);
