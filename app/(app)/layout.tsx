@@ -7,6 +7,8 @@ import { canOpen, type Section } from '@/lib/auth/roles';
 import { requireUser } from '@/lib/server/auth';
 import { parseTheme, THEME_COOKIE } from '@/lib/theme/theme';
 import { OfflineProvider, OutboxLine } from '@/app/_components/offline/offline-provider';
+import { PhotoPolicyProvider } from '@/app/_components/photo-policy';
+import { getPhotoPolicy } from '@/db/queries/photo-policy';
 import { NavLinks } from './_components/nav-links';
 import { SignOutButton } from './_components/sign-out-button';
 
@@ -17,6 +19,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   const user = await requireUser();
   const theme = parseTheme((await cookies()).get(THEME_COOKIE)?.value);
   const t = await getTranslations('Shell');
+  const photoPolicy = await getPhotoPolicy(user.terminalId);
   const account = await getTranslations('Account');
   const links = SECTIONS.filter((s) => canOpen(user.role, s)).map((s) => ({
     href: `/${s}`,
@@ -57,7 +60,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
         </header>
         <OutboxLine />
         <main id="main" className="mx-auto max-w-6xl p-3 sm:p-4">
-          {children}
+          <PhotoPolicyProvider policy={photoPolicy}>{children}</PhotoPolicyProvider>
         </main>
       </div>
     </OfflineProvider>

@@ -2,57 +2,46 @@
 
 import { useTranslations } from 'next-intl';
 import { useState } from 'react';
+import { useOutboxItems } from './offline/offline-provider';
+import { addToOutbox } from './offline/outbox-client';
+import { PhotoRefused, sendPhoto, type PreparedPhoto } from './offline/photo-send';
 import { useRefusalText } from './use-refusal-text';
 import { isSaneCaptureTime, readCaptureTime } from '@/lib/photos/capture-time';
-import { DEFAULT_PHOTO_POLICY, type PhotoPolicy } from '@/lib/photos/policy';
+import type { PhotoPolicy } from '@/lib/photos/policy';
+import { usePhotoPolicy } from './photo-policy';
 
 /** A photo that reached storage and passed the server's checks. */
 export type CapturedPhoto = { id: string };
 
 type Stage = 'shrinking' | 'sending' | 'checking' | 'failed';
-type Job = { id: string; file: File; stage: Stage; percent: number; error?: string };
+/** One photo on its way; `id` is the photo's own id, chosen on the phone. */
+type Job = {
+  id: string;
+  file: File;
+  stage: Stage;
+  percent: number;
+  error?: string;
+  prepared?: PreparedPhoto;
+};
 
 async function sha256Hex(bytes: ArrayBuffer): Promise<string> {
   const digest = await crypto.subtle.digest('SHA-256', bytes);
   return [...new Uint8Array(digest)].map((b) => b.toString(16).padStart(2, '0')).join('');
 }
 
-async function message(res: Response, fallback: string) {
-  const body = await res.json().catch(() => null);
-  return (body && typeof body.message === 'string' ? body.message : fallback) as string;
-}
-
-/** The presigned PUT, through XMLHttpRequest: fetch cannot report upload progress. */
-function put(url: string, headers: Record<string, string>, body: Blob, onProgress: (f: number) => void) {
-  return new Promise<void>((resolve, reject) => {
-    const xhr = new XMLHttpRequest();
-    xhr.open('PUT', url);
-    for (const [k, v] of Object.entries(headers)) xhr.setRequestHeader(k, v);
-    xhr.upload.onprogress = (e) => e.lengthComputable && onProgress(e.loaded / e.total);
-    xhr.onload = () => (xhr.status < 300 ? resolve() : reject(new Error(`upload ${xhr.status}`)));
-    xhr.onerror = () => reject(new Error('network'));
-    xhr.ontimeout = () => reject(new Error('timeout'));
-    xhr.timeout = 120_000;
-    xhr.send(body);
-  });
-}
-
 /**
  * Camera photo → capture time from its EXIF (before shrinking strips it) → shrunk on the phone
- * to the terminal's longest side and quality → SHA-256 → presigned PUT with progress → server check.
+ * to the terminal's longest side and quality → SHA-256. Needs no signal.
  */
-async function uploadPhoto(
+async function preparePhoto(
   file: File,
-  trailerId: string,
-  itemKey: string,
+  where: { photoId: string; trailerId: string; itemKey: string },
   policy: PhotoPolicy,
-  progress: (stage: Stage, percent: number) => void,
-  words: { announce: string; put: string; refused: string },
-): Promise<CapturedPhoto> {
+  onProgress: (percent: number) => void,
+): Promise<PreparedPhoto> {
   const now = new Date();
   const taken = await readCaptureTime(file, -now.getTimezoneOffset());
   const capturedAt = taken && isSaneCaptureTime(taken, now) ? taken.toISOString() : null;
-  progress('shrinking', 0);
   // loaded with the first photo, not with the page (the handoff form's first-load budget)
   const { default: imageCompression } = await import('browser-image-compression');
   const small = await imageCompression(file, {
@@ -61,37 +50,18 @@ async function uploadPhoto(
     fileType: 'image/jpeg',
     // the worker build loads the library from a CDN: not on a phone without signal, not under our CSP
     useWebWorker: false,
-    onProgress: (p) => progress('shrinking', Math.round(p * 0.3)),
+    onProgress: (p) => onProgress(Math.round(p * 0.3)),
   });
-  const contentType = small.type || 'image/jpeg';
   const bytes = await small.arrayBuffer();
-  progress('sending', 30);
-  const announce = await fetch('/api/uploads', {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({
-      trailerId,
-      itemKey,
-      contentType,
-      byteSize: bytes.byteLength,
-      sha256: await sha256Hex(bytes),
-    }),
-  });
-  if (!announce.ok) throw new Error(await message(announce, words.announce));
-  const { photoId, uploadUrl, headers } = await announce.json();
-  await put(uploadUrl, headers, new Blob([bytes], { type: contentType }), (f) =>
-    progress('sending', 30 + Math.round(f * 60)),
-  ).catch(() => {
-    throw new Error(words.put);
-  });
-  progress('checking', 95);
-  const done = await fetch(`/api/uploads/${photoId}/complete`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ capturedAt }),
-  });
-  if (!done.ok) throw new Error(await message(done, words.refused));
-  return { id: photoId };
+  const contentType = small.type || 'image/jpeg';
+  return {
+    ...where,
+    contentType,
+    byteSize: bytes.byteLength,
+    sha256: await sha256Hex(bytes),
+    capturedAt,
+    bytes,
+  };
 }
 
 /**
@@ -104,18 +74,22 @@ export function PhotoCapture({
   label,
   photos,
   onAdd,
-  policy = DEFAULT_PHOTO_POLICY,
+  policy: givenPolicy,
 }: {
   trailerId: string;
   itemKey: string;
   label: string;
   photos: CapturedPhoto[];
   onAdd: (p: CapturedPhoto) => void;
+  /** The terminal's figures; by default those of the signed-in user's terminal (the shell's). */
   policy?: PhotoPolicy;
 }) {
+  const terminalPolicy = usePhotoPolicy();
+  const policy = givenPolicy ?? terminalPolicy;
   const t = useTranslations('Photos');
   const say = useRefusalText();
   const [jobs, setJobs] = useState<Job[]>([]);
+  const outbox = useOutboxItems();
   const inputId = `photo-${itemKey}`;
   const busy = jobs.some((j) => j.stage !== 'failed');
 
@@ -127,20 +101,40 @@ export function PhotoCapture({
     );
   }
 
+  // without signal the photo waits, with its bytes, in the phone's outbox: it is sent before any
+  // handoff queued after it, and the form already holds its id
+  async function keep(job: Job, prepared: PreparedPhoto) {
+    await addToOutbox({
+      key: prepared.photoId,
+      kind: 'photo',
+      group: trailerId,
+      url: '/api/uploads',
+      body: prepared as unknown as Record<string, unknown>,
+      meta: { itemKey },
+    });
+    update(job.id, null);
+    onAdd({ id: prepared.photoId });
+  }
+
   async function run(job: Job) {
     update(job.id, { stage: 'shrinking', percent: 0, error: undefined });
+    let prepared = job.prepared;
     try {
-      const photo = await uploadPhoto(
-        job.file,
-        trailerId,
-        itemKey,
-        policy,
-        (stage, percent) => update(job.id, { stage, percent }),
-        { announce: t('announceFailed'), put: t('putFailed'), refused: t('refused') },
+      prepared ??= await preparePhoto(job.file, { photoId: job.id, trailerId, itemKey }, policy, (percent) =>
+        update(job.id, { percent }),
+      );
+      update(job.id, { prepared });
+      if (!navigator.onLine) return await keep(job, prepared);
+      update(job.id, { stage: 'sending', percent: 30 });
+      await sendPhoto(prepared, { announce: t('announceFailed'), refused: t('refused') }, (f) =>
+        update(job.id, f < 1 ? { percent: 30 + Math.round(f * 60) } : { stage: 'checking', percent: 95 }),
       );
       update(job.id, null);
-      onAdd(photo);
+      onAdd({ id: prepared.photoId });
     } catch (err) {
+      // the signal dropped on the way: kept on the phone like a photo taken offline
+      if (prepared && !(err instanceof PhotoRefused))
+        return void (await keep(job, prepared).catch(() => undefined));
       const error = err instanceof Error && err.message ? say(err.message) : t('failed');
       update(job.id, { stage: 'failed', error: navigator.onLine ? error : t('noSignal') });
     }
@@ -150,16 +144,29 @@ export function PhotoCapture({
     <div className="space-y-2">
       {photos.length ? (
         <ul className="flex flex-wrap gap-2" aria-label={t('photosOf', { label })}>
-          {photos.map((p) => (
-            <li key={p.id}>
-              {/* eslint-disable-next-line @next/next/no-img-element -- served by the app, checked and sized at upload */}
-              <img
-                src={`/api/photos/${p.id}`}
-                alt={t('photoOf', { label })}
-                className="h-20 w-20 rounded border-2 border-paper-line object-cover"
-              />
-            </li>
-          ))}
+          {photos.map((p) => {
+            const queued = outbox.find((i) => i.key === p.id && i.kind === 'photo');
+            return (
+              <li key={p.id}>
+                {queued && queued.state !== 'sent' ? (
+                  <span
+                    role="img"
+                    aria-label={t('photoOf', { label })}
+                    className={`flex h-20 w-20 items-center justify-center rounded border-2 p-1 text-center text-gate-sm font-bold ${queued.state === 'pending' ? 'border-warn bg-warn-bg text-warn' : 'border-danger text-danger'}`}
+                  >
+                    {queued.state === 'pending' ? t('waiting') : t('refusedLater')}
+                  </span>
+                ) : (
+                  /* eslint-disable-next-line @next/next/no-img-element -- served by the app, checked and sized at upload */
+                  <img
+                    src={`/api/photos/${p.id}`}
+                    alt={t('photoOf', { label })}
+                    className="h-20 w-20 rounded border-2 border-paper-line object-cover"
+                  />
+                )}
+              </li>
+            );
+          })}
         </ul>
       ) : null}
       {jobs.length ? (

@@ -6,12 +6,14 @@ import { handoffs, photos } from '@/db/schema';
 type NewPhoto = Omit<typeof photos.$inferInsert, 'id' | 'status' | 'handoffId' | 'caseEventId' | 'createdAt'>;
 
 /** An announced photo, `pending` until its upload is checked; returns its id. */
-export async function insertPendingPhoto(photo: NewPhoto): Promise<string> {
+/** Records an announced photo; null when a photo with the id given is already there. */
+export async function insertPendingPhoto(photo: NewPhoto): Promise<string | null> {
   const [row] = await db
     .insert(photos)
     .values({ ...photo, status: 'pending' })
+    .onConflictDoNothing({ target: photos.id })
     .returning({ id: photos.id });
-  return row.id;
+  return row?.id ?? null;
 }
 
 /** A photo announced by this user; null for anyone else's. */

@@ -77,3 +77,19 @@ export async function findSpotByLabel(terminalId: string, label: string) {
   const wanted = label.trim().toUpperCase();
   return rows.find((r) => r.label.toUpperCase() === wanted) ?? null;
 }
+
+/** A move this person already recorded under the phone's key (a queued move sent again). */
+export async function getMoveByClientKey(tx: Tx, movedById: string, clientKey: string) {
+  const [row] = await tx
+    .select({
+      moveId: yardMoves.id,
+      trailerId: yardMoves.trailerId,
+      unitNumber: trailers.unitNumber,
+      fromSpotId: yardMoves.fromSpotId,
+      toSpotId: yardMoves.toSpotId,
+    })
+    .from(yardMoves)
+    .innerJoin(trailers, eq(trailers.id, yardMoves.trailerId))
+    .where(and(eq(yardMoves.movedById, movedById), eq(yardMoves.clientKey, clientKey)));
+  return row ?? null;
+}

@@ -29,9 +29,14 @@ export const yardMoves = pgTable(
       .notNull()
       .references(() => users.id),
     movedAt: at('moved_at').notNull().defaultNow(),
+    /** The phone's key for the move: a move queued without signal and sent twice is one move. */
+    clientKey: text('client_key'),
     createdAt: createdAt(),
   },
-  (t) => [index('yard_moves_trailer_time').on(t.trailerId, t.movedAt)],
+  (t) => [
+    index('yard_moves_trailer_time').on(t.trailerId, t.movedAt),
+    uniqueIndex('yard_moves_mover_client_key').on(t.movedById, t.clientKey),
+  ],
 );
 
 export const yardWalks = pgTable(

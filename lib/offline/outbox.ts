@@ -1,9 +1,9 @@
-// The phone's outbox: submits made without signal (handoffs, walk scans), each with the
+// The phone's outbox: submits made without signal (handoffs, walk scans, yard moves, photos), each with the
 // idempotency key the server already honours, sent oldest first when the signal returns.
 // Pure: the storage, the clock and the network are passed in, so the order, the backoff and the
 // exactly-once rule are tested without a browser (tests/unit/offline/outbox.test.ts).
 
-export type OutboxKind = 'handoff' | 'scan';
+export type OutboxKind = 'handoff' | 'scan' | 'move' | 'photo';
 export type OutboxState = 'pending' | 'sent' | 'rejected';
 
 export interface OutboxItem {

@@ -152,6 +152,8 @@ export const verificationCodeSchema = z
   );
 
 export const uploadRequestSchema = z.object({
+  /** The phone's own id for the photo (a photo taken without signal is referenced before it is sent). */
+  photoId: z.uuid({ error: 'Not a valid photo id.' }).optional(),
   trailerId: z.uuid({ error: 'Unknown trailer.' }),
   itemKey: itemKeySchema,
   contentType: z.string().trim().toLowerCase().max(100),

@@ -18,6 +18,8 @@ export const boardQuerySchema = z.object({
 export const moveSchema = z.object({
   unit: plainText(200).min(1, 'Scan or type the unit number.'),
   target: plainText(40).min(1, 'Scan or type the target slot or door.'),
+  /** The phone's idempotency key: a move queued without signal is recorded once. */
+  clientKey: plainText(80).min(8, 'Not a valid move key.').optional(),
 });
 export type MoveInput = z.infer<typeof moveSchema>;
 

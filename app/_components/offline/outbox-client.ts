@@ -9,6 +9,7 @@ import {
   type OutboxItem,
   type SendOutcome,
 } from '@/lib/offline/outbox';
+import { PhotoRefused, sendPhoto, type PreparedPhoto } from './photo-send';
 import { moveLocalStorageOnce, outboxStore } from './store';
 
 let items: OutboxItem[] = [];
@@ -31,7 +32,20 @@ export function subscribe(listener: () => void) {
 export const snapshot = () => items;
 export const serverSnapshot = () => EMPTY;
 
+/** A photo taken without signal: announce, PUT and complete, each safe to repeat under its id. */
+async function sendQueuedPhoto(item: OutboxItem): Promise<SendOutcome> {
+  const photo = item.body as unknown as PreparedPhoto;
+  try {
+    await sendPhoto(photo, { announce: 'The photo was not accepted.', refused: 'The photo was refused.' });
+    return { kind: 'sent', answer: { photoId: photo.photoId } };
+  } catch (err) {
+    if (err instanceof PhotoRefused) return { kind: 'rejected', error: err.message, answer: {} };
+    return { kind: 'offline' };
+  }
+}
+
 async function send(item: OutboxItem): Promise<SendOutcome> {
+  if (item.kind === 'photo') return sendQueuedPhoto(item);
   try {
     const res = await fetch(item.url, {
       method: 'POST',

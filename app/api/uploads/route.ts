@@ -8,6 +8,9 @@ export const POST = route(
   { access: SECTION_ROLES.gate, body: uploadRequestSchema },
   async ({ user, body }) => {
     const upload = await createUpload(body, user);
-    return upload.ok ? Response.json(upload.value, { status: 201 }) : upload;
+    if (!upload.ok) return upload;
+    // announced again under the phone's id: 200 (a stored photo answers without an upload URL)
+    const isAgain = 'status' in upload.value || upload.value.photoId === body.photoId;
+    return Response.json(upload.value, { status: isAgain && body.photoId ? 200 : 201 });
   },
 );

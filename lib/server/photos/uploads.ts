@@ -45,6 +45,7 @@ export async function createUpload(input: UploadRequestInput, user: Uploader) {
   const objectKey = `${PHOTO_PREFIX}${trailer.id}/${name}`;
   const pendingKey = `${PENDING_PREFIX}${trailer.id}/${name}`;
   const photoId = await insertPendingPhoto({
+    ...(input.photoId ? { id: input.photoId } : {}),
     objectKey,
     pendingKey,
     uploadedById: user.id,
@@ -54,10 +55,32 @@ export async function createUpload(input: UploadRequestInput, user: Uploader) {
     byteSize: input.byteSize,
     sha256: input.sha256,
   });
+  if (!photoId) return announcedAgain(input, user);
   return done({
     photoId,
     uploadUrl: await presignPhotoUpload(pendingKey, input.contentType, input.byteSize),
     headers: { 'content-type': input.contentType },
+  });
+}
+
+/**
+ * The same photo announced again under the phone's id (a photo queued without signal, sent again
+ * after a lost answer): stored → nothing to upload; pending → a fresh URL to the same pending key.
+ * An id that names someone else's photo, or other bytes, is refused.
+ */
+async function announcedAgain(input: UploadRequestInput, user: Uploader) {
+  const p = input.photoId ? await getOwnPhoto(input.photoId, user.id) : null;
+  if (!p || p.sha256 !== input.sha256 || p.trailerId !== input.trailerId || p.byteSize !== input.byteSize)
+    return refuse('conflict', 'That photo id is already taken.', {
+      photoId: ['That photo id is already taken.'],
+    });
+  if (p.status === 'rejected') return refuse('gone', 'This photo was refused; take it again.');
+  if (p.status === 'stored') return done({ photoId: p.id, status: 'stored' as const });
+  if (!p.pendingKey) return refuse('conflict', 'This upload has no pending file; take the photo again.');
+  return done({
+    photoId: p.id,
+    uploadUrl: await presignPhotoUpload(p.pendingKey, p.contentType, p.byteSize),
+    headers: { 'content-type': p.contentType },
   });
 }
 

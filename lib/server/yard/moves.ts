@@ -3,6 +3,7 @@ import { db, type Tx } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import {
   findSpotByLabel,
+  getMoveByClientKey,
   hasOpenOutOfServiceHold,
   insertYardMove,
   lockOccupant,
@@ -22,9 +23,38 @@ export type Moved = {
   fromLabel: string | null;
   toLabel: string;
   isOutOfService: boolean;
+  /** True when the phone's key named a move already recorded: nothing new was written. */
+  isReplay?: boolean;
 };
 
-type Move = { terminalId: string; actorId: string; trailerId: string; toSpotId: string; reason: string };
+type Move = {
+  terminalId: string;
+  actorId: string;
+  trailerId: string;
+  toSpotId: string;
+  reason: string;
+  /** The phone's key: the same key twice records one move (a queued move sent again). */
+  clientKey?: string;
+};
+
+/** The move already recorded under this person's key, as the first answer gave it. */
+async function replayOf(tx: Tx, actorId: string, clientKey: string): Promise<Moved | null> {
+  const row = await getMoveByClientKey(tx, actorId, clientKey);
+  if (!row) return null;
+  const [fromLabel, toLabel] = await Promise.all([
+    row.fromSpotId ? spotLabel(tx, row.fromSpotId) : null,
+    spotLabel(tx, row.toSpotId),
+  ]);
+  const isOutOfService = await hasOpenOutOfServiceHold(tx, row.trailerId);
+  return {
+    moveId: row.moveId,
+    unitNumber: row.unitNumber,
+    fromLabel,
+    toLabel: toLabel ?? '',
+    isOutOfService,
+    isReplay: true,
+  };
+}
 
 /**
  * Moves a trailer of this terminal's yard into a slot or door, inside the caller's transaction.
@@ -34,6 +64,9 @@ type Move = { terminalId: string; actorId: string; trailerId: string; toSpotId: 
  */
 export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<Moved> {
   const trailer = await lockTrailerPlace(tx, move.trailerId);
+  // checked under the trailer's lock: a second send of the same key waits here for the first
+  const replay = move.clientKey ? await replayOf(tx, move.actorId, move.clientKey) : null;
+  if (replay) return replay;
   if (!trailer || trailer.terminalId !== move.terminalId || trailer.status !== 'in_yard') {
     const unit = trailer?.unitNumber ?? 'That trailer';
     abort(refuseField('not_found', 'unit', `${unit} is not in this terminal's yard.`));
@@ -61,6 +94,7 @@ export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<
     fromSpotId: trailer.spotId,
     toSpotId: target.id,
     movedById: move.actorId,
+    clientKey: move.clientKey ?? null,
   });
   await setTrailerSpot(tx, move.trailerId, target.id, now);
   const isOutOfService = await hasOpenOutOfServiceHold(tx, move.trailerId);
@@ -81,6 +115,13 @@ export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<
 export async function recordMove(actor: YardActor, input: MoveInput): Promise<Result<Moved>> {
   const terminalId = actor.terminalId;
   if (!terminalId) return NO_TERMINAL;
+  const { clientKey } = input;
+  if (clientKey) {
+    // sent again after a lost answer or from the outbox: answer the move already recorded, even if
+    // the trailer has been moved on since (the unit or the target may no longer match)
+    const replay = await db.transaction((tx) => replayOf(tx, actor.id, clientKey));
+    if (replay) return done(replay);
+  }
   const [trailerId, spot] = await Promise.all([
     identifyTrailer(input.unit),
     findSpotByLabel(terminalId, input.target),
@@ -99,6 +140,13 @@ export async function recordMove(actor: YardActor, input: MoveInput): Promise<Re
     }
     return refuse('not_found', messages.join(' '), fieldErrors);
   }
-  const move = { terminalId, actorId: actor.id, trailerId, toSpotId: spot.id, reason: 'jockey move' };
+  const move = {
+    terminalId,
+    actorId: actor.id,
+    trailerId,
+    toSpotId: spot.id,
+    reason: 'jockey move',
+    clientKey,
+  };
   return settle(() => db.transaction(async (tx) => done(await moveInTransaction(tx, move, new Date()))));
 }

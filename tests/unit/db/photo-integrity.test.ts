@@ -70,6 +70,7 @@ describe('photos: pending key, final key, and the photo check', () => {
       { id: driver.id },
     );
     if (!announced.ok) throw new Error(announced.message);
+    if (!('uploadUrl' in announced.value)) throw new Error('a new photo is announced with an upload URL');
     const { photoId, uploadUrl, headers } = announced.value;
     const put = await fetch(uploadUrl, { method: 'PUT', headers, body: new Blob([new Uint8Array(bytes)]) });
     expect(put.status).toBe(200);
@@ -92,6 +93,7 @@ describe('photos: pending key, final key, and the photo check', () => {
       { id: driver.id },
     );
     if (!announced.ok) throw new Error(announced.message);
+    if (!('uploadUrl' in announced.value)) throw new Error('a new photo is announced with an upload URL');
     const url = new URL(announced.value.uploadUrl);
     // AWS Signature Version 4, query-string form: X-Amz-Expires is the validity in seconds and
     // X-Amz-SignedHeaders lists the headers the signature covers (AWS S3 API reference,

@@ -26,6 +26,7 @@ export async function announceAndPut(
 ) {
   const announced = await createUpload({ trailerId, itemKey: 'left_side.skin', ...declared }, { id: userId });
   if (!announced.ok) throw new Error(`announcement refused: ${announced.message}`);
+  if (!('uploadUrl' in announced.value)) throw new Error('announced photo is already stored');
   const put = await fetch(announced.value.uploadUrl, {
     method: 'PUT',
     headers: announced.value.headers,

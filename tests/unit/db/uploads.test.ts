@@ -55,6 +55,38 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
     expect(row.capturedAt?.toISOString()).toBe(taken.toISOString());
   });
 
+  it("keeps the phone's own photo id: announced again it answers the same photo, once stored without a URL", async () => {
+    const photo = smallPng();
+    const photoId = crypto.randomUUID();
+    const declared = { contentType: 'image/png', byteSize: photo.length, sha256: sha(photo) };
+    const announce = (userId: string, sha256 = declared.sha256) =>
+      createUpload(
+        { photoId, trailerId: ctx.trailerId, itemKey: 'left_side.skin', ...declared, sha256 },
+        { id: userId },
+      );
+    // queued without signal, the announcement's answer lost, sent again: the same pending photo
+    const [first, again] = await Promise.all([announce(ctx.userId), announce(ctx.userId)]);
+    expect(first).toMatchObject({ ok: true, value: { photoId, uploadUrl: expect.any(String) } });
+    expect(again).toMatchObject({ ok: true, value: { photoId, uploadUrl: expect.any(String) } });
+    expect(await db.select().from(photos).where(eq(photos.id, photoId))).toHaveLength(1);
+    const url = again.ok && 'uploadUrl' in again.value ? again.value.uploadUrl : '';
+    const put = await fetch(url, {
+      method: 'PUT',
+      headers: { 'content-type': 'image/png' },
+      body: new Blob([new Uint8Array(photo)]),
+    });
+    expect(put.status).toBe(200);
+    expect(await completeUpload(photoId, { id: ctx.userId })).toMatchObject({ ok: true });
+    // stored: announced once more (the outbox's next run), nothing to upload
+    expect(await announce(ctx.userId)).toEqual({ ok: true, value: { photoId, status: 'stored' } });
+    // the same id with other bytes, or by another person, is refused and changes nothing
+    const other = (await actor('D1002')).id;
+    expect((await refusedWith(announce(other))).code).toBe('conflict');
+    expect((await refusedWith(announce(ctx.userId, sha(png(90))))).fieldErrors?.photoId).toHaveLength(1);
+    const [row] = await db.select().from(photos).where(eq(photos.id, photoId));
+    expect(row).toMatchObject({ status: 'stored', uploadedById: ctx.userId, sha256: declared.sha256 });
+  });
+
   it('refuses content that is not an image although it was announced as PNG, and deletes it', async () => {
     const text = new TextEncoder().encode('this is not a photo, just text pretending to be one');
     const id = await announceAndPut(
@@ -148,6 +180,7 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
       { id: ctx.userId },
     );
     if (!announced.ok) throw new Error(announced.message);
+    if (!('uploadUrl' in announced.value)) throw new Error('a new photo is announced with an upload URL');
     const put = await fetch(announced.value.uploadUrl, {
       method: 'PUT',
       headers: announced.value.headers,

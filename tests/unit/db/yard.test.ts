@@ -90,6 +90,46 @@ describe('moves', () => {
     expect(board!.spots.find((s) => s.id === spots[0].id)?.trailer).toBeNull();
   });
 
+  it('records a move sent twice under the same phone key once, and answers the first move again', async () => {
+    const tag = uniqueTag();
+    const { spots } = await createRowWithSlots(db, terminalId, `Row K${tag}`, 3);
+    const [a] = await placeTrailers(db, terminalId, tag, [spots[0].id]);
+    const clientKey = `move-${tag}-0001`;
+    const input = { unit: a.unitNumber, target: spots[1].label, clientKey };
+    // the outbox's second send (its first answer was lost) and a double tap arriving together
+    const [first, second] = await Promise.all([recordMove(jockey, input), recordMove(jockey, input)]);
+    const third = await recordMove(jockey, input);
+    for (const answer of [first, second, third])
+      expect(answer).toMatchObject({
+        ok: true,
+        value: { unitNumber: a.unitNumber, toLabel: spots[1].label },
+      });
+    const moveIds = [first, second, third].map((r) => (r.ok ? r.value.moveId : null));
+    expect(new Set(moveIds).size).toBe(1);
+    expect([first, second, third].filter((r) => r.ok && r.value.isReplay)).toHaveLength(2);
+    expect(await db.select().from(yardMoves).where(eq(yardMoves.trailerId, a.id))).toHaveLength(1);
+    const audit = await db
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.entityId, a.id), eq(auditLog.action, 'yard.move')));
+    expect(audit).toHaveLength(1);
+    // a new key is a new move: the same trailer on to the third slot
+    const onward = await recordMove(jockey, {
+      ...input,
+      target: spots[2].label,
+      clientKey: `${clientKey}-b`,
+    });
+    expect(onward).toMatchObject({ ok: true, value: { fromLabel: spots[1].label, toLabel: spots[2].label } });
+    expect(onward.ok && onward.value.isReplay).toBeFalsy();
+    // the first key sent once more, after the trailer moved on: still the first move, nothing written
+    const late = await recordMove(jockey, input);
+    expect(late).toMatchObject({
+      ok: true,
+      value: { moveId: moveIds[0], toLabel: spots[1].label, isReplay: true },
+    });
+    expect(await db.select().from(yardMoves).where(eq(yardMoves.trailerId, a.id))).toHaveLength(2);
+  });
+
   it('refuses a trailer that is not in this yard', async () => {
     const tag = uniqueTag();
     const { spots } = await createRowWithSlots(db, terminalId, `Row O${tag}`, 1);

@@ -3,15 +3,20 @@
 import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { useSWRConfig } from 'swr';
+import { z } from 'zod';
+import { addToOutbox } from '@/app/_components/offline/outbox-client';
+import { moveSchema } from '@/lib/validation/yard';
 import { Button } from '@/app/_components/button';
 import { Caution } from '@/app/_components/caution';
 import { Field, FormError } from '@/app/_components/field';
 import { useRefusalText } from '@/app/_components/use-refusal-text';
 import { CameraButton } from '../../_components/camera-button';
 import { BOARD_KEY } from '../../_components/use-board';
+import { QueuedMoves } from './queued-moves';
 
 type Result =
   | { ok: true; unitNumber: string; fromLabel: string | null; toLabel: string; isOutOfService: boolean }
+  | { ok: 'queued'; unit: string; target: string }
   | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
 
 export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: string[] }) {
@@ -25,28 +30,56 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
   async function submit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = e.currentTarget;
-    const data = Object.fromEntries(new FormData(form));
+    const parsed = moveSchema.safeParse({
+      ...Object.fromEntries(new FormData(form)),
+      clientKey: crypto.randomUUID(),
+    });
+    if (!parsed.success) {
+      const found = z.flattenError(parsed.error).fieldErrors as Record<string, string[]>;
+      const fieldErrors = Object.fromEntries(
+        Object.entries(found).map(([k, list]) => [k, list.map((m) => say(m))]),
+      );
+      setResult({ ok: false, message: t('move.notRecorded'), fieldErrors });
+      return;
+    }
+    const body = parsed.data;
+    // without signal the move waits in the phone's outbox under its key and is sent once later
+    const queue = async () => {
+      await addToOutbox({
+        key: body.clientKey!,
+        kind: 'move',
+        group: 'yard-moves',
+        url: '/api/yard/moves',
+        body,
+        meta: { unit: body.unit, target: body.target },
+      });
+      setResult({ ok: 'queued', unit: body.unit, target: body.target });
+      form.reset();
+    };
+    if (!navigator.onLine) return queue();
     setPending(true);
     try {
       const res = await fetch('/api/yard/moves', {
         method: 'POST',
         headers: { 'Content-Type': 'application/json' },
-        body: JSON.stringify(data),
+        body: JSON.stringify(body),
       });
-      const body = await res.json();
+      // reached, but the server could not answer: the outbox retries under the same key
+      if (res.status >= 500) return await queue();
+      const answer = await res.json();
       if (res.ok) {
-        setResult({ ok: true, ...body });
+        setResult({ ok: true, ...answer });
         form.reset();
         await mutate(BOARD_KEY);
       } else {
         setResult({
           ok: false,
-          message: body.message
-            ? say(body.message, body.messageKey, body.messageValues)
+          message: answer.message
+            ? say(answer.message, answer.messageKey, answer.messageValues)
             : t('move.notRecorded'),
-          fieldErrors: body.fieldErrors
+          fieldErrors: answer.fieldErrors
             ? Object.fromEntries(
-                Object.entries(body.fieldErrors as Record<string, string[]>).map(([k, list]) => [
+                Object.entries(answer.fieldErrors as Record<string, string[]>).map(([k, list]) => [
                   k,
                   list.map((m) => say(m)),
                 ]),
@@ -55,7 +88,7 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
         });
       }
     } catch {
-      setResult({ ok: false, message: t('move.noConnection') });
+      await queue();
     } finally {
       setPending(false);
     }
@@ -105,7 +138,14 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
       </Button>
       <FormError message={result && !result.ok && !result.fieldErrors ? result.message : null} />
       <div aria-live="polite">
-        {result?.ok ? (
+        {result?.ok === 'queued' ? (
+          <p
+            role="status"
+            className="rounded-lg border-2 border-warn bg-warn-bg p-3 text-gate font-bold text-warn"
+          >
+            {t('move.queued', { unit: result.unit, to: result.target })}
+          </p>
+        ) : result?.ok ? (
           <div className="space-y-2">
             <p
               role="status"
@@ -123,6 +163,7 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
           </div>
         ) : null}
       </div>
+      <QueuedMoves />
     </form>
   );
 }
