@@ -7,6 +7,7 @@ import { Caution } from '@/app/_components/caution';
 import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { isDeskStaff } from '@/lib/desk/access';
+import { findingTitle } from '@/lib/desk/finding-title';
 import { buildTrailerFile, STORED, type FileWords } from '@/lib/desk/trailer-file';
 import { readable } from '@/lib/i18n/reasons';
 import { formatTime, toLocalInput } from '@/lib/format/time';
@@ -75,6 +76,11 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   // a file line in the reader's language; stored text (engine reasons, notes) shown as it is
   const say = (w: FileWords) => {
     if (w.key === STORED) return <span data-stored-text="">{w.values.text}</span>;
+    if (w.key === 'finding')
+      return findingTitle(
+        { kind: w.values.kind, itemKey: w.values.item, condition: w.values.condition || null },
+        locale,
+      );
     if (w.key === 'case') {
       const state = desk.has(`state.${w.values.state}` as 'state.open')
         ? desk(`state.${w.values.state}` as 'state.open')
