@@ -24,7 +24,14 @@ export type Moved = {
   isOutOfService: boolean;
 };
 
-type Move = { terminalId: string; actorId: string; trailerId: string; toSpotId: string; reason: string };
+type Move = {
+  terminalId: string;
+  actorId: string;
+  trailerId: string;
+  /** Null when the typed slot or door matched nothing (told together with the unit's own answer). */
+  toSpotId: string | null;
+  reason: string;
+};
 
 /**
  * Moves a trailer of this terminal's yard into a slot or door, inside the caller's transaction.
@@ -34,13 +41,14 @@ type Move = { terminalId: string; actorId: string; trailerId: string; toSpotId: 
  */
 export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<Moved> {
   const trailer = await lockTrailerPlace(tx, move.trailerId);
-  if (!trailer || trailer.terminalId !== move.terminalId || trailer.status !== 'in_yard') {
-    const unit = trailer?.unitNumber ?? 'That trailer';
-    abort(refuseField('not_found', 'unit', `${unit} is not in this terminal's yard.`));
-  }
-  const target = await lockSpot(tx, move.terminalId, move.toSpotId);
-  if (!target || target.retiredAt)
-    abort(refuseField('not_found', 'target', 'No such slot or door in this yard.'));
+  const target = move.toSpotId ? await lockSpot(tx, move.terminalId, move.toSpotId) : null;
+  // a unit not in this yard and a slot that is not there are both told, each under its field
+  const fieldErrors: FieldErrors = {};
+  if (!trailer || trailer.terminalId !== move.terminalId || trailer.status !== 'in_yard')
+    fieldErrors.unit = [`${trailer?.unitNumber ?? 'That trailer'} is not in this terminal's yard.`];
+  if (!target || target.retiredAt) fieldErrors.target = ['No such slot or door in this yard.'];
+  if (!trailer || !target || fieldErrors.unit || fieldErrors.target)
+    abort(refuse('not_found', Object.values(fieldErrors).flat().join(' '), fieldErrors));
   if (trailer.spotId === target.id)
     abort(refuseField('invalid', 'target', `${trailer.unitNumber} is already in ${target.label}.`));
   const occupant = await lockOccupant(tx, target.id);
@@ -85,20 +93,22 @@ export async function recordMove(actor: YardActor, input: MoveInput): Promise<Re
     identifyTrailer(input.unit),
     findSpotByLabel(terminalId, input.target),
   ]);
-  if (!trailerId || !spot) {
+  if (!trailerId) {
     // both answers at once, so a jockey with two typos fixes them in one go
-    const messages: string[] = [];
-    const fieldErrors: FieldErrors = {};
-    if (!trailerId) {
-      messages.push(`No trailer matches ${input.unit}.`);
-      fieldErrors.unit = ['No trailer with that unit number, VIN or label.'];
-    }
+    const messages = [`No trailer matches ${input.unit}.`];
+    const fieldErrors: FieldErrors = { unit: ['No trailer with that unit number, VIN or label.'] };
     if (!spot) {
       messages.push(`No slot or door ${input.target} in this yard.`);
       fieldErrors.target = ['No such slot or door in this yard.'];
     }
     return refuse('not_found', messages.join(' '), fieldErrors);
   }
-  const move = { terminalId, actorId: actor.id, trailerId, toSpotId: spot.id, reason: 'jockey move' };
+  const move = {
+    terminalId,
+    actorId: actor.id,
+    trailerId,
+    toSpotId: spot?.id ?? null,
+    reason: 'jockey move',
+  };
   return settle(() => db.transaction(async (tx) => done(await moveInTransaction(tx, move, new Date()))));
 }
