@@ -134,7 +134,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
                 <span data-stored-text="">{h.reason}</span>
               </p>
               <p className="text-gate-sm text-ink-soft">
-                {t('file.placed', { when: formatTime(h.placedAt, zone) })}
+                {t('file.placed', { when: formatTime(h.placedAt, zone, 'dateTime', locale) })}
               </p>
               {canRelease ? (
                 <HoldReleaseForm holdId={h.id} trailerId={trailer.id} reason={h.reason} nowLocal={nowLocal} />
@@ -169,7 +169,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
             data-kind={e.kind}
           >
             <p className="text-gate-sm text-ink-soft">
-              {formatTime(e.at, zone)} · {t(`file.kindOne.${e.kind}`)}
+              {formatTime(e.at, zone, 'dateTime', locale)} · {t(`file.kindOne.${e.kind}`)}
             </p>
             <p className="text-gate font-bold">
               {e.href ? (
@@ -193,9 +193,9 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
             {e.photoTimes ? (
               <p className="text-gate-sm" data-testid="photo-times">
                 {e.photoTimes.takenAt
-                  ? tph('taken', { time: formatTime(e.photoTimes.takenAt, zone) })
+                  ? tph('taken', { time: formatTime(e.photoTimes.takenAt, zone, 'dateTime', locale) })
                   : tph('noCaptureTime')}{' '}
-                · {tph('uploaded', { time: formatTime(e.photoTimes.uploadedAt, zone) })}
+                · {tph('uploaded', { time: formatTime(e.photoTimes.uploadedAt, zone, 'dateTime', locale) })}
               </p>
             ) : null}
           </li>

@@ -76,7 +76,10 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
         <p className="text-gate">
           {c.terminalName} ·{' '}
           {after
-            ? t('handoffOn', { kind: t(`kind.${after.kind}`), when: formatTime(after.occurredAt, tz) })
+            ? t('handoffOn', {
+                kind: t(`kind.${after.kind}`),
+                when: formatTime(after.occurredAt, tz, 'dateTime', locale),
+              })
             : ''}{' '}
           · {t('proposed')} <span className="font-bold">{proposalWords}</span>
         </p>
@@ -92,7 +95,9 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
                 amount: formatMoney(c.chargedCents ?? 0),
               })}`
             : ''}
-          {c.disputeDeadline ? ` · ${t('disputeUntil', { when: formatTime(c.disputeDeadline, tz) })}` : ''}
+          {c.disputeDeadline
+            ? ` · ${t('disputeUntil', { when: formatTime(c.disputeDeadline, tz, 'dateTime', locale) })}`
+            : ''}
         </p>
         {isDeskStaff(user.role) ? (
           <Link

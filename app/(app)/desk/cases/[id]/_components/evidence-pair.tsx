@@ -1,4 +1,4 @@
-import { useTranslations } from 'next-intl';
+import { useLocale, useTranslations } from 'next-intl';
 import type { CaseEvidence, CaseFinding } from '@/db/queries/case-evidence';
 import { itemLabel } from '@/lib/desk/item-labels';
 import { CONDITION_LABELS, type Condition } from '@/lib/engine';
@@ -15,14 +15,16 @@ type Side = {
 function Record({ side, itemName, timeZone }: { side: Side; itemName: string; timeZone: string }) {
   const t = useTranslations('Case');
   const tph = useTranslations('Photos');
+  const locale = useLocale();
   const { handoff, item } = side;
   return (
     <div className="min-w-0 space-y-2 rounded-lg border-2 border-paper-line p-2">
       <h4 className="text-gate-sm font-bold uppercase tracking-wide text-ink-soft">{side.title}</h4>
       {handoff ? (
         <p className="text-gate-sm">
-          {handoff.kind === 'drop' ? t('drop') : t('hook')} {formatTime(handoff.occurredAt, timeZone)} ·{' '}
-          {handoff.driverName} ({handoff.carrierScac})
+          {handoff.kind === 'drop' ? t('drop') : t('hook')}{' '}
+          {formatTime(handoff.occurredAt, timeZone, 'dateTime', locale)} · {handoff.driverName} (
+          {handoff.carrierScac})
         </p>
       ) : (
         <p className="text-gate-sm text-ink-soft">{t('noEarlier')}</p>
@@ -42,9 +44,9 @@ function Record({ side, itemName, timeZone }: { side: Side; itemName: string; ti
               <PhotoZoom photoId={p.id} alt={`${itemName}, ${side.title.toLowerCase()}`} />
               <figcaption className="text-gate-sm" data-testid="photo-times">
                 {p.capturedAt
-                  ? tph('taken', { time: formatTime(p.capturedAt, timeZone) })
+                  ? tph('taken', { time: formatTime(p.capturedAt, timeZone, 'dateTime', locale) })
                   : tph('noCaptureTime')}{' '}
-                · {tph('uploaded', { time: formatTime(p.uploadedAt, timeZone) })}
+                · {tph('uploaded', { time: formatTime(p.uploadedAt, timeZone, 'dateTime', locale) })}
               </figcaption>
             </figure>
           ))}
