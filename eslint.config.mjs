@@ -92,6 +92,26 @@ const config = [
     },
   },
   {
+    // one clock: a time a person reads goes through lib/format/time.ts, in the terminal's zone
+    files: ['app/**', 'lib/**', 'db/**'],
+    ignores: ['lib/format/time.ts'],
+    rules: {
+      'no-restricted-syntax': [
+        'error',
+        ...[
+          "ImportDeclaration[source.value='date-fns'] > ImportSpecifier[imported.name=/^(format|lightFormat|intlFormat|formatRelative|formatDistance|formatDistanceToNow)$/]",
+          "NewExpression[callee.object.name='Intl'][callee.property.name='DateTimeFormat']",
+          "CallExpression[callee.object.name='Intl'][callee.property.name='DateTimeFormat']",
+          'CallExpression[callee.property.name=/^toLocale(Date|Time)String$/]',
+        ].map((selector) => ({
+          selector,
+          message:
+            "Write times through lib/format/time.ts (formatTime, formatStamp): the terminal's zone, one clock.",
+        })),
+      ],
+    },
+  },
+  {
     rules: {
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
     },

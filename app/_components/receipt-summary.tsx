@@ -1,13 +1,14 @@
-import { useTranslations } from 'next-intl';
+import { useLocale, useTranslations } from 'next-intl';
 import { Caution } from '@/app/_components/caution';
-import { formatWhen } from '@/lib/engine';
-import { FINDING_WORDS, holdTitle, type ReceiptView } from '@/lib/handoffs/receipt';
+import { formatStamp } from '@/lib/format/time';
+import { findingWords, holdTitle, type ReceiptView } from '@/lib/handoffs/receipt';
 import { formatVerificationCode } from '@/lib/handoffs/verification-code';
 
 /** The receipt as the gate, the e-mail and the public verify page show it. Photos only where the viewer may see them. */
 export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptView; showPhotos: boolean }) {
   const t = useTranslations('Common');
   const c = useTranslations('Cautions');
+  const locale = useLocale();
   const isOutOfService = r.holds.some((h) => h.severity === 'out_of_service');
   return (
     <article className="space-y-4" aria-label={t('receipt.label')}>
@@ -28,7 +29,7 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
           {r.kind === 'drop' ? t('receipt.drop') : t('receipt.hook')}, {r.terminalName}
         </dd>
         <dt className="font-bold">{t('receipt.when')}</dt>
-        <dd>{formatWhen(r.occurredAt, r.timeZone)}</dd>
+        <dd>{formatStamp(r.occurredAt, r.timeZone, locale)}</dd>
         <dt className="font-bold">{t('receipt.carrier')}</dt>
         <dd>{r.carrierName}</dd>
         <dt className="font-bold">{t('receipt.driver')}</dt>
@@ -60,7 +61,7 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
             {r.findings.map((f) => (
               <li key={`${f.kind}-${f.itemKey}`} className="rounded-lg bg-paper-dim p-2 text-gate">
                 <span data-stored-text="">
-                  <span className="font-bold">{FINDING_WORDS[f.kind] ?? f.kind}:</span> {f.reason}
+                  <span className="font-bold">{findingWords(f.kind, locale)}:</span> {f.reason}
                 </span>
               </li>
             ))}
@@ -81,7 +82,7 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
                 className={`rounded-lg border-2 p-2 text-gate ${h.severity === 'out_of_service' ? 'border-danger bg-danger-bg text-danger' : 'border-hold bg-hold-bg text-hold'}`}
               >
                 <span data-stored-text="">
-                  <span className="font-bold">{holdTitle(h)}.</span> {h.reason}
+                  <span className="font-bold">{holdTitle(h, locale)}.</span> {h.reason}
                 </span>
               </li>
             ))}

@@ -33,10 +33,13 @@ export function listAnchors(terminalId: string, limit = 14) {
 }
 
 /** The e-mail addresses of the terminal's managers: its active admin users. */
-export async function listTerminalManagerEmails(terminalId: string): Promise<string[]> {
+/** The active admins of a terminal who keep an e-mail address, with the language each reads. */
+export async function listTerminalManagerEmails(
+  terminalId: string,
+): Promise<{ email: string; locale: string }[]> {
   const rows = await db
-    .select({ email: users.email })
+    .select({ email: users.email, locale: users.locale })
     .from(users)
     .where(and(eq(users.homeTerminalId, terminalId), eq(users.role, 'admin'), eq(users.isActive, true)));
-  return rows.flatMap((r) => (r.email ? [r.email] : []));
+  return rows.flatMap((r) => (r.email ? [{ email: r.email, locale: r.locale }] : []));
 }

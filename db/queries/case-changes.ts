@@ -27,6 +27,7 @@ export async function lockCase(tx: Tx, caseId: string, viewer: CaseViewer) {
       occurredAt: handoffs.occurredAt,
       carrierName: carriers.name,
       carrierEmail: carriers.contactEmail,
+      carrierLocale: carriers.locale,
     })
     .from(cases)
     .innerJoin(terminals, eq(terminals.id, cases.terminalId))
@@ -48,6 +49,8 @@ export async function listFindingsOfCase(tx: Tx, caseId: string) {
       condition: findings.condition,
       previousCondition: findings.previousCondition,
       reason: findings.reason,
+      reasonCode: findings.reasonCode,
+      reasonParams: findings.reasonParams,
     })
     .from(findings)
     .where(eq(findings.caseId, caseId));

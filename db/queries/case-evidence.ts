@@ -92,6 +92,9 @@ export async function getCaseEvidence(c: { id: string; handoffId: string }) {
         handoffId: photos.handoffId,
         itemKey: photos.itemKey,
         contentType: photos.contentType,
+        // when the phone says it was taken (EXIF, may be missing) and when it reached Hitchmark
+        capturedAt: photos.capturedAt,
+        uploadedAt: photos.createdAt,
       })
       .from(photos)
       .where(and(inArray(photos.handoffId, handoffIds), ne(photos.status, 'rejected')))

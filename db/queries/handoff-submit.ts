@@ -138,9 +138,13 @@ export async function latestContentHash(tx: Tx, trailerId: string): Promise<stri
   return row?.contentHash ?? null;
 }
 
-export async function getUserEmail(tx: Tx, userId: string): Promise<string | null> {
-  const [row] = await tx.select({ email: users.email }).from(users).where(eq(users.id, userId));
-  return row?.email ?? null;
+/** The e-mail address (null when none is kept) and language of one account. */
+export async function getUserMailbox(tx: Tx, userId: string) {
+  const [row] = await tx
+    .select({ email: users.email, locale: users.locale })
+    .from(users)
+    .where(eq(users.id, userId));
+  return row?.email ? { email: row.email, locale: row.locale } : null;
 }
 
 export async function getSpotLabel(tx: Tx, spotId: string): Promise<string | null> {

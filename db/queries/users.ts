@@ -100,3 +100,14 @@ export async function setUserAccess(
 export async function setUserLocale(userId: string, locale: string): Promise<void> {
   await db.update(users).set({ locale }).where(eq(users.id, userId));
 }
+
+/** The e-mail address kept on an account (null when none). */
+export async function getUserEmail(userId: string): Promise<string | null> {
+  const [row] = await db.select({ email: users.email }).from(users).where(eq(users.id, userId)).limit(1);
+  return row?.email ?? null;
+}
+
+/** Keeps or removes an account's e-mail address (unique: users_email_unique). */
+export async function setUserEmail(tx: Tx, userId: string, email: string | null): Promise<void> {
+  await tx.update(users).set({ email }).where(eq(users.id, userId));
+}

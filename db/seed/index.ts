@@ -55,7 +55,14 @@ const CARRIERS = [
     contactEmail: 'safety@pellucid-road.example',
     isHomeCarrier: false,
   },
-  { scac: 'VNTA', name: 'Vantorra Haulage', contactEmail: 'dispatch@vantorra.example', isHomeCarrier: false },
+  // no carrier editor yet: the demo's one Spanish-reading contact gets receipts and case mail in Spanish
+  {
+    scac: 'VNTA',
+    name: 'Vantorra Haulage',
+    contactEmail: 'dispatch@vantorra.example',
+    isHomeCarrier: false,
+    locale: 'es',
+  },
 ];
 
 const EXTRA_DRIVERS = [

@@ -1,11 +1,16 @@
-// The words of the case e-mails. Pure: the caller passes every fact, the time zone and the link.
-import { CONDITION_LABELS, type Condition } from '@/lib/engine';
+// The words of the case e-mails, in the carrier contact's language. Pure: the caller passes every
+// fact, the time zone, the language and the link.
+import type { Condition } from '@/lib/engine';
 import { formatMoney } from '@/lib/format/money';
 import { formatTime } from '@/lib/format/time';
+import type { Locale } from '@/lib/i18n/locales';
+import { itemLabel as itemWords, storedText } from '@/lib/i18n/reasons';
+import { translatorFor, writingLocale } from '@/lib/i18n/translate';
 import type { Decision } from './case-state';
 import { itemLabel } from './item-labels';
 
 export type CaseEmailFacts = {
+  locale: Locale;
   unitNumber: string;
   terminalName: string;
   carrierName: string;
@@ -27,74 +32,92 @@ type FindingRow = {
   previousCondition: Condition | null;
   condition: Condition | null;
   reason: string;
+  reasonCode?: string | null;
+  reasonParams?: unknown;
 };
 
-/** The facts both e-mails tell, from the case's header row and its findings. */
-export function caseEmailFacts(c: CaseHeader, findings: FindingRow[], amountCents: number): CaseEmailFacts {
+/** The facts both e-mails tell, from the case's header row and its findings, in `locale`. */
+export function caseEmailFacts(
+  c: CaseHeader,
+  findings: FindingRow[],
+  amountCents: number,
+  locale: string | null = 'en',
+): CaseEmailFacts {
+  const lang = writingLocale(locale);
+  const t = translatorFor(lang, 'Mail');
+  const reasons = translatorFor(lang, 'Reasons');
+  const condition = (v: Condition | null) => (v ? t(`condition.${v}`) : null);
   return {
+    locale: lang,
     unitNumber: c.unitNumber,
     terminalName: c.terminalName,
-    carrierName: c.carrierName ?? 'Carrier',
+    carrierName: c.carrierName ?? t('case.carrier'),
     timeZone: c.timeZone,
     handoffAt: c.occurredAt,
     amountCents,
     items: findings.map((f) => ({
-      label: itemLabel(f.itemKey),
-      before: f.previousCondition ? CONDITION_LABELS[f.previousCondition] : null,
-      after: f.condition ? CONDITION_LABELS[f.condition] : null,
-      reason: f.reason,
+      label: itemWords(reasons, f.itemKey, itemLabel(f.itemKey)),
+      before: condition(f.previousCondition),
+      after: condition(f.condition),
+      reason: storedText(f.reason, f.reasonCode, f.reasonParams, lang, c.timeZone),
     })),
   };
 }
 
-const DECISION_WORDS: Record<Decision, string> = {
-  charge: 'charged to your company',
-  share: 'shared: part of the repair is charged to your company',
-  absorb: 'absorbed by the terminal: nothing is charged to your company',
-  waive: 'waived: nothing is charged',
-};
+const when = (f: CaseEmailFacts, at: Date) => formatTime(at, f.timeZone, 'dateTime', f.locale);
 
 function itemLines(f: CaseEmailFacts) {
+  const t = translatorFor(f.locale, 'Mail');
   return f.items
     .map(
-      (i) => `- ${i.label}: ${i.before ?? 'no earlier record'} → ${i.after ?? 'not checked'}\n  ${i.reason}`,
+      (i) =>
+        `${t('case.item', { label: i.label, before: i.before ?? t('case.noEarlier'), after: i.after ?? t('case.notChecked') })}\n  ${i.reason}`,
     )
     .join('\n');
 }
 
 export function notifyEmail(f: CaseEmailFacts, deadline: Date, link: string) {
+  const t = translatorFor(f.locale, 'Mail');
+  const place = { unit: f.unitNumber, terminal: f.terminalName };
   return {
-    subject: `Damage case for trailer ${f.unitNumber} at ${f.terminalName}`,
+    subject: t('case.notifySubject', place),
     text: [
-      `${f.carrierName},`,
+      t('case.greeting', { carrier: f.carrierName }),
       '',
-      `Trailer ${f.unitNumber} was recorded with new damage at ${f.terminalName} on ${formatTime(f.handoffAt, f.timeZone)}.`,
-      'Hitchmark compared the handoff with the earlier record of each item:',
+      t('case.notifyRecorded', { ...place, when: when(f, f.handoffAt) }),
+      t('case.notifyCompared'),
       '',
       itemLines(f),
       '',
-      `Repair estimate: ${formatMoney(f.amountCents)}.`,
-      `You may dispute this case with a note until ${formatTime(deadline, f.timeZone)} (${f.timeZone}).`,
-      `Evidence and dispute form: ${link}`,
+      t('case.estimate', { amount: formatMoney(f.amountCents) }),
+      t('case.disputeUntil', { when: when(f, deadline), zone: f.timeZone }),
+      t('case.link', { link }),
       '',
-      'Hitchmark',
+      t('case.signature'),
     ].join('\n'),
   };
 }
 
 export function decisionEmail(f: CaseEmailFacts, decision: Decision, chargedCents: number, reason: string) {
+  const t = translatorFor(f.locale, 'Mail');
+  const amount = formatMoney(f.amountCents);
   return {
-    subject: `Decision on the damage case for trailer ${f.unitNumber}`,
+    subject: t('case.decisionSubject', { unit: f.unitNumber }),
     text: [
-      `${f.carrierName},`,
+      t('case.greeting', { carrier: f.carrierName }),
       '',
-      `The damage case for trailer ${f.unitNumber} (${f.terminalName}, ${formatTime(f.handoffAt, f.timeZone)}) is decided: ${DECISION_WORDS[decision]}.`,
-      `Repair estimate: ${formatMoney(f.amountCents)}. Charged to your company: ${formatMoney(chargedCents)}.`,
-      `Reason: ${reason}`,
+      t('case.decided', {
+        unit: f.unitNumber,
+        terminal: f.terminalName,
+        when: when(f, f.handoffAt),
+        decision: t(`case.decision.${decision}`),
+      }),
+      t('case.charged', { amount, charged: formatMoney(chargedCents) }),
+      t('case.reason', { reason }),
       '',
       itemLines(f),
       '',
-      'Hitchmark',
+      t('case.signature'),
     ].join('\n'),
   };
 }

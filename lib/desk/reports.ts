@@ -1,4 +1,5 @@
 // Desk reports: damage by carrier and by month, charged vs absorbed, in integer cents; CSV text.
+import { translatorFor } from '@/lib/i18n/translate';
 import { toCsv } from '@/lib/format/csv';
 import { centsToDollarsInput } from '@/lib/format/money';
 
@@ -26,10 +27,18 @@ export type ReportLine = {
  * charge, share or absorb (the terminal pays the repair). Waived: the estimate of waived cases.
  * Open: the estimate of cases not decided yet.
  */
+/** The group of cases proposed to no carrier (the terminal held the trailer, or nobody is attributed). */
+export const NO_CARRIER = 'none';
+
+/** A report group's carrier in words: its SCAC, or what "no carrier" means, in `locale`. */
+export function reportCarrierLabel(carrier: string, locale: string = 'en'): string {
+  return carrier === NO_CARRIER ? translatorFor(locale, 'Desk')('report.noCarrier') : carrier;
+}
+
 export function summarizeCases(rows: ReportCaseRow[]): ReportLine[] {
   const lines = new Map<string, ReportLine>();
   for (const r of rows) {
-    const carrier = r.carrierScac ?? 'none';
+    const carrier = r.carrierScac ?? NO_CARRIER;
     const key = `${r.month}|${carrier}`;
     const line = lines.get(key) ?? {
       month: r.month,

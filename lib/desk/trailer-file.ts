@@ -1,6 +1,7 @@
 // One trailer's history as a single timeline, newest first, a page at a time. Pure: the query
 // passes the rows of one page (its handoffs, and the other records it fetched).
 import { formatMoney } from '@/lib/format/money';
+import { findingTitle } from './finding-title';
 import { itemLabel } from './item-labels';
 
 export type FileKind = 'handoff' | 'move' | 'walk' | 'finding' | 'hold' | 'case' | 'photo';
@@ -158,16 +159,11 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind, window?: FileW
         id: f.id,
         kind: 'finding',
         at: f.createdAt,
-        title: `${f.kind === 'repaired' ? 'Repaired' : f.kind === 'worse' ? 'Worse' : f.kind === 'new' ? 'New damage' : f.kind}: ${itemLabel(f.itemKey)}${f.condition ? ` (${f.condition})` : ''}`,
+        title: findingTitle(f),
         detail: f.reason,
-        // the item and condition names and the reason are the engine's words (rendered from codes by their owner)
+        // the title in words in the reader's language (findingTitle); the reason as the engine stored it
         words: {
-          title: {
-            key: STORED,
-            values: {
-              text: `${f.kind === 'repaired' ? 'Repaired' : f.kind === 'worse' ? 'Worse' : f.kind === 'new' ? 'New damage' : f.kind}: ${itemLabel(f.itemKey)}${f.condition ? ` (${f.condition})` : ''}`,
-            },
-          },
+          title: { key: 'finding', values: { kind: f.kind, item: f.itemKey, condition: f.condition ?? '' } },
           detail: [{ key: STORED, values: { text: f.reason } }],
         },
         tone: f.kind === 'repaired' ? 'ok' : 'danger',

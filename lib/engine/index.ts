@@ -56,6 +56,5 @@ export {
   roundTo,
   thirtySecondsToMillimetres,
 } from './units';
-export { formatWhen } from './wording';
 export * from './identity';
 export type * from './types';

@@ -1,8 +1,9 @@
-// The handoff receipt as a PDF (US Letter): the receipt's own lines (times in the terminal's zone,
-// through formatWhen), the verification code, and a QR to the verify page with the code filled in.
+// The handoff receipt as a PDF (US Letter), in the reader's language: the receipt's own lines (times
+// in the terminal's zone, through lib/format/time.ts), the verification code, and a QR to the verify page with the code filled in.
 import { PDFDocument, rgb, StandardFonts, type PDFFont, type PDFPage } from 'pdf-lib';
 import QRCode from 'qrcode';
 import { drawQr, modulesOf } from '@/lib/pdf/qr';
+import { translatorFor } from '@/lib/i18n/translate';
 import { receiptText, type ReceiptView } from './receipt';
 import { formatVerificationCode } from './verification-code';
 
@@ -48,10 +49,16 @@ function drawReceiptQr(page: PDFPage, link: string, x: number, y: number, target
   return drawQr(page, qr, { x, y, modulePt, margin: QR_MARGIN, ink: INK });
 }
 
-/** Builds the receipt PDF. `verifyUrl` is the app's public verify page (…/verify). */
-export async function buildReceiptPdf(view: ReceiptView, verifyUrl: string): Promise<Uint8Array> {
+/** Builds the receipt PDF in `locale`. `verifyUrl` is the app's public verify page (…/verify). */
+export async function buildReceiptPdf(
+  view: ReceiptView,
+  verifyUrl: string,
+  locale: string = 'en',
+): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
-  doc.setTitle(`Hitchmark receipt ${formatVerificationCode(view.verificationCode)}`);
+  const t = translatorFor(locale, 'Mail');
+  doc.setTitle(t('receipt.pdfTitle', { code: formatVerificationCode(view.verificationCode) }));
+  doc.setLanguage(locale);
   doc.setCreator('Hitchmark');
   const font = await doc.embedFont(StandardFonts.Helvetica);
   const bold = await doc.embedFont(StandardFonts.HelveticaBold);
@@ -60,7 +67,7 @@ export async function buildReceiptPdf(view: ReceiptView, verifyUrl: string): Pro
   const link = receiptVerifyLink(verifyUrl, view.verificationCode);
   const qrSide = drawReceiptQr(page, link, PAGE.width - MARGIN - 120, PAGE.height - MARGIN - 120, 120);
   const textWidth = PAGE.width - 2 * MARGIN - qrSide - 12;
-  const lines = receiptText(view, verifyUrl).split('\n');
+  const lines = receiptText(view, verifyUrl, locale).split('\n');
   lines.forEach((raw, i) => {
     const isTitle = i === 0;
     const width = y > PAGE.height - MARGIN - qrSide - 8 ? textWidth : PAGE.width - 2 * MARGIN;

@@ -1,6 +1,15 @@
 // What a handoff receipt says, on screen, in the e-mail and on the public verify page. Pure.
-import { formatWhen } from '@/lib/engine';
+import { formatStamp } from '@/lib/format/time';
+import { storedText } from '@/lib/i18n/reasons';
+import type { Locale } from '@/lib/i18n/locales';
+import { translatorFor, writingLocale } from '@/lib/i18n/translate';
 import { formatVerificationCode } from './verification-code';
+
+type StoredWords = { reason: string; reasonCode?: string | null; reasonParams?: unknown };
+export type ReceiptHold = StoredWords & {
+  severity: 'out_of_service' | 'restricted';
+  restriction: string | null;
+};
 
 export type ReceiptView = {
   handoffId: string;
@@ -18,34 +27,31 @@ export type ReceiptView = {
   spotLabel: string | null;
   verificationCode: string;
   contentHash: string;
-  findings: { kind: string; itemKey: string; reason: string }[];
-  holds: { severity: 'out_of_service' | 'restricted'; restriction: string | null; reason: string }[];
+  /** `reason` is the English stored with the row; its code, when present, is rendered per reader. */
+  findings: (StoredWords & { kind: string; itemKey: string })[];
+  holds: ReceiptHold[];
   photos: { id: string; itemKey: string | null }[];
 };
 
+type Reader = { email: string; locale: string | null };
+export type ReceiptLetter = { to: string; cc: string | null; locale: Locale };
+
 /**
- * Who gets a receipt: the driver when their account has an e-mail address, with the carrier's
- * contact in copy; otherwise the carrier's contact alone. Pure.
+ * Who gets a receipt, and in which language: the driver when their account has an e-mail address,
+ * with the carrier's contact in copy; otherwise the carrier's contact alone. When the two read
+ * different languages, each gets their own letter in their own language instead of a copy. Pure.
  */
-export function receiptRecipients(driverEmail: string | null, carrierEmail: string) {
-  if (!driverEmail) return { to: carrierEmail, cc: null };
-  return {
-    to: driverEmail,
-    cc: driverEmail.toLowerCase() === carrierEmail.toLowerCase() ? null : carrierEmail,
-  };
+export function receiptLetters(driver: Reader | null, carrier: Reader): ReceiptLetter[] {
+  const toCarrier = { to: carrier.email, cc: null, locale: writingLocale(carrier.locale) };
+  if (!driver) return [toCarrier];
+  const locale = writingLocale(driver.locale);
+  if (driver.email.toLowerCase() === carrier.email.toLowerCase())
+    return [{ to: driver.email, cc: null, locale }];
+  if (locale === toCarrier.locale) return [{ to: driver.email, cc: carrier.email, locale }];
+  return [{ to: driver.email, cc: null, locale }, toCarrier];
 }
 
-export const FINDING_WORDS: Record<string, string> = {
-  new: 'New damage',
-  worse: 'Worse than before',
-  repaired: 'Repaired',
-  first_record: 'Damage, first record',
-  fuel_short: 'Fuel short',
-  fuel_unexplained_drop: 'Fuel drop not explained',
-  pin_not_engaged: 'Locking pin not engaged',
-  spare_unusable: 'Spare not usable',
-};
-
+/** English hold headings, kept for screens not yet moved to the Mail catalogue (holdTitle speaks both). */
 export const HOLD_WORDS = {
   out_of_service: 'Out of service: may not leave the gate',
   restricted: 'Restricted',
@@ -56,48 +62,71 @@ export const RESTRICTION_WORDS: Record<string, string> = {
   yard_only: 'yard moves only',
 };
 
-export function holdTitle(h: ReceiptView['holds'][number]): string {
+/** The heading of a finding's kind in `locale` (`fuel_short` → "Fuel short"). */
+export function findingWords(kind: string, locale: string | null = 'en'): string {
+  const t = translatorFor(locale, 'Mail');
+  return t.has(`findingKind.${kind}`) ? t(`findingKind.${kind}`) : t('findingKind.other');
+}
+
+export function holdTitle(
+  h: Pick<ReceiptHold, 'severity' | 'restriction'>,
+  locale: string | null = 'en',
+): string {
+  const t = translatorFor(locale, 'Mail');
   return h.severity === 'restricted' && h.restriction
-    ? `${HOLD_WORDS.restricted}: ${RESTRICTION_WORDS[h.restriction] ?? h.restriction}`
-    : HOLD_WORDS[h.severity];
+    ? t('hold.restrictedTo', { restriction: h.restriction })
+    : t(`hold.${h.severity}`);
 }
 
-export function receiptSubject(v: ReceiptView): string {
-  return `Hitchmark receipt: ${v.kind} of trailer ${v.unitNumber}, code ${formatVerificationCode(v.verificationCode)}`;
+export function receiptSubject(v: ReceiptView, locale: string | null = 'en'): string {
+  return translatorFor(locale, 'Mail')('receipt.subject', {
+    kind: v.kind,
+    unit: v.unitNumber,
+    code: formatVerificationCode(v.verificationCode),
+  });
 }
 
-/** The plain-text e-mail body. */
-export function receiptText(v: ReceiptView, verifyUrl: string): string {
+/** The plain-text e-mail body (and the PDF's lines) in `locale`; times in the terminal's zone. */
+export function receiptText(v: ReceiptView, verifyUrl: string, locale: string | null = 'en'): string {
+  const lang = writingLocale(locale);
+  const t = translatorFor(lang, 'Mail');
+  const words = (r: { reason: string; reasonCode?: string | null; reasonParams?: unknown }) =>
+    storedText(r.reason, r.reasonCode, r.reasonParams, lang, v.timeZone);
+  const load = [
+    t(v.isLoaded ? 'receipt.loaded' : 'receipt.empty'),
+    v.sealNumber ? t('receipt.seal', { seal: v.sealNumber }) : '',
+    v.fuelEighths !== null ? t('receipt.fuel', { fuel: v.fuelEighths }) : '',
+    v.spotLabel ? t('receipt.slot', { slot: v.spotLabel }) : '',
+  ].join('');
   const lines = [
-    `Hitchmark handoff receipt`,
+    t('receipt.title'),
     ``,
-    `Trailer: ${v.unitNumber}`,
-    `${v.kind === 'drop' ? 'Drop (gate in)' : 'Hook (gate out)'} at ${v.terminalName}, ${formatWhen(v.occurredAt, v.timeZone)}`,
-    `Carrier: ${v.carrierName}; driver: ${v.driverName}; tractor: ${v.tractorNumber}`,
-    `${v.isLoaded ? 'Loaded' : 'Empty'}${v.sealNumber ? `, seal ${v.sealNumber}` : ''}${v.fuelEighths !== null ? `; fuel ${v.fuelEighths}/8` : ''}${v.spotLabel ? `; slot ${v.spotLabel}` : ''}`,
+    t('receipt.trailer', { unit: v.unitNumber }),
+    t('receipt.handoff', {
+      kind: v.kind,
+      terminal: v.terminalName,
+      when: formatStamp(v.occurredAt, v.timeZone, lang),
+    }),
+    t('receipt.people', { carrier: v.carrierName, driver: v.driverName, tractor: v.tractorNumber }),
+    load,
     ``,
-    `Findings (${v.findings.length}):`,
+    t('receipt.findings', { count: v.findings.length }),
     ...(v.findings.length
-      ? v.findings.map((f) => `- ${FINDING_WORDS[f.kind] ?? f.kind}: ${f.reason}`)
-      : ['- none: no change from the last record']),
+      ? v.findings.map((f) => `- ${findingWords(f.kind, lang)}: ${words(f)}`)
+      : [t('receipt.noFindings')]),
     ``,
-    `Holds (${v.holds.length}):`,
-    ...(v.holds.length ? v.holds.map((h) => `- ${holdTitle(h)}. ${h.reason}`) : ['- none']),
+    t('receipt.holds', { count: v.holds.length }),
+    ...(v.holds.length ? v.holds.map((h) => `- ${holdTitle(h, lang)}. ${words(h)}`) : [t('receipt.noHolds')]),
   ];
-  if (v.holds.some((h) => h.severity === 'out_of_service')) {
-    lines.push(
-      '',
-      'An out-of-service trailer is not moved on a public road until a qualified technician has repaired it.',
-    );
-  }
+  if (v.holds.some((h) => h.severity === 'out_of_service')) lines.push('', t('receipt.outOfService'));
   lines.push(
     '',
-    `Photos: ${v.photos.length}`,
+    t('receipt.photos', { count: v.photos.length }),
     '',
-    `Verification code: ${formatVerificationCode(v.verificationCode)}`,
-    `Anyone holding this receipt can check it at ${verifyUrl}`,
+    t('receipt.code', { code: formatVerificationCode(v.verificationCode) }),
+    t('receipt.verify', { url: verifyUrl }),
     '',
-    "Hitchmark's checks support, and do not replace, the driver's own inspection (49 CFR 396.11 and 396.13).",
+    t('receipt.inspection'),
   );
   return lines.join('\n');
 }

@@ -55,3 +55,22 @@ export const userAccessSchema = z.object({
     .transform((v) => v === 'on'),
 });
 export type UserAccessInput = z.infer<typeof userAccessSchema>;
+
+/** The longest address SMTP can carry: RFC 5321 §4.5.3.1 (a 256-octet path less its two brackets). */
+export const EMAIL_MAX = 254;
+
+/** A driver's own e-mail address for receipts; empty removes it. */
+export const ownEmailSchema = z.object({
+  email: z
+    .string()
+    .trim()
+    .max(EMAIL_MAX, { error: `An e-mail address is at most ${EMAIL_MAX} characters.` })
+    .pipe(
+      z.union([
+        z.literal(''),
+        z.email({ error: 'Type the whole address, like name@example.com, or leave it empty.' }),
+      ]),
+    )
+    .transform((v) => (v === '' ? null : v.toLowerCase())),
+});
+export type OwnEmailInput = z.infer<typeof ownEmailSchema>;

@@ -54,7 +54,15 @@ test('a damage case from drop to shared decision, with e-mails through the outbo
     ...ok,
     'left_side.skin': { ...ok['left_side.skin'], photoIds: [beforePhoto] },
   });
-  const afterPhoto = await uploadPhoto(driver.request, trailer.id, 'left_side.skin', solidPng([200, 30, 30]));
+  // the after photo tells when it was taken (EXIF, as a phone's camera writes it); the before one does not
+  const taken = new Date(Math.floor((Date.now() - 10 * 60_000) / 1000) * 1000);
+  const afterPhoto = await uploadPhoto(
+    driver.request,
+    trailer.id,
+    'left_side.skin',
+    solidPng([200, 30, 30]),
+    taken,
+  );
   await submitHandoff(driver.request, trailer.id, osfw, 'drop', {
     ...ok,
     'left_side.skin': {
@@ -78,6 +86,11 @@ test('a damage case from drop to shared decision, with e-mails through the outbo
   expect(a!.y < b!.y + b!.height && b!.y < a!.y + a!.height).toBe(true);
   expect(b!.x + b!.width).toBeLessThanOrEqual(a!.x);
   await expect(pair.getByText(/only Osterlind Freightways held the trailer/)).toBeVisible();
+  // beside each photo, when it was taken (where the phone said) and when it was uploaded
+  await expect(pair.getByTestId('photo-times')).toHaveText([
+    /^no capture time in the photo · uploaded \w{3} \d{1,2}, \d{4}, \d{2}:\d{2} \w+$/,
+    /^taken \w{3} \d{1,2}, \d{4}, \d{2}:\d{2} \w+ · uploaded \w{3} \d{1,2}, \d{4}, \d{2}:\d{2} \w+$/,
+  ]);
   await expect(clerk.getByRole('img', { name: /Trailer diagram\. Damage at: Left side/ })).toBeVisible();
   await expect(clerk.getByText('Estimate $850.00 from the rate card')).toBeVisible();
 

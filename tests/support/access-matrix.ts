@@ -268,6 +268,7 @@ export const ACTIONS: ActionRow[] = [
   { file: 'app/(app)/_components/sign-out-action.ts', name: 'signOutAction', expect: every('signin') },
   { file: 'app/(app)/account/actions.ts', name: 'changePinAction', expect: act([...DRIVERS]) },
   { file: 'app/(app)/account/actions.ts', name: 'changePasswordAction', expect: act(YARD) },
+  { file: 'app/(app)/account/actions.ts', name: 'changeEmailAction', expect: act([...DRIVERS]) },
   { file: 'app/(app)/admin/actions.ts', name: 'changeUserAccessAction', expect: act(ADMIN) },
   { file: 'app/(app)/admin/rates/actions.ts', name: 'addRateAction', expect: act(ADMIN) },
   { file: 'app/(app)/admin/rates/actions.ts', name: 'changeRateAction', expect: act(ADMIN) },

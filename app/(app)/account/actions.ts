@@ -3,9 +3,10 @@
 import { headers } from 'next/headers';
 import { getTranslations } from 'next-intl/server';
 import { changeOwnSecret } from '@/lib/server/auth/account';
+import { setOwnEmail } from '@/lib/server/auth/own-email';
 import { formAction } from '@/lib/server/action';
 import { clientAddress } from '@/lib/server/client-address';
-import { changePasswordSchema, changePinSchema } from '@/lib/validation/account';
+import { changePasswordSchema, changePinSchema, ownEmailSchema } from '@/lib/validation/account';
 
 /** A driver's own PIN: the current one, then the new one twice. Other phones are signed out. */
 export const changePinAction = formAction(
@@ -37,5 +38,16 @@ export const changePasswordAction = formAction(
     );
     if (!result.ok) return result;
     return { ok: true, message: (await getTranslations('Account'))('passwordChanged') };
+  },
+);
+
+/** A driver's own e-mail address for receipts (empty removes it). */
+export const changeEmailAction = formAction(
+  { roles: ['driver'], schema: ownEmailSchema },
+  async (user, input) => {
+    const result = await setOwnEmail(user, input);
+    if (!result.ok) return result;
+    const t = await getTranslations('Account');
+    return { ok: true, message: result.value ? t('emailSaved', { email: result.value }) : t('emailRemoved') };
   },
 );

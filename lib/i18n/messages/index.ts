@@ -25,6 +25,7 @@ import enShell from './en/Shell.json';
 import enTheme from './en/Theme.json';
 import enTrailerFilePages from './en/TrailerFilePages.json';
 import enYardRows from './en/YardRows.json';
+import enMail from './en/Mail.json';
 import esAccount from './es/Account.json';
 import esGate from './es/Gate.json';
 import esRefusals from './es/Refusals.json';
@@ -49,6 +50,7 @@ import esShell from './es/Shell.json';
 import esTheme from './es/Theme.json';
 import esTrailerFilePages from './es/TrailerFilePages.json';
 import esYardRows from './es/YardRows.json';
+import esMail from './es/Mail.json';
 
 const en = {
   Refusals: enRefusals,
@@ -75,6 +77,7 @@ const en = {
   Theme: enTheme,
   TrailerFilePages: enTrailerFilePages,
   YardRows: enYardRows,
+  Mail: enMail,
 };
 
 /** The English catalogue's shape is the one every language must match (the unit test checks keys). */
@@ -107,5 +110,6 @@ export const MESSAGES: Record<Locale, Messages> = {
     Theme: esTheme,
     TrailerFilePages: esTrailerFilePages,
     YardRows: esYardRows,
+    Mail: esMail,
   },
 };

@@ -9,7 +9,8 @@ import { appUrl, caseLinkSecret } from '../env';
 
 /**
  * Writes the e-mail a command sends to the proposed carrier into the outbox, in the command's own
- * transaction (delivered after commit): the notice with a signed dispute link, or the decision.
+ * transaction (delivered after commit): the notice with a signed dispute link, or the decision,
+ * in the carrier contact's language (carriers.locale).
  */
 export async function queueCaseEmail(
   tx: Tx,
@@ -20,7 +21,8 @@ export async function queueCaseEmail(
 ) {
   const c = row.c;
   if (!row.carrierEmail) return;
-  const facts = async () => caseEmailFacts(row, await listFindingsOfCase(tx, c.id), amountCents);
+  const facts = async () =>
+    caseEmailFacts(row, await listFindingsOfCase(tx, c.id), amountCents, row.carrierLocale);
   let mail: { subject: string; text: string } | null = null;
   if (command.kind === 'notify' && c.proposedCarrierId && disputeDeadline) {
     const token = signCaseLink(

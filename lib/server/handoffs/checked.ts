@@ -12,7 +12,7 @@ export type CheckedHandoff = {
   actor: HandoffActor;
   trailer: { id: string; unitNumber: string };
   terminal: { id: string; name: string; timeZone: string };
-  carrier: { id: string; name: string; contactEmail: string };
+  carrier: { id: string; name: string; contactEmail: string; locale: string };
   event: HandoffEvent;
   evaluation: Evaluation;
   items: ReturnType<typeof normalizeItems>;

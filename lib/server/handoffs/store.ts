@@ -5,7 +5,7 @@ import 'server-only';
 import type { Tx } from '@/db';
 import { recordAudit } from '@/db/queries/audit';
 import { priceCase } from '@/lib/server/desk/pricing';
-import { getSpotLabel, getUserEmail, latestContentHash } from '@/db/queries/handoff-submit';
+import { getSpotLabel, getUserMailbox, latestContentHash } from '@/db/queries/handoff-submit';
 import {
   attachPhotos,
   insertFindings,
@@ -20,12 +20,12 @@ import { hashableFromRows } from '@/lib/handoffs/canonical';
 import { handoffContentHash, WRITTEN_HASH_VERSION } from '@/lib/handoffs/hash';
 import { holdsNotYetOpen } from '@/lib/handoffs/holds';
 import { englishReason } from '@/lib/i18n/reasons';
-import { receiptRecipients } from '@/lib/handoffs/receipt';
+import { receiptLetters } from '@/lib/handoffs/receipt';
 import { handoffRow, readingsOf, trailerAfter } from '@/lib/handoffs/submission';
 import { newVerificationCode } from '@/lib/handoffs/verification-code';
 import { abort } from '@/lib/result';
 import { chainKey } from '@/lib/server/env';
-import { enqueueReceiptEmail } from './receipt-mail';
+import { enqueueReceiptEmails } from './receipt-mail';
 import { chooseSpot } from './slots';
 import type { CheckedHandoff } from './checked';
 import type { SubmitResult } from './types';
@@ -163,8 +163,9 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
     tx,
   );
   if (c.sendReceipt) {
-    const driverEmail = row.driverId ? await getUserEmail(tx, row.driverId) : null;
-    await enqueueReceiptEmail(tx, receiptRecipients(driverEmail, c.carrier.contactEmail), {
+    const driver = row.driverId ? await getUserMailbox(tx, row.driverId) : null;
+    const carrier = { email: c.carrier.contactEmail, locale: c.carrier.locale };
+    await enqueueReceiptEmails(tx, receiptLetters(driver, carrier), {
       handoffId: id,
       unitNumber: trailer.unitNumber,
       kind: input.kind,
@@ -180,13 +181,21 @@ export async function storeHandoff(tx: Tx, c: CheckedHandoff): Promise<SubmitRes
       spotLabel: spotId ? await getSpotLabel(tx, spotId) : null,
       verificationCode: row.verificationCode,
       contentHash,
-      findings: ev.rows,
+      findings: ev.rows.map((f) => ({
+        kind: f.kind,
+        itemKey: f.itemKey,
+        reason: f.reason,
+        reasonCode: f.coded.code,
+        reasonParams: f.coded.params,
+      })),
       holds: [
-        ...c.openHolds.map((h) => ({ severity: h.severity, restriction: h.restriction, reason: h.reason })),
+        ...c.openHolds,
         ...newHolds.map((h) => ({
           severity: h.severity,
           restriction: h.restriction,
           reason: englishReason(h.reason, terminal.timeZone),
+          reasonCode: h.reason.code,
+          reasonParams: h.reason.params,
         })),
       ],
       photos: c.photos.map((p) => ({ id: p.id, itemKey: null })),

@@ -10,6 +10,7 @@ import { enqueueEmail } from '@/db/queries/outbox';
 import { listTerminals } from '@/db/queries/terminals';
 import { previousLocalDay } from '@/lib/format/time';
 import { anchorDigest, chainHeads, checkAnchor, type AnchorCheck } from '@/lib/handoffs/anchor';
+import { anchorEmail } from '@/lib/handoffs/anchor-email';
 import { appUrl, chainKey } from '../env';
 
 type Terminal = { id: string; code: string; name: string; timeZone: string };
@@ -20,6 +21,15 @@ export async function anchorTerminal(terminal: Terminal, day: string) {
   const digest = anchorDigest(heads);
   const recordCount = heads.reduce((n, h) => n + h.count, 0);
   const managers = await listTerminalManagerEmails(terminal.id);
+  const facts = (id: string) => ({
+    id,
+    terminal,
+    day,
+    digest,
+    trailers: heads.length,
+    records: recordCount,
+    url: `${appUrl()}/admin/anchors`,
+  });
   return db.transaction(async (tx) => {
     const row = await insertAnchor(tx, {
       terminalId: terminal.id,
@@ -27,31 +37,18 @@ export async function anchorTerminal(terminal: Terminal, day: string) {
       digest,
       heads,
       recordCount,
-      emailedTo: managers,
+      emailedTo: managers.map((m) => m.email),
     });
     if (!row) return null;
-    for (const to of managers) {
-      await enqueueEmail(
-        {
-          to,
-          subject: `Hitchmark chain anchor ${terminal.code} ${day}: ${digest.slice(0, 16)}`,
-          text: [
-            `Daily record anchor of terminal ${terminal.code} (${terminal.name}) for ${day}.`,
-            '',
-            `Digest (SHA-256 over ${heads.length} trailer chains, ${recordCount} handoff records):`,
-            digest,
-            '',
-            'Keep this e-mail. The anchors page shows the same digest and checks that the records',
-            `as stored today still lead to it: ${appUrl()}/admin/anchors`,
-            'If the page ever shows another digest for this day, the records were rewritten.',
-          ].join('\n'),
-          relatedType: 'anchor',
-          relatedId: row.id,
-        },
-        tx,
-      );
-    }
-    return { id: row.id, digest, trailers: heads.length, records: recordCount, emailedTo: managers };
+    for (const to of managers)
+      await enqueueEmail({ to: to.email, ...anchorEmail(to.locale, facts(row.id)) }, tx);
+    return {
+      id: row.id,
+      digest,
+      trailers: heads.length,
+      records: recordCount,
+      emailedTo: managers.map((m) => m.email),
+    };
   });
 }
 

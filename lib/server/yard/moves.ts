@@ -31,7 +31,8 @@ type Move = {
   terminalId: string;
   actorId: string;
   trailerId: string;
-  toSpotId: string;
+  /** Null when the typed slot or door matched nothing (told together with the unit's own answer). */
+  toSpotId: string | null;
   reason: string;
   /** The phone's key: the same key twice records one move (a queued move sent again). */
   clientKey?: string;
@@ -67,13 +68,14 @@ export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<
   // checked under the trailer's lock: a second send of the same key waits here for the first
   const replay = move.clientKey ? await replayOf(tx, move.actorId, move.clientKey) : null;
   if (replay) return replay;
-  if (!trailer || trailer.terminalId !== move.terminalId || trailer.status !== 'in_yard') {
-    const unit = trailer?.unitNumber ?? 'That trailer';
-    abort(refuseField('not_found', 'unit', `${unit} is not in this terminal's yard.`));
-  }
-  const target = await lockSpot(tx, move.terminalId, move.toSpotId);
-  if (!target || target.retiredAt)
-    abort(refuseField('not_found', 'target', 'No such slot or door in this yard.'));
+  const target = move.toSpotId ? await lockSpot(tx, move.terminalId, move.toSpotId) : null;
+  // a unit not in this yard and a slot that is not there are both told, each under its field
+  const fieldErrors: FieldErrors = {};
+  if (!trailer || trailer.terminalId !== move.terminalId || trailer.status !== 'in_yard')
+    fieldErrors.unit = [`${trailer?.unitNumber ?? 'That trailer'} is not in this terminal's yard.`];
+  if (!target || target.retiredAt) fieldErrors.target = ['No such slot or door in this yard.'];
+  if (!trailer || !target || fieldErrors.unit || fieldErrors.target)
+    abort(refuse('not_found', Object.values(fieldErrors).flat().join(' '), fieldErrors));
   if (trailer.spotId === target.id)
     abort(refuseField('invalid', 'target', `${trailer.unitNumber} is already in ${target.label}.`));
   const occupant = await lockOccupant(tx, target.id);
@@ -126,14 +128,10 @@ export async function recordMove(actor: YardActor, input: MoveInput): Promise<Re
     identifyTrailer(input.unit),
     findSpotByLabel(terminalId, input.target),
   ]);
-  if (!trailerId || !spot) {
+  if (!trailerId) {
     // both answers at once, so a jockey with two typos fixes them in one go
-    const messages: string[] = [];
-    const fieldErrors: FieldErrors = {};
-    if (!trailerId) {
-      messages.push(`No trailer matches ${input.unit}.`);
-      fieldErrors.unit = ['No trailer with that unit number, VIN or label.'];
-    }
+    const messages = [`No trailer matches ${input.unit}.`];
+    const fieldErrors: FieldErrors = { unit: ['No trailer with that unit number, VIN or label.'] };
     if (!spot) {
       messages.push(`No slot or door ${input.target} in this yard.`);
       fieldErrors.target = ['No such slot or door in this yard.'];
@@ -144,7 +142,7 @@ export async function recordMove(actor: YardActor, input: MoveInput): Promise<Re
     terminalId,
     actorId: actor.id,
     trailerId,
-    toSpotId: spot.id,
+    toSpotId: spot?.id ?? null,
     reason: 'jockey move',
     clientKey,
   };

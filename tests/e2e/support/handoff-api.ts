@@ -43,6 +43,8 @@ export async function uploadPhoto(
   trailerId: string,
   itemKey: string,
   bytes: Buffer,
+  /** When the phone says it was taken (as the camera's EXIF tells the upload); none by default. */
+  capturedAt?: Date,
 ): Promise<string> {
   const sha256 = createHash('sha256').update(bytes).digest('hex');
   const started = await api.post('/api/uploads', {
@@ -52,7 +54,9 @@ export async function uploadPhoto(
   const { photoId, uploadUrl, headers } = await started.json();
   const put = await api.put(uploadUrl, { data: bytes, headers });
   expect(put.ok()).toBe(true);
-  const done = await api.post(`/api/uploads/${photoId}/complete`);
+  const done = await api.post(`/api/uploads/${photoId}/complete`, {
+    ...(capturedAt ? { data: { capturedAt: capturedAt.toISOString() } } : {}),
+  });
   expect((await done.json()).status).toBe('stored');
   return photoId;
 }

@@ -131,6 +131,51 @@ describe('handoff submit service (real database)', () => {
     }
   });
 
+  it("a Spanish-reading driver's receipt is in Spanish; the carrier's copy follows the carrier's language", async () => {
+    const [carrier] = await db.select().from(carriers).where(eq(carriers.id, d2.carrierId!));
+    await db
+      .update(users)
+      .set({ email: 'driver.d2001@example.test', locale: 'es' })
+      .where(eq(users.id, d2.id));
+    try {
+      // carrier in English: two letters, each in its reader's language
+      const first = await freshTrailer();
+      const h = await recorded(
+        submitInput(first.trailer.id, d2.carrierId!, 'drop', allOk(first.checklist), at(0)),
+        d2,
+        { now: at(0) },
+      );
+      const mails = await db.select().from(emailOutbox).where(eq(emailOutbox.relatedId, h.handoffId));
+      const toDriver = mails.find((m) => m.toAddress === 'driver.d2001@example.test');
+      const toCarrier = mails.find((m) => m.toAddress === carrier.contactEmail);
+      expect(mails).toHaveLength(2);
+      expect(toDriver?.ccAddress).toBeNull();
+      expect(toDriver?.subject).toMatch(/^Comprobante de Hitchmark: entrega de la caja /);
+      expect(toDriver?.textBody).toContain(`Caja: ${first.trailer.unitNumber}`);
+      expect(toDriver?.textBody).toContain('Código de verificación:');
+      expect(toCarrier?.subject).toMatch(/^Hitchmark receipt: drop of trailer /);
+      expect(toCarrier?.textBody).toContain('Verification code:');
+      // carrier in Spanish too: one Spanish letter, the carrier's contact in copy
+      await db.update(carriers).set({ locale: 'es' }).where(eq(carriers.id, carrier.id));
+      const second = await freshTrailer();
+      const h2 = await recorded(
+        submitInput(second.trailer.id, d2.carrierId!, 'drop', allOk(second.checklist), at(1)),
+        d2,
+        { now: at(1) },
+      );
+      const [only, ...rest] = await db
+        .select()
+        .from(emailOutbox)
+        .where(eq(emailOutbox.relatedId, h2.handoffId));
+      expect(rest).toEqual([]);
+      expect(only.ccAddress).toBe(carrier.contactEmail);
+      expect(only.textBody).toContain('Hallazgos (0):');
+    } finally {
+      await db.update(users).set({ email: null, locale: 'en' }).where(eq(users.id, d2.id));
+      await db.update(carriers).set({ locale: carrier.locale }).where(eq(carriers.id, carrier.id));
+    }
+  });
+
   it('refuses a second submit while another one holds the trailer row (55P03 → conflict)', async () => {
     const { trailer, checklist } = await freshTrailer();
     const client = await pool.connect();

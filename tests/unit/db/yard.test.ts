@@ -154,6 +154,20 @@ describe('moves', () => {
     });
   });
 
+  it('names both fields when the unit is known but not in this yard and the slot does not exist', async () => {
+    const tag = uniqueTag();
+    const [away] = await placeTrailers(db, terminalId, tag, [null]);
+    expect(await recordMove(jockey, { unit: away.unitNumber, target: `NOSLOT${tag}` })).toEqual({
+      ok: false,
+      code: 'not_found',
+      message: `${away.unitNumber} is not in this terminal's yard. No such slot or door in this yard.`,
+      fieldErrors: {
+        unit: [`${away.unitNumber} is not in this terminal's yard.`],
+        target: ['No such slot or door in this yard.'],
+      },
+    });
+  });
+
   it('refuses an account without a home terminal before reading anything', async () => {
     expect(await recordMove({ id: jockeyId, terminalId: null }, { unit: 'X', target: 'Y' })).toMatchObject({
       ok: false,

@@ -40,3 +40,42 @@ describe('case e-mails', () => {
     expect(mail.text).toContain('Reason: The hook photo is unclear; we split the repair.');
   });
 });
+
+describe('case e-mails in the carrier contact’s language', () => {
+  const es = caseEmailFacts(
+    {
+      unitNumber: 'R53017',
+      terminalName: 'Riverbend terminal',
+      carrierName: 'Vantorra Haulage',
+      timeZone: 'America/Chicago',
+      occurredAt: new Date('2026-10-23T14:30:00Z'),
+    },
+    [
+      {
+        itemKey: 'left_side.skin',
+        previousCondition: 'ok',
+        condition: 'damaged',
+        reason: 'Inspected ok at the hook, damaged at the drop.',
+      },
+    ],
+    85_000,
+    'es',
+  );
+
+  it('writes the notice in Spanish, item and conditions included, times in the terminal zone', () => {
+    const mail = notifyEmail(es, new Date('2026-11-07T16:00:00Z'), 'https://hm.example/case-link/abc');
+    expect(mail.subject).toBe('Caso de daño de la caja R53017 en Riverbend terminal');
+    expect(mail.text).toContain('- Lámina del lado izquierdo: bien → con daño (necesita reparación)');
+    expect(mail.text).toContain('Estimado de reparación: $850.00.');
+    // IANA tz database: 16:00 UTC on 7 Nov 2026 is 10:00 in Chicago (standard time since 1 Nov)
+    expect(mail.text).toMatch(/hasta el 7 nov 2026, 10:00 \S+ \(America\/Chicago\)/);
+    expect(mail.text).not.toContain('Repair estimate');
+  });
+
+  it('writes the decision in Spanish', () => {
+    const mail = decisionEmail(es, 'absorb', 0, 'Daño de la terminal.');
+    expect(mail.subject).toBe('Decisión sobre el caso de daño de la caja R53017');
+    expect(mail.text).toContain('está decidido: lo absorbe la terminal: no se cobra nada a su empresa.');
+    expect(mail.text).toContain('Cobrado a su empresa: $0.00.');
+  });
+});

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { reportCsv, summarizeCases, totalsBy } from '@/lib/desk/reports';
+import { NO_CARRIER, reportCarrierLabel, reportCsv, summarizeCases, totalsBy } from '@/lib/desk/reports';
 
 const rows = [
   {
@@ -90,5 +90,28 @@ describe('desk reports', () => {
     // RFC 4180 §2 rules 6 and 7: a field with a comma or a quote is quoted, its quotes doubled
     expect(lines[2]).toBe('2026-12,"a,b",1,850.00,425.00,425.00,0.00,0.00');
     expect(lines[3]).toBe('2026-12,"say ""hi""",1,850.00,425.00,425.00,0.00,0.00');
+  });
+});
+
+describe('the report group of cases proposed to no carrier', () => {
+  it('says what "no carrier" means in both languages, and leaves a SCAC as it is', () => {
+    const [line] = summarizeCases([
+      {
+        month: '2026-10',
+        carrierScac: null,
+        state: 'open',
+        decision: null,
+        amountCents: 100,
+        chargedCents: null,
+      },
+    ]);
+    expect(line.carrier).toBe(NO_CARRIER);
+    expect(reportCarrierLabel(line.carrier, 'en')).toBe(
+      "No carrier proposed (the terminal's, or not attributed)",
+    );
+    expect(reportCarrierLabel(line.carrier, 'es')).toBe(
+      'Sin transportista propuesto (de la terminal o sin atribuir)',
+    );
+    expect(reportCarrierLabel('OSFW', 'es')).toBe('OSFW');
   });
 });

@@ -71,7 +71,9 @@ describe('trailer file', () => {
     const file = buildTrailerFile(rows);
     expect(file.map((e) => e.id)).toEqual(['x1:released', 'm1', 'c1', 'x1', 'f1', 'h1']);
     expect(file[0].title).toContain('Riverbend body shop');
-    expect(file.find((e) => e.id === 'f1')?.title).toBe('New damage: Left side skin (damaged)');
+    expect(file.find((e) => e.id === 'f1')?.title).toBe(
+      'New damage: Left side skin — damaged (needs repair)',
+    );
     expect(file.find((e) => e.id === 'c1')?.detail).toBe('Estimate $850.00');
   });
 

@@ -8,7 +8,6 @@ import {
   eighthsToLitres,
   expectedBurnGallons,
   fahrenheitToCelsius,
-  formatWhen,
   gallonsToLitres,
   LITRES_PER_US_GALLON,
   litresToGallons,
@@ -18,6 +17,7 @@ import {
 } from '@/lib/engine';
 import type { TrailerSpec } from '@/lib/engine';
 import { drop, hook, move, northwind, bluefield, walk } from './fixtures';
+import { formatStamp } from '@/lib/format/time';
 
 const spec: TrailerSpec = {
   kind: 'reefer',
@@ -51,9 +51,9 @@ describe('units', () => {
 
   it('formats in the caller time zone across the DST change (IANA tz database)', () => {
     // 1 Nov 2026 is the first Sunday of November: America/Chicago goes from UTC−5 to UTC−6.
-    expect(formatWhen(new Date('2026-10-31T15:00:00Z'), 'America/Chicago')).toBe('31 Oct 2026 10:00');
-    expect(formatWhen(new Date('2026-11-02T15:00:00Z'), 'America/Chicago')).toBe('2 Nov 2026 09:00');
-    expect(formatWhen(new Date('2026-11-02T15:00:00Z'), 'UTC')).toBe('2 Nov 2026 15:00');
+    expect(formatStamp(new Date('2026-10-31T15:00:00Z'), 'America/Chicago')).toBe('31 Oct 2026 10:00');
+    expect(formatStamp(new Date('2026-11-02T15:00:00Z'), 'America/Chicago')).toBe('2 Nov 2026 09:00');
+    expect(formatStamp(new Date('2026-11-02T15:00:00Z'), 'UTC')).toBe('2 Nov 2026 15:00');
   });
 });
 

@@ -1,7 +1,9 @@
+import { tz } from '@date-fns/tz';
+import { format } from 'date-fns';
 // The renderer of the engine's coded reasons: every code in English and Spanish with no missing
 // parameter, checklist labels in both languages, dates in the terminal's zone.
 import { describe, expect, it } from 'vitest';
-import { buildChecklist, formatWhen, type ReasonCode, type ReasonCodes, type EventRef } from '@/lib/engine';
+import { buildChecklist, type ReasonCode, type ReasonCodes, type EventRef } from '@/lib/engine';
 import { formatStamp } from '@/lib/format/time';
 import { LOCALES } from '@/lib/i18n/locales';
 import { readable, renderReason, storedText } from '@/lib/i18n/reasons';
@@ -197,7 +199,7 @@ describe('checklist labels in reasons', () => {
 });
 
 describe('formatStamp (dates in reasons)', () => {
-  // reference: date-fns format 'd MMM yyyy HH:mm' with @date-fns/tz (the engine's formatWhen)
+  // reference: date-fns format 'd MMM yyyy HH:mm' with @date-fns/tz, an independent implementation
   const instants = [
     '2026-03-08T07:59:00Z',
     '2026-03-08T08:01:00Z',
@@ -206,7 +208,7 @@ describe('formatStamp (dates in reasons)', () => {
   ];
   it.each(instants)('writes %s in English as date-fns does, in the terminal zone', (iso) => {
     for (const zone of ['America/Chicago', 'America/Los_Angeles', 'UTC'])
-      expect(formatStamp(iso, zone, 'en')).toBe(formatWhen(new Date(iso), zone));
+      expect(formatStamp(iso, zone, 'en')).toBe(format(new Date(iso), 'd MMM yyyy HH:mm', { in: tz(zone) }));
   });
   it('writes Spanish month abbreviations in lower case (CLDR es)', () => {
     expect(formatStamp('2026-11-03T20:05:00Z', 'America/Chicago', 'es')).toBe('3 nov 2026 14:05');

@@ -1,10 +1,10 @@
 import type { Metadata } from 'next';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listReportCases } from '@/db/queries/desk-reports';
 import { formatMoney } from '@/lib/format/money';
 import { DESK_STAFF } from '@/lib/desk/access';
-import { summarizeCases, totalsBy } from '@/lib/desk/reports';
+import { reportCarrierLabel, summarizeCases, totalsBy } from '@/lib/desk/reports';
 import { requireUser } from '@/lib/server/auth';
 import { reportQuerySchema } from '@/lib/validation/desk';
 import { ChargedAbsorbedChart } from './_components/charged-absorbed-chart';
@@ -19,7 +19,11 @@ export default async function DeskReportsPage({ searchParams }: PageProps<'/desk
   const parsed = reportQuerySchema.safeParse(await searchParams);
   const months = parsed.success ? parsed.data.months : 12;
   const lines = summarizeCases(await listReportCases(months));
-  const byCarrier = totalsBy(lines, 'carrier');
+  const locale = await getLocale();
+  const byCarrier = totalsBy(lines, 'carrier').map((b) => ({
+    ...b,
+    label: reportCarrierLabel(b.label, locale),
+  }));
   const byMonth = totalsBy(lines, 'month');
   return (
     <div className="space-y-4">
@@ -79,7 +83,7 @@ export default async function DeskReportsPage({ searchParams }: PageProps<'/desk
                 {lines.map((l) => (
                   <tr key={`${l.month}-${l.carrier}`} className="border-t border-paper-line">
                     <td className="p-2">{l.month}</td>
-                    <td className="p-2 font-bold">{l.carrier}</td>
+                    <td className="p-2 font-bold">{reportCarrierLabel(l.carrier, locale)}</td>
                     <td className="p-2">{l.cases}</td>
                     {[l.estimateCents, l.chargedCents, l.absorbedCents, l.waivedCents, l.openCents].map(
                       (c, i) => (

@@ -7,6 +7,7 @@ import { Caution } from '@/app/_components/caution';
 import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { isDeskStaff } from '@/lib/desk/access';
+import { findingTitle } from '@/lib/desk/finding-title';
 import { buildTrailerFile, STORED, type FileWords } from '@/lib/desk/trailer-file';
 import { readable } from '@/lib/i18n/reasons';
 import { formatTime, toLocalInput } from '@/lib/format/time';
@@ -75,6 +76,11 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
   // a file line in the reader's language; stored text (engine reasons, notes) shown as it is
   const say = (w: FileWords) => {
     if (w.key === STORED) return <span data-stored-text="">{w.values.text}</span>;
+    if (w.key === 'finding')
+      return findingTitle(
+        { kind: w.values.kind, itemKey: w.values.item, condition: w.values.condition || null },
+        locale,
+      );
     if (w.key === 'case') {
       const state = desk.has(`state.${w.values.state}` as 'state.open')
         ? desk(`state.${w.values.state}` as 'state.open')
@@ -128,7 +134,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
                 <span data-stored-text="">{h.reason}</span>
               </p>
               <p className="text-gate-sm text-ink-soft">
-                {t('file.placed', { when: formatTime(h.placedAt, zone) })}
+                {t('file.placed', { when: formatTime(h.placedAt, zone, 'dateTime', locale) })}
               </p>
               {canRelease ? (
                 <HoldReleaseForm holdId={h.id} trailerId={trailer.id} reason={h.reason} nowLocal={nowLocal} />
@@ -163,7 +169,7 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
             data-kind={e.kind}
           >
             <p className="text-gate-sm text-ink-soft">
-              {formatTime(e.at, zone)} · {t(`file.kindOne.${e.kind}`)}
+              {formatTime(e.at, zone, 'dateTime', locale)} · {t(`file.kindOne.${e.kind}`)}
             </p>
             <p className="text-gate font-bold">
               {e.href ? (
@@ -187,9 +193,9 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
             {e.photoTimes ? (
               <p className="text-gate-sm" data-testid="photo-times">
                 {e.photoTimes.takenAt
-                  ? tph('taken', { time: formatTime(e.photoTimes.takenAt, zone) })
+                  ? tph('taken', { time: formatTime(e.photoTimes.takenAt, zone, 'dateTime', locale) })
                   : tph('noCaptureTime')}{' '}
-                · {tph('uploaded', { time: formatTime(e.photoTimes.uploadedAt, zone) })}
+                · {tph('uploaded', { time: formatTime(e.photoTimes.uploadedAt, zone, 'dateTime', locale) })}
               </p>
             ) : null}
           </li>

@@ -6,6 +6,7 @@ import { getLocale, getTranslations } from 'next-intl/server';
 import { Caution } from '@/app/_components/caution';
 import { getCaseEvidence, listCustodyRows } from '@/db/queries/case-evidence';
 import { getCase, listCaseEvents } from '@/db/queries/cases';
+import { proposalOf } from '@/lib/desk/case-proposal';
 import { isWithinDisputeWindow } from '@/lib/desk/case-state';
 import { custodyTimeline } from '@/lib/desk/custody';
 import { isDeskStaff } from '@/lib/desk/access';
@@ -50,6 +51,16 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
   const isUnsafe = evidence.findings.some((f) => f.condition === 'unsafe');
   const tz = c.timeZone;
   const t = await getTranslations('Case');
+  // the header says what the findings say: a carrier, the terminal, several parties or nobody yet
+  const proposal = proposalOf(c.carrierName, evidence.findings);
+  const proposalWords =
+    proposal.kind === 'carrier'
+      ? proposal.name
+      : proposal.kind === 'terminal'
+        ? t('proposedTerminal', { terminal: proposal.name })
+        : proposal.kind === 'several'
+          ? t('proposedSeveral', { names: new Intl.ListFormat(locale).format(proposal.names) })
+          : t('proposedNone');
   const cautions = await getTranslations('Cautions');
   return (
     <div className="space-y-4">
@@ -65,9 +76,12 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
         <p className="text-gate">
           {c.terminalName} ·{' '}
           {after
-            ? t('handoffOn', { kind: t(`kind.${after.kind}`), when: formatTime(after.occurredAt, tz) })
+            ? t('handoffOn', {
+                kind: t(`kind.${after.kind}`),
+                when: formatTime(after.occurredAt, tz, 'dateTime', locale),
+              })
             : ''}{' '}
-          · {t('proposed')} <span className="font-bold">{c.carrierName ?? t('noSingleCarrier')}</span>
+          · {t('proposed')} <span className="font-bold">{proposalWords}</span>
         </p>
         {note ? <p className="text-gate font-bold text-warn">{t('marked', { note })}</p> : null}
         <p className="text-gate">
@@ -81,7 +95,9 @@ export default async function CasePage({ params }: PageProps<'/desk/cases/[id]'>
                 amount: formatMoney(c.chargedCents ?? 0),
               })}`
             : ''}
-          {c.disputeDeadline ? ` · ${t('disputeUntil', { when: formatTime(c.disputeDeadline, tz) })}` : ''}
+          {c.disputeDeadline
+            ? ` · ${t('disputeUntil', { when: formatTime(c.disputeDeadline, tz, 'dateTime', locale) })}`
+            : ''}
         </p>
         {isDeskStaff(user.role) ? (
           <Link

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { getLocale } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { ButtonLink } from '@/app/_components/button';
 import { ReceiptSummary } from '@/app/_components/receipt-summary';
 import { getReceipt } from '@/db/queries/handoffs';
@@ -9,7 +9,9 @@ import { readable } from '@/lib/i18n/reasons';
 import { requireUser } from '@/lib/server/auth';
 import { idParamSchema } from '@/lib/validation/handoffs';
 
-export const metadata: Metadata = { title: 'Receipt' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Common'))('receipt.metaTitle') };
+}
 
 export default async function ReceiptPage({ params }: PageProps<'/gate/receipts/[id]'>) {
   const user = await requireUser(SECTION_ROLES.gate);
@@ -17,8 +19,9 @@ export default async function ReceiptPage({ params }: PageProps<'/gate/receipts/
   if (!id.success) notFound();
   const stored = await getReceipt(id.data, user);
   if (!stored) notFound();
-  // findings and holds in the reader's language (lib/i18n/reasons.ts); the e-mail keeps its own
+  // findings and holds in the reader's language (lib/i18n/reasons.ts); the e-mail in each recipient's
   const locale = await getLocale();
+  const t = await getTranslations('Common');
   const receipt = {
     ...stored,
     findings: readable(stored.findings, locale, stored.timeZone),
@@ -27,21 +30,19 @@ export default async function ReceiptPage({ params }: PageProps<'/gate/receipts/
   return (
     <div className="mx-auto max-w-xl space-y-4">
       <h1 className="text-gate-xl font-bold">
-        Receipt: {receipt.kind} of {receipt.unitNumber}
+        {t('receipt.pageTitle', { kind: receipt.kind, unit: receipt.unitNumber })}
       </h1>
-      <p className="text-gate">
-        Recorded. A copy goes by e-mail; anyone holding it can check it on the verify page.
-      </p>
+      <p className="text-gate">{t('receipt.recorded')}</p>
       <ReceiptSummary receipt={receipt} showPhotos />
       <a
         href={`/gate/receipts/${receipt.handoffId}/pdf`}
         download
         className="block text-center text-gate font-bold text-brand underline"
       >
-        Download the receipt (PDF)
+        {t('receipt.pdf')}
       </a>
       <ButtonLink href="/gate" className="w-full">
-        Next trailer
+        {t('receipt.nextTrailer')}
       </ButtonLink>
     </div>
   );

@@ -1,4 +1,4 @@
-import { useTranslations } from 'next-intl';
+import { useLocale, useTranslations } from 'next-intl';
 import type { CaseEvidence, CaseFinding } from '@/db/queries/case-evidence';
 import { itemLabel } from '@/lib/desk/item-labels';
 import { CONDITION_LABELS, type Condition } from '@/lib/engine';
@@ -9,19 +9,22 @@ type Side = {
   title: string;
   handoff: CaseEvidence['handoffs'][number] | undefined;
   item: CaseEvidence['items'][number] | undefined;
-  photoIds: string[];
+  photos: CaseEvidence['photos'];
 };
 
 function Record({ side, itemName, timeZone }: { side: Side; itemName: string; timeZone: string }) {
   const t = useTranslations('Case');
+  const tph = useTranslations('Photos');
+  const locale = useLocale();
   const { handoff, item } = side;
   return (
     <div className="min-w-0 space-y-2 rounded-lg border-2 border-paper-line p-2">
       <h4 className="text-gate-sm font-bold uppercase tracking-wide text-ink-soft">{side.title}</h4>
       {handoff ? (
         <p className="text-gate-sm">
-          {handoff.kind === 'drop' ? t('drop') : t('hook')} {formatTime(handoff.occurredAt, timeZone)} ·{' '}
-          {handoff.driverName} ({handoff.carrierScac})
+          {handoff.kind === 'drop' ? t('drop') : t('hook')}{' '}
+          {formatTime(handoff.occurredAt, timeZone, 'dateTime', locale)} · {handoff.driverName} (
+          {handoff.carrierScac})
         </p>
       ) : (
         <p className="text-gate-sm text-ink-soft">{t('noEarlier')}</p>
@@ -34,10 +37,18 @@ function Record({ side, itemName, timeZone }: { side: Side; itemName: string; ti
         )}
       </p>
       {item?.note ? <p className="text-gate-sm">“{item.note}”</p> : null}
-      {side.photoIds.length ? (
+      {side.photos.length ? (
         <div className="grid grid-cols-1 gap-2 sm:grid-cols-2">
-          {side.photoIds.map((id) => (
-            <PhotoZoom key={id} photoId={id} alt={`${itemName}, ${side.title.toLowerCase()}`} />
+          {side.photos.map((p) => (
+            <figure key={p.id} className="space-y-1">
+              <PhotoZoom photoId={p.id} alt={`${itemName}, ${side.title.toLowerCase()}`} />
+              <figcaption className="text-gate-sm" data-testid="photo-times">
+                {p.capturedAt
+                  ? tph('taken', { time: formatTime(p.capturedAt, timeZone, 'dateTime', locale) })
+                  : tph('noCaptureTime')}{' '}
+                · {tph('uploaded', { time: formatTime(p.uploadedAt, timeZone, 'dateTime', locale) })}
+              </figcaption>
+            </figure>
           ))}
         </div>
       ) : handoff ? (
@@ -70,9 +81,7 @@ export function EvidencePair({
     title,
     handoff: evidence.handoffs.find((h) => h.id === handoffId),
     item: evidence.items.find((i) => i.handoffId === handoffId && i.itemKey === finding.itemKey),
-    photoIds: evidence.photos
-      .filter((p) => p.handoffId === handoffId && p.itemKey === finding.itemKey)
-      .map((p) => p.id),
+    photos: evidence.photos.filter((p) => p.handoffId === handoffId && p.itemKey === finding.itemKey),
   });
   return (
     <article className="space-y-2 rounded-xl bg-paper p-3" aria-label={name}>
