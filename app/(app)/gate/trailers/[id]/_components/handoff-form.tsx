@@ -1,16 +1,18 @@
 'use client';
 
-import { useCallback } from 'react';
+import { useCallback, useMemo, useRef } from 'react';
 import useSWR from 'swr';
 import { CAUTIONS, Caution } from '@/app/_components/caution';
 import { FieldError, Textarea } from '@/app/_components/field';
 import { safetyGroups } from '@/lib/engine/safety';
 import { newDraft, sameAsLastForZone, type Draft, type DraftItem } from '@/lib/handoffs/draft';
 import { HOOK_WORDS } from '@/lib/handoffs/hook-words';
+import { HANDOFF_LIMITS } from '@/lib/handoffs/limits';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { Choice } from './choice';
 import { FuelButtons, ReeferFields } from './readings-fields';
 import { SAFETY_WORDS } from './safety-words';
+import { useFocusFirstError } from './focus-first-error';
 import { SubmitBar } from './submit-bar';
 import { newDraftKey, useDraft } from './use-draft';
 import { useSubmit } from './use-submit';
@@ -57,7 +59,14 @@ export function HandoffForm({
     [trailer.id, kind, defaults.carrierId, defaults.driverName],
   );
   const { draft, setDraft, discard, forget } = useDraft(trailer.id, kind, make);
-  const { send, errors, refusal, status } = useSubmit(draft, setDraft, forget, { isReefer, last });
+  const itemKeys = useMemo(() => checklist.zones.flatMap((z) => z.items.map((i) => i.key)), [checklist]);
+  const { send, errors, errorRound, refusal, status } = useSubmit(draft, setDraft, forget, {
+    isReefer,
+    last,
+    itemKeys,
+  });
+  const formRef = useRef<HTMLFormElement>(null);
+  useFocusFirstError(formRef, errorRound, Boolean(draft));
 
   if (!draft) return <p className="text-gate">Opening the form…</p>;
   // functional updates: several taps (or one zone-wide "Same as last") may land before the next render
@@ -73,6 +82,7 @@ export function HandoffForm({
 
   return (
     <form
+      ref={formRef}
       className="space-y-6"
       noValidate
       onSubmit={(e) => {
@@ -153,6 +163,7 @@ export function HandoffForm({
         value={draft.note}
         onChange={(e) => set({ note: e.target.value })}
         rows={2}
+        maxLength={HANDOFF_LIMITS.note}
         error={errors.note}
       />
       <SubmitBar kind={kind} status={status} refusal={refusal} />

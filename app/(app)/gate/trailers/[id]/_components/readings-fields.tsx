@@ -2,6 +2,7 @@
 
 import { Field, FieldError } from '@/app/_components/field';
 import type { Draft } from '@/lib/handoffs/draft';
+import { HANDOFF_LIMITS as L } from '@/lib/handoffs/limits';
 import { Choice, YES_NO } from './choice';
 
 export function FuelButtons({
@@ -68,7 +69,10 @@ export function ReeferFields({
           label="Setpoint °F"
           name="setpointF"
           type="number"
-          step="0.1"
+          inputMode="decimal"
+          step="any"
+          min={L.setpointF.min}
+          max={L.setpointF.max}
           value={reefer.setpointF}
           onChange={(e) => set({ setpointF: e.target.value })}
           error={err('setpointF')}
@@ -77,7 +81,10 @@ export function ReeferFields({
           label="Return air °F"
           name="returnAirF"
           type="number"
-          step="0.1"
+          inputMode="decimal"
+          step="any"
+          min={L.returnAirF.min}
+          max={L.returnAirF.max}
           value={reefer.returnAirF}
           onChange={(e) => set({ returnAirF: e.target.value })}
           error={err('returnAirF')}
@@ -88,8 +95,9 @@ export function ReeferFields({
         name="engineHours"
         type="number"
         inputMode="decimal"
-        step="0.1"
-        min={0}
+        step="any"
+        min={L.engineHours.min}
+        max={L.engineHours.max}
         value={reefer.engineHours}
         onChange={(e) => set({ engineHours: e.target.value })}
         error={err('engineHours')}

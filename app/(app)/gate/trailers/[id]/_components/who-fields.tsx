@@ -2,6 +2,7 @@
 
 import { Field, FieldError, Select } from '@/app/_components/field';
 import type { Draft } from '@/lib/handoffs/draft';
+import { HANDOFF_LIMITS as L } from '@/lib/handoffs/limits';
 import { Choice } from './choice';
 
 export function WhoFields({
@@ -53,6 +54,7 @@ export function WhoFields({
         value={draft.driverName}
         onChange={(e) => set({ driverName: e.target.value })}
         autoComplete="name"
+        maxLength={L.driverName}
         error={errors.driverName}
       />
       <Field
@@ -60,6 +62,7 @@ export function WhoFields({
         name="tractorNumber"
         value={draft.tractorNumber}
         onChange={(e) => set({ tractorNumber: e.target.value })}
+        maxLength={L.tractorNumber}
         autoCapitalize="characters"
         error={errors.tractorNumber}
       />
@@ -79,6 +82,7 @@ export function WhoFields({
         name="sealNumber"
         value={draft.sealNumber}
         onChange={(e) => set({ sealNumber: e.target.value })}
+        maxLength={L.sealNumber}
         autoCapitalize="characters"
         error={errors.sealNumber}
       />
