@@ -2,24 +2,19 @@
 
 import { useCallback, useMemo, useRef } from 'react';
 import useSWR from 'swr';
-import { CAUTIONS, Caution } from '@/app/_components/caution';
-import { FieldError, Textarea } from '@/app/_components/field';
 import { safetyGroups } from '@/lib/engine/safety';
-import { newDraft, sameAsLastForZone, type Draft, type DraftItem } from '@/lib/handoffs/draft';
-import { HOOK_WORDS } from '@/lib/handoffs/hook-words';
-import { HANDOFF_LIMITS } from '@/lib/handoffs/limits';
+import { newDraft, type Draft, type DraftItem } from '@/lib/handoffs/draft';
+import { firstStepWithError, gateSteps, isStepComplete, type StepContext } from '@/lib/handoffs/steps';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
-import { Choice } from './choice';
-import { FuelButtons, ReeferFields } from './readings-fields';
-import { SAFETY_WORDS } from './safety-words';
 import { useFocusFirstError } from './focus-first-error';
-import { SubmitBar } from './submit-bar';
+import { GateStep } from './gate-step';
+import { StepCard } from './step-card';
+import { STEP_TITLES, stepSummary } from './step-summary';
 import { newDraftKey, useDraft } from './use-draft';
+import { useSteps } from './use-steps';
 import { useSubmit } from './use-submit';
-import { WhoFields } from './who-fields';
-import { ZoneSection } from './zone-section';
 
-type Props = {
+export type HandoffFormProps = {
   condition: TrailerCondition;
   kind: 'drop' | 'hook';
   /** A hook of a "no perishable loads" trailer asks whether the load is perishable. */
@@ -27,18 +22,20 @@ type Props = {
   /** The terminal's IANA zone: the form's "Last:" times are read in it. */
   timeZone: string;
   carriers: { id: string; name: string; scac: string }[];
-  defaults: { carrierId: string; driverName: string; isDriver: boolean; carrierName?: string | null };
+  defaults: {
+    carrierId: string;
+    driverName: string;
+    isDriver: boolean;
+    carrierName?: string | null;
+    /** The tractor of this driver's latest handoff, prefilled. */
+    tractorNumber?: string | null;
+  };
 };
 const fetcher = (url: string) => fetch(url).then((r) => r.json());
 
-export function HandoffForm({
-  condition: initial,
-  kind,
-  asksPerishable = false,
-  timeZone,
-  carriers,
-  defaults,
-}: Props) {
+/** The gate form in steps: who and what, fuel and reefer readings (reefers), safety, the rest, confirm. */
+export function HandoffForm(props: HandoffFormProps) {
+  const { condition: initial, kind, asksPerishable = false, defaults } = props;
   const { data } = useSWR<TrailerCondition>(`/api/trailers/${initial.trailer.id}/condition`, fetcher, {
     fallbackData: initial,
     revalidateOnMount: false,
@@ -46,27 +43,44 @@ export function HandoffForm({
   const condition = data ?? initial;
   const { trailer, checklist, last } = condition;
   const isReefer = trailer.kind === 'reefer';
-  const groups = safetyGroups(checklist);
+  const groups = useMemo(() => safetyGroups(checklist), [checklist]);
+  const items = useMemo(
+    () => checklist.zones.flatMap((z) => z.items).filter((i) => i.kind !== 'reading'),
+    [checklist],
+  );
+  const itemKeys = useMemo(() => items.map((i) => i.key), [items]);
+  const ctx: StepContext = useMemo(
+    () => ({
+      isReefer,
+      asksPerishable,
+      safetyKeys: items.filter((i) => i.isSafety).map((i) => i.key),
+      otherKeys: items.filter((i) => !i.isSafety).map((i) => i.key),
+    }),
+    [isReefer, asksPerishable, items],
+  );
+  const steps = useMemo(() => gateSteps(isReefer), [isReefer]);
   const make = useCallback(
-    () =>
-      newDraft({
+    () => ({
+      ...newDraft({
         idempotencyKey: newDraftKey(),
         trailerId: trailer.id,
         kind,
         carrierId: defaults.carrierId,
         driverName: defaults.driverName,
       }),
-    [trailer.id, kind, defaults.carrierId, defaults.driverName],
+      tractorNumber: defaults.tractorNumber ?? '',
+    }),
+    [trailer.id, kind, defaults.carrierId, defaults.driverName, defaults.tractorNumber],
   );
   const { draft, setDraft, discard, forget } = useDraft(trailer.id, kind, make);
-  const itemKeys = useMemo(() => checklist.zones.flatMap((z) => z.items.map((i) => i.key)), [checklist]);
   const { send, errors, errorRound, refusal, status } = useSubmit(draft, setDraft, forget, {
     isReefer,
     last,
     itemKeys,
   });
+  const { open, setOpen, inputHandlers } = useSteps(steps, draft, ctx, errors, errorRound);
   const formRef = useRef<HTMLFormElement>(null);
-  useFocusFirstError(formRef, errorRound, Boolean(draft));
+  useFocusFirstError(formRef, errorRound, open === firstStepWithError(steps, errors, ctx));
 
   if (!draft) return <p className="text-gate">Opening the form…</p>;
   // functional updates: several taps (or one zone-wide "Same as last") may land before the next render
@@ -74,106 +88,58 @@ export function HandoffForm({
   const setItem = (key: string, v: DraftItem | undefined) =>
     setDraft((prev) => {
       if (!prev) return prev;
-      const items = { ...prev.items };
-      if (v) items[key] = v;
-      else delete items[key];
-      return { ...prev, items };
+      const next = { ...prev.items };
+      if (v) next[key] = v;
+      else delete next[key];
+      return { ...prev, items: next };
     });
+  const count = (keys: readonly string[]) =>
+    [keys.filter((k) => draft.items[k]?.condition).length, keys.length] as [number, number];
+  const counts = { safety: count(ctx.safetyKeys), rest: count(ctx.otherKeys) };
+  const at = steps.indexOf(open);
 
   return (
     <form
       ref={formRef}
-      className="space-y-6"
+      className="space-y-3"
       noValidate
+      {...inputHandlers}
       onSubmit={(e) => {
         e.preventDefault();
         void send(draft);
       }}
     >
-      <Caution title="Your inspection">{CAUTIONS.inspection}</Caution>
-      {kind === 'hook' ? <Caution title="Coupling checks">{CAUTIONS.coupling}</Caution> : null}
-      <WhoFields
-        draft={draft}
-        set={set}
-        carriers={carriers}
-        isDriver={defaults.isDriver}
-        carrierName={defaults.carrierName ?? null}
-        errors={errors}
-      />
-      {asksPerishable || errors.isLoadPerishable ? (
-        <div>
-          <Choice
-            label={HOOK_WORDS.perishableQuestion}
-            options={[
-              { value: true, label: 'Yes, perishable', tone: 'warn' },
-              { value: false, label: 'No, not perishable', tone: 'ok' },
-            ]}
-            value={draft.isLoadPerishable ?? null}
-            onChange={(v) => set({ isLoadPerishable: v })}
-          />
-          <FieldError id="isLoadPerishable-error" messages={errors.isLoadPerishable} />
-        </div>
-      ) : null}
-      {isReefer ? (
-        <FuelButtons
-          value={draft.fuelEighths}
-          onChange={(v) => set({ fuelEighths: v })}
-          last={condition.lastReadings?.fuelEighths}
-          error={errors.fuelEighths}
-        />
-      ) : null}
-      {isReefer ? (
-        <ReeferFields
-          reefer={draft.reefer}
-          set={(p) => setDraft((prev) => prev && { ...prev, reefer: { ...prev.reefer, ...p } })}
-          errors={errors}
-        />
-      ) : null}
-      {Object.keys(last).length ? (
-        <button
-          type="button"
-          onClick={() => {
-            for (const z of checklist.zones) {
-              for (const [key, v] of Object.entries(sameAsLastForZone(z.items, draft, last))) setItem(key, v);
-            }
-          }}
-          className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-on-fill"
+      <p aria-live="polite" className="text-gate font-bold text-ink-soft">
+        Step {at + 1} of {steps.length} · {STEP_TITLES[open]}
+      </p>
+      {steps.map((step, i) => (
+        <StepCard
+          key={step}
+          id={step}
+          number={i + 1}
+          title={STEP_TITLES[step]}
+          summary={stepSummary(step, draft, counts)}
+          isOpen={open === step}
+          isComplete={isStepComplete(step, draft, ctx)}
+          onOpen={() => setOpen(step)}
+          onNext={step === 'confirm' ? undefined : () => setOpen(steps[i + 1])}
+          nextLabel={step === 'confirm' ? undefined : `Next: ${STEP_TITLES[steps[i + 1]]}`}
         >
-          {SAFETY_WORDS.sameAsLastAll}
-        </button>
-      ) : null}
-      {checklist.zones
-        .filter((z) => z.key !== 'readings')
-        .map((z) => (
-          <ZoneSection
-            key={z.key}
-            zone={z}
+          <GateStep
+            step={step}
+            form={props}
+            condition={condition}
             draft={draft}
-            last={last}
+            set={set}
+            setDraft={setDraft}
             setItem={setItem}
-            trailerId={trailer.id}
-            fieldErrors={errors}
             groups={groups}
-            timeZone={timeZone}
+            items={items}
+            errors={errors}
+            submit={{ status, refusal, discard }}
           />
-        ))}
-      <Textarea
-        label="Note for the record (optional)"
-        name="note"
-        value={draft.note}
-        onChange={(e) => set({ note: e.target.value })}
-        rows={2}
-        maxLength={HANDOFF_LIMITS.note}
-        error={errors.note}
-      />
-      <SubmitBar kind={kind} status={status} refusal={refusal} />
-      <button
-        type="button"
-        onClick={discard}
-        className="min-h-tap w-full text-gate-sm text-ink-soft underline"
-      >
-        Discard this draft
-      </button>
+        </StepCard>
+      ))}
     </form>
   );
 }

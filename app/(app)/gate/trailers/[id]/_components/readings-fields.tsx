@@ -17,10 +17,7 @@ export function FuelButtons({
   error?: string[];
 }) {
   return (
-    <section aria-labelledby="fuel-title" className="space-y-1">
-      <h2 id="fuel-title" className="text-gate-xl font-bold">
-        Fuel
-      </h2>
+    <div className="space-y-1">
       <p className="text-gate-sm text-ink-soft">
         Reefer tank gauge in eighths{last !== null && last !== undefined ? `; last record ${last}/8` : ''}.
       </p>
@@ -30,6 +27,7 @@ export function FuelButtons({
         columns={3}
         value={value}
         onChange={onChange}
+        errorId={error?.length ? 'fuelEighths-error' : undefined}
         options={Array.from({ length: 9 }, (_, n) => ({
           value: n,
           label: n === 8 ? 'Full 8/8' : n === 0 ? 'Empty 0/8' : `${n}/8`,
@@ -37,10 +35,14 @@ export function FuelButtons({
         }))}
       />
       <FieldError id="fuelEighths-error" messages={error} />
-    </section>
+    </div>
   );
 }
 
+/**
+ * The reefer's readings. The typed values come first and the pre-trip result last, so the tap
+ * that answers the step can also close it (the form moves on when a tap completes a step).
+ */
 export function ReeferFields({
   reefer,
   set,
@@ -51,17 +53,16 @@ export function ReeferFields({
   errors: Record<string, string[]>;
 }) {
   const err = (k: string) => errors[`reefer.${k}`];
+  const errorId = (k: string) => (err(k)?.length ? `${k}-error` : undefined);
   return (
-    <section aria-labelledby="reefer-title" className="space-y-3">
-      <h2 id="reefer-title" className="text-gate-xl font-bold">
-        Reefer readings
-      </h2>
+    <div className="space-y-3">
       <Choice
         label="Unit running?"
         options={YES_NO('Running', 'Off', 'warn')}
         value={reefer.isUnitOn}
         onChange={(v) => set({ isUnitOn: v })}
         columns={2}
+        errorId={errorId('isUnitOn')}
       />
       <FieldError id="isUnitOn-error" messages={err('isUnitOn')} />
       <div className="grid grid-cols-2 gap-2">
@@ -102,11 +103,21 @@ export function ReeferFields({
         onChange={(e) => set({ engineHours: e.target.value })}
         error={err('engineHours')}
       />
+      <Field
+        label="When was the last pre-trip run?"
+        hint="Leave empty if it was not run."
+        name="preTripAt"
+        type="datetime-local"
+        value={reefer.preTripAt}
+        onChange={(e) => set({ preTripAt: e.target.value })}
+        error={err('preTripAt')}
+      />
       <Choice
         label="Last pre-trip"
         columns={3}
         value={reefer.preTripResult}
-        onChange={(v) => set({ preTripResult: v })}
+        onChange={(v) => set(v === 'not_run' ? { preTripResult: v, preTripAt: '' } : { preTripResult: v })}
+        errorId={errorId('preTripResult')}
         options={[
           { value: 'pass', label: 'Passed', tone: 'ok' },
           { value: 'fail', label: 'Failed', tone: 'danger' },
@@ -114,16 +125,6 @@ export function ReeferFields({
         ]}
       />
       <FieldError id="preTripResult-error" messages={err('preTripResult')} />
-      {reefer.preTripResult && reefer.preTripResult !== 'not_run' ? (
-        <Field
-          label="When was it run?"
-          name="preTripAt"
-          type="datetime-local"
-          value={reefer.preTripAt}
-          onChange={(e) => set({ preTripAt: e.target.value })}
-          error={err('preTripAt')}
-        />
-      ) : null}
-    </section>
+    </div>
   );
 }

@@ -21,12 +21,14 @@ export function WhoFields({
   errors: Record<string, string[]>;
 }) {
   return (
-    <section aria-labelledby="who-title" className="space-y-2">
-      <h2 id="who-title" className="text-gate-xl font-bold">
-        Driver and tractor
-      </h2>
+    <div className="space-y-2">
       {isDriver ? (
         <>
+          {/* a signed-in driver is recorded from the account: no name to type, no carrier to pick */}
+          <p className="text-gate">
+            Driver: <span className="font-bold">{draft.driverName}</span>
+          </p>
+          <FieldError id="driverName-error" messages={errors.driverName} />
           <p className="text-gate">
             Carrier: <span className="font-bold">{carrierName}</span>
           </p>
@@ -48,15 +50,17 @@ export function WhoFields({
           ))}
         </Select>
       )}
-      <Field
-        label="Driver name"
-        name="driverName"
-        value={draft.driverName}
-        onChange={(e) => set({ driverName: e.target.value })}
-        autoComplete="name"
-        maxLength={L.driverName}
-        error={errors.driverName}
-      />
+      {isDriver ? null : (
+        <Field
+          label="Driver name"
+          name="driverName"
+          value={draft.driverName}
+          onChange={(e) => set({ driverName: e.target.value })}
+          autoComplete="name"
+          maxLength={L.driverName}
+          error={errors.driverName}
+        />
+      )}
       <Field
         label="Tractor number"
         name="tractorNumber"
@@ -66,17 +70,6 @@ export function WhoFields({
         autoCapitalize="characters"
         error={errors.tractorNumber}
       />
-      <Choice
-        label="Loaded or empty?"
-        columns={2}
-        value={draft.isLoaded}
-        onChange={(v) => set({ isLoaded: v })}
-        options={[
-          { value: true, label: 'Loaded' },
-          { value: false, label: 'Empty' },
-        ]}
-      />
-      <FieldError id="isLoaded-error" messages={errors.isLoaded} />
       <Field
         label="Seal number"
         name="sealNumber"
@@ -86,6 +79,18 @@ export function WhoFields({
         autoCapitalize="characters"
         error={errors.sealNumber}
       />
-    </section>
+      <Choice
+        label="Loaded or empty?"
+        columns={2}
+        value={draft.isLoaded}
+        onChange={(v) => set({ isLoaded: v })}
+        errorId={errors.isLoaded?.length ? 'isLoaded-error' : undefined}
+        options={[
+          { value: true, label: 'Loaded' },
+          { value: false, label: 'Empty' },
+        ]}
+      />
+      <FieldError id="isLoaded-error" messages={errors.isLoaded} />
+    </div>
   );
 }
