@@ -1,6 +1,7 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { expect, test, type Locator, type Page } from '@playwright/test';
 import { LabelPage } from './pages/label-page';
+import { baseURL } from '../../playwright.config';
 import { ACCOUNTS, SignInPage } from './pages/sign-in-page';
 
 // The unchanged path, scan to receipt: an empty reefer whose every item is as last recorded.
@@ -14,12 +15,17 @@ const MAX_TAPS = 12;
 const PHONE = { width: 393, height: 851 };
 const MAX_STEP_PX = 3 * PHONE.height;
 test.use({ viewport: PHONE });
+// README pictures of each step of the drop, light theme (HM_SCREENSHOTS=1 bash scripts/test.sh gate-taps)
+const shots = process.env.HM_SCREENSHOTS === '1';
 
 class Counted {
   taps = 0;
   chars = 0;
   heights: Record<string, number> = {};
-  constructor(private readonly page: Page) {}
+  constructor(
+    private readonly page: Page,
+    readonly kind: 'drop' | 'hook',
+  ) {}
   async tap(target: Locator) {
     this.taps++;
     await target.click();
@@ -50,12 +56,18 @@ async function reach(c: Counted, page: Page, title: string) {
 
 /** The open step's height on the phone, kept per step title. */
 async function measure(c: Counted, page: Page, title: string) {
-  const box = await page.locator('form section[id^="step-"]').boundingBox();
+  const open = page.locator('form section[id^="step-"]');
+  const box = await open.boundingBox();
   c.heights[title] = Math.round(box!.height);
+  if (shots && c.kind === 'drop') {
+    const n = Object.keys(c.heights).length;
+    const slug = title.toLowerCase().replace(/[^a-z]+/g, '-');
+    await open.screenshot({ path: `docs/screenshots/gate-step-${n}-${slug}.png` });
+  }
 }
 
 async function unchanged(page: Page, trailerId: string, kind: 'drop' | 'hook') {
-  const c = new Counted(page);
+  const c = new Counted(page, kind);
   let typedFields = 0;
   // The scan: one tap on "Scan trailer label"; the camera then opens the trailer's page. The
   // scanner itself is covered by scan-label.spec.ts and gate-handoff.spec.ts (fake camera).
@@ -104,7 +116,11 @@ async function unchanged(page: Page, trailerId: string, kind: 'drop' | 'hook') {
   return { taps: c.taps, chars: c.chars, typedFields, stepHeights: c.heights };
 }
 
-test('an unchanged drop and hook each take at most 12 taps from scan to receipt', async ({ page }) => {
+test('an unchanged drop and hook each take at most 12 taps from scan to receipt', async ({
+  page,
+  context,
+}) => {
+  if (shots) await context.addCookies([{ name: 'hm-theme', value: 'light', url: baseURL }]);
   await new SignInPage(page).signIn('driver');
   await expect(page).toHaveURL(new RegExp(`${ACCOUNTS.driver.home}$`));
   const trailerId = await new LabelPage(page).trailerId(UNIT);
