@@ -13,8 +13,12 @@ export class HandoffFormPage {
 
   /** Opens a step unless it is open (a folded step is one button: "3. Safety checks: …"). */
   async openStep(title: string) {
-    if (await this.stepHeading(title).isVisible()) return;
-    await this.page.getByRole('button', { name: new RegExp(`^\\d\\. ${escape(title)}:`) }).click();
+    const heading = this.stepHeading(title);
+    const folded = this.page.getByRole('button', { name: new RegExp(`^\\d\\. ${escape(title)}:`) });
+    // the draft is read from the phone first: wait for the step to show, open or folded
+    await expect(heading.or(folded)).toBeVisible();
+    if (await heading.isVisible()) return;
+    await folded.click();
     await expect(this.stepHeading(title)).toBeVisible();
   }
 

@@ -1,7 +1,8 @@
 'use client';
 
 import type { Dispatch, SetStateAction } from 'react';
-import { CAUTIONS, Caution } from '@/app/_components/caution';
+import { useTranslations } from 'next-intl';
+import { Caution } from '@/app/_components/caution';
 import { FieldError, Textarea } from '@/app/_components/field';
 import type { ChecklistItem, SafetyGroup } from '@/lib/engine';
 import { sameAsLastForZone, type Draft, type DraftItem } from '@/lib/handoffs/draft';
@@ -49,12 +50,14 @@ export function GateStep({
   submit,
 }: Props) {
   const { trailer, checklist, last } = condition;
+  const t = useTranslations('Handoff');
+  const c = useTranslations('Cautions');
   switch (step) {
     case 'who':
       return (
         <>
-          <Caution title="Your inspection">{CAUTIONS.inspection}</Caution>
-          {form.kind === 'hook' ? <Caution title="Coupling checks">{CAUTIONS.coupling}</Caution> : null}
+          <Caution title={c('titles.inspection')}>{c('inspection')}</Caution>
+          {form.kind === 'hook' ? <Caution title={t('couplingTitle')}>{c('coupling')}</Caution> : null}
           <WhoFields
             draft={draft}
             set={set}
@@ -68,8 +71,8 @@ export function GateStep({
               <Choice
                 label={HOOK_WORDS.perishableQuestion}
                 options={[
-                  { value: true, label: 'Yes, perishable', tone: 'warn' },
-                  { value: false, label: 'No, not perishable', tone: 'ok' },
+                  { value: true, label: t('who.perishableYes'), tone: 'warn' },
+                  { value: false, label: t('who.perishableNo'), tone: 'ok' },
                 ]}
                 value={draft.isLoadPerishable ?? null}
                 onChange={(v) => set({ isLoadPerishable: v })}
@@ -92,7 +95,7 @@ export function GateStep({
     case 'reefer':
       return (
         <>
-          <Caution title="Reefer unit">{CAUTIONS.reefer}</Caution>
+          <Caution title={c('titles.reefer')}>{c('reefer')}</Caution>
           <ReeferFields
             reefer={draft.reefer}
             set={(p) => setDraft((prev) => prev && { ...prev, reefer: { ...prev.reefer, ...p } })}
@@ -148,7 +151,7 @@ export function GateStep({
       return (
         <>
           <Textarea
-            label="Note for the record (optional)"
+            label={t('confirm.note')}
             name="note"
             value={draft.note}
             onChange={(e) => set({ note: e.target.value })}
@@ -162,7 +165,7 @@ export function GateStep({
             onClick={submit.discard}
             className="min-h-tap w-full text-gate-sm text-ink-soft underline"
           >
-            Discard this draft
+            {t('confirm.discard')}
           </button>
         </>
       );

@@ -1,15 +1,22 @@
 'use client';
 
 import { useCallback, useMemo, useRef } from 'react';
+import { useTranslations } from 'next-intl';
 import useSWR from 'swr';
 import { safetyGroups } from '@/lib/engine/safety';
 import { newDraft, type Draft, type DraftItem } from '@/lib/handoffs/draft';
-import { firstStepWithError, gateSteps, isStepComplete, type StepContext } from '@/lib/handoffs/steps';
+import {
+  firstStepWithError,
+  gateSteps,
+  isStepComplete,
+  type StepContext,
+  type StepKey,
+} from '@/lib/handoffs/steps';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { useFocusFirstError } from './focus-first-error';
 import { GateStep } from './gate-step';
 import { StepCard } from './step-card';
-import { STEP_TITLES, stepSummary } from './step-summary';
+import { stepSummary } from './step-summary';
 import { newDraftKey, useDraft } from './use-draft';
 import { useSteps } from './use-steps';
 import { useSubmit } from './use-submit';
@@ -36,6 +43,7 @@ const fetcher = (url: string) => fetch(url).then((r) => r.json());
 /** The gate form in steps: who and what, fuel and reefer readings (reefers), safety, the rest, confirm. */
 export function HandoffForm(props: HandoffFormProps) {
   const { condition: initial, kind, asksPerishable = false, defaults } = props;
+  const t = useTranslations('Handoff');
   const { data } = useSWR<TrailerCondition>(`/api/trailers/${initial.trailer.id}/condition`, fetcher, {
     fallbackData: initial,
     revalidateOnMount: false,
@@ -82,7 +90,9 @@ export function HandoffForm(props: HandoffFormProps) {
   const formRef = useRef<HTMLFormElement>(null);
   useFocusFirstError(formRef, errorRound, open === firstStepWithError(steps, errors, ctx));
 
-  if (!draft) return <p className="text-gate">Opening the form…</p>;
+  if (!draft) return <p className="text-gate">{t('opening')}</p>;
+  const title = (s: StepKey) => t(`steps.${s}`);
+  const say = (key: string, values?: Record<string, string | number>) => t(`summary.${key}`, values);
   // functional updates: several taps (or one zone-wide "Same as last") may land before the next render
   const set = (p: Partial<Draft>) => setDraft((prev) => prev && { ...prev, ...p });
   const setItem = (key: string, v: DraftItem | undefined) =>
@@ -110,20 +120,20 @@ export function HandoffForm(props: HandoffFormProps) {
       }}
     >
       <p aria-live="polite" className="text-gate font-bold text-ink-soft">
-        Step {at + 1} of {steps.length} · {STEP_TITLES[open]}
+        {t('progress', { number: at + 1, total: steps.length, title: title(open) })}
       </p>
       {steps.map((step, i) => (
         <StepCard
           key={step}
           id={step}
           number={i + 1}
-          title={STEP_TITLES[step]}
-          summary={stepSummary(step, draft, counts)}
+          title={title(step)}
+          summary={stepSummary(step, draft, counts, say)}
           isOpen={open === step}
           isComplete={isStepComplete(step, draft, ctx)}
           onOpen={() => setOpen(step)}
           onNext={step === 'confirm' ? undefined : () => setOpen(steps[i + 1])}
-          nextLabel={step === 'confirm' ? undefined : `Next: ${STEP_TITLES[steps[i + 1]]}`}
+          nextLabel={step === 'confirm' ? undefined : t('next', { title: title(steps[i + 1]) })}
         >
           <GateStep
             step={step}

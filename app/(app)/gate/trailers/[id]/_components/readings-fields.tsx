@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { Field, FieldError } from '@/app/_components/field';
 import type { Draft } from '@/lib/handoffs/draft';
 import { HANDOFF_LIMITS as L } from '@/lib/handoffs/limits';
@@ -16,13 +17,14 @@ export function FuelButtons({
   last: number | null | undefined;
   error?: string[];
 }) {
+  const t = useTranslations('Handoff.fuel');
   return (
     <div className="space-y-1">
       <p className="text-gate-sm text-ink-soft">
-        Reefer tank gauge in eighths{last !== null && last !== undefined ? `; last record ${last}/8` : ''}.
+        {last !== null && last !== undefined ? t('gaugeWithLast', { last }) : t('gauge')}
       </p>
       <Choice
-        label="Fuel in eighths"
+        label={t('label')}
         hideLabel
         columns={3}
         value={value}
@@ -30,7 +32,7 @@ export function FuelButtons({
         errorId={error?.length ? 'fuelEighths-error' : undefined}
         options={Array.from({ length: 9 }, (_, n) => ({
           value: n,
-          label: n === 8 ? 'Full 8/8' : n === 0 ? 'Empty 0/8' : `${n}/8`,
+          label: n === 8 ? t('full') : n === 0 ? t('empty') : `${n}/8`,
           tone: n >= 8 ? 'ok' : n >= 4 ? 'warn' : 'danger',
         }))}
       />
@@ -52,13 +54,14 @@ export function ReeferFields({
   set: (p: Partial<Draft['reefer']>) => void;
   errors: Record<string, string[]>;
 }) {
+  const t = useTranslations('Handoff.reefer');
   const err = (k: string) => errors[`reefer.${k}`];
   const errorId = (k: string) => (err(k)?.length ? `${k}-error` : undefined);
   return (
     <div className="space-y-3">
       <Choice
-        label="Unit running?"
-        options={YES_NO('Running', 'Off', 'warn')}
+        label={t('running')}
+        options={YES_NO(t('on'), t('off'), 'warn')}
         value={reefer.isUnitOn}
         onChange={(v) => set({ isUnitOn: v })}
         columns={2}
@@ -67,7 +70,7 @@ export function ReeferFields({
       <FieldError id="isUnitOn-error" messages={err('isUnitOn')} />
       <div className="grid grid-cols-2 gap-2">
         <Field
-          label="Setpoint °F"
+          label={t('setpoint')}
           name="setpointF"
           type="number"
           inputMode="decimal"
@@ -79,7 +82,7 @@ export function ReeferFields({
           error={err('setpointF')}
         />
         <Field
-          label="Return air °F"
+          label={t('returnAir')}
           name="returnAirF"
           type="number"
           inputMode="decimal"
@@ -92,7 +95,7 @@ export function ReeferFields({
         />
       </div>
       <Field
-        label="Engine hours"
+        label={t('engineHours')}
         name="engineHours"
         type="number"
         inputMode="decimal"
@@ -104,8 +107,8 @@ export function ReeferFields({
         error={err('engineHours')}
       />
       <Field
-        label="When was the last pre-trip run?"
-        hint="Leave empty if it was not run."
+        label={t('preTripAt')}
+        hint={t('preTripAtHint')}
         name="preTripAt"
         type="datetime-local"
         value={reefer.preTripAt}
@@ -113,15 +116,15 @@ export function ReeferFields({
         error={err('preTripAt')}
       />
       <Choice
-        label="Last pre-trip"
+        label={t('preTrip')}
         columns={3}
         value={reefer.preTripResult}
         onChange={(v) => set(v === 'not_run' ? { preTripResult: v, preTripAt: '' } : { preTripResult: v })}
         errorId={errorId('preTripResult')}
         options={[
-          { value: 'pass', label: 'Passed', tone: 'ok' },
-          { value: 'fail', label: 'Failed', tone: 'danger' },
-          { value: 'not_run', label: 'Not run', tone: 'warn' },
+          { value: 'pass', label: t('passed'), tone: 'ok' },
+          { value: 'fail', label: t('failed'), tone: 'danger' },
+          { value: 'not_run', label: t('notRun'), tone: 'warn' },
         ]}
       />
       <FieldError id="preTripResult-error" messages={err('preTripResult')} />

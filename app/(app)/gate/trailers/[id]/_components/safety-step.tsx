@@ -1,7 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import { CAUTIONS, Caution } from '@/app/_components/caution';
+import { useTranslations } from 'next-intl';
+import { Caution } from '@/app/_components/caution';
 import type { ChecklistItem, SafetyGroup } from '@/lib/engine';
 import type { Draft, DraftItem } from '@/lib/handoffs/draft';
 import type { LastSeen } from '@/lib/handoffs/last-condition';
@@ -26,6 +27,7 @@ type Props = {
  */
 export function SafetyStep({ groups, items, draft, last, setItem, trailerId, errors, timeZone }: Props) {
   const [opened, setOpened] = useState<Record<string, boolean>>({});
+  const c = useTranslations('Cautions');
   const byKey = new Map(items.map((i) => [i.key, i]));
   const grouped = new Set(groups.flatMap((g) => g.itemKeys));
   const loose = items.filter((i) => !grouped.has(i.key));
@@ -43,7 +45,7 @@ export function SafetyStep({ groups, items, draft, last, setItem, trailerId, err
   );
   return (
     <div className="space-y-3">
-      <Caution title="Before going under the trailer">{CAUTIONS.underTrailer}</Caution>
+      <Caution title={c('titles.underTrailer')}>{c('underTrailer')}</Caution>
       <p className="text-gate-sm">{SAFETY_WORDS.explain}</p>
       {groups.map((g) => {
         const needsLook = g.itemKeys.some(

@@ -1,42 +1,36 @@
 import type { Draft } from '@/lib/handoffs/draft';
 import type { StepKey } from '@/lib/handoffs/steps';
 
-export const STEP_TITLES: Record<StepKey, string> = {
-  who: 'Who and what',
-  fuel: 'Fuel',
-  reefer: 'Reefer readings',
-  safety: 'Safety checks',
-  rest: 'The rest of the box',
-  confirm: 'Confirm',
-};
+type Say = (key: string, values?: Record<string, string | number>) => string;
 
-const PRE_TRIP = { pass: 'pre-trip passed', fail: 'pre-trip failed', not_run: 'pre-trip not run' } as const;
+const PRE_TRIP = { pass: 'preTripPass', fail: 'preTripFail', not_run: 'preTripNotRun' } as const;
 
-/** The one line a folded step shows: the answers it holds, or what is still missing. */
+/** The one line a folded step shows: the answers it holds, or what is still missing (Handoff.summary). */
 export function stepSummary(
   step: StepKey,
   d: Draft,
   counts: { safety: [number, number]; rest: [number, number] },
+  t: Say,
 ): string {
   switch (step) {
     case 'who':
       return [
-        d.tractorNumber || 'no tractor yet',
-        d.isLoaded === null ? 'loaded or empty?' : d.isLoaded ? 'loaded' : 'empty',
+        d.tractorNumber || t('noTractor'),
+        t(d.isLoaded === null ? 'loadedOrEmpty' : d.isLoaded ? 'loaded' : 'empty'),
       ].join(' · ');
     case 'fuel':
-      return d.fuelEighths === null ? 'not read yet' : `${d.fuelEighths}/8`;
+      return d.fuelEighths === null ? t('fuelNotRead') : `${d.fuelEighths}/8`;
     case 'reefer':
       return [
-        d.reefer.isUnitOn === null ? null : d.reefer.isUnitOn ? 'running' : 'off',
-        d.reefer.preTripResult ? PRE_TRIP[d.reefer.preTripResult] : 'pre-trip?',
+        d.reefer.isUnitOn === null ? null : t(d.reefer.isUnitOn ? 'running' : 'off'),
+        t(d.reefer.preTripResult ? PRE_TRIP[d.reefer.preTripResult] : 'preTripMissing'),
       ]
         .filter(Boolean)
         .join(' · ');
     case 'safety':
-      return `${counts.safety[0]} of ${counts.safety[1]} answered`;
+      return t('answered', { done: counts.safety[0], total: counts.safety[1] });
     case 'rest':
-      return `${counts.rest[0]} of ${counts.rest[1]} checked`;
+      return t('checked', { done: counts.rest[0], total: counts.rest[1] });
     case 'confirm':
       return '';
   }

@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { Field, FieldError, Select } from '@/app/_components/field';
 import type { Draft } from '@/lib/handoffs/draft';
 import { HANDOFF_LIMITS as L } from '@/lib/handoffs/limits';
@@ -20,29 +21,30 @@ export function WhoFields({
   carrierName: string | null;
   errors: Record<string, string[]>;
 }) {
+  const t = useTranslations('Handoff.who');
   return (
     <div className="space-y-2">
       {isDriver ? (
         <>
           {/* a signed-in driver is recorded from the account: no name to type, no carrier to pick */}
           <p className="text-gate">
-            Driver: <span className="font-bold">{draft.driverName}</span>
+            {t('driver')} <span className="font-bold">{draft.driverName}</span>
           </p>
           <FieldError id="driverName-error" messages={errors.driverName} />
           <p className="text-gate">
-            Carrier: <span className="font-bold">{carrierName}</span>
+            {t('carrier')} <span className="font-bold">{carrierName}</span>
           </p>
           <FieldError id="carrierId-error" messages={errors.carrierId} />
         </>
       ) : (
         <Select
-          label="Carrier"
+          label={t('carrierLabel')}
           name="carrierId"
           value={draft.carrierId}
           onChange={(e) => set({ carrierId: e.target.value })}
           error={errors.carrierId}
         >
-          <option value="">Choose the carrier</option>
+          <option value="">{t('chooseCarrier')}</option>
           {carriers.map((c) => (
             <option key={c.id} value={c.id}>
               {c.name} ({c.scac})
@@ -52,7 +54,7 @@ export function WhoFields({
       )}
       {isDriver ? null : (
         <Field
-          label="Driver name"
+          label={t('driverName')}
           name="driverName"
           value={draft.driverName}
           onChange={(e) => set({ driverName: e.target.value })}
@@ -62,7 +64,7 @@ export function WhoFields({
         />
       )}
       <Field
-        label="Tractor number"
+        label={t('tractor')}
         name="tractorNumber"
         value={draft.tractorNumber}
         onChange={(e) => set({ tractorNumber: e.target.value })}
@@ -71,7 +73,7 @@ export function WhoFields({
         error={errors.tractorNumber}
       />
       <Field
-        label="Seal number"
+        label={t('seal')}
         name="sealNumber"
         value={draft.sealNumber}
         onChange={(e) => set({ sealNumber: e.target.value })}
@@ -80,14 +82,14 @@ export function WhoFields({
         error={errors.sealNumber}
       />
       <Choice
-        label="Loaded or empty?"
+        label={t('loadedQuestion')}
         columns={2}
         value={draft.isLoaded}
         onChange={(v) => set({ isLoaded: v })}
         errorId={errors.isLoaded?.length ? 'isLoaded-error' : undefined}
         options={[
-          { value: true, label: 'Loaded' },
-          { value: false, label: 'Empty' },
+          { value: true, label: t('loaded') },
+          { value: false, label: t('empty') },
         ]}
       />
       <FieldError id="isLoaded-error" messages={errors.isLoaded} />
