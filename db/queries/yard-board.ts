@@ -2,6 +2,7 @@ import 'server-only';
 import { and, asc, eq, isNull } from 'drizzle-orm';
 import { db } from '@/db';
 import { holds, policies, terminals, trailers, yardRows, yardSpots } from '@/db/schema';
+import { listRows } from './yard-layout';
 import { DEFAULT_LOCALE } from '@/lib/i18n/locales';
 import { storedText } from '@/lib/i18n/reasons';
 import { terminalPolicyOf } from '@/lib/terminal/policy';
@@ -24,11 +25,7 @@ export async function getBoard(
     .limit(1);
   if (!terminal) return null;
   const [rows, spots, openHolds] = await Promise.all([
-    db
-      .select({ id: yardRows.id, name: yardRows.name })
-      .from(yardRows)
-      .where(eq(yardRows.terminalId, terminalId))
-      .orderBy(asc(yardRows.sortOrder), asc(yardRows.name)),
+    listRows(terminalId),
     db
       .select({
         id: yardSpots.id,

@@ -3,14 +3,19 @@ import { and, asc, eq, isNull, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { trailers, yardRows, yardSpots } from '@/db/schema';
 
+/** A terminal's yard rows in layout order (the board and the layout editor both start from them). */
+export function listRows(terminalId: string) {
+  return db
+    .select({ id: yardRows.id, name: yardRows.name })
+    .from(yardRows)
+    .where(eq(yardRows.terminalId, terminalId))
+    .orderBy(asc(yardRows.sortOrder), asc(yardRows.name));
+}
+
 /** Rows and live or retired spots of one terminal, in layout order, with each spot's occupant. */
 export async function listLayout(terminalId: string) {
   const [rows, spots] = await Promise.all([
-    db
-      .select({ id: yardRows.id, name: yardRows.name })
-      .from(yardRows)
-      .where(eq(yardRows.terminalId, terminalId))
-      .orderBy(asc(yardRows.sortOrder), asc(yardRows.name)),
+    listRows(terminalId),
     db
       .select({
         id: yardSpots.id,

@@ -15,8 +15,10 @@ export const LABEL_QR_MARGIN = 4;
 type Mask = 0 | 1 | 2 | 3 | 4 | 5 | 6 | 7;
 
 // @zxing/library is CommonJS to Node: under Node's own ES module loader (Playwright's test files)
-// its classes sit on `default`; bundlers and vitest give them as named exports.
-const zxing = (zxingModule as unknown as { default?: typeof zxingModule }).default ?? zxingModule;
+// its classes sit on `default`; bundlers and vitest give them as named exports. Read through
+// Reflect.get, so the bundler does not take it for a static import of a default export it knows is
+// missing (a build warning otherwise).
+const zxing = (Reflect.get(zxingModule, 'default') as typeof zxingModule | undefined) ?? zxingModule;
 const { BinaryBitmap, HybridBinarizer, QRCodeReader, RGBLuminanceSource } = zxing;
 
 /** Whether the scanner's decoder reads `link` back from the symbol drawn with `mask` (4 px modules). */

@@ -52,6 +52,33 @@ test('every page answer carries the security headers, with a fresh nonce each ti
   expect(redirect.headers()['content-security-policy']).toBeTruthy();
 });
 
+test('a form post the framework cannot read is the sender’s fault: 400 with headers, never 500', async ({
+  request,
+}) => {
+  // A multipart body that never uses the boundary its Content-Type announces (RFC 7578 §4.1: each
+  // part starts with "--" + boundary), and one whose Content-Type has no boundary at all.
+  const cases = [
+    { type: 'multipart/form-data; boundary=----hm-never-used', body: 'no parts here at all' },
+    { type: 'multipart/form-data', body: '--x\r\nContent-Disposition: form-data; name="a"\r\n\r\n1' },
+  ];
+  for (const path of ['/login', '/gate', '/no-such-page']) {
+    for (const c of cases) {
+      const r = await request.post(path, {
+        headers: { 'content-type': c.type },
+        data: c.body,
+        maxRedirects: 0,
+      });
+      expect(r.status(), `${path} with ${c.type}`).toBe(400);
+      expect(await r.json()).toMatchObject({ code: 'invalid' });
+      expect(r.headers()['x-content-type-options']).toBe('nosniff');
+    }
+  }
+  // a well-formed form post to a page is not refused by this check
+  const fine = await request.post('/login', { form: { a: '1' }, maxRedirects: 0 });
+  expect(fine.status()).not.toBe(400);
+  expect(fine.status()).toBeLessThan(500);
+});
+
 test('signing in and scanning at the gate with the camera raise no CSP violation', async () => {
   test.slow(); // launches its own browser with a fake camera
   const camera = await launchWithCamera(await writeLabelVideo('SLOT B07', '.data/e2e-csp-scan.y4m'));

@@ -99,45 +99,23 @@ describe('photo uploads through presigned URLs (local S3 fake)', () => {
   });
 
   it('refuses an oversize or non-image announcement before any upload URL is given', async () => {
-    const big = await refusedWith(
-      createUpload(
-        {
-          trailerId: ctx.trailerId,
-          itemKey: 'left_side.skin',
-          contentType: 'image/jpeg',
-          byteSize: 8 * 1024 * 1024 + 1,
-          sha256: 'a'.repeat(64),
-        },
-        { id: ctx.userId },
-      ),
-    );
-    expect(big.code).toBe('too_large');
-    const pdf = await refusedWith(
-      createUpload(
-        {
-          trailerId: ctx.trailerId,
-          itemKey: 'left_side.skin',
-          contentType: 'application/pdf',
-          byteSize: 100,
-          sha256: 'a'.repeat(64),
-        },
-        { id: ctx.userId },
-      ),
-    );
-    expect(pdf.code).toBe('unsupported_type');
-    const item = await refusedWith(
-      createUpload(
-        {
-          trailerId: ctx.trailerId,
-          itemKey: 'wheel.of_fortune',
-          contentType: 'image/png',
-          byteSize: 100,
-          sha256: 'a'.repeat(64),
-        },
-        { id: ctx.userId },
-      ),
-    );
-    expect(item.code).toBe('invalid');
+    const announce = (over: { itemKey?: string; contentType?: string; byteSize?: number }) =>
+      refusedWith(
+        createUpload(
+          {
+            trailerId: ctx.trailerId,
+            itemKey: 'left_side.skin',
+            contentType: 'image/jpeg',
+            byteSize: 100,
+            sha256: 'a'.repeat(64),
+            ...over,
+          },
+          { id: ctx.userId },
+        ),
+      );
+    expect((await announce({ byteSize: 8 * 1024 * 1024 + 1 })).code).toBe('too_large');
+    expect((await announce({ contentType: 'application/pdf' })).code).toBe('unsupported_type');
+    expect((await announce({ itemKey: 'wheel.of_fortune', contentType: 'image/png' })).code).toBe('invalid');
   });
 
   it('lets only the uploader complete an upload', async () => {
