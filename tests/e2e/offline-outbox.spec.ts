@@ -37,8 +37,9 @@ function draftKeys(page: Page): Promise<string[]> {
 }
 
 async function fillDrop(form: HandoffFormPage, page: Page, tractor: string) {
-  await form.fillHeader({ tractor, loaded: true });
+  await form.openStep('Who and what');
   await page.getByLabel('Seal number').fill('SL-40417');
+  await form.fillHeader({ tractor, loaded: true });
   await form.fillReefer({ fuel: 'Full 8/8', setpoint: '34', returnAir: '35', engineHours: '9650' });
   await form.sameAsLastEverywhere();
   await form.answerSafety(11);
@@ -62,6 +63,7 @@ test('no signal: the handoff form reloads offline with its draft, the drop waits
 
   await context.setOffline(true);
   await page.reload();
+  await form.openStep('Who and what');
   await expect(page.getByLabel('Tractor number')).toHaveValue('T-7702');
   await expect(page.getByLabel('Seal number')).toHaveValue('SL-40417');
   await expect(page.getByTestId('outbox-line')).toContainText('No signal');

@@ -104,6 +104,8 @@ test('a 4000×3000 photo leaves the phone within the policy, with progress, and 
   ]);
 
   const form = new HandoffFormPage(page);
+  await form.openStep('The rest of the box');
+  await form.showItems('Left side');
   const skin = form.item('Left side skin');
   await form.choose('Left side skin: condition', 'Damaged', skin);
   await skin

@@ -3,6 +3,7 @@ import type { Locale } from '@/lib/i18n/locales';
 // everyone editing one big file. Add a namespace: one file in en/, one in es/, one line in each list.
 import enAccount from './en/Account.json';
 import enGate from './en/Gate.json';
+import enHandoff from './en/Handoff.json';
 import enRefusals from './en/Refusals.json';
 import enCommon from './en/Common.json';
 import enErrors from './en/Errors.json';
@@ -28,6 +29,7 @@ import enYardRows from './en/YardRows.json';
 import enMail from './en/Mail.json';
 import esAccount from './es/Account.json';
 import esGate from './es/Gate.json';
+import esHandoff from './es/Handoff.json';
 import esRefusals from './es/Refusals.json';
 import esCommon from './es/Common.json';
 import esErrors from './es/Errors.json';
@@ -68,6 +70,7 @@ const en = {
   Cautions: enCautions,
   Account: enAccount,
   Gate: enGate,
+  Handoff: enHandoff,
   Language: enLanguage,
   Login: enLogin,
   Offline: enOffline,
@@ -101,6 +104,7 @@ export const MESSAGES: Record<Locale, Messages> = {
     Cautions: esCautions,
     Account: esAccount,
     Gate: esGate,
+    Handoff: esHandoff,
     Language: esLanguage,
     Login: esLogin,
     Offline: esOffline,

@@ -37,7 +37,7 @@ export default async function ReceiptPage({ params }: PageProps<'/gate/receipts/
       <a
         href={`/gate/receipts/${receipt.handoffId}/pdf`}
         download
-        className="block text-center text-gate font-bold text-brand underline"
+        className="flex min-h-tap items-center justify-center rounded-lg border-2 border-brand text-gate font-bold text-brand underline"
       >
         {t('receipt.pdf')}
       </a>

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { getLocale } from 'next-intl/server';
+import { getDriverGateDefaults } from '@/db/queries/gate-defaults';
 import { listOpenHolds } from '@/db/queries/handoffs';
 import { listCarriers } from '@/db/queries/trailers';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -32,6 +33,8 @@ export default async function HandoffStartPage({ params, searchParams }: PagePro
   // out of service first; a "yard moves only" hold refuses a hook the same way
   const refusing = outOfService.length ? outOfService : yardOnly;
   const carriers = user.role === 'driver' ? [] : await listCarriers();
+  const gateDefaults =
+    user.role === 'driver' ? await getDriverGateDefaults(user.id) : { tractorNumber: null };
 
   return (
     <div className="mx-auto max-w-xl space-y-4">
@@ -52,6 +55,7 @@ export default async function HandoffStartPage({ params, searchParams }: PagePro
               driverName: user.role === 'driver' ? user.name : '',
               isDriver: user.role === 'driver',
               carrierName: user.carrierName,
+              tractorNumber: gateDefaults.tractorNumber,
             }}
           />
         </>

@@ -16,6 +16,7 @@ export function Choice<T extends string | number | boolean>({
   onChange,
   columns = 0,
   hideLabel = false,
+  errorId,
 }: {
   label: string;
   options: Option<T>[];
@@ -23,9 +24,11 @@ export function Choice<T extends string | number | boolean>({
   onChange: (v: T) => void;
   columns?: number;
   hideLabel?: boolean;
+  /** The id of the message under the group when it has one: the group is then marked for focus. */
+  errorId?: string;
 }) {
   return (
-    <div role="group" aria-label={label}>
+    <div role="group" aria-label={label} aria-describedby={errorId} data-invalid={errorId ? true : undefined}>
       {hideLabel ? null : <p className="text-gate font-bold">{label}</p>}
       <div
         className={columns ? 'mt-1 grid gap-2' : 'mt-1 flex flex-wrap gap-2'}

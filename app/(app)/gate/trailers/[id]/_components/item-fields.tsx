@@ -2,6 +2,7 @@
 
 import type { ItemKind } from '@/lib/engine';
 import type { DraftItem } from '@/lib/handoffs/draft';
+import { TREAD_LIMITS } from '@/lib/handoffs/limits';
 import { Choice, YES_NO } from './choice';
 
 /** The extra answers an item's kind asks for (OBSERVATION_FIELDS in the engine). */
@@ -54,8 +55,9 @@ export function ItemFields({
             <input
               type="number"
               inputMode="numeric"
-              min={0}
-              max={32}
+              min={TREAD_LIMITS.min}
+              max={TREAD_LIMITS.max}
+              step={1}
               value={value.treadThirtySeconds ?? ''}
               onChange={(e) =>
                 set({ treadThirtySeconds: e.target.value === '' ? undefined : Number(e.target.value) })

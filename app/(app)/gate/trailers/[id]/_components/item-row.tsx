@@ -8,6 +8,7 @@ import { Choice } from './choice';
 import { ItemFields } from './item-fields';
 import { SAFETY_WORDS } from './safety-words';
 import { formatTime } from '@/lib/format/time';
+import { HANDOFF_LIMITS } from '@/lib/handoffs/limits';
 
 // the camera and its upload code load when an item first asks for a photo, not with the form
 const PhotoCapture = dynamic(() => import('@/app/_components/photo-capture').then((m) => m.PhotoCapture));
@@ -72,6 +73,8 @@ export function ItemRow({
     <li
       className={`space-y-2 rounded-lg border-2 p-3 ${evidence ? 'border-danger' : value ? 'border-ok' : 'border-paper-line'}`}
       aria-label={item.label}
+      data-invalid={errors?.length ? true : undefined}
+      tabIndex={errors?.length ? -1 : undefined}
     >
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h3 className="text-gate-lg font-bold">{item.label}</h3>
@@ -147,6 +150,7 @@ export function ItemRow({
             value={value.note ?? ''}
             onChange={(e) => set({ note: e.target.value })}
             rows={2}
+            maxLength={HANDOFF_LIMITS.itemNote}
             className="block w-full rounded-lg border-2 border-paper-line p-2 text-gate"
           />
           <PhotoCapture

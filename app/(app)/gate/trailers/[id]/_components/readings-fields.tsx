@@ -1,7 +1,9 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { Field, FieldError } from '@/app/_components/field';
 import type { Draft } from '@/lib/handoffs/draft';
+import { HANDOFF_LIMITS as L } from '@/lib/handoffs/limits';
 import { Choice, YES_NO } from './choice';
 
 export function FuelButtons({
@@ -15,31 +17,34 @@ export function FuelButtons({
   last: number | null | undefined;
   error?: string[];
 }) {
+  const t = useTranslations('Handoff.fuel');
   return (
-    <section aria-labelledby="fuel-title" className="space-y-1">
-      <h2 id="fuel-title" className="text-gate-xl font-bold">
-        Fuel
-      </h2>
+    <div className="space-y-1">
       <p className="text-gate-sm text-ink-soft">
-        Reefer tank gauge in eighths{last !== null && last !== undefined ? `; last record ${last}/8` : ''}.
+        {last !== null && last !== undefined ? t('gaugeWithLast', { last }) : t('gauge')}
       </p>
       <Choice
-        label="Fuel in eighths"
+        label={t('label')}
         hideLabel
         columns={3}
         value={value}
         onChange={onChange}
+        errorId={error?.length ? 'fuelEighths-error' : undefined}
         options={Array.from({ length: 9 }, (_, n) => ({
           value: n,
-          label: n === 8 ? 'Full 8/8' : n === 0 ? 'Empty 0/8' : `${n}/8`,
+          label: n === 8 ? t('full') : n === 0 ? t('empty') : `${n}/8`,
           tone: n >= 8 ? 'ok' : n >= 4 ? 'warn' : 'danger',
         }))}
       />
       <FieldError id="fuelEighths-error" messages={error} />
-    </section>
+    </div>
   );
 }
 
+/**
+ * The reefer's readings. The typed values come first and the pre-trip result last, so the tap
+ * that answers the step can also close it (the form moves on when a tap completes a step).
+ */
 export function ReeferFields({
   reefer,
   set,
@@ -49,73 +54,80 @@ export function ReeferFields({
   set: (p: Partial<Draft['reefer']>) => void;
   errors: Record<string, string[]>;
 }) {
+  const t = useTranslations('Handoff.reefer');
   const err = (k: string) => errors[`reefer.${k}`];
+  const errorId = (k: string) => (err(k)?.length ? `${k}-error` : undefined);
   return (
-    <section aria-labelledby="reefer-title" className="space-y-3">
-      <h2 id="reefer-title" className="text-gate-xl font-bold">
-        Reefer readings
-      </h2>
+    <div className="space-y-3">
       <Choice
-        label="Unit running?"
-        options={YES_NO('Running', 'Off', 'warn')}
+        label={t('running')}
+        options={YES_NO(t('on'), t('off'), 'warn')}
         value={reefer.isUnitOn}
         onChange={(v) => set({ isUnitOn: v })}
         columns={2}
+        errorId={errorId('isUnitOn')}
       />
       <FieldError id="isUnitOn-error" messages={err('isUnitOn')} />
       <div className="grid grid-cols-2 gap-2">
         <Field
-          label="Setpoint °F"
+          label={t('setpoint')}
           name="setpointF"
           type="number"
-          step="0.1"
+          inputMode="decimal"
+          step="any"
+          min={L.setpointF.min}
+          max={L.setpointF.max}
           value={reefer.setpointF}
           onChange={(e) => set({ setpointF: e.target.value })}
           error={err('setpointF')}
         />
         <Field
-          label="Return air °F"
+          label={t('returnAir')}
           name="returnAirF"
           type="number"
-          step="0.1"
+          inputMode="decimal"
+          step="any"
+          min={L.returnAirF.min}
+          max={L.returnAirF.max}
           value={reefer.returnAirF}
           onChange={(e) => set({ returnAirF: e.target.value })}
           error={err('returnAirF')}
         />
       </div>
       <Field
-        label="Engine hours"
+        label={t('engineHours')}
         name="engineHours"
         type="number"
         inputMode="decimal"
-        step="0.1"
-        min={0}
+        step="any"
+        min={L.engineHours.min}
+        max={L.engineHours.max}
         value={reefer.engineHours}
         onChange={(e) => set({ engineHours: e.target.value })}
         error={err('engineHours')}
       />
+      <Field
+        label={t('preTripAt')}
+        hint={t('preTripAtHint')}
+        name="preTripAt"
+        type="datetime-local"
+        value={reefer.preTripAt}
+        onChange={(e) => set({ preTripAt: e.target.value })}
+        error={err('preTripAt')}
+      />
       <Choice
-        label="Last pre-trip"
+        label={t('preTrip')}
         columns={3}
         value={reefer.preTripResult}
-        onChange={(v) => set({ preTripResult: v })}
+        onChange={(v) => set(v === 'not_run' ? { preTripResult: v, preTripAt: '' } : { preTripResult: v })}
+        errorId={errorId('preTripResult')}
         options={[
-          { value: 'pass', label: 'Passed', tone: 'ok' },
-          { value: 'fail', label: 'Failed', tone: 'danger' },
-          { value: 'not_run', label: 'Not run', tone: 'warn' },
+          { value: 'pass', label: t('passed'), tone: 'ok' },
+          { value: 'fail', label: t('failed'), tone: 'danger' },
+          { value: 'not_run', label: t('notRun'), tone: 'warn' },
         ]}
       />
       <FieldError id="preTripResult-error" messages={err('preTripResult')} />
-      {reefer.preTripResult && reefer.preTripResult !== 'not_run' ? (
-        <Field
-          label="When was it run?"
-          name="preTripAt"
-          type="datetime-local"
-          value={reefer.preTripAt}
-          onChange={(e) => set({ preTripAt: e.target.value })}
-          error={err('preTripAt')}
-        />
-      ) : null}
-    </section>
+    </div>
   );
 }

@@ -7,5 +7,7 @@ export const SAFETY_WORDS = {
   notCopied: 'Safety item: answer from what you see now.',
   treadLabel: 'Shallowest tread you measured (32nds of an inch)',
   treadNeeded: 'Give the shallowest tread you measured first.',
+  showItems: (group: string) => `Change one item: ${group}`,
+  hideItems: (group: string) => `Hide the items: ${group}`,
   stated: (n: number) => `Answered: ${n} ${n === 1 ? 'item' : 'items'}. Change any one below if it differs.`,
 } as const;

@@ -1,3 +1,4 @@
+import { useTranslations } from 'next-intl';
 import { Button } from '@/app/_components/button';
 import { Caution } from '@/app/_components/caution';
 import { FormError } from '@/app/_components/field';
@@ -13,11 +14,12 @@ export function SubmitBar({
   status: SubmitStatus;
   refusal: SubmitRefusal | null;
 }) {
+  const t = useTranslations('Handoff.confirm');
   return (
     <div className="sticky bottom-0 space-y-2 border-t-2 border-paper-line bg-paper py-2">
       {status === 'queued' ? (
         <p role="status" className="rounded-lg bg-warn-bg p-3 text-gate font-bold text-warn">
-          No connection: the handoff is saved on this phone and will be sent when the connection returns.
+          {t('queued')}
         </p>
       ) : null}
       {refusal ? (
@@ -36,7 +38,7 @@ export function SubmitBar({
         </div>
       ) : null}
       <Button type="submit" className="w-full min-h-tap-lg text-gate-lg" disabled={status === 'sending'}>
-        {status === 'sending' ? 'Sending…' : `Record the ${kind}`}
+        {status === 'sending' ? t('sending') : t('record', { kind })}
       </Button>
     </div>
   );

@@ -4,6 +4,7 @@ import { useRouter } from 'next/navigation';
 import { useCallback, useEffect, useRef, useState, type Dispatch, type SetStateAction } from 'react';
 import { addToOutbox, removeFromOutbox } from '@/app/_components/offline/outbox-client';
 import { useOutboxItems } from '@/app/_components/offline/offline-provider';
+import { errorsByField } from '@/lib/handoffs/steps';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { precheck } from './precheck';
 import type { StoredDraft } from './use-draft';
@@ -29,11 +30,23 @@ export function useSubmit(
   draft: StoredDraft | null,
   setDraft: Dispatch<SetStateAction<StoredDraft | null>>,
   forget: () => void,
-  check: { isReefer: boolean; last: TrailerCondition['last'] },
+  check: { isReefer: boolean; last: TrailerCondition['last']; itemKeys: readonly string[] },
 ) {
   const router = useRouter();
-  const { isReefer, last } = check;
-  const [errors, setErrors] = useState<Record<string, string[]>>({});
+  const { isReefer, last, itemKeys } = check;
+  const [shownErrors, setShownErrors] = useState<{ errors: Record<string, string[]>; round: number }>({
+    errors: {},
+    round: 0,
+  });
+  // every message under the field it concerns; `round` counts sends that came back with messages
+  const setErrors = useCallback(
+    (found: Record<string, string[]>) =>
+      setShownErrors((prev) => {
+        const errors = errorsByField(found, itemKeys);
+        return { errors, round: Object.keys(errors).length ? prev.round + 1 : prev.round };
+      }),
+    [itemKeys],
+  );
   const [refusal, setRefusal] = useState<SubmitRefusal | null>(null);
   const [status, setStatus] = useState<SubmitStatus>('idle');
   const outbox = useOutboxItems();
@@ -49,7 +62,7 @@ export function useSubmit(
         cautions: answer.cautions,
       });
     },
-    [setDraft],
+    [setDraft, setErrors],
   );
 
   const queue = useCallback(
@@ -107,7 +120,7 @@ export function useSubmit(
       if (res.status >= 500) return queue(d, body as Record<string, unknown>);
       refused(d, answer);
     },
-    [isReefer, last, forget, router, queue, refused],
+    [isReefer, last, forget, router, queue, refused, setErrors],
   );
 
   // a queued draft follows its outbox item: sent → receipt, refused → back to the answers;
@@ -149,5 +162,5 @@ export function useSubmit(
 
   // a draft queued before a reload shows as queued while its item waits
   const shown: SubmitStatus = status === 'idle' && item?.state === 'pending' ? 'queued' : status;
-  return { send, errors, refusal, status: shown };
+  return { send, errors: shownErrors.errors, errorRound: shownErrors.round, refusal, status: shown };
 }

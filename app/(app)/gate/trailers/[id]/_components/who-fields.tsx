@@ -1,7 +1,9 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import { Field, FieldError, Select } from '@/app/_components/field';
 import type { Draft } from '@/lib/handoffs/draft';
+import { HANDOFF_LIMITS as L } from '@/lib/handoffs/limits';
 import { Choice } from './choice';
 
 export function WhoFields({
@@ -19,27 +21,30 @@ export function WhoFields({
   carrierName: string | null;
   errors: Record<string, string[]>;
 }) {
+  const t = useTranslations('Handoff.who');
   return (
-    <section aria-labelledby="who-title" className="space-y-2">
-      <h2 id="who-title" className="text-gate-xl font-bold">
-        Driver and tractor
-      </h2>
+    <div className="space-y-2">
       {isDriver ? (
         <>
+          {/* a signed-in driver is recorded from the account: no name to type, no carrier to pick */}
           <p className="text-gate">
-            Carrier: <span className="font-bold">{carrierName}</span>
+            {t('driver')} <span className="font-bold">{draft.driverName}</span>
+          </p>
+          <FieldError id="driverName-error" messages={errors.driverName} />
+          <p className="text-gate">
+            {t('carrier')} <span className="font-bold">{carrierName}</span>
           </p>
           <FieldError id="carrierId-error" messages={errors.carrierId} />
         </>
       ) : (
         <Select
-          label="Carrier"
+          label={t('carrierLabel')}
           name="carrierId"
           value={draft.carrierId}
           onChange={(e) => set({ carrierId: e.target.value })}
           error={errors.carrierId}
         >
-          <option value="">Choose the carrier</option>
+          <option value="">{t('chooseCarrier')}</option>
           {carriers.map((c) => (
             <option key={c.id} value={c.id}>
               {c.name} ({c.scac})
@@ -47,41 +52,47 @@ export function WhoFields({
           ))}
         </Select>
       )}
+      {isDriver ? null : (
+        <Field
+          label={t('driverName')}
+          name="driverName"
+          value={draft.driverName}
+          onChange={(e) => set({ driverName: e.target.value })}
+          autoComplete="name"
+          maxLength={L.driverName}
+          error={errors.driverName}
+        />
+      )}
       <Field
-        label="Driver name"
-        name="driverName"
-        value={draft.driverName}
-        onChange={(e) => set({ driverName: e.target.value })}
-        autoComplete="name"
-        error={errors.driverName}
-      />
-      <Field
-        label="Tractor number"
+        label={t('tractor')}
         name="tractorNumber"
         value={draft.tractorNumber}
         onChange={(e) => set({ tractorNumber: e.target.value })}
+        maxLength={L.tractorNumber}
         autoCapitalize="characters"
         error={errors.tractorNumber}
       />
-      <Choice
-        label="Loaded or empty?"
-        columns={2}
-        value={draft.isLoaded}
-        onChange={(v) => set({ isLoaded: v })}
-        options={[
-          { value: true, label: 'Loaded' },
-          { value: false, label: 'Empty' },
-        ]}
-      />
-      <FieldError id="isLoaded-error" messages={errors.isLoaded} />
       <Field
-        label="Seal number"
+        label={t('seal')}
         name="sealNumber"
         value={draft.sealNumber}
         onChange={(e) => set({ sealNumber: e.target.value })}
+        maxLength={L.sealNumber}
         autoCapitalize="characters"
         error={errors.sealNumber}
       />
-    </section>
+      <Choice
+        label={t('loadedQuestion')}
+        columns={2}
+        value={draft.isLoaded}
+        onChange={(v) => set({ isLoaded: v })}
+        errorId={errors.isLoaded?.length ? 'isLoaded-error' : undefined}
+        options={[
+          { value: true, label: t('loaded') },
+          { value: false, label: t('empty') },
+        ]}
+      />
+      <FieldError id="isLoaded-error" messages={errors.isLoaded} />
+    </div>
   );
 }
