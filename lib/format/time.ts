@@ -1,7 +1,6 @@
 // Every time a person reads is shown in the terminal's IANA zone, through these functions only
 // (the lint rule in eslint.config.mjs refuses other ways of writing a date in app/, lib/ and db/).
-import { TZDate, tz } from '@date-fns/tz';
-import { format } from 'date-fns';
+import { TZDate } from '@date-fns/tz';
 
 export type TimeStyle = 'date' | 'time' | 'dateTime';
 
@@ -35,8 +34,15 @@ export function formatTime(
 
 /** The value a `datetime-local` input shows for `at` in the terminal's zone. */
 export function toLocalInput(at: Date, timeZone: string): string {
-  return format(at, "yyyy-MM-dd'T'HH:mm", { in: tz(timeZone) });
+  const l = new TZDate(at.getTime(), timeZone);
+  return `${localDay(l)}T${two(l.getHours())}:${two(l.getMinutes())}`;
 }
+
+// written from the zone's wall-clock fields, not with date-fns' format: that formatter and its
+// locale data would ship to every phone page that reads a time (the pages' JavaScript budget)
+const two = (n: number) => String(n).padStart(2, '0');
+const localDay = (l: TZDate) =>
+  `${String(l.getFullYear()).padStart(4, '0')}-${two(l.getMonth() + 1)}-${two(l.getDate())}`;
 
 /** A `datetime-local` value (`2026-03-08T02:30`) read as wall time in the terminal's zone. */
 export function fromLocalInput(value: string, timeZone: string): Date | null {
@@ -49,10 +55,7 @@ export function fromLocalInput(value: string, timeZone: string): Date | null {
 /** The terminal's local calendar day before the one `at` falls on, as `yyyy-MM-dd`. */
 export function previousLocalDay(at: Date, timeZone: string): string {
   const local = new TZDate(at.getTime(), timeZone);
-  return format(
-    new TZDate(local.getFullYear(), local.getMonth(), local.getDate() - 1, 12, 0, timeZone),
-    'yyyy-MM-dd',
-  );
+  return localDay(new TZDate(local.getFullYear(), local.getMonth(), local.getDate() - 1, 12, 0, timeZone));
 }
 
 const stampCache = new Map<string, Intl.DateTimeFormat>();

@@ -3,9 +3,6 @@
 import { useTranslations } from 'next-intl';
 import { useState } from 'react';
 import { useSWRConfig } from 'swr';
-import { z } from 'zod';
-import { addToOutbox } from '@/app/_components/offline/outbox-client';
-import { moveSchema } from '@/lib/validation/yard';
 import { Button } from '@/app/_components/button';
 import { Caution } from '@/app/_components/caution';
 import { Field, FormError } from '@/app/_components/field';
@@ -30,6 +27,12 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
   async function submit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = e.currentTarget;
+    // the schema and zod load with the first move, not with the page (the jockey pages' JS budget)
+    const [{ z }, { moveSchema }, { addToOutbox }] = await Promise.all([
+      import('zod'),
+      import('@/lib/validation/yard'),
+      import('@/app/_components/offline/outbox-client'),
+    ]);
     const parsed = moveSchema.safeParse({
       ...Object.fromEntries(new FormData(form)),
       clientKey: crypto.randomUUID(),
