@@ -1,6 +1,7 @@
 'use client';
 
 import type { Dispatch, SetStateAction } from 'react';
+import dynamic from 'next/dynamic';
 import { useTranslations } from 'next-intl';
 import { Caution } from '@/app/_components/caution';
 import { FieldError, Textarea } from '@/app/_components/field';
@@ -13,13 +14,16 @@ import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { Choice } from './choice';
 import type { HandoffFormProps } from './handoff-form';
 import { FuelButtons, ReeferFields } from './readings-fields';
-import { SafetyStep } from './safety-step';
 import { SAFETY_WORDS } from './safety-words';
 import { SubmitBar } from './submit-bar';
 import type { StoredDraft } from './use-draft';
 import type { SubmitRefusal, SubmitStatus } from './use-submit';
 import { WhoFields } from './who-fields';
-import { ZoneSection } from './zone-section';
+
+// The safety checks and the rest of the box (with their item rows) load after the first steps, not
+// with the page: the phone pages' first-load JavaScript budget (scripts/js-budget.mjs).
+const SafetyStep = dynamic(() => import('./safety-step').then((m) => m.SafetyStep));
+const ZoneSection = dynamic(() => import('./zone-section').then((m) => m.ZoneSection));
 
 type Props = {
   step: StepKey;
