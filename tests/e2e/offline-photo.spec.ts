@@ -38,10 +38,13 @@ test('no signal: a damage photo waits on the phone with its bytes and is stored 
   await page.reload();
   const form = new HandoffFormPage(page);
   await form.fillHeader({ tractor: 'T-7811', loaded: true });
+  await form.openStep('Who and what');
   await page.getByLabel('Seal number').fill('SL-52290');
   await form.fillReefer({ fuel: 'Full 8/8', setpoint: '34', returnAir: '35', engineHours: '9720' });
   await form.sameAsLastEverywhere();
   await form.answerSafety(11);
+  await form.openStep('The rest of the box');
+  await form.showItems('Left side');
   const skin = form.item('Left side skin');
   await form.choose('Left side skin: condition', 'Damaged', skin);
   await form.choose('Insulation showing?', 'Yes, showing', skin);
