@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, eq, isNull } from 'drizzle-orm';
+import { and, eq, isNull, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { holds, trailers, yardMoves, yardSpots } from '@/db/schema';
 
@@ -49,11 +49,14 @@ export async function insertYardMove(tx: Tx, move: typeof yardMoves.$inferInsert
   return row.id;
 }
 
-/** Puts the trailer in the spot and marks it seen there. */
+/** Puts the trailer in the spot and marks it seen there (a later sighting already recorded stays). */
 export async function setTrailerSpot(tx: Tx, trailerId: string, spotId: string, seenAt: Date) {
   await tx
     .update(trailers)
-    .set({ currentSpotId: spotId, lastSeenAt: seenAt })
+    .set({
+      currentSpotId: spotId,
+      lastSeenAt: sql`greatest(${trailers.lastSeenAt}, ${seenAt.toISOString()}::timestamptz)`,
+    })
     .where(eq(trailers.id, trailerId));
 }
 

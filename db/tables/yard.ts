@@ -28,9 +28,11 @@ export const yardMoves = pgTable(
     movedById: uuid('moved_by_id')
       .notNull()
       .references(() => users.id),
+    /** When the move was made: the phone's time for a move queued without signal. */
     movedAt: at('moved_at').notNull().defaultNow(),
     /** The phone's key for the move: a move queued without signal and sent twice is one move. */
     clientKey: text('client_key'),
+    /** When the move reached the server (later than moved_at for a queued move). */
     createdAt: createdAt(),
   },
   (t) => [

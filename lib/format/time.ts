@@ -16,7 +16,11 @@ const OPTIONS: Record<TimeStyle, Intl.DateTimeFormatOptions> = {
 
 const cache = new Map<string, Intl.DateTimeFormat>();
 
-/** `at` in `timeZone`, e.g. `Mar 12, 2026, 14:05 CDT`. */
+/**
+ * `at` in `timeZone`, in the reader's `locale` (next-intl's `getLocale()` / `useLocale()`):
+ * `Mar 12, 2026, 14:05 CDT` in English, `12 mar 2026, 14:05 GMT-5` in Spanish. Intl carries the
+ * month names, so no date-fns locale ships to the phone pages. English is for callers with no reader.
+ */
 export function formatTime(
   at: Date | string | number,
   timeZone: string,

@@ -75,6 +75,15 @@ export function waitingCount(items: readonly OutboxItem[], userId: string): numb
 }
 
 /**
+ * Of `photoIds`, those still waiting in the outbox (taken without signal, not yet sent). A handoff
+ * that holds one is queued behind it, not sent at once: the server would not find the photo yet.
+ */
+export function waitingPhotoIds(items: readonly OutboxItem[], photoIds: Iterable<string>): string[] {
+  const waiting = new Set(items.filter((i) => i.kind === 'photo' && i.state === 'pending').map((i) => i.key));
+  return [...new Set(photoIds)].filter((id) => waiting.has(id));
+}
+
+/**
  * Adds a submit to the outbox once: an item already there under the same key is left as it is
  * (a second tap, or a queued draft read again after a reload, does not queue it twice).
  */

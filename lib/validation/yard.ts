@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { BOARD_FILTERS } from '@/lib/yard/board';
+import { madeAtProblem } from '@/lib/yard/move-time';
 import { SORT_DIRS, SORT_KEYS } from '@/lib/yard/table';
 import { WALK_RESOLUTIONS } from '@/lib/yard/walk';
 import { plainText } from './text';
@@ -20,6 +21,17 @@ export const moveSchema = z.object({
   target: plainText(40).min(1, 'Scan or type the target slot or door.'),
   /** The phone's idempotency key: a move queued without signal is recorded once. */
   clientKey: plainText(80).min(8, 'Not a valid move key.').optional(),
+  /**
+   * When the jockey made the move, by the phone's clock (a queued move arrives later). Checked
+   * against the clock at parse time; the service checks it again against its own `now`.
+   */
+  madeAt: z.iso
+    .datetime({ offset: true, error: 'Not a valid time for the move.' })
+    .superRefine((value, ctx) => {
+      const problem = madeAtProblem(new Date(value), new Date());
+      if (problem) ctx.addIssue({ code: 'custom', message: problem });
+    })
+    .optional(),
 });
 export type MoveInput = z.infer<typeof moveSchema>;
 

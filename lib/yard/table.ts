@@ -20,7 +20,8 @@ export const COLUMNS: readonly { key: SortKey | 'gateIn'; header: string }[] = [
   { key: 'lastSeen', header: 'Last seen' },
 ];
 
-const localTime = (at: string | null, timeZone: string) => (at === null ? '—' : formatTime(at, timeZone));
+const localTime = (at: string | null, timeZone: string, locale: string) =>
+  at === null ? '—' : formatTime(at, timeZone, 'dateTime', locale);
 
 /** The words of the table's cells; the CSV export keeps English, the screen passes the reader's. */
 export type CellWords = {
@@ -34,6 +35,8 @@ export type CellWords = {
   none: string;
   outOfService: string;
   restricted: string;
+  /** the reader's locale for the gate-in and last-seen times */
+  locale: string;
 };
 
 export const ENGLISH_CELLS: CellWords = {
@@ -47,6 +50,7 @@ export const ENGLISH_CELLS: CellWords = {
   none: 'None',
   outOfService: 'Out of service',
   restricted: 'Restricted',
+  locale: 'en-US',
 };
 
 export function reeferText(t: BoardTrailer, w: CellWords = ENGLISH_CELLS): string {
@@ -79,8 +83,8 @@ export function rowCells(row: TableRow, timeZone: string, now: Date, w: CellWord
     fuelText(t, w),
     holdsText(t, w),
     formatDwell(dwellMinutes(t.gateInAt, now)),
-    localTime(t.gateInAt, timeZone),
-    localTime(t.lastSeenAt, timeZone),
+    localTime(t.gateInAt, timeZone, w.locale),
+    localTime(t.lastSeenAt, timeZone, w.locale),
   ];
 }
 

@@ -23,16 +23,8 @@ function smallPng(): Buffer {
   return PNG.sync.write(png);
 }
 
-test('no signal: a damage photo waits on the phone with its bytes and is stored once, before the handoff that holds it', async ({
-  page,
-  context,
-}) => {
-  test.setTimeout(180_000);
-  const startedAt = new Date(Date.now() - 1_000);
-  await new SignInPage(page).signIn('driver');
-  await expect(page).toHaveURL(/\/gate$/);
-  await controlledByWorker(page);
-  const { id: trailerId } = await reeferOnTheRoad();
+/** A drop of a road trailer with new skin damage, its note written: only the photo is missing. */
+async function damagedDrop(page: Page, trailerId: string) {
   await page.goto(`/gate/trailers/${trailerId}`);
   // one online load through the worker keeps the page and its scripts
   await page.reload();
@@ -49,6 +41,36 @@ test('no signal: a damage photo waits on the phone with its bytes and is stored 
   await form.choose('Left side skin: condition', 'Damaged', skin);
   await form.choose('Insulation showing?', 'Yes, showing', skin);
   await skin.getByLabel('Note: what do you see?').fill('Skin dented below the rear marker light.');
+  return { form, skin };
+}
+
+/** The photo and handoff rows of this trailer written since `since`. */
+function rowsOf(trailerId: string, since: Date) {
+  return {
+    photoRows: () =>
+      db
+        .select({ id: photos.id, status: photos.status, handoffId: photos.handoffId })
+        .from(photos)
+        .where(and(eq(photos.trailerId, trailerId), gte(photos.createdAt, since))),
+    handoffRows: () =>
+      db
+        .select({ id: handoffs.id })
+        .from(handoffs)
+        .where(and(eq(handoffs.trailerId, trailerId), gte(handoffs.createdAt, since))),
+  };
+}
+
+test('no signal: a damage photo waits on the phone with its bytes and is stored once, before the handoff that holds it', async ({
+  page,
+  context,
+}) => {
+  test.setTimeout(180_000);
+  const startedAt = new Date(Date.now() - 1_000);
+  await new SignInPage(page).signIn('driver');
+  await expect(page).toHaveURL(/\/gate$/);
+  await controlledByWorker(page);
+  const { id: trailerId } = await reeferOnTheRoad();
+  const { form, skin } = await damagedDrop(page, trailerId);
 
   await context.setOffline(true);
   await skin
@@ -61,16 +83,7 @@ test('no signal: a damage photo waits on the phone with its bytes and is stored 
   await form.submit('drop');
   await expect(page.getByText('No connection: the handoff is saved on this phone')).toBeVisible();
   await expect(page.getByTestId('outbox-line')).toContainText('2 waiting to send');
-  const photoRows = () =>
-    db
-      .select({ id: photos.id, status: photos.status, handoffId: photos.handoffId })
-      .from(photos)
-      .where(and(eq(photos.trailerId, trailerId), gte(photos.createdAt, startedAt)));
-  const handoffRows = () =>
-    db
-      .select({ id: handoffs.id })
-      .from(handoffs)
-      .where(and(eq(handoffs.trailerId, trailerId), gte(handoffs.createdAt, startedAt)));
+  const { photoRows, handoffRows } = rowsOf(trailerId, startedAt);
   expect(await photoRows()).toHaveLength(0);
   expect(await handoffRows()).toHaveLength(0);
 
@@ -92,4 +105,51 @@ test('no signal: a damage photo waits on the phone with its bytes and is stored 
   await page.waitForTimeout(1_000);
   expect(await photoRows()).toHaveLength(1);
   expect(await handoffRows()).toHaveLength(1);
+});
+
+test('signal back, photo still waiting: the handoff is queued behind its photo ("2 waiting to send"), not refused', async ({
+  page,
+  context,
+}) => {
+  test.setTimeout(180_000);
+  const startedAt = new Date(Date.now() - 1_000);
+  await new SignInPage(page).signIn('driver');
+  await expect(page).toHaveURL(/\/gate$/);
+  await controlledByWorker(page);
+  const { id: trailerId } = await reeferOnTheRoad();
+  const { form, skin } = await damagedDrop(page, trailerId);
+  const { photoRows, handoffRows } = rowsOf(trailerId, startedAt);
+
+  await context.setOffline(true);
+  await skin
+    .getByLabel('Photo of Left side skin')
+    .setInputFiles({ name: 'skin.png', mimeType: 'image/png', buffer: smallPng() });
+  await expect(skin.getByRole('img', { name: 'Photo of Left side skin' })).toHaveText('Waiting to send', {
+    timeout: 20_000,
+  });
+  // the signal returns, but the photo cannot get through yet (the upload service is busy): it waits
+  await page.route('**/api/uploads', (route) =>
+    route.fulfill({ status: 503, json: { code: 'unavailable', message: 'Try again shortly.' } }),
+  );
+  await context.setOffline(false);
+  await expect(page.getByTestId('outbox-line')).toHaveText('1 waiting to send');
+
+  await form.submit('drop');
+  await expect(
+    page
+      .getByRole('status')
+      .filter({ hasText: 'is sent right after its photo, which is still waiting to send' }),
+  ).toBeVisible();
+  await expect(page.getByTestId('outbox-line')).toHaveText('2 waiting to send');
+  // not refused for a missing photo, and nothing recorded before the photo
+  await expect(page.getByText('A photo is missing')).toHaveCount(0);
+  expect(await handoffRows()).toHaveLength(0);
+
+  // the upload service answers again: the photo goes first, then the handoff that holds it
+  await page.unroute('**/api/uploads');
+  await page.evaluate(() => window.dispatchEvent(new Event('online')));
+  await expect(page).toHaveURL(/\/gate\/receipts\/[0-9a-f-]{36}$/, { timeout: 30_000 });
+  const sent = await handoffRows();
+  expect(sent).toHaveLength(1);
+  expect(await photoRows()).toEqual([{ id: expect.any(String), status: 'stored', handoffId: sent[0].id }]);
 });

@@ -8,7 +8,7 @@ import { walkRowFixture } from './support/yard-state';
 
 // A jockey's yard move without signal: the move page reloads offline from the service worker, the
 // move waits in the phone's outbox under its key ("1 waiting to send"), and is recorded once when
-// the signal returns, however often the outbox runs after that.
+// the signal returns, however often the outbox runs after that, at the time it was made.
 
 async function controlledByWorker(page: Page) {
   await page.evaluate(async () => (await navigator.serviceWorker.ready).scope);
@@ -36,24 +36,33 @@ test('no signal: a yard move waits on the phone, counts as waiting, and is recor
   // checked on the phone before it is queued: an empty target is not kept
   await form.move(units[0], '');
   await expect(form.target()).toHaveAccessibleDescription('Scan or type the target slot or door.');
+  const queuedFrom = Date.now();
   await form.move(units[0], slots[3]);
   await expect(
     page.getByRole('status').filter({ hasText: `the move of ${units[0]} to ${slots[3]} is kept` }),
   ).toBeVisible();
   await expect(page.getByTestId('outbox-line')).toContainText('1 waiting to send');
   await expect(page.getByText(`${units[0]} → ${slots[3]}: waiting to send`)).toBeVisible();
+  const queuedBy = Date.now();
 
   // a reload still without signal: the move is still waiting, not lost and not sent
   await page.reload();
   await expect(page.getByTestId('outbox-line')).toContainText('1 waiting to send');
   expect(await moves()).toHaveLength(0);
+  // a few seconds without signal, so the move's time and its arrival are told apart
+  await page.waitForTimeout(3_000);
 
+  const onlineAt = Date.now();
   await context.setOffline(false);
   await expect(page.getByText(`${units[0]} → ${slots[3]}: sent`)).toBeVisible({ timeout: 30_000 });
   await expect(page.getByTestId('outbox-line')).not.toContainText('waiting to send');
   const recorded = await moves();
   expect(recorded).toHaveLength(1);
   expect(recorded[0].clientKey).toMatch(/^[0-9a-f-]{36}$/);
+  // recorded at the time the jockey made it (the phone's clock), and the arrival kept beside it
+  expect(recorded[0].movedAt.getTime()).toBeGreaterThanOrEqual(queuedFrom - 1_000);
+  expect(recorded[0].movedAt.getTime()).toBeLessThanOrEqual(queuedBy + 1_000);
+  expect(recorded[0].createdAt.getTime()).toBeGreaterThanOrEqual(onlineAt - 1_000);
   const [trailer] = await db
     .select({ spot: trailers.currentSpotId })
     .from(trailers)

@@ -1,7 +1,7 @@
 import { expect, test, type BrowserContext, type Page } from '@playwright/test';
 import { baseURL } from '../../playwright.config';
 import { ACCOUNTS, SignInPage, type AccountName } from './pages/sign-in-page';
-import { englishFragments, fixedParts, leaks, pageWords } from './support/catalogue-leaks';
+import { englishDateWords, englishFragments, fixedParts, leaks, pageWords } from './support/catalogue-leaks';
 
 // Issue 13 item 1: a rendered Spanish page shows no English message. The English catalogue is the
 // reference: every fixed part of an English message (a word or a sentence) that Spanish does not
@@ -21,6 +21,8 @@ const NAMESPACES = [
   'Refusals',
 ] as const;
 const FRAGMENTS = englishFragments(NAMESPACES);
+// a date written by the one clock in English ("Dec 2, 2026, 15:04 CST") leaks its month name
+const DATE_WORDS = englishDateWords();
 
 async function inSpanish(context: BrowserContext) {
   await context.addCookies([{ name: 'hm-locale', value: 'es', url: baseURL }]);
@@ -30,7 +32,7 @@ async function expectNoEnglish(page: Page, path: string) {
   await page.goto(path);
   await expect(page.locator('html')).toHaveAttribute('lang', 'es');
   await expect(page.locator('main')).toBeVisible();
-  const found = leaks(await pageWords(page), FRAGMENTS);
+  const found = leaks(await pageWords(page), [...FRAGMENTS, ...DATE_WORDS]);
   expect(found, `English on ${path}`).toEqual([]);
 }
 
@@ -47,6 +49,13 @@ test('the check itself: it knows the English words, skips what Spanish shares, a
   expect(leaks('Tablero del patio · Yard board', FRAGMENTS)).toContain('Yard board');
   // whole words only: "Mapa" is not the English "Map"
   expect(leaks('Mapa', ['Map'])).toEqual([]);
+});
+
+test('the check itself: an English month or weekday fails a Spanish page, the Spanish date passes', () => {
+  // Unicode CLDR month and day names (en and es), as Intl writes them
+  expect(DATE_WORDS).toEqual(expect.arrayContaining(['December', 'Dec', 'Wednesday', 'Wed', 'Sep']));
+  expect(leaks('Abierto Dec 2, 2026, 15:04 CST', DATE_WORDS)).toEqual(['Dec']);
+  expect(leaks('Abierto 2 dic 2026, 15:04 GMT-6 · miércoles', DATE_WORDS)).toEqual([]);
 });
 
 const JOURNEYS: { who: AccountName; pages: (page: Page) => Promise<string[]> }[] = [

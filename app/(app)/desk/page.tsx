@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listCaseCarriers, listCases } from '@/db/queries/cases';
 import { SECTION_ROLES } from '@/lib/auth/roles';
@@ -25,6 +25,7 @@ const pick = (v: string | string[] | undefined) => (Array.isArray(v) ? v[0] : v)
 export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
   const user = await requireUser(SECTION_ROLES.desk);
   const t = await getTranslations('Desk');
+  const locale = await getLocale();
   const raw = Object.fromEntries(
     (Object.entries(await searchParams) as [string, string | string[] | undefined][]).map(([k, v]) => [
       k,
@@ -103,7 +104,9 @@ export default async function DeskPage({ searchParams }: PageProps<'/desk'>) {
                   {formatMoney(c.amountCents)}
                   {c.isOverridden ? <span className="text-gate-sm text-ink-soft"> {t('set')}</span> : null}
                 </span>
-                <span className="text-gate-sm">{t('opened', { when: formatTime(c.openedAt, tz) })}</span>
+                <span className="text-gate-sm">
+                  {t('opened', { when: formatTime(c.openedAt, tz, 'dateTime', locale) })}
+                </span>
                 <span>
                   <CaseStateBadge state={c.state} />
                 </span>

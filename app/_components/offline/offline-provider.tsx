@@ -17,7 +17,8 @@ export function useOutboxItems(): OutboxItem[] {
   return useSyncExternalStore(subscribe, snapshot, serverSnapshot);
 }
 
-function useIsOnline(): boolean {
+/** Whether the phone says it has signal, live. */
+export function useIsOnline(): boolean {
   return useSyncExternalStore(
     (cb) => {
       window.addEventListener('online', cb);

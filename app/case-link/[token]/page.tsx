@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { listCaseFindings } from '@/db/queries/case-evidence';
 import { getCase } from '@/db/queries/cases';
 import { verifyCaseLink } from '@/lib/desk/case-link';
@@ -28,6 +28,7 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
   if (!c) notFound();
   const findings = await listCaseFindings(c);
   const t = await getTranslations('CaseLink');
+  const locale = await getLocale();
   const desk = await getTranslations('Desk');
   const isOpen = c.state === 'notified' && isWithinDisputeWindow(c.disputeDeadline, new Date());
   return (
@@ -39,7 +40,7 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
         <span className="font-bold">{desk(`state.${c.state}`)}</span> · {t('estimate')}{' '}
         <span className="font-bold">{formatMoney(effectiveAmountCents(c))}</span>
         {c.disputeDeadline
-          ? ` · ${t('disputeUntil', { when: formatTime(c.disputeDeadline, c.timeZone) })}`
+          ? ` · ${t('disputeUntil', { when: formatTime(c.disputeDeadline, c.timeZone, 'dateTime', locale) })}`
           : ''}
       </p>
       <ul className="space-y-2">

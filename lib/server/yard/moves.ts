@@ -14,6 +14,7 @@ import {
 } from '@/db/queries/yard-moves';
 import { abort, done, refuse, refuseField, settle, type FieldErrors, type Result } from '@/lib/result';
 import type { MoveInput } from '@/lib/validation/yard';
+import { madeAtProblem } from '@/lib/yard/move-time';
 import { NO_TERMINAL, type YardActor } from './actor';
 import { identifyTrailer } from './identify';
 
@@ -36,6 +37,8 @@ type Move = {
   reason: string;
   /** The phone's key: the same key twice records one move (a queued move sent again). */
   clientKey?: string;
+  /** When the move was made (the phone's time of a queued move); the transaction's `now` if absent. */
+  madeAt?: Date;
 };
 
 /** The move already recorded under this person's key, as the first answer gave it. */
@@ -90,6 +93,8 @@ export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<
     );
   }
   const fromLabel = trailer.spotId ? await spotLabel(tx, trailer.spotId) : null;
+  // the move's time is when it was made; the row's created_at keeps when it reached the server
+  const movedAt = move.madeAt ?? now;
   const moveId = await insertYardMove(tx, {
     trailerId: move.trailerId,
     terminalId: move.terminalId,
@@ -97,8 +102,9 @@ export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<
     toSpotId: target.id,
     movedById: move.actorId,
     clientKey: move.clientKey ?? null,
+    movedAt,
   });
-  await setTrailerSpot(tx, move.trailerId, target.id, now);
+  await setTrailerSpot(tx, move.trailerId, target.id, movedAt);
   const isOutOfService = await hasOpenOutOfServiceHold(tx, move.trailerId);
   await recordAudit(
     {
@@ -106,7 +112,13 @@ export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<
       action: 'yard.move',
       entityType: 'trailer',
       entityId: move.trailerId,
-      detail: { moveId, from: fromLabel, to: target.label, reason: move.reason },
+      detail: {
+        moveId,
+        from: fromLabel,
+        to: target.label,
+        reason: move.reason,
+        madeAt: movedAt.toISOString(),
+      },
     },
     tx,
   );
@@ -118,12 +130,17 @@ export async function recordMove(actor: YardActor, input: MoveInput): Promise<Re
   const terminalId = actor.terminalId;
   if (!terminalId) return NO_TERMINAL;
   const { clientKey } = input;
+  const now = new Date();
+  const madeAt = input.madeAt ? new Date(input.madeAt) : undefined;
+  // the schema checked the bounds when it parsed; checked again against this request's clock
+  const problem = madeAt ? madeAtProblem(madeAt, now) : null;
   if (clientKey) {
     // sent again after a lost answer or from the outbox: answer the move already recorded, even if
     // the trailer has been moved on since (the unit or the target may no longer match)
     const replay = await db.transaction((tx) => replayOf(tx, actor.id, clientKey));
     if (replay) return done(replay);
   }
+  if (problem) return refuseField('invalid', 'madeAt', problem);
   const [trailerId, spot] = await Promise.all([
     identifyTrailer(input.unit),
     findSpotByLabel(terminalId, input.target),
@@ -145,6 +162,7 @@ export async function recordMove(actor: YardActor, input: MoveInput): Promise<Re
     toSpotId: spot?.id ?? null,
     reason: 'jockey move',
     clientKey,
+    madeAt,
   };
-  return settle(() => db.transaction(async (tx) => done(await moveInTransaction(tx, move, new Date()))));
+  return settle(() => db.transaction(async (tx) => done(await moveInTransaction(tx, move, now))));
 }

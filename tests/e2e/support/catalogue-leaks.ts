@@ -94,3 +94,29 @@ export function leaks(text: string, fragments: string[]): string[] {
     new RegExp(`(?<![\\p{L}\\p{N}])${escape(f)}(?![\\p{L}\\p{N}])`, 'u').test(text),
   );
 }
+
+/**
+ * English month and weekday names (long and short, as Intl's en-US data writes them): a date the
+ * formatter wrote in English on a Spanish page. Names Spanish writes the same way (none today, as
+ * Spanish writes them in lower case) are left out.
+ */
+export function englishDateWords(): string[] {
+  const names = (locale: string, options: Intl.DateTimeFormatOptions, days: number[]) =>
+    days.map((d) =>
+      new Intl.DateTimeFormat(locale, { ...options, timeZone: 'UTC' }).format(Date.UTC(2026, 0, d)),
+    );
+  const months = (locale: string, month: 'long' | 'short') =>
+    [...Array(12).keys()].map((m) =>
+      new Intl.DateTimeFormat(locale, { month, timeZone: 'UTC' }).format(Date.UTC(2026, m, 15)),
+    );
+  // 4–10 January 2026 is Sunday to Saturday
+  const week = [4, 5, 6, 7, 8, 9, 10];
+  const words = (locale: string) => [
+    ...months(locale, 'long'),
+    ...months(locale, 'short'),
+    ...names(locale, { weekday: 'long' }, week),
+    ...names(locale, { weekday: 'short' }, week),
+  ];
+  const spanish = new Set(words('es').map((w) => w.replace(/\.$/, '')));
+  return [...new Set(words('en-US'))].filter((w) => !spanish.has(w));
+}

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { EmptyState } from '@/app/_components/empty-state';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { formatTime } from '@/lib/format/time';
@@ -20,6 +20,7 @@ export default async function AnchorsPage() {
   const zone = user.terminalTimeZone ?? 'UTC';
   const anchors = user.terminalId ? await checkTerminalAnchors(user.terminalId) : [];
   const t = await getTranslations('Admin');
+  const locale = await getLocale();
   return (
     <div className="space-y-4">
       <h1 className="text-gate-xl font-bold">
@@ -42,7 +43,7 @@ export default async function AnchorsPage() {
               <p className="break-all font-mono text-gate-sm">{a.digest}</p>
               <p className="text-gate-sm text-ink-soft">
                 {t('anchors.anchored', {
-                  when: formatTime(a.createdAt, zone),
+                  when: formatTime(a.createdAt, zone, 'dateTime', locale),
                   to: a.emailedTo.length ? a.emailedTo.join(', ') : t('anchors.nobody'),
                 })}
               </p>

@@ -1,4 +1,4 @@
-import { useTranslations } from 'next-intl';
+import { useLocale, useTranslations } from 'next-intl';
 import { ActionForm } from '@/app/_components/action-form';
 import { formatTime } from '@/lib/format/time';
 import { resendEmailAction } from '../actions';
@@ -15,6 +15,7 @@ type Failed = {
 /** E-mail the job queue gave up on after its attempts, each with a resend button (desk staff only). */
 export function FailedMail({ emails, timeZone }: { emails: Failed[]; timeZone: string }) {
   const t = useTranslations('Desk');
+  const locale = useLocale();
   if (!emails.length) return null;
   return (
     <section
@@ -29,7 +30,11 @@ export function FailedMail({ emails, timeZone }: { emails: Failed[]; timeZone: s
           <li key={m.id} className="space-y-1 rounded-lg bg-paper p-3" data-email-id={m.id}>
             <p className="text-gate font-bold">{m.subject}</p>
             <p className="text-gate-sm">
-              {t('mail.line', { to: m.to, when: formatTime(m.createdAt, timeZone), attempts: m.attempts })}
+              {t('mail.line', {
+                to: m.to,
+                when: formatTime(m.createdAt, timeZone, 'dateTime', locale),
+                attempts: m.attempts,
+              })}
             </p>
             {m.lastError ? <p className="font-mono text-gate-sm text-ink-soft">{m.lastError}</p> : null}
             <ActionForm

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { ButtonLink } from '@/app/_components/button';
 import { formatTime } from '@/lib/format/time';
 import { canOpen } from '@/lib/auth/roles';
@@ -28,6 +28,7 @@ export default async function ScanLinkPage({ params }: PageProps<'/l/[token]'>) 
   const isReplaced = label.error === 'revoked';
   const next = canOpen(user.role, 'gate') ? '/gate' : '/yard';
   const t = await getTranslations('Label');
+  const locale = await getLocale();
   const replacedAt = isReplaced ? label.replacedAt : null;
   return (
     <section
@@ -41,7 +42,9 @@ export default async function ScanLinkPage({ params }: PageProps<'/l/[token]'>) 
         {!isReplaced
           ? t('notOurs')
           : replacedAt
-            ? t('replacedOn', { date: formatTime(replacedAt, user.terminalTimeZone ?? 'UTC', 'date') })
+            ? t('replacedOn', {
+                date: formatTime(replacedAt, user.terminalTimeZone ?? 'UTC', 'date', locale),
+              })
             : t('replaced')}
       </p>
       <p className="text-gate text-ink-soft">{isReplaced ? t('oldHelp') : t('refusedHelp')}</p>

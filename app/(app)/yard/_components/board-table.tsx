@@ -1,6 +1,6 @@
 'use client';
 
-import { useTranslations } from 'next-intl';
+import { useLocale, useTranslations } from 'next-intl';
 import { COLUMNS, rowCells, type CellWords, type SortDir, type SortKey } from '@/lib/yard/table';
 import type { TableRow } from '@/lib/yard/types';
 
@@ -21,6 +21,7 @@ export function BoardTable({
   onSort: (s: Sort) => void;
 }) {
   const t = useTranslations('Yard');
+  const locale = useLocale();
   const words: CellWords = {
     loaded: t('cell.loaded'),
     empty: t('cell.empty'),
@@ -32,6 +33,7 @@ export function BoardTable({
     none: t('cell.none'),
     outOfService: t('cell.outOfService'),
     restricted: t('cell.restricted'),
+    locale,
   };
   return (
     <div className="overflow-x-auto rounded-lg border-2 border-paper-line bg-paper">

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { ActionForm } from '@/app/_components/action-form';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { Caution } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listOpenTasks } from '@/db/queries/yard-tasks';
@@ -19,6 +19,7 @@ export default async function TasksPage() {
   const tasks = user.terminalId ? await listOpenTasks(user.terminalId) : [];
   const tz = user.terminalTimeZone ?? 'UTC';
   const t = await getTranslations('Yard');
+  const locale = await getLocale();
   const c = await getTranslations('Cautions');
   return (
     <div className="space-y-3">
@@ -38,7 +39,7 @@ export default async function TasksPage() {
               </p>
               <p className="text-gate-sm text-ink-soft">
                 <span data-stored-text="">{task.note}</span>{' '}
-                {t('tasks.found', { when: formatTime(task.createdAt, tz) })}
+                {t('tasks.found', { when: formatTime(task.createdAt, tz, 'dateTime', locale) })}
               </p>
               {task.kind === 'low_fuel' ? (
                 <Caution title={c('titles.fuelling')}>{c('fuelling')}</Caution>

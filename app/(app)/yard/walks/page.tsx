@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { ActionForm } from '@/app/_components/action-form';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { Caution } from '@/app/_components/caution';
 import { EmptyState } from '@/app/_components/empty-state';
 import { listLayout } from '@/db/queries/yard-layout';
@@ -20,6 +20,7 @@ export async function generateMetadata(): Promise<Metadata> {
 export default async function WalksPage() {
   const user = await requireUser(SECTION_ROLES.yard);
   const t = await getTranslations('Walk');
+  const locale = await getLocale();
   const y = await getTranslations('Yard');
   const c = await getTranslations('Cautions');
   if (!user.terminalId) return <EmptyState title={y('noTerminal')}>{y('askAdmin')}</EmptyState>;
@@ -55,7 +56,7 @@ export default async function WalksPage() {
                   href={`/yard/walks/${w.id}`}
                   className="flex min-h-tap items-center gap-2 rounded-lg bg-paper px-3 text-gate underline"
                 >
-                  {formatTime(w.startedAt, tz)} · {w.startedBy} ·{' '}
+                  {formatTime(w.startedAt, tz, 'dateTime', locale)} · {w.startedBy} ·{' '}
                   {w.status === 'finished' ? t('finished') : t('inProgress')}
                   {w.summary
                     ? ` · ${t('summary', {

@@ -3,6 +3,7 @@ import { ROLES } from '@/lib/auth/roles';
 import { NOT_OUR_LABEL, replacedMessage } from '@/lib/labels/wording';
 import { refuse } from '@/lib/result';
 import { route } from '@/lib/server/api';
+import { requestLocale } from '@/lib/server/i18n/request';
 import { resolveLabelToken } from '@/lib/server/labels';
 import { trailerLookupSchema } from '@/lib/validation/labels';
 
@@ -12,7 +13,10 @@ export const GET = route({ access: ROLES, query: trailerLookupSchema }, async ({
   if (q.token !== undefined) {
     const label = await resolveLabelToken(q.token);
     if (!label.ok && label.error === 'revoked')
-      return refuse('gone', replacedMessage(label.replacedAt, user.terminalTimeZone ?? 'UTC'));
+      return refuse(
+        'gone',
+        replacedMessage(label.replacedAt, user.terminalTimeZone ?? 'UTC', await requestLocale()),
+      );
     if (!label.ok) return refuse('invalid', NOT_OUR_LABEL, { token: [NOT_OUR_LABEL] });
     const trailer = await getTrailerById(label.trailerId);
     if (!trailer) return refuse('not_found', 'This label belongs to a trailer Hitchmark no longer knows.');

@@ -1,4 +1,4 @@
-import { useTranslations } from 'next-intl';
+import { useLocale, useTranslations } from 'next-intl';
 import { formatTime } from '@/lib/format/time';
 import type { ChainCheck } from '@/lib/handoffs/hash';
 
@@ -13,6 +13,7 @@ export function ChainStatus({
   timeZone: string;
 }) {
   const t = useTranslations('Trailers');
+  const locale = useLocale();
   if (check.ok) {
     return (
       <p role="status" className="rounded-lg border-l-8 border-ok bg-ok-bg p-3 text-gate font-bold text-ok">
@@ -32,7 +33,7 @@ export function ChainStatus({
             ? 'chain.linkBroken'
             : 'chain.changed',
         {
-          when: brokenAt ? formatTime(brokenAt, timeZone) : t('chain.unknownDate'),
+          when: brokenAt ? formatTime(brokenAt, timeZone, 'dateTime', locale) : t('chain.unknownDate'),
         },
       )}
     </p>

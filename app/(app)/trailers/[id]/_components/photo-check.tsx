@@ -1,4 +1,4 @@
-import { useTranslations } from 'next-intl';
+import { useLocale, useTranslations } from 'next-intl';
 import { formatTime } from '@/lib/format/time';
 import type { PhotoCheckReport } from '@/lib/server/photos/integrity';
 
@@ -18,6 +18,7 @@ export function PhotoCheckPanel({
   timeZone: string;
 }) {
   const t = useTranslations('Trailers');
+  const locale = useLocale();
   const bad = result && result !== 'unavailable' ? result.counts.changed + result.counts.missing : 0;
   return (
     <section aria-labelledby="photo-check" className="space-y-2 rounded-lg bg-paper p-3">
@@ -58,7 +59,8 @@ export function PhotoCheckPanel({
           <ul aria-label={t('photos.label')} className="space-y-1">
             {result.photos.map((p) => (
               <li key={p.id} data-outcome={p.outcome} className="text-gate-sm">
-                {formatTime(p.occurredAt, timeZone)} · {p.handoffKind} · {p.itemKey ?? t('photos.photo')}:{' '}
+                {formatTime(p.occurredAt, timeZone, 'dateTime', locale)} · {p.handoffKind} ·{' '}
+                {p.itemKey ?? t('photos.photo')}:{' '}
                 <a href={`/api/photos/${p.id}`} className="text-brand underline">
                   {t('photos.photo')}
                 </a>{' '}

@@ -36,6 +36,8 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
     const parsed = moveSchema.safeParse({
       ...Object.fromEntries(new FormData(form)),
       clientKey: crypto.randomUUID(),
+      // the time of the move: a queued move is recorded at this time, not when it reaches the server
+      madeAt: new Date().toISOString(),
     });
     if (!parsed.success) {
       const found = z.flattenError(parsed.error).fieldErrors as Record<string, string[]>;
@@ -139,7 +141,10 @@ export function MoveForm({ units, freeSpots }: { units: string[]; freeSpots: str
       <Button type="submit" disabled={pending}>
         {pending ? t('move.pending') : t('move.submit')}
       </Button>
-      <FormError message={result && !result.ok && !result.fieldErrors ? result.message : null} />
+      {/* the move's time is no input of its own: its refusal shows with the form's */}
+      <FormError
+        message={errors.madeAt?.[0] ?? (result && !result.ok && !result.fieldErrors ? result.message : null)}
+      />
       <div aria-live="polite">
         {result?.ok === 'queued' ? (
           <p

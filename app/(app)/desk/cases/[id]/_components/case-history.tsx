@@ -1,4 +1,4 @@
-import { useTranslations } from 'next-intl';
+import { useLocale, useTranslations } from 'next-intl';
 import { formatTime } from '@/lib/format/time';
 import { PhotoZoom } from './photo-zoom';
 
@@ -19,12 +19,13 @@ const isKnown = (kind: string): kind is (typeof KINDS)[number] => (KINDS as read
 
 export function CaseHistory({ events, timeZone }: { events: Event[]; timeZone: string }) {
   const t = useTranslations('Case');
+  const locale = useLocale();
   return (
     <ol className="space-y-2" aria-label={t('historyLabel')}>
       {events.map((e) => (
         <li key={e.id} className="rounded-lg bg-paper p-2 text-gate-sm">
           <span className="font-bold">{isKnown(e.kind) ? t(`event.${e.kind}`) : e.kind}</span> ·{' '}
-          {formatTime(e.createdAt, timeZone)}
+          {formatTime(e.createdAt, timeZone, 'dateTime', locale)}
           {e.actorName
             ? ` · ${e.actorName} (${e.actorRole})`
             : e.kind === 'dispute'

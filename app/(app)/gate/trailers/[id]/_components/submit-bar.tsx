@@ -17,9 +17,9 @@ export function SubmitBar({
   const t = useTranslations('Handoff.confirm');
   return (
     <div className="sticky bottom-0 space-y-2 border-t-2 border-paper-line bg-paper py-2">
-      {status === 'queued' ? (
+      {status === 'queued' || status === 'behindPhoto' ? (
         <p role="status" className="rounded-lg bg-warn-bg p-3 text-gate font-bold text-warn">
-          {t('queued')}
+          {t(status)}
         </p>
       ) : null}
       {refusal ? (

@@ -2,15 +2,20 @@
 
 import { useRouter } from 'next/navigation';
 import { useCallback, useEffect, useRef, useState, type Dispatch, type SetStateAction } from 'react';
-import { addToOutbox, removeFromOutbox } from '@/app/_components/offline/outbox-client';
-import { useOutboxItems } from '@/app/_components/offline/offline-provider';
+import { addToOutbox, removeFromOutbox, snapshot } from '@/app/_components/offline/outbox-client';
+import { useIsOnline, useOutboxItems } from '@/app/_components/offline/offline-provider';
+import { waitingPhotoIds } from '@/lib/offline/outbox';
 import { errorsByField } from '@/lib/handoffs/steps';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { precheck } from './precheck';
 import type { StoredDraft } from './use-draft';
 
 export type SubmitRefusal = { message: string; holds?: { reason: string }[]; cautions?: string[] };
-export type SubmitStatus = 'idle' | 'sending' | 'queued';
+/** `behindPhoto`: queued with signal, because a photo it holds still waits to send. */
+export type SubmitStatus = 'idle' | 'sending' | 'queued' | 'behindPhoto';
+
+const photoIdsOf = (d: StoredDraft) =>
+  Object.values(d.items).flatMap((it) => it.photos?.map((p) => p.id) ?? []);
 
 type Answer = {
   handoff?: { receiptUrl?: string };
@@ -24,7 +29,9 @@ type Answer = {
  * Sends the draft to POST /api/handoffs. Without signal (or when the request cannot leave the
  * phone) the submit goes into the phone's outbox (IndexedDB) under the draft's idempotency key;
  * the outbox sends it when the signal returns, from whatever screen is open, and this form
- * follows it: to the receipt once sent, or back to the answers if the server refused it.
+ * follows it: to the receipt once sent, or back to the answers if the server refused it. With
+ * signal, a handoff holding a photo that still waits in the outbox is queued behind that photo
+ * (the outbox sends items in order), rather than sent at once and refused for a missing photo.
  */
 export function useSubmit(
   draft: StoredDraft | null,
@@ -50,6 +57,7 @@ export function useSubmit(
   const [refusal, setRefusal] = useState<SubmitRefusal | null>(null);
   const [status, setStatus] = useState<SubmitStatus>('idle');
   const outbox = useOutboxItems();
+  const isOnline = useIsOnline();
 
   const refused = useCallback(
     (d: StoredDraft, answer: Answer) => {
@@ -96,6 +104,7 @@ export function useSubmit(
         return;
       }
       if (!navigator.onLine) return queue(d, body as Record<string, unknown>);
+      if (waitingPhotoIds(snapshot(), photoIdsOf(d)).length) return queue(d, body as Record<string, unknown>);
       setStatus('sending');
       let res: Response;
       inFlight.current = true;
@@ -160,7 +169,10 @@ export function useSubmit(
     }
   }, [draft, key, item, isReefer, last, refused, forget, router]);
 
-  // a draft queued before a reload shows as queued while its item waits
-  const shown: SubmitStatus = status === 'idle' && item?.state === 'pending' ? 'queued' : status;
+  // a draft queued before a reload shows as queued while its item waits; with signal, a queue
+  // that holds one of its photos says it waits for the photo
+  const isQueued = status === 'queued' || (status === 'idle' && item?.state === 'pending');
+  const behindPhoto = isOnline && !!draft && waitingPhotoIds(outbox, photoIdsOf(draft)).length > 0;
+  const shown: SubmitStatus = isQueued ? (behindPhoto ? 'behindPhoto' : 'queued') : status;
   return { send, errors: shownErrors.errors, errorRound: shownErrors.round, refusal, status: shown };
 }
