@@ -1,5 +1,5 @@
 import 'server-only';
-import { and, eq, isNull, sql } from 'drizzle-orm';
+import { and, asc, eq, gt, isNull, sql } from 'drizzle-orm';
 import { db, type Tx } from '@/db';
 import { holds, trailers, yardMoves, yardSpots } from '@/db/schema';
 
@@ -42,6 +42,20 @@ export async function lockOccupant(tx: Tx, spotId: string) {
 export async function spotLabel(tx: Tx, spotId: string): Promise<string | null> {
   const [spot] = await tx.select({ label: yardSpots.label }).from(yardSpots).where(eq(yardSpots.id, spotId));
   return spot?.label ?? null;
+}
+
+/**
+ * The trailer's first move made after `at`, if any: a queued move that reaches the server after
+ * it is history, and its from-spot is where that later move found the trailer.
+ */
+export async function firstMoveAfter(tx: Tx, trailerId: string, at: Date) {
+  const [row] = await tx
+    .select({ fromSpotId: yardMoves.fromSpotId })
+    .from(yardMoves)
+    .where(and(eq(yardMoves.trailerId, trailerId), gt(yardMoves.movedAt, at)))
+    .orderBy(asc(yardMoves.movedAt))
+    .limit(1);
+  return row ?? null;
 }
 
 export async function insertYardMove(tx: Tx, move: typeof yardMoves.$inferInsert): Promise<string> {

@@ -5,6 +5,7 @@ import {
   findSpotByLabel,
   getMoveByClientKey,
   hasOpenOutOfServiceHold,
+  firstMoveAfter,
   insertYardMove,
   lockOccupant,
   lockSpot,
@@ -16,6 +17,7 @@ import { abort, done, refuse, refuseField, settle, type FieldErrors, type Result
 import type { MoveInput } from '@/lib/validation/yard';
 import { madeAtProblem } from '@/lib/yard/move-time';
 import { NO_TERMINAL, type YardActor } from './actor';
+import { historyOnly } from './history-only';
 import { identifyTrailer } from './identify';
 
 export type Moved = {
@@ -26,9 +28,15 @@ export type Moved = {
   isOutOfService: boolean;
   /** True when the phone's key named a move already recorded: nothing new was written. */
   isReplay?: boolean;
+  /**
+   * Set when a move made later already reached the server (a move queued without signal arrives
+   * after another phone's newer one): this move is kept in the history only, and the trailer
+   * stays where the later move put it, in this slot or door.
+   */
+  laterSpotLabel?: string | null;
 };
 
-type Move = {
+export type Move = {
   terminalId: string;
   actorId: string;
   trailerId: string;
@@ -79,6 +87,10 @@ export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<
   if (!target || target.retiredAt) fieldErrors.target = ['No such slot or door in this yard.'];
   if (!trailer || !target || fieldErrors.unit || fieldErrors.target)
     abort(refuse('not_found', Object.values(fieldErrors).flat().join(' '), fieldErrors));
+  // the move's time is when it was made; the row's created_at keeps when it reached the server
+  const movedAt = move.madeAt ?? now;
+  const later = move.madeAt ? await firstMoveAfter(tx, move.trailerId, movedAt) : null;
+  if (later) return historyOnly(tx, move, { ...trailer, target, movedAt, fromSpotId: later.fromSpotId });
   if (trailer.spotId === target.id)
     abort(refuseField('invalid', 'target', `${trailer.unitNumber} is already in ${target.label}.`));
   const occupant = await lockOccupant(tx, target.id);
@@ -93,8 +105,6 @@ export async function moveInTransaction(tx: Tx, move: Move, now: Date): Promise<
     );
   }
   const fromLabel = trailer.spotId ? await spotLabel(tx, trailer.spotId) : null;
-  // the move's time is when it was made; the row's created_at keeps when it reached the server
-  const movedAt = move.madeAt ?? now;
   const moveId = await insertYardMove(tx, {
     trailerId: move.trailerId,
     terminalId: move.terminalId,

@@ -1,5 +1,6 @@
 // A yard move queued on a phone without signal is recorded at the time it was made, keeps the time
-// it reached the server, and sorts in the trailer's history by the time it was made.
+// it reached the server, and sorts in the trailer's history by the time it was made; arriving
+// after a move made later, it is history and leaves the trailer where the later move put it.
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, pool } from '@/db';
@@ -73,6 +74,35 @@ describe('a queued yard move keeps the time it was made', () => {
     expect(moves).toHaveLength(2);
     expect(moves[0]).toBeGreaterThan(moves[1]);
     expect(moves[1]).toBe(Date.parse(queued.madeAt));
+  });
+
+  it('keeps the trailer where a later move put it when an earlier queued move arrives after it', async () => {
+    const tag = uniqueTag();
+    const { spots } = await createRowWithSlots(db, terminalId, `Row T${tag}`, 3);
+    const [a] = await placeTrailers(db, terminalId, tag, [spots[0].id]);
+    // another phone moves the trailer to the second slot now …
+    expect((await recordMove(jockey, { unit: a.unitNumber, target: spots[1].label })).ok).toBe(true);
+    // … then a move to the third slot, made 20 minutes ago without signal, reaches the server
+    const queued = { unit: a.unitNumber, target: spots[2].label, clientKey: `q-${tag}-4`, madeAt: ago(20) };
+    const late = await recordMove(jockey, moveSchema.parse(queued));
+    expect(late).toMatchObject({
+      ok: true,
+      value: { fromLabel: spots[0].label, toLabel: spots[2].label, laterSpotLabel: spots[1].label },
+    });
+    const [t] = await db
+      .select({ spotId: trailers.currentSpotId, seen: trailers.lastSeenAt })
+      .from(trailers)
+      .where(eq(trailers.id, a.id));
+    expect(t.spotId).toBe(spots[1].id);
+    expect(t.seen!.getTime()).toBeGreaterThan(Date.parse(queued.madeAt));
+    // the late move is in the history, from where the later move found the trailer
+    const rows = await db.select().from(yardMoves).where(eq(yardMoves.trailerId, a.id));
+    const recorded = rows.find((r) => r.clientKey === queued.clientKey);
+    expect(recorded).toMatchObject({ fromSpotId: spots[0].id, toSpotId: spots[2].id });
+    // sent again from the outbox: the same move, nothing new
+    const again = await recordMove(jockey, moveSchema.parse(queued));
+    expect(again).toMatchObject({ ok: true, value: { moveId: recorded!.id, isReplay: true } });
+    expect(await db.select().from(yardMoves).where(eq(yardMoves.trailerId, a.id))).toHaveLength(2);
   });
 
   it('refuses a time beyond the bounds under the field madeAt, and records nothing', async () => {
