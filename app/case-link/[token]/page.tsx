@@ -1,12 +1,13 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { getTranslations } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { listCaseFindings } from '@/db/queries/case-evidence';
 import { getCase } from '@/db/queries/cases';
 import { verifyCaseLink } from '@/lib/desk/case-link';
 import { isWithinDisputeWindow } from '@/lib/desk/case-state';
 import { effectiveAmountCents } from '@/lib/desk/estimate';
 import { itemLabel } from '@/lib/desk/item-labels';
+import { itemLabel as itemWords } from '@/lib/i18n/checklist';
 import { CONDITION_LABELS } from '@/lib/engine';
 import { formatMoney } from '@/lib/format/money';
 import { formatTime } from '@/lib/format/time';
@@ -29,6 +30,7 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
   const findings = await listCaseFindings(c);
   const t = await getTranslations('CaseLink');
   const desk = await getTranslations('Desk');
+  const locale = await getLocale();
   const isOpen = c.state === 'notified' && isWithinDisputeWindow(c.disputeDeadline, new Date());
   return (
     <main className="mx-auto max-w-3xl space-y-4 p-4">
@@ -46,7 +48,7 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
         {findings.map((f) => (
           <li key={f.id} className="rounded-xl bg-paper p-3">
             <p className="text-gate font-bold">
-              {itemLabel(f.itemKey)}:{' '}
+              {itemWords(locale, f.itemKey, itemLabel(f.itemKey))}:{' '}
               {f.previousCondition ? CONDITION_LABELS[f.previousCondition] : t('noEarlier')} →{' '}
               {f.condition ? CONDITION_LABELS[f.condition] : t('notChecked')}
             </p>

@@ -1,6 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
+import { useTranslations } from 'next-intl';
 import { useCallback, useEffect, useRef, useState, type Dispatch, type SetStateAction } from 'react';
 import { addToOutbox, removeFromOutbox } from '@/app/_components/offline/outbox-client';
 import { useOutboxItems } from '@/app/_components/offline/offline-provider';
@@ -33,6 +34,7 @@ export function useSubmit(
   check: { isReefer: boolean; last: TrailerCondition['last']; itemKeys: readonly string[] },
 ) {
   const router = useRouter();
+  const t = useTranslations('Handoff.send');
   const { isReefer, last, itemKeys } = check;
   const [shownErrors, setShownErrors] = useState<{ errors: Record<string, string[]>; round: number }>({
     errors: {},
@@ -57,12 +59,12 @@ export function useSubmit(
       setDraft({ ...d, isQueued: false });
       setErrors(answer.fieldErrors ?? {});
       setRefusal({
-        message: answer.message ?? 'The handoff was not recorded.',
+        message: answer.message ?? t('notRecorded'),
         holds: answer.holds,
         cautions: answer.cautions,
       });
     },
-    [setDraft, setErrors],
+    [setDraft, setErrors, t],
   );
 
   const queue = useCallback(
@@ -92,7 +94,7 @@ export function useSubmit(
       setErrors(found);
       setRefusal(null);
       if (Object.keys(found).length) {
-        setRefusal({ message: 'Some answers need attention (marked in red).' });
+        setRefusal({ message: t('needsAttention') });
         return;
       }
       if (!navigator.onLine) return queue(d, body as Record<string, unknown>);
@@ -120,7 +122,7 @@ export function useSubmit(
       if (res.status >= 500) return queue(d, body as Record<string, unknown>);
       refused(d, answer);
     },
-    [isReefer, last, forget, router, queue, refused, setErrors],
+    [isReefer, last, forget, router, queue, refused, setErrors, t],
   );
 
   // a queued draft follows its outbox item: sent → receipt, refused → back to the answers;
