@@ -131,6 +131,7 @@ export function GateStep({
                 }
               }}
               className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-on-fill"
+              data-testid="same-as-last-all"
             >
               {t('safety.sameAsLastAll')}
             </button>
