@@ -3,6 +3,7 @@ import { Caution } from '@/app/_components/caution';
 import { formatStamp } from '@/lib/format/time';
 import { findingWords, holdTitle, type ReceiptView } from '@/lib/handoffs/receipt';
 import { formatVerificationCode } from '@/lib/handoffs/verification-code';
+import { itemLabel } from '@/lib/i18n/checklist';
 
 /** The receipt as the gate, the e-mail and the public verify page show it. Photos only where the viewer may see them. */
 export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptView; showPhotos: boolean }) {
@@ -108,7 +109,11 @@ export function ReceiptSummary({ receipt: r, showPhotos }: { receipt: ReceiptVie
                   {/* eslint-disable-next-line @next/next/no-img-element -- served by the app, checked and sized at upload */}
                   <img
                     src={`/api/photos/${p.id}`}
-                    alt={p.itemKey ? t('receipt.photoOf', { item: p.itemKey }) : t('receipt.photo')}
+                    alt={
+                      p.itemKey
+                        ? t('receipt.photoOf', { item: itemLabel(locale, p.itemKey) })
+                        : t('receipt.photo')
+                    }
                     className="h-24 w-24 rounded border-2 border-paper-line object-cover"
                   />
                 </a>

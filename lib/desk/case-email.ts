@@ -4,7 +4,8 @@ import type { Condition } from '@/lib/engine';
 import { formatMoney } from '@/lib/format/money';
 import { formatTime } from '@/lib/format/time';
 import type { Locale } from '@/lib/i18n/locales';
-import { itemLabel as itemWords, storedText } from '@/lib/i18n/reasons';
+import { itemLabel as itemWords } from '@/lib/i18n/checklist';
+import { storedText } from '@/lib/i18n/reasons';
 import { translatorFor, writingLocale } from '@/lib/i18n/translate';
 import type { Decision } from './case-state';
 import { itemLabel } from './item-labels';
@@ -45,7 +46,6 @@ export function caseEmailFacts(
 ): CaseEmailFacts {
   const lang = writingLocale(locale);
   const t = translatorFor(lang, 'Mail');
-  const reasons = translatorFor(lang, 'Reasons');
   const condition = (v: Condition | null) => (v ? t(`condition.${v}`) : null);
   return {
     locale: lang,
@@ -56,7 +56,7 @@ export function caseEmailFacts(
     handoffAt: c.occurredAt,
     amountCents,
     items: findings.map((f) => ({
-      label: itemWords(reasons, f.itemKey, itemLabel(f.itemKey)),
+      label: itemWords(lang, f.itemKey, itemLabel(f.itemKey)),
       before: condition(f.previousCondition),
       after: condition(f.condition),
       reason: storedText(f.reason, f.reasonCode, f.reasonParams, lang, c.timeZone),

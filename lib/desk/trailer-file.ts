@@ -221,7 +221,7 @@ export function buildTrailerFile(rows: FileRows, kind?: FileKind, window?: FileW
       detail: null,
       words: {
         title: p.itemKey
-          ? { key: 'photoOf', values: { item: itemLabel(p.itemKey) } }
+          ? { key: 'photoOf', values: { item: itemLabel(p.itemKey), itemKey: p.itemKey } }
           : { key: 'photo', values: {} },
         detail: [],
       },

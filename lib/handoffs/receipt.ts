@@ -51,17 +51,6 @@ export function receiptLetters(driver: Reader | null, carrier: Reader): ReceiptL
   return [{ to: driver.email, cc: null, locale }, toCarrier];
 }
 
-/** English hold headings, kept for screens not yet moved to the Mail catalogue (holdTitle speaks both). */
-export const HOLD_WORDS = {
-  out_of_service: 'Out of service: may not leave the gate',
-  restricted: 'Restricted',
-} as const;
-
-export const RESTRICTION_WORDS: Record<string, string> = {
-  no_perishable: 'no perishable loads',
-  yard_only: 'yard moves only',
-};
-
 /** The heading of a finding's kind in `locale` (`fuel_short` → "Fuel short"). */
 export function findingWords(kind: string, locale: string | null = 'en'): string {
   const t = translatorFor(locale, 'Mail');

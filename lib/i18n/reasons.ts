@@ -7,6 +7,7 @@ import { createTranslator } from 'use-intl/core';
 import { z } from 'zod';
 import type { Reason } from '@/lib/engine';
 import { formatStamp } from '@/lib/format/time';
+import { itemLabel } from './checklist';
 import { DEFAULT_LOCALE, parseLocale, type Locale } from './locales';
 import { MESSAGES } from './messages';
 
@@ -46,27 +47,6 @@ function translator(locale: Locale, onError: (message: string) => void): T {
     translators.set(locale, t);
   }
   return t;
-}
-
-/** The checklist item `key` in the reader's language; `fallback` (the recorded label) when unknown. */
-export function itemLabel(t: T, key: string, fallback: string): string {
-  let m: RegExpExecArray | null;
-  if ((m = /^(left|right)_side\.(\w+)$/.exec(key))) {
-    const k = `item.side__${m[2]}`;
-    return t.has(k) ? t(k, { side: m[1] }) : fallback;
-  }
-  if ((m = /^undercarriage\.tandem_pin\.(\w+)$/.exec(key)))
-    return t('item.undercarriage__tandem_pin', { position: m[1] });
-  if ((m = /^tires\.axle(\d+)\.(\w+)$/.exec(key)))
-    return t('item.tire', { axle: Number(m[1]), position: m[2] });
-  if ((m = /^rear\.door_(left|right)\.hinge_(\d+)$/.exec(key)))
-    return t('item.door__hinge', { door: m[1], n: Number(m[2]) });
-  if ((m = /^rear\.door_(left|right)\.(\w+)$/.exec(key))) {
-    const k = `item.door__${m[2]}`;
-    return t.has(k) ? t(k, { door: m[1] }) : fallback;
-  }
-  const k = `item.${key.replaceAll('.', '__')}`;
-  return /^[a-z0-9_.]+$/.test(key) && t.has(k) ? t(k) : fallback;
 }
 
 function words(t: T, group: 'condition' | 'state', c: unknown): string {
@@ -122,7 +102,7 @@ function valuesFor(
   for (const [k, v] of Object.entries(params)) {
     if (k === 'label') continue;
     if (k === 'item')
-      out.label = itemLabel(t, String(v), typeof params.label === 'string' ? params.label : String(v));
+      out.label = itemLabel(locale, String(v), typeof params.label === 'string' ? params.label : String(v));
     else if (k === 'previous' || k === 'current') out[k] = words(t, conditionGroup, v);
     else if (k === 'before' || k === 'now') out[k] = eventWords(t, v, locale, zone);
     else if (k === 'holder') out[k] = partyWords(t, v);

@@ -1,4 +1,4 @@
-import { CAUTIONS } from '@/app/_components/caution';
+import { getTranslations } from 'next-intl/server';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { refuse, type Refusal } from '@/lib/result';
 import { route } from '@/lib/server/api';
@@ -7,16 +7,20 @@ import { handoffSubmitSchema } from '@/lib/validation/handoffs';
 
 type RefusedHold = { severity: string; restriction: string | null };
 
-/** A refused hook names its holds (each with its caution); the driver also reads the cautions that fit them. */
-function withCautions(r: Refusal): Refusal {
+/**
+ * A refused hook names its holds (each with its caution); the driver also reads the cautions that
+ * fit them, in the reader's language (English for a client that has not chosen one).
+ */
+async function withCautions(r: Refusal): Promise<Refusal> {
   const holds = r.detail?.holds as RefusedHold[] | undefined;
   if (!Array.isArray(holds) || !holds.length) return r;
   const has = (test: (h: RefusedHold) => boolean) => holds.some(test);
+  const c = await getTranslations('Cautions');
   const cautions: string[] = [
-    has((h) => h.severity === 'out_of_service') ? CAUTIONS.outOfService : null,
-    has((h) => h.restriction === 'yard_only') ? CAUTIONS.yardOnly : null,
-    has((h) => h.restriction === 'no_perishable') ? CAUTIONS.noPerishable : null,
-    CAUTIONS.inspection,
+    has((h) => h.severity === 'out_of_service') ? c('outOfService') : null,
+    has((h) => h.restriction === 'yard_only') ? c('yardOnly') : null,
+    has((h) => h.restriction === 'no_perishable') ? c('noPerishable') : null,
+    c('inspection'),
   ].flatMap((c) => (c === null ? [] : [c]));
   return refuse(r.code, r.message, r.fieldErrors, { holds, cautions });
 }

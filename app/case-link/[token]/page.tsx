@@ -7,7 +7,7 @@ import { verifyCaseLink } from '@/lib/desk/case-link';
 import { isWithinDisputeWindow } from '@/lib/desk/case-state';
 import { effectiveAmountCents } from '@/lib/desk/estimate';
 import { itemLabel } from '@/lib/desk/item-labels';
-import { CONDITION_LABELS } from '@/lib/engine';
+import { itemLabel as itemWords } from '@/lib/i18n/checklist';
 import { formatMoney } from '@/lib/format/money';
 import { formatTime } from '@/lib/format/time';
 import { caseLinkSecret } from '@/lib/server/env';
@@ -30,6 +30,7 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
   const t = await getTranslations('CaseLink');
   const locale = await getLocale();
   const desk = await getTranslations('Desk');
+  const condition = await getTranslations('Reasons.condition');
   const isOpen = c.state === 'notified' && isWithinDisputeWindow(c.disputeDeadline, new Date());
   return (
     <main className="mx-auto max-w-3xl space-y-4 p-4">
@@ -47,9 +48,9 @@ export default async function CaseLinkPage({ params }: PageProps<'/case-link/[to
         {findings.map((f) => (
           <li key={f.id} className="rounded-xl bg-paper p-3">
             <p className="text-gate font-bold">
-              {itemLabel(f.itemKey)}:{' '}
-              {f.previousCondition ? CONDITION_LABELS[f.previousCondition] : t('noEarlier')} →{' '}
-              {f.condition ? CONDITION_LABELS[f.condition] : t('notChecked')}
+              {itemWords(locale, f.itemKey, itemLabel(f.itemKey))}:{' '}
+              {f.previousCondition ? condition(f.previousCondition) : t('noEarlier')} →{' '}
+              {f.condition ? condition(f.condition) : t('notChecked')}
             </p>
             <p className="text-gate-sm" data-stored-text="">
               {f.reason}

@@ -27,6 +27,7 @@ import enTheme from './en/Theme.json';
 import enTrailerFilePages from './en/TrailerFilePages.json';
 import enYardRows from './en/YardRows.json';
 import enMail from './en/Mail.json';
+import enChecklist from './en/Checklist.json';
 import esAccount from './es/Account.json';
 import esGate from './es/Gate.json';
 import esHandoff from './es/Handoff.json';
@@ -53,6 +54,7 @@ import esTheme from './es/Theme.json';
 import esTrailerFilePages from './es/TrailerFilePages.json';
 import esYardRows from './es/YardRows.json';
 import esMail from './es/Mail.json';
+import esChecklist from './es/Checklist.json';
 
 const en = {
   Refusals: enRefusals,
@@ -81,6 +83,7 @@ const en = {
   TrailerFilePages: enTrailerFilePages,
   YardRows: enYardRows,
   Mail: enMail,
+  Checklist: enChecklist,
 };
 
 /** The English catalogue's shape is the one every language must match (the unit test checks keys). */
@@ -115,5 +118,6 @@ export const MESSAGES: Record<Locale, Messages> = {
     TrailerFilePages: esTrailerFilePages,
     YardRows: esYardRows,
     Mail: esMail,
+    Checklist: esChecklist,
   },
 };

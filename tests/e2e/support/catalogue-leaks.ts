@@ -1,12 +1,14 @@
 // The English sentences and words of the message catalogues, as a Spanish page must not show them.
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import type { Page } from '@playwright/test';
+import { expect, type Page } from '@playwright/test';
+import { createTranslator } from 'use-intl/core';
 
 type Tree = { [key: string]: string | Tree };
+export type Lang = 'en' | 'es';
 
 // read from the files (Playwright's loader does not take JSON imports): lib/i18n/messages/<lang>/<Ns>.json
-function catalogue(lang: 'en' | 'es'): Record<string, Tree> {
+function catalogue(lang: Lang): Record<string, Tree> {
   const dir = join('lib/i18n/messages', lang);
   return Object.fromEntries(
     readdirSync(dir)
@@ -15,6 +17,15 @@ function catalogue(lang: 'en' | 'es'): Record<string, Tree> {
   );
 }
 const MESSAGES = { en: catalogue('en'), es: catalogue('es') };
+
+export type Say = (key: string, values?: Record<string, string | number>) => string;
+
+/** The messages of one namespace in `lang`, formatted as the app formats them (use-intl, ICU). */
+export function say(lang: Lang, namespace: string): Say {
+  if (!MESSAGES[lang][namespace]) throw new Error(`no namespace ${namespace}`);
+  const t = createTranslator({ locale: lang, messages: MESSAGES[lang], namespace } as never) as unknown;
+  return t as Say;
+}
 
 function flatten(tree: Tree, prefix = ''): [string, string][] {
   return Object.entries(tree).flatMap(([k, v]) =>
@@ -119,4 +130,14 @@ export function englishDateWords(): string[] {
   ];
   const spanish = new Set(words('es').map((w) => w.replace(/\.$/, '')));
   return [...new Set(words('en-US'))].filter((w) => !spanish.has(w));
+}
+
+/**
+ * Fails when the page, as it is now, shows any of the English fragments (visible text and
+ * accessible names, stored text excepted). `where` names the page or step in the message.
+ */
+export async function expectNoEnglishOn(page: Page, fragments: string[], where: string) {
+  await expect(page.locator('html')).toHaveAttribute('lang', 'es');
+  const found = leaks(await pageWords(page), fragments);
+  expect(found, `English on ${where}`).toEqual([]);
 }

@@ -2,6 +2,7 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { createTranslator } from 'next-intl';
 import { describe, expect, it } from 'vitest';
+import { HOOK_WORDS } from '@/lib/handoffs/hook-words';
 import { knownRefusal, localizeRefusal } from '@/lib/i18n/refusals';
 import { MESSAGES } from '@/lib/i18n/messages';
 
@@ -24,6 +25,24 @@ describe('refusals in the reader’s language', () => {
   it('says a known refusal in Spanish with its values in place', () => {
     expect(toSpanish('R53012 is already in A-07.')).toBe('R53012 ya está en A-07.');
     expect(toSpanish('Choose at least one row.')).toBe('Escoja al menos una fila.');
+  });
+
+  it('says every refusal of a hook at the gate in Spanish, with the unit in place', () => {
+    const sent = [
+      ...(['out_of_service', 'yard_only', 'perishable_load'] as const).flatMap((because) =>
+        [false, true].map((foundNow) => HOOK_WORDS.refused('R53012', because, foundNow)),
+      ),
+      HOOK_WORDS.perishableAsk('R53012'),
+      HOOK_WORDS.perishableField,
+    ];
+    const keys = sent.map((m) => knownRefusal(m)?.key);
+    // each sentence its own message: a refusal found at this hook also says the trailer is now on hold
+    expect(new Set(keys).size).toBe(sent.length);
+    expect(keys).not.toContain(undefined);
+    expect(toSpanish(HOOK_WORDS.refused('R53012', 'out_of_service', false))).toBe(
+      'La caja R53012 está fuera de servicio y no puede salir por la caseta.',
+    );
+    for (const m of sent) expect(toSpanish(m)).not.toMatch(/\b(Trailer|trailer|gate|load)\b/);
   });
 
   it('leaves a message it does not know as it is', () => {

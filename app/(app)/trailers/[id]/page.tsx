@@ -9,6 +9,7 @@ import { SECTION_ROLES } from '@/lib/auth/roles';
 import { isDeskStaff } from '@/lib/desk/access';
 import { findingTitle } from '@/lib/desk/finding-title';
 import { buildTrailerFile, STORED, type FileWords } from '@/lib/desk/trailer-file';
+import { itemLabel } from '@/lib/i18n/checklist';
 import { readable } from '@/lib/i18n/reasons';
 import { formatTime, toLocalInput } from '@/lib/format/time';
 import { requireUser } from '@/lib/server/auth';
@@ -81,6 +82,9 @@ export default async function TrailerFilePage({ params, searchParams }: PageProp
         { kind: w.values.kind, itemKey: w.values.item, condition: w.values.condition || null },
         locale,
       );
+    // the item in the reader's language (the Checklist catalogue), the recorded label when it has none
+    if (w.key === 'photoOf' && w.values.itemKey)
+      return t('file.entry.photoOf', { item: itemLabel(locale, w.values.itemKey, w.values.item) });
     if (w.key === 'case') {
       const state = desk.has(`state.${w.values.state}` as 'state.open')
         ? desk(`state.${w.values.state}` as 'state.open')

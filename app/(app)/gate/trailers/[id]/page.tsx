@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { getLocale } from 'next-intl/server';
+import { getLocale, getTranslations } from 'next-intl/server';
 import { getDriverGateDefaults } from '@/db/queries/gate-defaults';
 import { listOpenHolds } from '@/db/queries/handoffs';
 import { listCarriers } from '@/db/queries/trailers';
@@ -13,20 +13,23 @@ import { HandoffForm } from './_components/handoff-form';
 import { HoldList, HookRefused } from './_components/hook-refused';
 import { TrailerSummary } from './_components/trailer-summary';
 
-export const metadata: Metadata = { title: 'Handoff' };
+export async function generateMetadata(): Promise<Metadata> {
+  return { title: (await getTranslations('Handoff'))('metaTitle') };
+}
 
 export default async function HandoffStartPage({ params, searchParams }: PageProps<'/gate/trailers/[id]'>) {
   const user = await requireUser(SECTION_ROLES.gate);
   const id = idParamSchema.safeParse((await params).id);
   if (!id.success) notFound();
-  const condition = await getTrailerCondition(id.data, user.role);
+  const locale = await getLocale();
+  const condition = await getTrailerCondition(id.data, user.role, locale);
   if (!condition) notFound();
   const { trailer } = condition;
   const asked = (await searchParams).kind;
   const suggested = trailer.status === 'in_yard' ? 'hook' : 'drop';
   const kind = asked === 'drop' || asked === 'hook' ? asked : suggested;
   // stored reasons and cautions in the reader's language (lib/i18n/reasons.ts)
-  const holds = readable(await listOpenHolds(trailer.id), await getLocale(), user.terminalTimeZone ?? 'UTC');
+  const holds = readable(await listOpenHolds(trailer.id), locale, user.terminalTimeZone ?? 'UTC');
   const outOfService = holds.filter((h) => h.severity === 'out_of_service');
   const yardOnly = holds.filter((h) => h.severity === 'restricted' && h.restriction === 'yard_only');
   const restricted = holds.filter((h) => h.severity === 'restricted');
@@ -43,7 +46,7 @@ export default async function HandoffStartPage({ params, searchParams }: PagePro
         <HookRefused unitNumber={trailer.unitNumber} holds={refusing} />
       ) : (
         <>
-          {restricted.length ? <HoldList title="Restricted" holds={restricted} /> : null}
+          {restricted.length ? <HoldList holds={restricted} /> : null}
           <HandoffForm
             condition={condition}
             kind={kind}

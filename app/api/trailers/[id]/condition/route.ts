@@ -1,3 +1,4 @@
+import { getLocale } from 'next-intl/server';
 import { z } from 'zod';
 import { SECTION_ROLES } from '@/lib/auth/roles';
 import { refuse } from '@/lib/result';
@@ -11,7 +12,7 @@ const ROLES_AT_GATE_OR_YARD = [...new Set([...SECTION_ROLES.gate, ...SECTION_ROL
 export const GET = route(
   { access: ROLES_AT_GATE_OR_YARD, params: z.object({ id: idParamSchema }), notFound: 'No such trailer.' },
   async ({ user, params }) => {
-    const condition = await getTrailerCondition(params.id, user.role);
+    const condition = await getTrailerCondition(params.id, user.role, await getLocale());
     return condition ? Response.json(condition) : refuse('not_found', 'No such trailer.');
   },
 );

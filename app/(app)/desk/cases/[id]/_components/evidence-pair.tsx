@@ -1,6 +1,7 @@
 import { useLocale, useTranslations } from 'next-intl';
 import type { CaseEvidence, CaseFinding } from '@/db/queries/case-evidence';
 import { itemLabel } from '@/lib/desk/item-labels';
+import { itemLabel as itemWords } from '@/lib/i18n/checklist';
 import { CONDITION_LABELS, type Condition } from '@/lib/engine';
 import { formatTime } from '@/lib/format/time';
 import { PhotoZoom } from './photo-zoom';
@@ -76,7 +77,7 @@ export function EvidencePair({
   timeZone: string;
 }) {
   const t = useTranslations('Case');
-  const name = itemLabel(finding.itemKey);
+  const name = itemWords(useLocale(), finding.itemKey, itemLabel(finding.itemKey));
   const sideOf = (title: string, handoffId: string | null): Side => ({
     title,
     handoff: evidence.handoffs.find((h) => h.id === handoffId),

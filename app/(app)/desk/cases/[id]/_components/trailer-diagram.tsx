@@ -1,15 +1,19 @@
 // Hitchmark's own drawing of a reefer trailer, nose to the left, seen from above and from its left
 // side, with the zones that have damage in this case filled in.
 import { useTranslations } from 'next-intl';
-import { ZONE_LABELS } from '@/lib/engine';
 
 type Props = { damagedZones: string[]; isReefer: boolean; axles: number };
 
-const ZONE_NAMES: Record<string, string> = ZONE_LABELS;
+/** A zone's name in the reader's language (the Checklist catalogue); the key when it has none. */
+function useZoneName() {
+  const z = useTranslations('Checklist');
+  return (zone: string) => (z.has(`zones.${zone}`) ? z(`zones.${zone}`) : zone);
+}
 
 /** One zone of the drawing: filled red when this case has damage there. */
 function Zone({ zone, hit, children }: { zone: string; hit: Set<string>; children: React.ReactNode }) {
   const t = useTranslations('Case');
+  const zoneName = useZoneName();
   const isDamaged = hit.has(zone);
   return (
     <g
@@ -18,9 +22,7 @@ function Zone({ zone, hit, children }: { zone: string; hit: Set<string>; childre
       data-zone={zone}
       data-damaged={isDamaged || undefined}
     >
-      <title>
-        {isDamaged ? t('diagram.damaged', { zone: ZONE_NAMES[zone] ?? zone }) : (ZONE_NAMES[zone] ?? zone)}
-      </title>
+      <title>{isDamaged ? t('diagram.damaged', { zone: zoneName(zone) }) : zoneName(zone)}</title>
       {children}
     </g>
   );
@@ -28,9 +30,10 @@ function Zone({ zone, hit, children }: { zone: string; hit: Set<string>; childre
 
 export function TrailerDiagram({ damagedZones, isReefer, axles }: Props) {
   const t = useTranslations('Case');
+  const zoneName = useZoneName();
   const hit = new Set(damagedZones);
   const label = damagedZones.length
-    ? t('diagram.damageAt', { zones: damagedZones.map((z) => ZONE_NAMES[z] ?? z).join(', ') })
+    ? t('diagram.damageAt', { zones: damagedZones.map(zoneName).join(', ') })
     : t('diagram.noZone');
   const wheelXs = Array.from({ length: Math.max(1, Math.min(axles, 3)) }, (_, i) => 470 - i * 34);
   return (

@@ -7,14 +7,12 @@ import { Caution } from '@/app/_components/caution';
 import { FieldError, Textarea } from '@/app/_components/field';
 import type { ChecklistItem, SafetyGroup } from '@/lib/engine';
 import { sameAsLastForZone, type Draft, type DraftItem } from '@/lib/handoffs/draft';
-import { HOOK_WORDS } from '@/lib/handoffs/hook-words';
 import { HANDOFF_LIMITS } from '@/lib/handoffs/limits';
 import type { StepKey } from '@/lib/handoffs/steps';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { Choice } from './choice';
 import type { HandoffFormProps } from './handoff-form';
 import { FuelButtons, ReeferFields } from './readings-fields';
-import { SAFETY_WORDS } from './safety-words';
 import { SubmitBar } from './submit-bar';
 import type { StoredDraft } from './use-draft';
 import type { SubmitRefusal, SubmitStatus } from './use-submit';
@@ -73,7 +71,7 @@ export function GateStep({
           {form.asksPerishable || errors.isLoadPerishable ? (
             <div>
               <Choice
-                label={HOOK_WORDS.perishableQuestion}
+                label={t('hold.perishableQuestion')}
                 options={[
                   { value: true, label: t('who.perishableYes'), tone: 'warn' },
                   { value: false, label: t('who.perishableNo'), tone: 'ok' },
@@ -133,8 +131,9 @@ export function GateStep({
                 }
               }}
               className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate-lg font-bold text-on-fill"
+              data-testid="same-as-last-all"
             >
-              {SAFETY_WORDS.sameAsLastAll}
+              {t('safety.sameAsLastAll')}
             </button>
           ) : null}
           {checklist.zones.map((z) => (

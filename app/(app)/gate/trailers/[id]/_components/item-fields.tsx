@@ -1,5 +1,6 @@
 'use client';
 
+import { useTranslations } from 'next-intl';
 import type { ItemKind } from '@/lib/engine';
 import type { DraftItem } from '@/lib/handoffs/draft';
 import { TREAD_LIMITS } from '@/lib/handoffs/limits';
@@ -17,12 +18,13 @@ export function ItemFields({
   set: (p: Partial<DraftItem>) => void;
   label: string;
 }) {
+  const t = useTranslations('Handoff.fields');
   switch (kind) {
     case 'pin':
       return (
         <Choice
-          label={`${label}: engaged?`}
-          options={YES_NO('Engaged', 'Not engaged')}
+          label={t('engagedQuestion', { item: label })}
+          options={YES_NO(t('engaged'), t('notEngaged'))}
           value={value.isEngaged}
           onChange={(v) => set({ isEngaged: v })}
           columns={2}
@@ -32,15 +34,15 @@ export function ItemFields({
       return (
         <>
           <Choice
-            label="On its wheel (mounted)?"
-            options={YES_NO('Mounted', 'Not mounted')}
+            label={t('mountedQuestion')}
+            options={YES_NO(t('mounted'), t('notMounted'))}
             value={value.isMounted}
             onChange={(v) => set({ isMounted: v })}
             columns={2}
           />
           <Choice
-            label="Holding air?"
-            options={YES_NO('Holds air', 'Flat')}
+            label={t('airQuestion')}
+            options={YES_NO(t('holdsAir'), t('flat'))}
             value={value.isHoldingAir}
             onChange={(v) => set({ isHoldingAir: v })}
             columns={2}
@@ -51,7 +53,7 @@ export function ItemFields({
       return (
         <div className="grid grid-cols-2 items-end gap-2">
           <label className="block text-gate font-bold">
-            Tread (32nds in)
+            {t('tread')}
             <input
               type="number"
               inputMode="numeric"
@@ -66,8 +68,8 @@ export function ItemFields({
             />
           </label>
           <Choice
-            label="Holding air?"
-            options={YES_NO('Holds air', 'Flat')}
+            label={t('airQuestion')}
+            options={YES_NO(t('holdsAir'), t('flat'))}
             value={value.isHoldingAir}
             onChange={(v) => set({ isHoldingAir: v })}
             columns={2}
@@ -77,8 +79,8 @@ export function ItemFields({
     case 'hinge':
       return (
         <Choice
-          label="Does it lock?"
-          options={YES_NO('Locks', 'Does not lock', 'warn')}
+          label={t('lockQuestion')}
+          options={YES_NO(t('locks'), t('doesNotLock'), 'warn')}
           value={value.isLocking}
           onChange={(v) => set({ isLocking: v })}
           columns={2}
@@ -87,10 +89,10 @@ export function ItemFields({
     case 'skin':
       return (
         <Choice
-          label="Insulation showing?"
+          label={t('insulationQuestion')}
           options={[
-            { value: false, label: 'No', tone: 'ok' },
-            { value: true, label: 'Yes, showing', tone: 'danger' },
+            { value: false, label: t('insulationNo'), tone: 'ok' },
+            { value: true, label: t('insulationYes'), tone: 'danger' },
           ]}
           value={value.isInsulationShowing}
           onChange={(v) => set({ isInsulationShowing: v })}
@@ -100,10 +102,10 @@ export function ItemFields({
     case 'leak':
       return (
         <Choice
-          label="Fuel leaking?"
+          label={t('leakQuestion')}
           options={[
-            { value: false, label: 'No leak', tone: 'ok' },
-            { value: true, label: 'Leaking', tone: 'danger' },
+            { value: false, label: t('noLeak'), tone: 'ok' },
+            { value: true, label: t('leaking'), tone: 'danger' },
           ]}
           value={value.isLeaking}
           onChange={(v) => set({ isLeaking: v })}
@@ -113,11 +115,11 @@ export function ItemFields({
     case 'cleanliness':
       return (
         <Choice
-          label="Inside"
+          label={t('inside')}
           options={[
-            { value: 'clean', label: 'Clean', tone: 'ok' },
-            { value: 'sweep', label: 'Sweep', tone: 'warn' },
-            { value: 'washout', label: 'Washout', tone: 'warn' },
+            { value: 'clean', label: t('clean'), tone: 'ok' },
+            { value: 'sweep', label: t('sweep'), tone: 'warn' },
+            { value: 'washout', label: t('washout'), tone: 'warn' },
           ]}
           value={value.cleanliness}
           onChange={(v) => set({ cleanliness: v as DraftItem['cleanliness'] })}

@@ -1,48 +1,39 @@
 'use client';
 
 import dynamic from 'next/dynamic';
+import { useLocale, useTranslations } from 'next-intl';
 import type { ChecklistItem, Condition } from '@/lib/engine';
 import { itemChange, needsEvidence, type DraftItem } from '@/lib/handoffs/draft';
 import type { LastSeen } from '@/lib/handoffs/last-condition';
 import { Choice } from './choice';
 import { ItemFields } from './item-fields';
-import { SAFETY_WORDS } from './safety-words';
 import { formatTime } from '@/lib/format/time';
 import { HANDOFF_LIMITS } from '@/lib/handoffs/limits';
 
 // the camera and its upload code load when an item first asks for a photo, not with the form
 const PhotoCapture = dynamic(() => import('@/app/_components/photo-capture').then((m) => m.PhotoCapture));
 
-const CONDITION_OPTIONS: {
-  value: Exclude<Condition, 'not_checked'>;
-  label: string;
-  tone: 'ok' | 'warn' | 'danger';
-}[] = [
-  { value: 'ok', label: 'OK', tone: 'ok' },
-  { value: 'minor', label: 'Minor', tone: 'warn' },
-  { value: 'damaged', label: 'Damaged', tone: 'danger' },
-  { value: 'unsafe', label: 'Unsafe', tone: 'danger' },
-  { value: 'missing', label: 'Missing', tone: 'danger' },
-];
-const WORDS: Record<string, string> = {
-  ok: 'OK',
-  minor: 'Minor',
-  damaged: 'Damaged',
-  unsafe: 'Unsafe',
-  missing: 'Missing',
-  not_checked: 'Not checked',
-};
+const CONDITION_OPTIONS = [
+  { value: 'ok', tone: 'ok' },
+  { value: 'minor', tone: 'warn' },
+  { value: 'damaged', tone: 'danger' },
+  { value: 'unsafe', tone: 'danger' },
+  { value: 'missing', tone: 'danger' },
+] as const satisfies { value: Exclude<Condition, 'not_checked'>; tone: 'ok' | 'warn' | 'danger' }[];
 
-export function describeObservation(o: DraftItem | LastSeen['observation']): string {
-  const parts = [WORDS[o.condition]];
-  if (o.isEngaged !== undefined) parts.push(o.isEngaged ? 'engaged' : 'NOT engaged');
-  if (o.isMounted !== undefined) parts.push(o.isMounted ? 'mounted' : 'not mounted');
-  if (o.treadThirtySeconds !== undefined) parts.push(`${o.treadThirtySeconds}/32 in`);
-  if (o.isHoldingAir !== undefined) parts.push(o.isHoldingAir ? 'holds air' : 'NOT holding air');
-  if (o.isLocking !== undefined) parts.push(o.isLocking ? 'locks' : 'does not lock');
-  if (o.isInsulationShowing) parts.push('insulation showing');
-  if (o.isLeaking) parts.push('leaking');
-  if (o.cleanliness) parts.push(o.cleanliness);
+type Say = ReturnType<typeof useTranslations<'Handoff.item'>>;
+
+/** An observation in words ("Damaged, insulation showing") in the reader's language. */
+export function describeObservation(t: Say, o: DraftItem | LastSeen['observation']): string {
+  const parts = [t(`condition.${o.condition}`)];
+  if (o.isEngaged !== undefined) parts.push(t(o.isEngaged ? 'engaged' : 'notEngaged'));
+  if (o.isMounted !== undefined) parts.push(t(o.isMounted ? 'mounted' : 'notMounted'));
+  if (o.treadThirtySeconds !== undefined) parts.push(t('tread', { tread: o.treadThirtySeconds }));
+  if (o.isHoldingAir !== undefined) parts.push(t(o.isHoldingAir ? 'holdsAir' : 'notHoldingAir'));
+  if (o.isLocking !== undefined) parts.push(t(o.isLocking ? 'locks' : 'doesNotLock'));
+  if (o.isInsulationShowing) parts.push(t('insulationShowing'));
+  if (o.isLeaking) parts.push(t('leaking'));
+  if (o.cleanliness) parts.push(t(`cleanliness.${o.cleanliness}`));
   return parts.join(', ');
 }
 
@@ -64,6 +55,10 @@ export function ItemRow({
   trailerId: string;
   errors?: string[];
 }) {
+  const t = useTranslations('Handoff.item');
+  const locale = useLocale();
+  const safety = useTranslations('Handoff.safety');
+  const describe = (o: DraftItem | LastSeen['observation']) => describeObservation(t, o);
   const change = itemChange(value, last);
   const isChanged = value && last && change !== 'unchanged' && change !== 'not_checked';
   const evidence = needsEvidence(change, value);
@@ -78,17 +73,19 @@ export function ItemRow({
     >
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h3 className="text-gate-lg font-bold">{item.label}</h3>
-        <span className="text-gate-sm text-ink-soft">
-          {value ? describeObservation(value) : 'Not checked yet'}
-        </span>
+        <span className="text-gate-sm text-ink-soft">{value ? describe(value) : t('notCheckedYet')}</span>
       </div>
       {last && !isChanged ? (
         <p className="text-gate-sm text-ink-soft">
-          Last: {describeObservation(last.observation)} · {formatTime(last.at, timeZone)}, {last.by}
+          {t('last', {
+            observation: describe(last.observation),
+            when: formatTime(last.at, timeZone, 'dateTime', locale),
+            by: last.by,
+          })}
         </p>
       ) : null}
       {item.isSafety && !value ? (
-        <p className="text-gate-sm font-bold text-warn">{SAFETY_WORDS.notCopied}</p>
+        <p className="text-gate-sm font-bold text-warn">{safety('notCopied')}</p>
       ) : null}
       {last && !item.isSafety && (!value || isChanged) ? (
         <button
@@ -96,13 +93,13 @@ export function ItemRow({
           onClick={() => onChange({ ...last.observation })}
           className="min-h-tap w-full rounded-lg border-2 border-brand bg-brand-light px-3 text-gate font-bold text-brand"
         >
-          Same as last
+          {t('sameAsLast')}
         </button>
       ) : null}
       <Choice
-        label={`${item.label}: condition`}
+        label={t('conditionOf', { item: item.label })}
         hideLabel
-        options={CONDITION_OPTIONS}
+        options={CONDITION_OPTIONS.map((o) => ({ ...o, label: t(`condition.${o.value}`) }))}
         value={value?.condition}
         onChange={(c) => set({ condition: c })}
         columns={3}
@@ -113,37 +110,35 @@ export function ItemRow({
       {isChanged ? (
         <div
           className="grid grid-cols-2 gap-2 text-gate-sm"
-          aria-label={`${item.label}: last record and now`}
+          aria-label={t('lastAndNow', { item: item.label })}
         >
           <div className="rounded bg-paper-dim p-2">
-            <p className="font-bold">Last record</p>
-            <p>{describeObservation(last.observation)}</p>
+            <p className="font-bold">{t('lastRecord')}</p>
+            <p>{describe(last.observation)}</p>
             <p className="text-ink-soft">
-              {formatTime(last.at, timeZone)}, {last.by}
+              {formatTime(last.at, timeZone, 'dateTime', locale)}, {last.by}
             </p>
           </div>
           <div className={`rounded p-2 ${evidence ? 'bg-danger-bg text-danger' : 'bg-ok-bg text-ok'}`}>
-            <p className="font-bold">Now</p>
-            <p>{describeObservation(value)}</p>
+            <p className="font-bold">{t('now')}</p>
+            <p>{describe(value)}</p>
             <p className="font-bold">
               {evidence
                 ? change === 'new'
-                  ? 'New damage'
-                  : 'Worse than before'
+                  ? t('newDamage')
+                  : t('worse')
                 : change === 'repaired'
-                  ? 'Repaired'
+                  ? t('repaired')
                   : ''}
             </p>
           </div>
         </div>
       ) : null}
-      {evidence ? (
-        <p className="text-gate-sm font-bold text-danger">New or worse damage: add a photo and a note.</p>
-      ) : null}
+      {evidence ? <p className="text-gate-sm font-bold text-danger">{t('needsEvidence')}</p> : null}
       {value && value.condition !== 'ok' ? (
         <>
           <label className="block text-gate-sm font-bold" htmlFor={`note-${item.key}`}>
-            Note: what do you see?
+            {t('note')}
           </label>
           <textarea
             id={`note-${item.key}`}
@@ -168,7 +163,7 @@ export function ItemRow({
           onClick={() => onChange(undefined)}
           className="min-h-tap text-gate-sm text-ink-soft underline"
         >
-          Clear (not checked)
+          {t('clear')}
         </button>
       ) : null}
       <p aria-live="polite" className="text-gate-sm font-bold text-danger">

@@ -1,11 +1,15 @@
 'use client';
 
 import { useState } from 'react';
+import { useTranslations } from 'next-intl';
 import type { ChecklistItem } from '@/lib/engine';
 import { statedObservation, type SafetyGroup } from '@/lib/engine/safety';
 import type { DraftItem } from '@/lib/handoffs/draft';
 import { TREAD_LIMITS } from '@/lib/handoffs/limits';
-import { SAFETY_WORDS } from './safety-words';
+
+/** The number a group's statement says: hinges only, for the rear doors (their lock rods are two more). */
+const statementCount = (g: SafetyGroup) =>
+  g.key === 'rear_doors' ? g.itemKeys.length - 2 : g.itemKeys.length;
 
 /**
  * One explicit statement for a safety group ("all four pins out and locked: I looked at each").
@@ -22,22 +26,25 @@ export function SafetyGroupAnswer({
   answered: Record<string, DraftItem | undefined>;
   setItem: (key: string, v: DraftItem) => void;
 }) {
+  const t = useTranslations('Handoff.safety');
   const [tread, setTread] = useState('');
   const [error, setError] = useState<string | null>(null);
   const byKey = new Map(items.map((i) => [i.key, i]));
   const done = group.itemKeys.filter((k) => answered[k]).length;
   const id = `tread-${group.key}`;
+  const label = t(`groups.${group.key}`);
   return (
     <div
       className="space-y-2 rounded-lg border-2 border-warn bg-warn-bg p-3"
-      aria-label={group.label}
+      aria-label={label}
       role="group"
+      data-testid={`safety-${group.key}`}
     >
-      <p className="text-gate font-bold">{group.label}</p>
+      <p className="text-gate font-bold">{label}</p>
       {group.asksTread ? (
         <div>
           <label htmlFor={id} className="block text-gate-sm font-bold">
-            {SAFETY_WORDS.treadLabel}
+            {t('treadLabel')}
           </label>
           <input
             id={id}
@@ -71,7 +78,7 @@ export function SafetyGroupAnswer({
               depth < TREAD_LIMITS.min ||
               depth > TREAD_LIMITS.max
             ) {
-              setError(SAFETY_WORDS.treadNeeded);
+              setError(t('treadNeeded'));
               return;
             }
           }
@@ -82,10 +89,11 @@ export function SafetyGroupAnswer({
           }
         }}
         className="min-h-tap-lg w-full rounded-lg bg-brand px-3 text-gate font-bold text-on-fill"
+        data-testid="safety-statement"
       >
-        {group.statement}
+        {t(`statements.${group.key}`, { count: statementCount(group) })}
       </button>
-      {done ? <p className="text-gate-sm text-ink-soft">{SAFETY_WORDS.stated(done)}</p> : null}
+      {done ? <p className="text-gate-sm text-ink-soft">{t('stated', { count: done })}</p> : null}
     </div>
   );
 }

@@ -8,7 +8,6 @@ import type { Draft, DraftItem } from '@/lib/handoffs/draft';
 import type { LastSeen } from '@/lib/handoffs/last-condition';
 import { ItemRow } from './item-row';
 import { SafetyGroupAnswer } from './safety-group';
-import { SAFETY_WORDS } from './safety-words';
 
 type Props = {
   groups: SafetyGroup[];
@@ -28,6 +27,7 @@ type Props = {
 export function SafetyStep({ groups, items, draft, last, setItem, trailerId, errors, timeZone }: Props) {
   const [opened, setOpened] = useState<Record<string, boolean>>({});
   const c = useTranslations('Cautions');
+  const t = useTranslations('Handoff.safety');
   const byKey = new Map(items.map((i) => [i.key, i]));
   const grouped = new Set(groups.flatMap((g) => g.itemKeys));
   const loose = items.filter((i) => !grouped.has(i.key));
@@ -46,7 +46,7 @@ export function SafetyStep({ groups, items, draft, last, setItem, trailerId, err
   return (
     <div className="space-y-3">
       <Caution title={c('titles.underTrailer')}>{c('underTrailer')}</Caution>
-      <p className="text-gate-sm">{SAFETY_WORDS.explain}</p>
+      <p className="text-gate-sm">{t('explain')}</p>
       {groups.map((g) => {
         const needsLook = g.itemKeys.some(
           (k) => errors[`items.${k}`]?.length || (draft.items[k] && draft.items[k].condition !== 'ok'),
@@ -61,7 +61,7 @@ export function SafetyStep({ groups, items, draft, last, setItem, trailerId, err
               onClick={() => setOpened((o) => ({ ...o, [g.key]: !isOpen }))}
               className="min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-left text-gate-sm font-bold"
             >
-              {isOpen ? SAFETY_WORDS.hideItems(g.label) : SAFETY_WORDS.showItems(g.label)}
+              {t(isOpen ? 'hideItems' : 'showItems', { group: t(`groups.${g.key}`) })}
             </button>
             {isOpen ? <ul className="space-y-3">{g.itemKeys.map((k) => row(byKey.get(k)!))}</ul> : null}
           </div>

@@ -34,6 +34,7 @@ export function StepCard({
       <button
         type="button"
         onClick={onOpen}
+        data-step={id}
         aria-label={`${number}. ${title}: ${summary}`}
         className={`flex min-h-tap w-full items-center gap-3 rounded-lg border-2 px-3 py-2 text-left text-gate ${isComplete ? 'border-ok' : 'border-paper-line'}`}
       >
@@ -48,6 +49,7 @@ export function StepCard({
   return (
     <section
       id={`step-${id}`}
+      data-step={id}
       aria-labelledby={`step-${id}-title`}
       className="space-y-4 rounded-lg border-2 border-brand p-3"
     >

@@ -1,6 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
+import { useTranslations } from 'next-intl';
 import { useCallback, useEffect, useRef, useState, type Dispatch, type SetStateAction } from 'react';
 import { addToOutbox, removeFromOutbox, snapshot } from '@/app/_components/offline/outbox-client';
 import { useIsOnline, useOutboxItems } from '@/app/_components/offline/offline-provider';
@@ -9,6 +10,30 @@ import { errorsByField } from '@/lib/handoffs/steps';
 import type { TrailerCondition } from '@/lib/server/handoffs/condition';
 import { precheck } from './precheck';
 import type { StoredDraft } from './use-draft';
+
+type SayRefusal = ReturnType<typeof useTranslations<'Refusals'>>;
+
+/**
+ * The refusal sentences in the reader's language (the Refusals catalogue). The English templates
+ * load only when there is something to say, not with the form's first page (scripts/js-budget.mjs);
+ * if they cannot load, the sentences stay as sent.
+ */
+async function inReadersWords(
+  r: SayRefusal,
+  message: string | undefined,
+  fieldErrors: Record<string, string[]>,
+) {
+  const say = await import('@/lib/i18n/refusals').then(
+    ({ localizeRefusal }) =>
+      (m: string) =>
+        localizeRefusal(m, (k, v) => r(k, v)),
+    () => (m: string) => m,
+  );
+  return {
+    message: message === undefined ? undefined : say(message),
+    fieldErrors: Object.fromEntries(Object.entries(fieldErrors).map(([k, ms]) => [k, ms.map(say)])),
+  };
+}
 
 export type SubmitRefusal = { message: string; holds?: { reason: string }[]; cautions?: string[] };
 /** `behindPhoto`: queued with signal, because a photo it holds still waits to send. */
@@ -40,6 +65,8 @@ export function useSubmit(
   check: { isReefer: boolean; last: TrailerCondition['last']; itemKeys: readonly string[] },
 ) {
   const router = useRouter();
+  const t = useTranslations('Handoff.send');
+  const r = useTranslations('Refusals');
   const { isReefer, last, itemKeys } = check;
   const [shownErrors, setShownErrors] = useState<{ errors: Record<string, string[]>; round: number }>({
     errors: {},
@@ -60,17 +87,18 @@ export function useSubmit(
   const isOnline = useIsOnline();
 
   const refused = useCallback(
-    (d: StoredDraft, answer: Answer) => {
+    async (d: StoredDraft, answer: Answer) => {
+      const said = await inReadersWords(r, answer.message, answer.fieldErrors ?? {});
       setStatus('idle');
       setDraft({ ...d, isQueued: false });
-      setErrors(answer.fieldErrors ?? {});
+      setErrors(said.fieldErrors);
       setRefusal({
-        message: answer.message ?? 'The handoff was not recorded.',
+        message: said.message ?? t('notRecorded'),
         holds: answer.holds,
         cautions: answer.cautions,
       });
     },
-    [setDraft, setErrors],
+    [setDraft, setErrors, t, r],
   );
 
   const queue = useCallback(
@@ -97,10 +125,11 @@ export function useSubmit(
       const { body, errors: found } = await precheck(d, isReefer, last).finally(() => {
         inFlight.current = false;
       });
-      setErrors(found);
+      if (!Object.keys(found).length) setErrors({});
       setRefusal(null);
       if (Object.keys(found).length) {
-        setRefusal({ message: 'Some answers need attention (marked in red).' });
+        setErrors((await inReadersWords(r, undefined, found)).fieldErrors);
+        setRefusal({ message: t('needsAttention') });
         return;
       }
       if (!navigator.onLine) return queue(d, body as Record<string, unknown>);
@@ -127,9 +156,9 @@ export function useSubmit(
       }
       // the server was reached but could not answer: the outbox retries with the same key
       if (res.status >= 500) return queue(d, body as Record<string, unknown>);
-      refused(d, answer);
+      await refused(d, answer);
     },
-    [isReefer, last, forget, router, queue, refused, setErrors],
+    [isReefer, last, forget, router, queue, refused, setErrors, t, r],
   );
 
   // a queued draft follows its outbox item: sent → receipt, refused → back to the answers;

@@ -1,7 +1,8 @@
 'use client';
 
 import { useState } from 'react';
-import { CAUTIONS, Caution } from '@/app/_components/caution';
+import { useLocale, useTranslations } from 'next-intl';
+import { Caution } from '@/app/_components/caution';
 import type { ChecklistZone } from '@/lib/engine';
 import { sameAsLastForZone, unanswered, type Draft, type DraftItem } from '@/lib/handoffs/draft';
 import type { LastSeen } from '@/lib/handoffs/last-condition';
@@ -29,6 +30,9 @@ export function ZoneSection({
   fieldErrors: Record<string, string[]>;
 }) {
   const [opened, setOpened] = useState<boolean | null>(null);
+  const t = useTranslations('Handoff.zone');
+  const c = useTranslations('Cautions');
+  const name = zone.label.toLocaleLowerCase(useLocale());
   const items = zone.items.filter((i) => i.kind !== 'reading' && !i.isSafety);
   if (!items.length) return null;
   const withLast = items.filter((i) => last[i.key]);
@@ -41,15 +45,20 @@ export function ZoneSection({
   return (
     <section
       aria-labelledby={`zone-${zone.key}`}
+      data-testid={`zone-${zone.key}`}
       className="space-y-2 rounded-lg border-2 border-paper-line p-2"
     >
       <div className="flex items-center justify-between gap-2">
         <h3 id={`zone-${zone.key}`} className="text-gate-lg font-bold">
           {zone.label}
         </h3>
-        <span className="text-gate-sm text-ink-soft">{left ? `${left} to check` : 'All checked'}</span>
+        <span className="text-gate-sm text-ink-soft">
+          {left ? t('toCheck', { count: left }) : t('allChecked')}
+        </span>
       </div>
-      {zone.key === 'reefer_unit' && isOpen ? <Caution title="Reefer unit">{CAUTIONS.reefer}</Caution> : null}
+      {zone.key === 'reefer_unit' && isOpen ? (
+        <Caution title={c('titles.reefer')}>{c('reefer')}</Caution>
+      ) : null}
       {withLast.length && left ? (
         <button
           type="button"
@@ -58,21 +67,17 @@ export function ZoneSection({
           }}
           className="min-h-tap w-full rounded-lg bg-brand px-3 text-gate font-bold text-on-fill"
         >
-          Same as last for {zone.label.toLowerCase()}
+          {t('sameAsLast', { zone: name })}
         </button>
       ) : null}
-      {withLast.length ? null : (
-        <p className="text-gate-sm text-ink-soft">No earlier record of this zone: check each item.</p>
-      )}
+      {withLast.length ? null : <p className="text-gate-sm text-ink-soft">{t('noEarlier')}</p>}
       <button
         type="button"
         aria-expanded={isOpen}
         onClick={() => setOpened(!isOpen)}
         className="min-h-tap w-full rounded-lg border-2 border-paper-line px-3 text-left text-gate-sm font-bold"
       >
-        {isOpen
-          ? `Hide the items of ${zone.label.toLowerCase()}`
-          : `Check each item of ${zone.label.toLowerCase()}`}
+        {t(isOpen ? 'hideItems' : 'showItems', { zone: name })}
       </button>
       {isOpen ? (
         <ul className="space-y-3">
