@@ -32,7 +32,11 @@ export async function dropIndexes(client: pg.Client, table: 'handoffs' | 'handof
 }
 
 /** Re-creates what dropIndexes saved, logging each one's seconds (where the time goes). */
-export async function rebuildIndexes(client: pg.Client, saved: Saved[], log: (line: string) => void = () => {}) {
+export async function rebuildIndexes(
+  client: pg.Client,
+  saved: Saved[],
+  log: (line: string) => void = () => {},
+) {
   // sorts of tens of millions of keys: one big in-memory run instead of many merged from disk
   await client.query(`SET maintenance_work_mem = '1GB'`);
   for (const s of saved) {
