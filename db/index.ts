@@ -15,6 +15,13 @@ function build(): Cached {
   const url = databaseUrl();
   if (!/^postgres(ql)?:\/\//.test(url)) throw new Error('DATABASE_URL must be a postgres:// URL');
   const pool = new Pool({ connectionString: url, max: Number(process.env.HM_PG_POOL ?? 10) });
+  // An idle connection can be closed under the pool (a database restart or failover, PgBouncer
+  // recycling its server connections, a test dropping its database). Without a listener the
+  // pool's 'error' event would end the process; the pool has already discarded that connection
+  // and opens a new one on the next query, so it is only worth a line in the log.
+  pool.on('error', (error) => {
+    console.error(`[db] an idle database connection was closed: ${error.message}`);
+  });
   return { pool, db: drizzle(pool, { schema }) };
 }
 
