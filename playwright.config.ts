@@ -1,18 +1,8 @@
 import { defineConfig, devices } from '@playwright/test';
+import { chromiumLaunchOptions } from './tests/support/chromium';
 
 const port = Number(process.env.HM_APP_PORT ?? 3100);
 export const baseURL = `http://localhost:${port}`;
-
-// Debian's chromium, never a downloaded browser. Flags keep it off the (closed) network.
-export const chromiumArgs = [
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--no-first-run',
-  '--disable-quic',
-];
 
 export default defineConfig({
   testDir: 'tests/e2e',
@@ -28,7 +18,7 @@ export default defineConfig({
   use: {
     baseURL,
     trace: 'retain-on-failure',
-    launchOptions: { executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium', args: chromiumArgs },
+    launchOptions: chromiumLaunchOptions,
   },
   projects: [
     // every journey on a phone: the gate and the yard are used on one

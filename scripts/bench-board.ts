@@ -4,8 +4,8 @@
 // first), signs a jockey in and times navigation start -> every slot of the map drawn.
 // Usage: source scripts/env.sh && npx tsx scripts/bench-board.ts [runs]
 import { execFileSync, spawn } from 'node:child_process';
-import { chromium } from '@playwright/test';
 import { hash } from 'bcryptjs';
+import { launchChromium } from '../tests/support/chromium';
 
 const DB = 'hitchmark_bench';
 const PORT = Number(process.env.HM_BENCH_PORT ?? process.env.HM_E2E_PORT ?? 3301);
@@ -68,18 +68,7 @@ try {
     if (i > 120) throw new Error('next start did not come up; run `next build` first');
     await new Promise((r) => setTimeout(r, 500));
   }
-  const browser = await chromium.launch({
-    executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-      '--disable-quic',
-    ],
-  });
+  const browser = await launchChromium();
   const page = await (await browser.newContext({ viewport: { width: 1280, height: 900 } })).newPage();
   await page.goto(`${base}/login`);
   await page.getByRole('tab', { name: 'Terminal staff' }).click();

@@ -58,7 +58,7 @@ case "${1:-start}" in
       echo "PostgreSQL already running on 127.0.0.1:$PORT"
     else
       as_owner "$BIN/pg_ctl" -D "$DATA" -w -t 60 -l "$DATA/server.log" \
-        -o "-p $PORT -k $SOCK -c listen_addresses=127.0.0.1 -c fsync=off -c max_connections=200" start >/dev/null
+        -o "-p $PORT -k $SOCK -c listen_addresses=127.0.0.1 -c fsync=off -c max_connections=200 -c max_wal_size=8GB -c wal_buffers=64MB -c shared_buffers=512MB" start >/dev/null
       echo "PostgreSQL started on 127.0.0.1:$PORT"
     fi
     for _ in $(seq 1 50); do "$BIN/pg_isready" -q -h 127.0.0.1 -p "$PORT" && break; sleep 0.2; done

@@ -1,24 +1,13 @@
 // Screenshots of the desk for the README: queue, a case, a trailer file, at phone and desktop
 // widths. Needs a running app on APP_URL with the demo seed. `npx tsx scripts/desk-screenshots.ts`
-import { chromium, devices } from '@playwright/test';
+import { devices } from '@playwright/test';
+import { launchChromium } from '../tests/support/chromium';
 
 const base = process.env.APP_URL ?? 'http://localhost:3000';
-const args = [
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--no-first-run',
-  '--disable-quic',
-];
 const out = process.env.SHOTS_DIR ?? 'docs/screenshots';
 const only = process.argv[2];
 
-const browser = await chromium.launch({
-  executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
-  args,
-});
+const browser = await launchChromium();
 for (const [suffix, options] of [
   ['', { ...devices['Pixel 7'] }],
   ['-desktop', { viewport: { width: 1366, height: 900 } }],

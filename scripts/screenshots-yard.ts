@@ -1,8 +1,8 @@
 // Screenshots of the yard for the README: board (phone and desktop) and a finished walk.
 // Runs against a started app on the seeded dev database (APP_URL), signed in as the demo jockey.
 // Usage: source scripts/env.sh && npx tsx scripts/screenshots-yard.ts
-import { chromium, devices, type Page } from '@playwright/test';
-import { chromiumArgs } from '../playwright.config';
+import { devices, type Page } from '@playwright/test';
+import { launchChromium } from '../tests/support/chromium';
 
 const base = process.env.APP_URL ?? 'http://localhost:3000';
 const out = 'docs/screenshots';
@@ -16,10 +16,7 @@ async function signIn(page: Page) {
   await page.waitForURL(/\/yard$/);
 }
 
-const browser = await chromium.launch({
-  executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
-  args: chromiumArgs,
-});
+const browser = await launchChromium();
 try {
   const phone = await (await browser.newContext({ ...devices['Pixel 7'] })).newPage();
   await signIn(phone);

@@ -128,7 +128,7 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
     now,
   );
   log(`${handoffs} handoffs hashed and copied (${secs()}); making their items in SQL`);
-  await rebuildIndexes(client, savedHandoffs);
+  await rebuildIndexes(client, savedHandoffs, log);
   await q(
     'ANALYZE handoffs; ANALYZE bulk_trailer_shape; ANALYZE bulk_item_template; ANALYZE bulk_item_override',
   );
@@ -139,7 +139,8 @@ export async function addBigData(client: pg.Client, o: BigDataOptions): Promise<
     log,
   );
   log(`items made (${secs()}); building the item table's indexes and constraints`);
-  await rebuildIndexes(client, savedItems);
+  await rebuildIndexes(client, savedItems, log);
+  log(`item indexes and keys built (${secs()})`);
   await finishTrailers(client);
   log(`indexes, trailers' state and current condition done (${secs()})`);
 

@@ -4,18 +4,22 @@
 // loaded --runs times (default 3) in a fresh phone-sized context with a sealed session; prints
 // every run and the median. LCP as the browser reports it: the last `largest-contentful-paint`
 // entry before the first input (W3C Largest Contentful Paint draft; PerformanceObserver, buffered).
+// Under each page, the median breakdown of what came before it (scripts/bench/lcp-profile.ts):
+// first byte, streamed HTML, CSS, fonts, scripts, hydration, first paint, the LCP element.
 //   bash scripts/bench/with-env.sh scripts/bench/lcp.ts --db hitchmark_e2e --url http://localhost:3150
 import { cpus, loadavg } from 'node:os';
-import { chromium } from '@playwright/test';
 import { sealData } from 'iron-session';
 import pg from 'pg';
 import { databaseUrl } from '@/db/url';
+import { launchChromium } from '../../tests/support/chromium';
+import { breakdown, profileLoad, type Profile } from './lcp-profile';
 
 const args = process.argv.slice(2);
 const opt = (name: string) => (args.includes(`--${name}`) ? args[args.indexOf(`--${name}`) + 1] : undefined);
 const dbName = opt('db') ?? process.env.HM_BIG_DB ?? 'hitchmark_big';
 const base = opt('url') ?? `http://localhost:${process.env.HM_E2E_PORT ?? 3150}`;
 const runs = Number(opt('runs') ?? 3);
+const only = opt('only');
 
 const client = new pg.Client({ connectionString: databaseUrl(dbName) });
 await client.connect();
@@ -59,43 +63,22 @@ const load = () =>
     .map((l) => l.toFixed(2))
     .join(' ');
 const loadAtStart = load();
-// the flags the e2e tests launch Debian's Chromium with (a root user needs --no-sandbox)
-const browser = await chromium.launch({
-  executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
-  args: [
-    '--no-sandbox',
-    '--disable-gpu',
-    '--disable-background-networking',
-    '--disable-component-update',
-    '--disable-sync',
-    '--no-first-run',
-    '--disable-quic',
-  ],
-});
+const browser = await launchChromium();
 const lines: string[] = [];
-for (const [name, path, who] of PAGES) {
-  const figures: number[] = [];
+for (const [name, path, who] of PAGES.filter(([n]) => !only || n.startsWith(only))) {
+  const profiles: Profile[] = [];
   for (let r = 0; r < runs; r++) {
     const context = await browser.newContext({ viewport: { width: 412, height: 915 }, isMobile: true });
     await context.addCookies([{ name: 'hm_session', value: await seal(who), url: base }]);
-    const page = await context.newPage();
-    await page.goto(base + path, { waitUntil: 'load', timeout: 60_000 });
-    const lcp = await page.evaluate(
-      () =>
-        new Promise<number>((resolve) => {
-          let last = 0;
-          new PerformanceObserver((list) => {
-            for (const e of list.getEntries()) last = e.startTime;
-          }).observe({ type: 'largest-contentful-paint', buffered: true });
-          setTimeout(() => resolve(last), 1500);
-        }),
-    );
-    figures.push(lcp);
+    profiles.push(await profileLoad(context, base + path));
     await context.close();
+    console.error(`  ${name}: run ${r + 1}, LCP ${(profiles[r].lcp / 1000).toFixed(2)} s`);
   }
+  const figures = profiles.map((p) => p.lcp);
   const median = [...figures].sort((a, b) => a - b)[Math.floor(figures.length / 2)];
   lines.push(
     `${name.padEnd(34)} median ${(median / 1000).toFixed(2)} s   runs ${figures.map((f) => (f / 1000).toFixed(2)).join(' / ')}`,
+    ...breakdown(profiles),
   );
 }
 await browser.close();

@@ -2,9 +2,8 @@
 // failed) and the mean response size; and the handoff submit's body for the drop/hook rows.
 import { randomUUID } from 'node:crypto';
 import autocannon from 'autocannon';
-import { allOkObservations } from '@/lib/handoffs/all-ok';
-import { checklistOf } from '@/lib/trailers/checklist';
 import { driver, type onRoad } from './fixtures';
+import { unchangedHandoff } from './unchanged-handoff';
 
 export type Row = {
   name: string;
@@ -77,37 +76,20 @@ export async function measure(
   };
 }
 
-export const submitBody = (kind: 'drop' | 'hook', t: (typeof onRoad)[number]) => {
-  const isReefer = t.kind === 'reefer';
-  const checklist = checklistOf({
-    kind: t.kind,
-    hingesPerDoor: t.hinges_per_door,
-    axleCount: t.axle_count,
-    tireLayout: t.tire_layout,
-    fuelTankGallons: t.fuel_tank_gallons,
-  });
-  return JSON.stringify({
-    idempotencyKey: `bench-${randomUUID()}`,
-    trailerId: t.id,
-    kind,
-    carrierId: driver.carrier_id,
-    driverName: driver.name,
-    tractorNumber: 'T4242',
-    isLoaded: false,
-    sealNumber: null,
-    fuelEighths: isReefer ? 8 : null,
-    reefer: isReefer
-      ? {
-          isUnitOn: false,
-          setpointF: null,
-          returnAirF: null,
-          engineHours: 9000,
-          preTripResult: 'pass',
-          preTripAt: new Date(Date.now() - 3_600_000).toISOString(),
-        }
-      : null,
-    items: allOkObservations(checklist, () => 10),
-    spotId: null,
-    note: null,
-  });
-};
+export const submitBody = (kind: 'drop' | 'hook', t: (typeof onRoad)[number]) =>
+  JSON.stringify(
+    unchangedHandoff({
+      idempotencyKey: `bench-${randomUUID()}`,
+      trailerId: t.id,
+      trailer: {
+        kind: t.kind,
+        hingesPerDoor: t.hinges_per_door,
+        axleCount: t.axle_count,
+        tireLayout: t.tire_layout,
+        fuelTankGallons: t.fuel_tank_gallons,
+      },
+      kind,
+      carrierId: driver.carrier_id,
+      driverName: driver.name,
+    }),
+  );

@@ -3,11 +3,12 @@
 // (--use-file-for-fake-video-capture). Shared by the gate, yard and label journeys.
 import { writeFile } from 'node:fs/promises';
 import { resolve } from 'node:path';
-import { chromium, devices, type Browser, type BrowserContext, type Page } from '@playwright/test';
+import { devices, type Browser, type BrowserContext, type Page } from '@playwright/test';
 import { PNG } from 'pngjs';
 import QRCode from 'qrcode';
 import { decodeQr, labelQrOptions } from '../../../lib/labels/qr';
-import { baseURL, chromiumArgs } from '../../../playwright.config';
+import { baseURL } from '../../../playwright.config';
+import { launchChromium } from '../../support/chromium';
 
 // 640×480 is the size Chromium captures at when the page asks for no resolution: a frame of that size reaches
 // the decoder unscaled, so QR modules stay whole pixels (scaled frames gave fractional modules and missed reads).
@@ -150,15 +151,11 @@ export async function writeLabelVideo(
 export async function launchWithCamera(
   file: string,
 ): Promise<{ browser: Browser; context: BrowserContext; page: Page }> {
-  const browser = await chromium.launch({
-    executablePath: process.env.HM_CHROMIUM ?? '/usr/bin/chromium',
-    args: [
-      ...chromiumArgs,
-      '--use-fake-ui-for-media-stream',
-      '--use-fake-device-for-media-stream',
-      `--use-file-for-fake-video-capture=${resolve(file)}`,
-    ],
-  });
+  const browser = await launchChromium([
+    '--use-fake-ui-for-media-stream',
+    '--use-fake-device-for-media-stream',
+    `--use-file-for-fake-video-capture=${resolve(file)}`,
+  ]);
   const context = await browser.newContext({ ...devices['Pixel 7'], baseURL, permissions: ['camera'] });
   return { browser, context, page: await context.newPage() };
 }

@@ -14,13 +14,13 @@ import { getTrailerFileRows, getTrailerHeader } from '@/db/queries/trailer-file'
 import { getTrailerById, getTrailerByUnit } from '@/db/queries/trailer-lookup';
 import { getBoard } from '@/db/queries/yard-board';
 import { databaseUrl } from '@/db/url';
-import { allOkObservations } from '@/lib/handoffs/all-ok';
 import { getTrailerCondition } from '@/lib/server/handoffs/condition';
 import { verifyTrailerChain } from '@/lib/server/handoffs/chain';
 import { submitHandoff } from '@/lib/server/handoffs/submit';
 import { validateVin } from '@/lib/engine/identity';
-import { checklistOf } from '@/lib/trailers/checklist';
+import type { TrailerShape } from '@/lib/trailers/checklist';
 import { addBigData } from '@/scripts/bench/big-data';
+import { unchangedHandoff } from '@/scripts/bench/unchanged-handoff';
 
 /** Tables that grow with every handoff, case, walk or move: never scanned whole. */
 const BIG_TABLES = [
@@ -62,7 +62,7 @@ describe('query plans on a generated data set', () => {
     longest: string;
     unit: string;
     caseId: string;
-    onRoad: { id: string; trailer: Parameters<typeof checklistOf>[0] };
+    onRoad: { id: string; trailer: TrailerShape };
     driver: { id: string; carrierId: string; terminalId: string };
   };
 
@@ -173,32 +173,15 @@ describe('query plans on a generated data set', () => {
       await getTrailerFileRows(ids.longest, first.next);
     });
     await screen('gate: submit', async () => {
-      const isReefer = ids.onRoad.trailer.kind === 'reefer';
       const result = await submitHandoff(
-        {
+        unchangedHandoff({
           idempotencyKey: `plan-${randomUUID()}`,
           trailerId: ids.onRoad.id,
+          trailer: ids.onRoad.trailer,
           kind: 'drop',
           carrierId: ids.driver.carrierId,
           driverName: 'Dana Okonkwo-Reyes',
-          tractorNumber: 'T4242',
-          isLoaded: false,
-          sealNumber: null,
-          fuelEighths: isReefer ? 8 : null,
-          reefer: isReefer
-            ? {
-                isUnitOn: false,
-                setpointF: null,
-                returnAirF: null,
-                engineHours: 9000,
-                preTripResult: 'pass',
-                preTripAt: new Date(Date.now() - 3_600_000).toISOString(),
-              }
-            : null,
-          items: allOkObservations(checklistOf(ids.onRoad.trailer)),
-          spotId: null,
-          note: null,
-        },
+        }),
         {
           id: ids.driver.id,
           role: 'driver',
