@@ -2,19 +2,20 @@
 
 import { useTranslations } from 'next-intl';
 import { useRef, useState } from 'react';
+import { clearCachedPages } from '@/app/_components/offline/forget-cached-pages';
 import { flush } from '@/app/_components/offline/outbox-client';
 import { useOfflineUser, useOutboxItems } from '@/app/_components/offline/offline-provider';
 import { deleteDraftsOf } from '@/app/_components/offline/store';
 import { waitingCount } from '@/lib/offline/outbox';
-import { cachesToClear } from '@/lib/offline/sign-out';
 import { signOutAction } from './sign-out-action';
 
-/** Clears this user's traces on the phone: the pages the service worker kept and their drafts. */
+/**
+ * Clears this user's traces on the phone: the pages the service worker kept and their drafts (the
+ * sign-in page clears the pages once more, for one that was still loading).
+ */
 async function clearPhone(userId: string | null) {
   try {
-    if (typeof caches !== 'undefined') {
-      for (const name of cachesToClear(await caches.keys())) await caches.delete(name);
-    }
+    await clearCachedPages();
     if (userId) await deleteDraftsOf(userId);
   } catch {
     // a browser that refuses storage access must still sign out

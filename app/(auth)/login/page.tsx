@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { getTranslations } from 'next-intl/server';
 import { LanguageSwitch } from '@/app/_components/language-switch';
+import { ForgetCachedPages } from '@/app/_components/offline/forget-cached-pages';
 import { cookies } from 'next/headers';
 import { redirect } from 'next/navigation';
 import { ThemeSwitch } from '@/app/_components/theme-switch';
@@ -28,6 +29,7 @@ export default async function LoginPage({ searchParams }: PageProps<'/login'>) {
       <p className="text-gate-sm text-ink-soft">{t('tagline')}</p>
       <SignInForm next={next} />
       <ThemeSwitch initial={theme} className="mt-6" />
+      <ForgetCachedPages />
     </main>
   );
 }
